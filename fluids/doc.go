@@ -1,0 +1,13 @@
+// Package fluids holds Ullage's built-in library of volatile working
+// liquids and the property correlations used to describe them: vapour
+// pressure (Antoine or Wagner, joined smoothly to the critical point),
+// saturated liquid density (Rackett), saturated vapour and supercritical
+// density (Peng–Robinson with a volume translation), compressed-liquid
+// density (the Tait form of Thomson, Brobst and Hankinson), heat of
+// vaporisation (Watson) and the flammability and exposure-limit data a
+// safety review needs.
+//
+// Every built-in number carries its source in the embedded JSON files
+// under data/. All quantities are SI: K, Pa, kg, m³, J. Conversions to
+// °C, bar or ppm belong to the edges of the program (see package units).
+package fluids

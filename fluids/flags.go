@@ -1,0 +1,52 @@
+package fluids
+
+import "strings"
+
+// Flags records how far a property result can be trusted: which
+// correlations were used outside their published range.
+type Flags uint8
+
+// Flag bits.
+const (
+	// VapourPressureExtrapolated: the vapour pressure came from outside
+	// every published correlation piece (below the first, in a gap, or in
+	// the hand-over to the critical point).
+	VapourPressureExtrapolated Flags = 1 << iota
+	// NearCriticalVapour: the saturated vapour density came from the law of
+	// rectilinear diameters near the critical point rather than the
+	// equation of state.
+	NearCriticalVapour
+	// CompressedLiquidExtrapolated: the compressed-liquid state lies above
+	// the Tait correlation's reduced-temperature limit of 0.95.
+	CompressedLiquidExtrapolated
+	// SupercriticalState: the state is above the critical temperature,
+	// described by the anchored equation of state.
+	SupercriticalState
+)
+
+// Extrapolated reports whether any correlation was used outside its
+// stated range.
+func (f Flags) Extrapolated() bool {
+	return f&(VapourPressureExtrapolated|CompressedLiquidExtrapolated) != 0
+}
+
+// String lists the flags in words, or "none".
+func (f Flags) String() string {
+	if f == 0 {
+		return "none"
+	}
+	var parts []string
+	if f&VapourPressureExtrapolated != 0 {
+		parts = append(parts, "vapour pressure outside its correlation's range")
+	}
+	if f&NearCriticalVapour != 0 {
+		parts = append(parts, "near-critical vapour density (rectilinear diameter)")
+	}
+	if f&CompressedLiquidExtrapolated != 0 {
+		parts = append(parts, "compressed liquid above Tr 0.95 (Tait range)")
+	}
+	if f&SupercriticalState != 0 {
+		parts = append(parts, "supercritical")
+	}
+	return strings.Join(parts, "; ")
+}

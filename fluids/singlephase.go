@@ -1,0 +1,190 @@
+package fluids
+
+import (
+	"fmt"
+	"math"
+
+	"ullage/fluids/solve"
+)
+
+// Single-phase states (compressed liquid, superheated vapour and
+// supercritical fluid) at a fixed density. The pressure is anchored on the
+// saturation curve and carried to higher temperature along the isochore:
+//
+//	P(T, ρ) = P_sat(T_s(ρ)) + [P_eos(T, ρ) − P_eos(T_s(ρ), ρ)]
+//
+// where T_s(ρ) is the temperature at which the saturated liquid (ρ > ρc)
+// or saturated vapour (ρ ≤ ρc) has density ρ, and P_eos is the translated
+// Peng–Robinson equation. This keeps the pressure continuous at every phase
+// boundary by construction. For a compressed liquid below Tr 0.95 the Tait
+// correlation of Thomson, Brobst and Hankinson gives the pressure directly
+// instead, and the isochoric hand-over starts at Tr 0.95.
+
+// bubbleTemperature inverts the Rackett curve: the temperature at which the
+// saturated liquid density is rho (ρc ≤ ρ). It returns tMin, false when rho
+// is denser than the liquid at the freezing point.
+func (s *Substance) bubbleTemperature(rho float64) (float64, bool) {
+	r := &s.liquid
+	phi := -math.Log(rho/r.rhoRef) / r.lnZ
+	w := phi + r.wRef
+	if w <= 0 {
+		return s.tc, true
+	}
+	t := s.tc * (1 - math.Pow(w, 3.5))
+	if t < s.tMin {
+		return s.tMin, false
+	}
+	return t, true
+}
+
+func (s *Substance) saturatedVapourDensity(t float64) float64 {
+	sat, err := s.Saturation(t)
+	if err != nil {
+		return math.NaN()
+	}
+	return sat.VapourDensity
+}
+
+// dewTemperature returns the temperature at which the saturated vapour
+// density equals rho (rho ≤ ρc), or tMin, false when the vapour at the
+// freezing point is already denser than rho.
+func (s *Substance) dewTemperature(rho float64) (float64, bool) {
+	if rho >= s.rhoC {
+		return s.tc, true
+	}
+	if s.saturatedVapourDensity(s.tMin) >= rho {
+		return s.tMin, false
+	}
+	lnRho := math.Log(rho)
+	r, err := solve.Brent(func(t float64) float64 {
+		return math.Log(s.saturatedVapourDensity(t)) - lnRho
+	}, s.tMin, s.tc, 1e-9, 200)
+	if err != nil {
+		return s.tc, true
+	}
+	return r.X, true
+}
+
+// SinglePhasePressure returns the pressure (Pa) of the fluid at
+// temperature t (K) and density rho (kg/m³) outside the two-phase region,
+// with flags saying which correlation was stretched. It returns
+// ErrTwoPhase when (t, rho) lies between the saturated vapour and liquid
+// densities below Tc.
+func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) {
+	if err := s.checkTemperature(t); err != nil {
+		return 0, 0, err
+	}
+	if math.IsNaN(rho) || math.IsInf(rho, 0) || rho <= 0 {
+		return 0, 0, fmt.Errorf("%s: density %v kg/m³ must be a positive number: %w", s.fluid.Name, rho, ErrOutOfDomain)
+	}
+	var fl Flags
+	if t > s.tc {
+		fl |= SupercriticalState
+	}
+	if rho <= s.rhoC {
+		ts, _ := s.dewTemperature(rho)
+		if t < ts {
+			return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ is below the dew temperature %.2f K: %w", s.fluid.Name, t, rho, ts, ErrTwoPhase)
+		}
+		ps, f2, _ := s.SaturationPressure(ts)
+		fl |= f2
+		p, err := s.isochoricRise(t, ts, rho, ps)
+		return p, fl, err
+	}
+	ts, ok := s.bubbleTemperature(rho)
+	if ok && t < ts {
+		return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ is below the liquid-full temperature %.2f K: %w", s.fluid.Name, t, rho, ts, ErrTwoPhase)
+	}
+	tTait := taitMaxTr * s.tc
+	if ts >= tTait {
+		ps, f2, _ := s.SaturationPressure(ts)
+		fl |= f2 | CompressedLiquidExtrapolated
+		p, err := s.isochoricRise(t, ts, rho, ps)
+		return p, fl, err
+	}
+	tt := math.Min(t, tTait)
+	ps, f2, _ := s.SaturationPressure(tt)
+	fl |= f2
+	p := s.compressed.pressure(tt, rho, s.liquid.density(tt), ps)
+	if t <= tTait {
+		return p, fl, nil
+	}
+	fl |= CompressedLiquidExtrapolated
+	p, err := s.isochoricRise(t, tTait, rho, p)
+	return p, fl, err
+}
+
+func (s *Substance) isochoricRise(t, t0, rho, p0 float64) (float64, error) {
+	if t == t0 {
+		return p0, nil
+	}
+	p1, ok1 := s.eos.pressure(t, rho)
+	p2, ok2 := s.eos.pressure(t0, rho)
+	if !ok1 || !ok2 {
+		return 0, fmt.Errorf("%s: density %.4g kg/m³ is beyond the equation of state's limit: %w", s.fluid.Name, rho, ErrOutOfDomain)
+	}
+	return p0 + p1 - p2, nil
+}
+
+// CompressedLiquidDensity returns the density (kg/m³) of the liquid at
+// temperature t ≤ Tc and pressure p at or above the saturation pressure.
+func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error) {
+	ps, fl, err := s.SaturationPressure(t)
+	if err != nil {
+		return 0, 0, err
+	}
+	if math.IsNaN(p) || math.IsInf(p, 0) {
+		return 0, 0, fmt.Errorf("%s: pressure %v Pa: %w", s.fluid.Name, p, ErrNotFinite)
+	}
+	if p < ps*(1-1e-12) {
+		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
+	}
+	rhoSat := s.liquid.density(t)
+	if t <= taitMaxTr*s.tc {
+		return s.compressed.density(t, math.Max(p, ps), rhoSat, ps), fl, nil
+	}
+	rho, f2, err := s.invertPressure(t, p, rhoSat, 4*rhoSat)
+	return rho, fl | f2, err
+}
+
+// Density returns the density (kg/m³) of a single-phase fluid at (t, p):
+// above Tc any pressure; below Tc the liquid if p ≥ Psat and the vapour
+// otherwise.
+func (s *Substance) Density(t, p float64) (float64, Flags, error) {
+	if err := s.checkTemperature(t); err != nil {
+		return 0, 0, err
+	}
+	if math.IsNaN(p) || math.IsInf(p, 0) || p <= 0 {
+		return 0, 0, fmt.Errorf("%s: pressure %v Pa must be a positive number: %w", s.fluid.Name, p, ErrOutOfDomain)
+	}
+	if t <= s.tc {
+		sat, err := s.Saturation(t)
+		if err != nil {
+			return 0, 0, err
+		}
+		if p >= sat.PressurePa {
+			return s.CompressedLiquidDensity(t, p)
+		}
+		return s.invertPressure(t, p, 1e-9, sat.VapourDensity)
+	}
+	rhoMax := 3 * s.liquid.density(s.tMin)
+	return s.invertPressure(t, p, 1e-9, rhoMax)
+}
+
+func (s *Substance) invertPressure(t, p, lo, hi float64) (float64, Flags, error) {
+	var fl Flags
+	f := func(rho float64) float64 {
+		v, f2, err := s.SinglePhasePressure(t, rho)
+		if err != nil {
+			return math.NaN()
+		}
+		fl = f2
+		return v - p
+	}
+	r, err := solve.Brent(f, lo, hi, 1e-10*hi, 300)
+	if err != nil {
+		return 0, 0, fmt.Errorf("%s: no single-phase density at %.2f K and %.4g Pa: %w", s.fluid.Name, t, p, ErrOutOfDomain)
+	}
+	f(r.X)
+	return r.X, fl, nil
+}
