@@ -143,7 +143,7 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 	if t <= taitMaxTr*s.tc {
 		return s.compressed.density(t, math.Max(p, ps), rhoSat, ps), fl, nil
 	}
-	rho, f2, err := s.invertPressure(t, p, rhoSat, 4*rhoSat)
+	rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
 	return rho, fl | f2, err
 }
 
@@ -167,8 +167,7 @@ func (s *Substance) Density(t, p float64) (float64, Flags, error) {
 		}
 		return s.invertPressure(t, p, 1e-9, sat.VapourDensity)
 	}
-	rhoMax := 3 * s.liquid.density(s.tMin)
-	return s.invertPressure(t, p, 1e-9, rhoMax)
+	return s.invertPressure(t, p, 1e-9, s.maxDensity())
 }
 
 func (s *Substance) invertPressure(t, p, lo, hi float64) (float64, Flags, error) {
@@ -187,4 +186,31 @@ func (s *Substance) invertPressure(t, p, lo, hi float64) (float64, Flags, error)
 	}
 	f(r.X)
 	return r.X, fl, nil
+}
+
+// LiquidFullTemperature returns the temperature (K) at which saturated
+// liquid of the vessel's overall fill density rho (kg/m³) just fills the
+// vessel: the point past which a sealed vessel holds no ullage. ok is false
+// when rho is at or below the critical density (the vessel then ends all
+// vapour or supercritical without going liquid-full) and the returned value
+// is Tc. When rho is denser than the liquid at the freezing point the
+// vessel is liquid-full at every temperature and the freezing point is
+// returned with ok true.
+func (s *Substance) LiquidFullTemperature(rho float64) (float64, bool) {
+	if !(rho > s.rhoC) {
+		return s.tc, false
+	}
+	t, _ := s.bubbleTemperature(rho)
+	return t, true
+}
+
+// maxDensity is the densest state the single-phase description covers:
+// 1.5 times the liquid at the freezing point, or just short of the
+// equation of state's co-volume, whichever is lower.
+func (s *Substance) maxDensity() float64 {
+	rho := 1.5 * s.liquid.density(s.tMin)
+	if v := 1.01*s.eos.b - s.eos.shift; v > 0 {
+		rho = math.Min(rho, s.molarMass/v)
+	}
+	return rho
 }

@@ -218,24 +218,30 @@ func (v *validator) consistency(f *Fluid, s *Substance) {
 		return
 	}
 	const n = 400
-	prev := math.Inf(-1)
 	tf, tc := s.tMin, s.tc
-	for i := 0; i <= n; i++ {
-		t := tf + (tc-tf)*float64(i)/n
+	sats := make([]Saturation, n+1)
+	for i := range sats {
+		t := math.Min(tf+(tc-tf)*float64(i)/n, tc)
 		sat, err := s.Saturation(t)
 		if err != nil {
 			v.fail("vapour_pressure", "", "cannot be evaluated at %.2f K: %v", t, err)
 			return
 		}
+		sats[i] = sat
+	}
+	prev := math.Inf(-1)
+	for _, sat := range sats {
 		if !finite(sat.PressurePa) || sat.PressurePa <= prev {
-			v.fail("vapour_pressure", fmt.Sprintf("%.6g Pa at %.2f K", sat.PressurePa, t),
+			v.fail("vapour_pressure", fmt.Sprintf("%.6g Pa at %.2f K", sat.PressurePa, sat.TemperatureK),
 				"the vapour pressure must rise steadily with temperature from the freezing point to the critical point")
 			return
 		}
 		prev = sat.PressurePa
-		if i < n && !(sat.LiquidDensity > sat.VapourDensity && sat.VapourDensity > 0) {
+	}
+	for _, sat := range sats[:n] {
+		if !(sat.LiquidDensity > sat.VapourDensity && sat.VapourDensity > 0) {
 			v.fail("critical_density_kg_m3.value", f.CriticalDensity.Value,
-				"gives a vapour (%.4g kg/m³) not lighter than the liquid (%.4g kg/m³) at %.2f K", sat.VapourDensity, sat.LiquidDensity, t)
+				"gives a vapour (%.4g kg/m³) not lighter than the liquid (%.4g kg/m³) at %.2f K", sat.VapourDensity, sat.LiquidDensity, sat.TemperatureK)
 			return
 		}
 	}

@@ -1,0 +1,46 @@
+package fluids_test
+
+import (
+	"fmt"
+
+	"ullage/fluids"
+	"ullage/fluids/units"
+)
+
+// The saturation state of a built-in fluid at 40 °C.
+func ExampleSubstance_Saturation() {
+	lib, err := fluids.Builtin()
+	if err != nil {
+		panic(err)
+	}
+	dcm, err := lib.Lookup("methylene chloride")
+	if err != nil {
+		panic(err)
+	}
+	sat, err := dcm.Saturation(units.CelsiusToKelvin(40))
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%s at 40 °C: %.0f kPa, liquid %.0f kg/m³, extrapolated: %v\n",
+		dcm.Fluid().Name, sat.PressurePa/1000, sat.LiquidDensity, sat.Flags.Extrapolated())
+	// Output: Dichloromethane at 40 °C: 102 kPa, liquid 1290 kg/m³, extrapolated: false
+}
+
+// A temperature below the freezing point is an error, never a number.
+func ExampleSubstance_Saturation_belowFreezing() {
+	lib, _ := fluids.Builtin()
+	water, _ := lib.Lookup("water")
+	_, err := water.Saturation(units.CelsiusToKelvin(-10))
+	fmt.Println(err)
+	// Output: Water: temperature 263.15 K (-10.00 °C) is below the freezing point 273.15 K (0.00 °C): temperature is below the freezing point
+}
+
+// The temperature at which liquid of a given density fills a vessel.
+func ExampleSubstance_LiquidFullTemperature() {
+	lib, _ := fluids.Builtin()
+	acetone, _ := lib.Lookup("acetone")
+	t, ok := acetone.LiquidFullTemperature(700) // 0.7 g of fill per mL of vessel
+	fmt.Printf("liquid-full at %.1f °C (%v)\n", units.KelvinToCelsius(t), ok)
+	// Output: liquid-full at 95.4 °C (true)
+}
