@@ -82,8 +82,18 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 		fl |= SupercriticalState
 	}
 	if rho <= s.rhoC {
-		ts, _ := s.dewTemperature(rho)
-		if t < ts {
+		ts, found := s.dewTemperature(rho)
+		if !found {
+			// Thinner than the saturated vapour even at the freezing
+			// point: a gas at every temperature, on the equation of
+			// state alone.
+			p, ok := s.eos.pressure(t, rho)
+			if !ok {
+				return 0, 0, fmt.Errorf("%s: density %.4g kg/m³ is beyond the equation of state's limit: %w", s.fluid.Name, rho, ErrOutOfDomain)
+			}
+			return p, fl, nil
+		}
+		if t < ts*(1-boundaryTolerance) {
 			return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ is below the dew temperature %.2f K: %w", s.fluid.Name, t, rho, ts, ErrTwoPhase)
 		}
 		ps, f2, _ := s.SaturationPressure(ts)
@@ -92,7 +102,7 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 		return p, fl, err
 	}
 	ts, ok := s.bubbleTemperature(rho)
-	if ok && t < ts {
+	if ok && t < ts*(1-boundaryTolerance) {
 		return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ is below the liquid-full temperature %.2f K: %w", s.fluid.Name, t, rho, ts, ErrTwoPhase)
 	}
 	tTait := taitMaxTr * s.tc
@@ -102,10 +112,28 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 		p, err := s.isochoricRise(t, ts, rho, ps)
 		return p, fl, err
 	}
+	// Far into the compressed-liquid region the Tait isochores bend over
+	// (its B(T) falls faster than the liquid expands), which no real
+	// liquid does: (∂P/∂T)_ρ > 0. Where that happens before Tr 0.95, the
+	// hand-over to the equation of state moves down to the top of the
+	// Tait isochore.
 	tt := math.Min(t, tTait)
-	ps, f2, _ := s.SaturationPressure(tt)
+	if s.taitSlope(tt, rho) <= 0 {
+		lo := ts
+		if !ok {
+			lo = s.tMin
+		}
+		if s.taitSlope(lo, rho) > 0 {
+			if r, err := solve.Brent(func(x float64) float64 { return s.taitSlope(x, rho) }, lo, tt, 1e-6, 100); err == nil {
+				tTait = r.X
+			}
+		} else {
+			tTait = lo
+		}
+		tt = math.Min(t, tTait)
+	}
+	p, f2 := s.taitPressure(tt, rho)
 	fl |= f2
-	p := s.compressed.pressure(tt, rho, s.liquid.density(tt), ps)
 	if t <= tTait {
 		return p, fl, nil
 	}
@@ -114,8 +142,26 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 	return p, fl, err
 }
 
+func (s *Substance) taitPressure(t, rho float64) (float64, Flags) {
+	ps, fl, _ := s.SaturationPressure(t)
+	return s.compressed.pressure(t, rho, s.liquid.density(t), ps), fl
+}
+
+// taitSlope is the Tait isochore's slope (∂P/∂T)_ρ by a central difference.
+func (s *Substance) taitSlope(t, rho float64) float64 {
+	const h = 0.01
+	a, _ := s.taitPressure(math.Max(t-h, s.tMin), rho)
+	b, _ := s.taitPressure(t+h, rho)
+	return b - a
+}
+
+// boundaryTolerance is the relative distance inside a phase boundary still
+// treated as on it, so that rounding in an inverted correlation does not
+// turn a boundary state into a two-phase error.
+const boundaryTolerance = 1e-9
+
 func (s *Substance) isochoricRise(t, t0, rho, p0 float64) (float64, error) {
-	if t == t0 {
+	if t <= t0 {
 		return p0, nil
 	}
 	p1, ok1 := s.eos.pressure(t, rho)
@@ -140,11 +186,27 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
 	}
 	rhoSat := s.liquid.density(t)
-	if t <= taitMaxTr*s.tc {
-		return s.compressed.density(t, math.Max(p, ps), rhoSat, ps), fl, nil
+	if t > taitMaxTr*s.tc {
+		rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
+		return rho, fl | f2, err
 	}
-	rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
-	return rho, fl | f2, err
+	rho := s.compressed.density(t, math.Max(p, ps), rhoSat, ps)
+	// The closed form holds wherever SinglePhasePressure uses Tait; where
+	// that has handed over to the equation of state, invert it instead.
+	// Within 1 % of (B + Ps) above saturation the liquid is compressed by
+	// under 0.1 %, far from any bend in the isochores: no check needed.
+	if b := s.compressed.bParam(t); p-ps < 0.01*(b+ps) {
+		return rho, fl, nil
+	}
+	if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+		return rho, fl | f2, nil
+	}
+	if inv, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity()); err == nil {
+		return inv, fl | f2, nil
+	}
+	// Beyond every description (pressures of hundreds of megapascals,
+	// far past any glass): keep the Tait value and say so.
+	return rho, fl | CompressedLiquidExtrapolated, nil
 }
 
 // Density returns the density (kg/m³) of a single-phase fluid at (t, p):

@@ -1,0 +1,342 @@
+package hazards
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"ullage/fluids"
+	"ullage/fluids/solve"
+	"ullage/fluids/units"
+)
+
+// Assessment is the full result of reviewing one design.
+type Assessment struct {
+	Design Design
+	Fluid  *fluids.Fluid
+	Glass  Glass
+
+	// VolumeM3 is the internal volume used; FillDensity the fill mass per
+	// internal volume (kg/m³); LiquidFractionAtSealing the share of the
+	// volume taken by liquid when sealed.
+	VolumeM3                float64
+	FillDensity             float64
+	LiquidFractionAtSealing float64
+
+	// Hot and Cold are the vessel at the hottest and coldest temperatures.
+	Hot, Cold VesselState
+	// LiquidFullK is the temperature at which the vessel goes liquid-full;
+	// LiquidFullReached is false when it does not below Tc.
+	LiquidFullK       float64
+	LiquidFullReached bool
+
+	// Parts are the stresses of each part at the hottest temperature, and
+	// Strength the burst resistance of the whole envelope.
+	Parts    []PartStress
+	Strength Strength
+	// BurstSafetyFactor is the long-term burst overpressure over the
+	// overpressure at the hottest temperature; FailureProbability the
+	// Weibull probability of failure over the service life.
+	BurstSafetyFactor  float64
+	FailureProbability float64
+	// RequiredSafetyFactor is the safety factor that meets both the
+	// minimum safety factor and the maximum failure probability.
+	RequiredSafetyFactor float64
+	// ExternalLoadPa is the outside-minus-inside pressure at the coldest
+	// temperature (positive when the vessel is under external pressure);
+	// ImplosionSafetyFactor the smallest knocked-down buckling pressure
+	// of any part over it.
+	ExternalLoadPa        float64
+	ImplosionSafetyFactor float64
+
+	// MaxSafe are the largest temperature and fill that still meet the
+	// burst, failure-probability and ullage criteria.
+	MaxSafe MaxSafe
+
+	Rupture Rupture
+	Release Release
+
+	Findings []Finding
+	Verdict  Status
+	// Cautions are the standard cautions plus those the fluid calls for.
+	Cautions []string
+	// Flags gathers every correlation stretched anywhere in the review.
+	Flags fluids.Flags
+
+	vessel  *sealedVessel
+	release *releaseModel
+}
+
+// MaxSafe holds the limits found by root-finding. A limit that lies
+// outside the searched range is reported at the range end with the
+// matching Bound flag set.
+type MaxSafe struct {
+	TemperatureK       float64
+	TemperatureBound   Bound
+	TemperatureLimitBy string // "pressure" or "ullage"
+	FillMassKg         float64
+	FillBound          Bound
+	// Roots record how each limit was found, for the calculation record.
+	PressureRoot, UllageRoot, FillRoot *solve.Root
+}
+
+// Bound says whether a searched limit was found inside its range.
+type Bound string
+
+// Bounds of a searched limit.
+const (
+	BoundFound Bound = "found"
+	// BoundAbove: the criterion still holds at the top of the range.
+	BoundAbove Bound = "above-range"
+	// BoundBelow: the criterion already fails at the bottom of the range.
+	BoundBelow Bound = "below-range"
+)
+
+// Release summarises the breakage of the vessel into the room.
+type Release struct {
+	Room       Room
+	MassKg     float64
+	Peak       Exposure // highest of room peak and near-field 1-minute average
+	STEL       Exposure // 15-minute average
+	TWA8h      Exposure // 8-hour time-weighted average
+	PercentLFL float64  // of the peak; 0 when not flammable
+	// RoomTimeConstantS is the e-folding time of the well-mixed room,
+	// k·V/Q; zero ventilation gives the cap of 1e9 s.
+	RoomTimeConstantS float64
+}
+
+// Assess reviews a design against the fluid library. It validates the
+// design first and returns an *InputError (wrapping ErrInvalidInput) for
+// any bad input; no NaN or infinity reaches a result.
+func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
+	if err := d.Validate(); err != nil {
+		return nil, err
+	}
+	sub, err := lib.Lookup(d.Fluid)
+	if err != nil {
+		return nil, &InputError{Field: "fluid", Value: fmt.Sprintf("%q", d.Fluid), Want: err.Error()}
+	}
+	glass := Glass{}
+	if d.Glass.Custom != nil {
+		glass = *d.Glass.Custom
+	} else if glass, err = LookupGlass(d.Glass.ID); err != nil {
+		return nil, err
+	}
+	a := &Assessment{Design: d, Fluid: sub.Fluid(), Glass: glass}
+	for _, tf := range []struct {
+		field string
+		t     float64
+	}{{"coldest_k", d.ColdestK}, {"sealing_temperature_k", d.SealingTemperatureK}, {"hottest_k", d.HottestK}} {
+		if tf.t < sub.MinTemperature() {
+			return nil, &InputError{Field: tf.field, Value: fmt.Sprintf("%g", tf.t),
+				Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K (%.1f °C)", sub.Fluid().Name, sub.MinTemperature(), units.KelvinToCelsius(sub.MinTemperature()))}
+		}
+	}
+	a.VolumeM3 = d.Vessel.Volume()
+	a.FillDensity = d.FillMassKg / a.VolumeM3
+	v, err := newSealedVessel(sub, d.FillMassKg, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
+	if err != nil {
+		return nil, err
+	}
+	a.vessel = v
+	if sat, err := sub.Saturation(d.SealingTemperatureK); err == nil {
+		a.LiquidFractionAtSealing = math.Max(0, (a.FillDensity-sat.VapourDensity)/(sat.LiquidDensity-sat.VapourDensity))
+	}
+	if a.Hot, err = v.state(d.HottestK); err != nil {
+		return nil, fmt.Errorf("state at the hottest temperature: %w", err)
+	}
+	if a.Cold, err = v.state(d.ColdestK); err != nil {
+		return nil, fmt.Errorf("state at the coldest temperature: %w", err)
+	}
+	a.Flags = a.Hot.Flags | a.Cold.Flags
+	a.LiquidFullK, a.LiquidFullReached = v.liquidFullTemperature()
+
+	// Glass.
+	over := a.Hot.PressurePa - d.AmbientPressurePa
+	a.Parts = analyseParts(d.Vessel.Parts, &glass, over)
+	loadS := d.HoursAtHottest * 3600
+	a.Strength = glassStrength(a.Parts, &glass, loadS, d.Criteria.MinBurstSafetyFactor)
+	a.BurstSafetyFactor = safetyFactor(a.Strength.LongTermBurstPa, over)
+	m := glass.WeibullModulus.Value
+	a.FailureProbability = failureProbability(over, a.Strength.LongTermBurstPa, m)
+	a.RequiredSafetyFactor = math.Max(d.Criteria.MinBurstSafetyFactor, math.Pow(-math.Log1p(-d.Criteria.MaxFailureProbability), -1/m))
+	a.ExternalLoadPa = d.AmbientPressurePa - a.Cold.PressurePa
+	a.ImplosionSafetyFactor = SafetyFactorCap
+	for _, p := range a.Parts {
+		a.ImplosionSafetyFactor = math.Min(a.ImplosionSafetyFactor, safetyFactor(p.BucklingPa, a.ExternalLoadPa))
+	}
+
+	if err := a.findMaxSafe(sub); err != nil {
+		return nil, err
+	}
+	a.rupture(sub)
+	a.releaseModel()
+	a.findings(sub)
+	return a, nil
+}
+
+// StateAt returns the vessel's state at any temperature (K) at or above
+// the fluid's freezing point, for charts and tables.
+func (a *Assessment) StateAt(t float64) (VesselState, error) { return a.vessel.state(t) }
+
+// Concentration returns the concentration in mg/m³ in a zone t seconds
+// after the breakage.
+func (a *Assessment) Concentration(z Zone, t float64) float64 { return a.release.Concentration(z, t) }
+
+// AllowablePressurePa returns the absolute internal pressure at which the
+// burst safety factor equals the required one.
+func (a *Assessment) AllowablePressurePa() float64 {
+	return a.Design.AmbientPressurePa + a.Strength.LongTermBurstPa/a.RequiredSafetyFactor
+}
+
+// searchTopK is the highest temperature searched for the maximum safe
+// temperature.
+func (a *Assessment) searchTopK(sub *fluids.Substance) float64 {
+	return math.Max(a.Design.HottestK+100, sub.CriticalTemperature()+50)
+}
+
+func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
+	d := &a.Design
+	lo, hi := d.ColdestK, a.searchTopK(sub)
+	allow := a.AllowablePressurePa()
+	pressureGap := func(t float64) float64 {
+		st, err := a.vessel.state(t)
+		if err != nil {
+			return math.NaN()
+		}
+		return (st.PressurePa - allow) / allow
+	}
+	minU := d.Criteria.MinUllagePercent
+	ullageGap := func(t float64) float64 {
+		st, err := a.vessel.state(t)
+		if err != nil {
+			return math.NaN()
+		}
+		return minU - st.UllagePercent
+	}
+	tP, bP, rP, err := searchRising(pressureGap, lo, hi)
+	if err != nil {
+		return fmt.Errorf("maximum safe temperature (pressure): %w", err)
+	}
+	uHi := hi
+	if a.LiquidFullReached {
+		uHi = math.Min(hi, math.Max(a.LiquidFullK, lo))
+	}
+	tU, bU, rU := uHi, BoundAbove, (*solve.Root)(nil)
+	if a.LiquidFullReached && uHi > lo {
+		if tU, bU, rU, err = searchRising(ullageGap, lo, uHi); err != nil {
+			return fmt.Errorf("maximum safe temperature (ullage): %w", err)
+		}
+		if bU == BoundAbove {
+			tU = hi
+		}
+	} else if a.LiquidFullReached {
+		tU, bU = lo, BoundBelow
+	}
+	ms := MaxSafe{PressureRoot: rP, UllageRoot: rU}
+	if tU < tP || (bU == BoundBelow) {
+		ms.TemperatureK, ms.TemperatureBound, ms.TemperatureLimitBy = tU, bU, "ullage"
+	} else {
+		ms.TemperatureK, ms.TemperatureBound, ms.TemperatureLimitBy = tP, bP, "pressure"
+	}
+
+	// Maximum safe fill at the hottest temperature.
+	sat, err := sub.Saturation(d.SealingTemperatureK)
+	if err != nil {
+		return err
+	}
+	mMax := sat.LiquidDensity * a.VolumeM3 * (1 - 1e-9)
+	fillGap := func(mass float64) float64 {
+		v, err := newSealedVessel(sub, mass, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
+		if err != nil {
+			return math.NaN()
+		}
+		st, err := v.state(d.HottestK)
+		if err != nil {
+			return math.NaN()
+		}
+		return math.Max((st.PressurePa-allow)/allow, (minU-st.UllagePercent)/100)
+	}
+	mLo := mMax * 1e-6
+	mf, bf, rf, err := searchRising(fillGap, mLo, mMax)
+	if err != nil {
+		return fmt.Errorf("maximum safe fill: %w", err)
+	}
+	ms.FillMassKg, ms.FillBound, ms.FillRoot = mf, bf, rf
+	a.MaxSafe = ms
+	return nil
+}
+
+// searchRising finds where a rising gap function crosses zero on [lo, hi]:
+// the largest x with gap(x) ≤ 0. When gap(hi) ≤ 0 it returns hi,
+// BoundAbove; when gap(lo) > 0 it returns lo, BoundBelow.
+func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *solve.Root, error) {
+	gLo, gHi := gap(lo), gap(hi)
+	if math.IsNaN(gLo) || math.IsNaN(gHi) {
+		return 0, "", nil, fmt.Errorf("the model cannot be evaluated at %g or %g", lo, hi)
+	}
+	if gHi <= 0 {
+		return hi, BoundAbove, nil, nil
+	}
+	if gLo > 0 {
+		return lo, BoundBelow, nil, nil
+	}
+	r, err := solve.Brent(gap, lo, hi, 1e-6*math.Max(math.Abs(hi), 1e-12), 200)
+	if err != nil {
+		if errors.Is(err, solve.ErrNotFinite) {
+			return 0, "", nil, err
+		}
+		return r.X, BoundFound, &r, nil
+	}
+	return r.X, BoundFound, &r, nil
+}
+
+func (a *Assessment) rupture(sub *fluids.Substance) {
+	f := sub.Fluid()
+	st := a.Hot
+	satPa, bulk := 0.0, 0.0
+	if st.TemperatureK <= sub.CriticalTemperature() {
+		if sat, err := sub.Saturation(st.TemperatureK); err == nil {
+			satPa = sat.PressurePa
+			if st.VapourDensity == 0 {
+				st.VapourDensity = sat.VapourDensity
+			}
+		}
+	}
+	if st.Phase == PhaseLiquidFull && st.LiquidDensity > 0 {
+		// Bulk modulus K = ρ dP/dρ by a central difference on the
+		// compressed-liquid pressure.
+		h := st.LiquidDensity * 1e-4
+		p1, _, e1 := sub.SinglePhasePressure(st.TemperatureK, st.LiquidDensity+h)
+		p0, _, e0 := sub.SinglePhasePressure(st.TemperatureK, st.LiquidDensity-h)
+		if e1 == nil && e0 == nil {
+			bulk = st.LiquidDensity * (p1 - p0) / (2 * h)
+		}
+	}
+	hvapTb := f.HeatOfVaporisation.Value / f.MolarMass.Value
+	if sat, err := sub.Saturation(f.NormalBoilingPoint.Value); err == nil {
+		hvapTb = sat.HeatOfVaporisation
+	}
+	a.Rupture = ruptureEnergy(st, a.VolumeM3, a.Design.AmbientPressurePa, f.NormalBoilingPoint.Value,
+		f.LiquidHeatCapacity.Value/f.MolarMass.Value, hvapTb, satPa, bulk)
+}
+
+func (a *Assessment) releaseModel() {
+	d := &a.Design
+	rel := newReleaseModel(d.FillMassKg, d.Room)
+	a.release = rel
+	mm := a.Fluid.MolarMass.Value
+	exposureS := d.Room.ExposureMinutes * 60
+	r := Release{Room: d.Room, MassKg: d.FillMassKg}
+	r.Peak = rel.exposure(0, exposureS, mm)
+	r.STEL = rel.exposure(15*60, exposureS, mm)
+	r.TWA8h = rel.exposure(8*3600, exposureS, mm)
+	if a.Fluid.Flammability.LFLPercent != nil {
+		r.PercentLFL = r.Peak.PPM / (a.Fluid.Flammability.LFLPercent.Value * 1e4) * 100
+	}
+	r.RoomTimeConstantS = 1e9
+	if rel.roomRate > 0 {
+		r.RoomTimeConstantS = math.Min(1/rel.roomRate, 1e9)
+	}
+	a.Release = r
+}

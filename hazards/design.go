@@ -1,0 +1,271 @@
+package hazards
+
+import (
+	"fmt"
+	"math"
+	"strings"
+)
+
+// Design is everything a review needs to know about one revision of a
+// sealed device. SI units throughout; field names carry the unit.
+type Design struct {
+	// Fluid names the working liquid: a library ID, name, synonym or CAS.
+	Fluid string `json:"fluid"`
+	// FillMassKg is the nominal fill; FillMassToleranceKg its ± tolerance.
+	FillMassKg          float64 `json:"fill_mass_kg"`
+	FillMassToleranceKg float64 `json:"fill_mass_tolerance_kg"`
+	// Vessel is the glass envelope.
+	Vessel Vessel `json:"vessel"`
+	// SealingTemperatureK is the temperature of the fill when the vessel
+	// was sealed; ResidualGasPressurePa the partial pressure of air or
+	// other non-condensable gas left inside at that temperature (0 for a
+	// fully evacuated vessel).
+	SealingTemperatureK   float64 `json:"sealing_temperature_k"`
+	ResidualGasPressurePa float64 `json:"residual_gas_pressure_pa"`
+	// HottestK and ColdestK bound the temperatures the device will meet.
+	HottestK float64 `json:"hottest_k"`
+	ColdestK float64 `json:"coldest_k"`
+	// AmbientPressurePa is the outside pressure (101325 Pa at sea level).
+	AmbientPressurePa float64 `json:"ambient_pressure_pa"`
+	// Glass names a catalogue glass by ID, or carries a custom one.
+	Glass GlassChoice `json:"glass"`
+	// ServiceLifeYears is the intended life of the product;
+	// HoursAtHottest the total time over that life spent at the hottest
+	// temperature, the load duration used for static fatigue.
+	ServiceLifeYears float64 `json:"service_life_years"`
+	HoursAtHottest   float64 `json:"hours_at_hottest"`
+	// Room is the release scenario after a breakage.
+	Room Room `json:"room"`
+	// Criteria are the review's pass marks.
+	Criteria Criteria `json:"criteria"`
+}
+
+// GlassChoice is either a catalogue glass (ID) or a custom glass.
+type GlassChoice struct {
+	ID     string `json:"id"`
+	Custom *Glass `json:"custom,omitempty"`
+}
+
+// Part shapes.
+const (
+	ShapeSphere = "sphere"
+	ShapeTube   = "tube"
+)
+
+// Vessel is the glass envelope: its internal volume and the parts that
+// carry the pressure.
+type Vessel struct {
+	// InternalVolumeM3 is the measured internal volume; 0 means compute it
+	// from the parts. VolumeToleranceM3 is its ± tolerance.
+	InternalVolumeM3  float64 `json:"internal_volume_m3"`
+	VolumeToleranceM3 float64 `json:"volume_tolerance_m3"`
+	// Parts are the spheres and tubes of the envelope; at least one.
+	Parts []Part `json:"parts"`
+}
+
+// Part is one sphere or tube of the envelope. A tube is treated as a
+// closed cylinder of the given length (its ends are spheres or other parts).
+type Part struct {
+	Name           string  `json:"name"`
+	Shape          string  `json:"shape"`
+	OuterDiameterM float64 `json:"outer_diameter_m"`
+	WallThicknessM float64 `json:"wall_thickness_m"`
+	WallToleranceM float64 `json:"wall_tolerance_m"`
+	LengthM        float64 `json:"length_m"`
+}
+
+// Room is the release scenario: the room a broken device empties into.
+type Room struct {
+	// PresetID names the preset the values came from, or "" for custom.
+	PresetID          string  `json:"preset_id"`
+	VolumeM3          float64 `json:"volume_m3"`
+	AirChangesPerHour float64 `json:"air_changes_per_hour"`
+	// MixingFactor k ≥ 1 divides the ventilation rate to allow for
+	// imperfect mixing (1 = perfectly mixed).
+	MixingFactor float64 `json:"mixing_factor"`
+	// NearFieldRadiusM and NearFieldAirSpeed set the two-zone model's
+	// near-field hemisphere around the breakage and the air speed across
+	// its surface (m/s).
+	NearFieldRadiusM  float64 `json:"near_field_radius_m"`
+	NearFieldAirSpeed float64 `json:"near_field_air_speed_m_s"`
+	// ExposureMinutes is how long a person stays after the breakage.
+	ExposureMinutes float64 `json:"exposure_minutes"`
+}
+
+// Criteria are the review's pass marks. DefaultCriteria documents the
+// defaults and their grounds.
+type Criteria struct {
+	MinBurstSafetyFactor     float64 `json:"min_burst_safety_factor"`
+	MinImplosionSafetyFactor float64 `json:"min_implosion_safety_factor"`
+	MaxFailureProbability    float64 `json:"max_failure_probability"`
+	MinUllagePercent         float64 `json:"min_ullage_percent"`
+	MaxFractionOfLimit       float64 `json:"max_fraction_of_limit"`
+	MaxPercentLFL            float64 `json:"max_percent_lfl"`
+	// LimitBodies lists the bodies whose limits apply (NIOSH, OSHA, EPA,
+	// AIHA, ACGIH); empty means all, and the most protective governs.
+	LimitBodies []string `json:"limit_bodies"`
+}
+
+// DefaultCriteria returns the review criteria used when a design sets
+// none, each with its grounds in DefaultCriteriaGrounds.
+func DefaultCriteria() Criteria {
+	return Criteria{
+		MinBurstSafetyFactor:     4,
+		MinImplosionSafetyFactor: 4,
+		MaxFailureProbability:    1e-4,
+		MinUllagePercent:         5,
+		MaxFractionOfLimit:       1,
+		MaxPercentLFL:            25,
+	}
+}
+
+// DefaultCriteriaGrounds says where each default criterion comes from.
+var DefaultCriteriaGrounds = map[string]string{
+	"min_burst_safety_factor":     "4 on the long-term characteristic burst pressure: common practice for brittle pressure-bearing glass, which has no yield to warn before failure",
+	"min_implosion_safety_factor": "4 on the knocked-down buckling pressure: common practice, matching the burst criterion",
+	"max_failure_probability":     "1 in 10 000 units over the service life: common practice for consumer glass articles; set it to the firm's own target",
+	"min_ullage_percent":          "5 % vapour space at the hottest temperature: mirrors the 0.95 factor on liquid density in the UN packing instruction P200 filling rule for low-pressure liquefied gases (UN Model Regulations, P200 (5)(b))",
+	"max_fraction_of_limit":       "1.0: the exposure must not exceed the governing published limit",
+	"max_percent_lfl":             "25 % of the LFL: common practice for an atmosphere kept safely below flammability (NFPA 69 uses 25 % LFL for combustible-concentration control, from memory)",
+}
+
+// Validate checks every input of the design and returns the first problem
+// as an *InputError naming the field, the value and what is acceptable.
+// It checks ranges only; the fluid-dependent checks (temperatures above
+// the freezing point, a fill the vessel can hold) happen in Assess.
+func (d *Design) Validate() error {
+	c := &checker{}
+	if strings.TrimSpace(d.Fluid) == "" {
+		c.fail("fluid", `""`, "name a fluid from the library")
+	}
+	c.positive("fill_mass_kg", d.FillMassKg, 10, "kg")
+	c.number("fill_mass_tolerance_kg", d.FillMassToleranceKg, 0, d.FillMassKg, "kg (not more than the fill)")
+	d.Vessel.validate(c)
+	c.number("sealing_temperature_k", d.SealingTemperatureK, 20, 600, "K")
+	c.number("residual_gas_pressure_pa", d.ResidualGasPressurePa, 0, 2e5, "Pa")
+	c.number("hottest_k", d.HottestK, 20, 800, "K")
+	c.number("coldest_k", d.ColdestK, 20, 800, "K")
+	if c.err == nil && d.ColdestK > d.HottestK {
+		c.fail("coldest_k", d.ColdestK, "must not be above hottest_k (%g K)", d.HottestK)
+	}
+	c.number("ambient_pressure_pa", d.AmbientPressurePa, 5e4, 1.2e5, "Pa")
+	if d.Glass.Custom != nil {
+		if err := d.Glass.Custom.Validate("glass.custom"); err != nil && c.err == nil {
+			c.err = err
+		}
+	} else if strings.TrimSpace(d.Glass.ID) == "" {
+		c.fail("glass.id", `""`, "choose a glass from the catalogue or give a custom one")
+	}
+	c.positive("service_life_years", d.ServiceLifeYears, 100, "years")
+	c.positive("hours_at_hottest", d.HoursAtHottest, 876600, "hours")
+	if c.err == nil && d.HoursAtHottest > d.ServiceLifeYears*8766 {
+		c.fail("hours_at_hottest", d.HoursAtHottest, "cannot exceed the service life (%g h)", d.ServiceLifeYears*8766)
+	}
+	if err := d.Room.Validate("room"); err != nil && c.err == nil {
+		c.err = err
+	}
+	d.Criteria.validate(c)
+	return c.err
+}
+
+func (v *Vessel) validate(c *checker) {
+	c.number("vessel.internal_volume_m3", v.InternalVolumeM3, 0, 0.1, "m³ (0 means compute from the parts)")
+	c.number("vessel.volume_tolerance_m3", v.VolumeToleranceM3, 0, math.Max(v.InternalVolumeM3, 0.1)*0.5, "m³")
+	if len(v.Parts) == 0 {
+		c.fail("vessel.parts", "[]", "describe at least one sphere or tube")
+	}
+	if len(v.Parts) > 50 {
+		c.fail("vessel.parts", len(v.Parts), "at most 50 parts")
+	}
+	for i, p := range v.Parts {
+		f := fmt.Sprintf("vessel.parts[%d]", i)
+		if p.Shape != ShapeSphere && p.Shape != ShapeTube {
+			c.fail(f+".shape", fmt.Sprintf("%q", p.Shape), "must be %q or %q", ShapeSphere, ShapeTube)
+		}
+		c.positive(f+".outer_diameter_m", p.OuterDiameterM, 2, "m")
+		c.positive(f+".wall_thickness_m", p.WallThicknessM, 0.1, "m")
+		if c.err == nil && p.WallThicknessM >= p.OuterDiameterM/2 {
+			c.fail(f+".wall_thickness_m", p.WallThicknessM, "must be less than the outer radius (%g m)", p.OuterDiameterM/2)
+		}
+		c.number(f+".wall_tolerance_m", p.WallToleranceM, 0, p.WallThicknessM*0.5, "m (at most half the wall)")
+		if p.Shape == ShapeTube {
+			c.positive(f+".length_m", p.LengthM, 5, "m")
+		} else {
+			c.number(f+".length_m", p.LengthM, 0, 0, "m (a sphere has no length)")
+		}
+	}
+	if c.err == nil && v.InternalVolumeM3 == 0 && v.PartsVolume() <= 0 {
+		c.fail("vessel.parts", "", "give the parts an internal volume")
+	}
+}
+
+// Validate checks a release scenario; field prefixes error field names.
+func (r *Room) Validate(field string) error {
+	c := &checker{}
+	c.positive(field+".volume_m3", r.VolumeM3, 1e6, "m³")
+	c.number(field+".air_changes_per_hour", r.AirChangesPerHour, 0, 100, "per hour")
+	c.number(field+".mixing_factor", r.MixingFactor, 1, 20, "(1 = perfectly mixed)")
+	c.positive(field+".near_field_radius_m", r.NearFieldRadiusM, 5, "m")
+	c.number(field+".near_field_air_speed_m_s", r.NearFieldAirSpeed, 0.005, 5, "m/s")
+	c.positive(field+".exposure_minutes", r.ExposureMinutes, 1440, "minutes")
+	if c.err == nil && NearFieldVolume(r.NearFieldRadiusM) >= r.VolumeM3/2 {
+		c.fail(field+".near_field_radius_m", r.NearFieldRadiusM, "the near-field hemisphere must be less than half the room")
+	}
+	return c.err
+}
+
+func (cr *Criteria) validate(c *checker) {
+	c.number("criteria.min_burst_safety_factor", cr.MinBurstSafetyFactor, 1, 100, "")
+	c.number("criteria.min_implosion_safety_factor", cr.MinImplosionSafetyFactor, 1, 100, "")
+	c.number("criteria.max_failure_probability", cr.MaxFailureProbability, 1e-12, 0.5, "")
+	c.number("criteria.min_ullage_percent", cr.MinUllagePercent, 0, 50, "%")
+	c.number("criteria.max_fraction_of_limit", cr.MaxFractionOfLimit, 0.01, 1, "(fraction of the governing limit)")
+	c.number("criteria.max_percent_lfl", cr.MaxPercentLFL, 1, 100, "% of LFL")
+	for i, b := range cr.LimitBodies {
+		if !knownBodies[b] {
+			c.fail(fmt.Sprintf("criteria.limit_bodies[%d]", i), fmt.Sprintf("%q", b), "must be one of NIOSH, OSHA, EPA, AIHA, ACGIH")
+		}
+	}
+}
+
+var knownBodies = map[string]bool{"NIOSH": true, "OSHA": true, "EPA": true, "AIHA": true, "ACGIH": true}
+
+// PartsVolume returns the sum of the parts' internal volumes in m³
+// (spheres π dᵢ³/6, tubes π dᵢ² L/4); joints are not subtracted.
+func (v *Vessel) PartsVolume() float64 {
+	sum := 0.0
+	for _, p := range v.Parts {
+		sum += p.InternalVolume()
+	}
+	return sum
+}
+
+// Volume returns the internal volume used for the fill: the measured one
+// when given, otherwise the parts' volume.
+func (v *Vessel) Volume() float64 {
+	if v.InternalVolumeM3 > 0 {
+		return v.InternalVolumeM3
+	}
+	return v.PartsVolume()
+}
+
+// InnerRadius returns the inner radius in m.
+func (p *Part) InnerRadius() float64 { return p.OuterDiameterM/2 - p.WallThicknessM }
+
+// InternalVolume returns the part's internal volume in m³.
+func (p *Part) InternalVolume() float64 {
+	ri := p.InnerRadius()
+	if p.Shape == ShapeSphere {
+		return 4.0 / 3.0 * math.Pi * ri * ri * ri
+	}
+	return math.Pi * ri * ri * p.LengthM
+}
+
+// OuterArea returns the part's outer surface area in m².
+func (p *Part) OuterArea() float64 {
+	ro := p.OuterDiameterM / 2
+	if p.Shape == ShapeSphere {
+		return 4 * math.Pi * ro * ro
+	}
+	return 2 * math.Pi * ro * p.LengthM
+}

@@ -1,0 +1,260 @@
+package hazards
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"sync"
+
+	"ullage/fluids"
+	"ullage/fluids/solve"
+	"ullage/fluids/units"
+)
+
+// Phase is the state of the fluid in the sealed vessel.
+type Phase string
+
+// The phases a sealed vessel can be in.
+const (
+	PhaseTwoPhase      Phase = "two-phase"
+	PhaseLiquidFull    Phase = "liquid-full"
+	PhaseVapour        Phase = "vapour"
+	PhaseSupercritical Phase = "supercritical"
+)
+
+// VesselState is the sealed vessel at one temperature.
+type VesselState struct {
+	TemperatureK float64
+	Phase        Phase
+	// PressurePa is the absolute internal pressure; GasPressurePa the part
+	// of it due to residual non-condensable gas.
+	PressurePa    float64
+	GasPressurePa float64
+	// UllagePercent is the vapour (and gas) space as a percentage of the
+	// internal volume.
+	UllagePercent float64
+	LiquidMassKg  float64
+	VapourMassKg  float64
+	// VapourDensity is the density of the vapour in the ullage (kg/m³),
+	// LiquidDensity that of the liquid; zero where the phase is absent.
+	VapourDensity float64
+	LiquidDensity float64
+	// Flags says which correlations were stretched for this state.
+	Flags fluids.Flags
+}
+
+// sealedVessel is a fixed mass of fluid and residual gas in a rigid
+// vessel. The glass's own expansion (about 3·α·ΔT, under 0.3 % over 100 K
+// for soda-lime) is neglected, which errs on the safe side: it would give
+// the liquid slightly more room.
+type sealedVessel struct {
+	fluid     *fluids.Substance
+	mass      float64 // kg
+	volume    float64 // m³
+	gasMoles  float64 // mol of residual gas
+	density   float64 // overall fill density, kg/m³
+	ambientPa float64
+	// criticalOffset carries the gas-bubble model's pressure at Tc into
+	// the supercritical region, where the gas is mixed with the fluid by
+	// Dalton's law, so that the curve stays continuous at Tc (non-zero
+	// only for a liquid-like fill with residual gas).
+	offsetOnce     sync.Once
+	criticalOffset float64
+}
+
+// ErrOverfilled: the fill would not fit as liquid at the sealing
+// temperature.
+var ErrOverfilled = errors.New("the fill does not fit in the vessel")
+
+func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambientPa float64) (*sealedVessel, error) {
+	v := &sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa}
+	if sealK > s.CriticalTemperature() {
+		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
+			Want: fmt.Sprintf("must be below the critical temperature of %s (%.2f K) so that the fill can be sealed as a liquid", s.Fluid().Name, s.CriticalTemperature())}
+	}
+	sat, err := s.Saturation(sealK)
+	if err != nil {
+		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
+	}
+	if v.density >= sat.LiquidDensity {
+		maxFill := sat.LiquidDensity * volume
+		return nil, fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
+			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume)}, ErrOverfilled)
+	}
+	gasSpace := volume
+	if v.density > sat.VapourDensity {
+		gasSpace = (sat.LiquidDensity*volume - mass) / (sat.LiquidDensity - sat.VapourDensity)
+	}
+	v.gasMoles = residualPa * gasSpace / (units.GasConstant * sealK)
+	return v, nil
+}
+
+// liquidFullTemperature returns the temperature at which the saturated
+// liquid alone fills the vessel, and false when the fill density is at or
+// below the critical density.
+func (v *sealedVessel) liquidFullTemperature() (float64, bool) {
+	return v.fluid.LiquidFullTemperature(v.density)
+}
+
+// state returns the vessel's state at temperature t (K).
+func (v *sealedVessel) state(t float64) (VesselState, error) {
+	s := v.fluid
+	if t < s.MinTemperature() || !isFinite(t) {
+		return VesselState{}, &InputError{Field: "temperature", Value: fmt.Sprintf("%g K", t),
+			Want: fmt.Sprintf("must be at or above the freezing point of %s (%.2f K, %.2f °C)", s.Fluid().Name, s.MinTemperature(), units.KelvinToCelsius(s.MinTemperature()))}
+	}
+	st := VesselState{TemperatureK: t}
+	gasP := func(space float64) float64 { return v.gasMoles * units.GasConstant * t / space }
+	if t > s.CriticalTemperature() {
+		st, err := v.supercritical(t)
+		st.PressurePa += v.offsetAtCritical()
+		return st, err
+	}
+	sat, err := s.Saturation(t)
+	if err != nil {
+		return st, err
+	}
+	st.Flags = sat.Flags
+	if v.density <= sat.VapourDensity {
+		// All vapour: the liquid has evaporated.
+		p, fl, err := v.singlePhase(t, sat)
+		if err != nil {
+			return st, err
+		}
+		st.Phase = PhaseVapour
+		st.GasPressurePa = gasP(v.volume)
+		st.PressurePa = p + st.GasPressurePa
+		st.UllagePercent = 100
+		st.VapourMassKg = v.mass
+		st.VapourDensity = v.density
+		st.Flags |= fl
+		return st, nil
+	}
+	if v.density >= sat.LiquidDensity {
+		st.Phase = PhaseLiquidFull
+	} else {
+		st.Phase = PhaseTwoPhase
+	}
+	if v.gasMoles == 0 {
+		if st.Phase == PhaseLiquidFull {
+			p, fl, err := v.singlePhase(t, sat)
+			if err != nil {
+				return st, err
+			}
+			st.PressurePa = p
+			st.LiquidMassKg = v.mass
+			st.LiquidDensity = v.density
+			st.Flags |= fl
+			return st, nil
+		}
+		liquidVolume := (v.mass - sat.VapourDensity*v.volume) / (sat.LiquidDensity - sat.VapourDensity)
+		st.PressurePa = sat.PressurePa
+		st.UllagePercent = 100 * (1 - liquidVolume/v.volume)
+		st.LiquidMassKg = liquidVolume * sat.LiquidDensity
+		st.VapourMassKg = v.mass - st.LiquidMassKg
+		st.LiquidDensity = sat.LiquidDensity
+		st.VapourDensity = sat.VapourDensity
+		return st, nil
+	}
+	return v.withGasBubble(st, sat)
+}
+
+// offsetAtCritical computes, once and only when a supercritical state is
+// asked for, the pressure step between the gas-bubble model just below Tc
+// and the Dalton mixture just above it.
+func (v *sealedVessel) offsetAtCritical() float64 {
+	v.offsetOnce.Do(func() {
+		s := v.fluid
+		if v.gasMoles == 0 || v.density <= s.CriticalDensity() {
+			return
+		}
+		tc := s.CriticalTemperature()
+		below, err1 := v.state(tc)
+		above, err2 := v.supercritical(tc)
+		if err1 == nil && err2 == nil {
+			v.criticalOffset = below.PressurePa - above.PressurePa
+		}
+	})
+	return v.criticalOffset
+}
+
+// supercritical returns the state above Tc, the residual gas mixed with
+// the fluid by Dalton's law, without the continuity offset.
+func (v *sealedVessel) supercritical(t float64) (VesselState, error) {
+	s := v.fluid
+	st := VesselState{TemperatureK: t, Phase: PhaseSupercritical}
+	p, fl, err := s.SinglePhasePressure(t, v.density)
+	if err != nil {
+		return st, err
+	}
+	st.GasPressurePa = v.gasMoles * units.GasConstant * t / v.volume
+	st.PressurePa = p + st.GasPressurePa
+	if v.density <= s.CriticalDensity() {
+		st.UllagePercent = 100
+	}
+	st.VapourMassKg = v.mass
+	st.Flags = fl | fluids.SupercriticalState
+	return st, nil
+}
+
+// singlePhase evaluates the fluid alone at the fill density, treating a
+// state a rounding error inside the saturation boundary as on it.
+func (v *sealedVessel) singlePhase(t float64, sat fluids.Saturation) (float64, fluids.Flags, error) {
+	p, fl, err := v.fluid.SinglePhasePressure(t, v.density)
+	if errors.Is(err, fluids.ErrTwoPhase) {
+		return sat.PressurePa, 0, nil
+	}
+	return p, fl, err
+}
+
+// withGasBubble solves for the gas space when residual gas shares it with
+// saturated vapour: the liquid, compressed to the total pressure, and the
+// gas space together fill the vessel,
+//
+//	V_g + (m − ρ_v V_g)/ρ_l(T, P_sat + nRT/V_g) = V,
+//
+// solved for ln V_g by Brent's method. The same equation covers the
+// approach to liquid-full and beyond, where the gas is squeezed into an
+// ever smaller bubble, so the pressure rises continuously.
+func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (VesselState, error) {
+	s := v.fluid
+	t := st.TemperatureK
+	nrt := v.gasMoles * units.GasConstant * t
+	var flags fluids.Flags
+	residual := func(lnVg float64) float64 {
+		vg := math.Exp(lnVg)
+		p := sat.PressurePa + nrt/vg
+		rhoL, fl, err := s.CompressedLiquidDensity(t, p)
+		if err != nil {
+			return math.NaN()
+		}
+		flags = fl
+		return vg + (v.mass-sat.VapourDensity*vg)/rhoL - v.volume
+	}
+	hi := math.Log(v.volume)
+	if v.mass-sat.VapourDensity*v.volume <= 0 {
+		return st, fmt.Errorf("internal: gas bubble asked for an all-vapour state at %.2f K", t)
+	}
+	lo := hi + math.Log(1e-3)
+	for i := 0; !(residual(lo) <= 0); i++ {
+		if i > 20 {
+			return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", s.Fluid().Name, t, fluids.ErrOutOfDomain)
+		}
+		lo += math.Log(1e-2)
+	}
+	r, err := solve.Brent(residual, lo, hi, 1e-10, 200)
+	if err != nil {
+		return st, fmt.Errorf("%s at %.2f K: gas space: %w", s.Fluid().Name, t, err)
+	}
+	vg := math.Exp(r.X)
+	residual(r.X)
+	st.GasPressurePa = nrt / vg
+	st.PressurePa = sat.PressurePa + st.GasPressurePa
+	st.UllagePercent = 100 * vg / v.volume
+	st.VapourMassKg = sat.VapourDensity * vg
+	st.LiquidMassKg = v.mass - st.VapourMassKg
+	st.VapourDensity = sat.VapourDensity
+	st.LiquidDensity = st.LiquidMassKg / (v.volume - vg)
+	st.Flags |= flags
+	return st, nil
+}
