@@ -63,8 +63,13 @@ type Assessment struct {
 	// Flags gathers every correlation stretched anywhere in the review.
 	Flags fluids.Flags
 
-	vessel  *sealedVessel
-	release *releaseModel
+	// Trace is the calculation record: numbered steps in the order a hand
+	// check follows. Each finding lists the steps behind it.
+	Trace []Step
+
+	vessel     *sealedVessel
+	release    *releaseModel
+	traceIndex map[string]int
 }
 
 // MaxSafe holds the limits found by root-finding. A limit that lies
@@ -172,6 +177,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	a.rupture(sub)
 	a.releaseModel()
 	a.findings(sub)
+	a.buildTrace(sub)
 	return a, nil
 }
 

@@ -66,6 +66,9 @@ type Finding struct {
 	Margin    float64 `json:"margin"`
 	Source    string  `json:"source"`
 	Message   string  `json:"message"`
+	// Steps are the numbers of the calculation-record steps behind this
+	// finding, its own comparison step first.
+	Steps []int `json:"steps"`
 }
 
 // atLeast returns a minimum-type finding: pass when value ≥ limit·cautionFactor,

@@ -1,0 +1,393 @@
+package hazards
+
+import (
+	"fmt"
+	"math"
+
+	"ullage/fluids"
+	"ullage/fluids/solve"
+	"ullage/fluids/units"
+)
+
+// Stages of the calculation record, in the order a hand check follows.
+const (
+	StageFluid    = "Fluid properties"
+	StageVessel   = "Vessel state"
+	StageStress   = "Stresses"
+	StageStrength = "Allowable stress"
+	StageSafety   = "Safety factor and failure probability"
+	StageLimits   = "Limits found by root-finding"
+	StageRupture  = "Rupture"
+	StageRelease  = "Release"
+	StageFindings = "Findings"
+)
+
+// Value is a named number in a calculation step, with its unit and, for
+// data, its source.
+type Value struct {
+	Symbol string  `json:"symbol"`
+	Value  float64 `json:"value"`
+	Unit   string  `json:"unit,omitempty"`
+	Source string  `json:"source,omitempty"`
+}
+
+// RootRecord says how a root-found result was found: the equation solved,
+// the bracket searched, the tolerance, the residual at the answer and the
+// number of evaluations; Bound says when the answer lies at a bracket end.
+type RootRecord struct {
+	Equation    string  `json:"equation"`
+	Lo          float64 `json:"lo"`
+	Hi          float64 `json:"hi"`
+	Unit        string  `json:"unit"`
+	Tolerance   float64 `json:"tolerance"`
+	Residual    float64 `json:"residual"`
+	Evaluations int     `json:"evaluations"`
+	Bound       Bound   `json:"bound"`
+}
+
+// Step is one numbered step of the calculation record: the method by its
+// published name, the equation as written in the source, the values
+// substituted, intermediate values, the result and the sources.
+type Step struct {
+	Number       int         `json:"number"`
+	Stage        string      `json:"stage"`
+	Title        string      `json:"title"`
+	Method       string      `json:"method"`
+	Equation     string      `json:"equation"`
+	Inputs       []Value     `json:"inputs"`
+	Intermediate []Value     `json:"intermediate,omitempty"`
+	Result       Value       `json:"result"`
+	Source       string      `json:"source"`
+	Root         *RootRecord `json:"root,omitempty"`
+	Note         string      `json:"note,omitempty"`
+	Extrapolated bool        `json:"extrapolated,omitempty"`
+}
+
+// tracer numbers steps as they are added and remembers which step gave
+// each named result.
+type tracer struct {
+	steps []Step
+	by    map[string]int
+}
+
+func (t *tracer) add(key string, s Step) int {
+	s.Number = len(t.steps) + 1
+	t.steps = append(t.steps, s)
+	if key != "" {
+		t.by[key] = s.Number
+	}
+	return s.Number
+}
+
+func fromExplanation(stage, title string, e fluids.Explanation) Step {
+	s := Step{Stage: stage, Title: title, Method: e.Correlation, Equation: e.Equation, Source: e.Source,
+		Result: Value{Symbol: e.Quantity, Value: e.Result, Unit: e.Unit}, Note: e.Note, Extrapolated: e.Extrapolated}
+	for _, t := range e.Terms {
+		s.Inputs = append(s.Inputs, Value{Symbol: t.Symbol, Value: t.Value, Unit: t.Unit, Source: t.Source})
+	}
+	return s
+}
+
+func rootRecord(eq string, r *solve.Root, b Bound, unit string) *RootRecord {
+	rr := &RootRecord{Equation: eq, Unit: unit, Bound: b}
+	if r != nil {
+		rr.Lo, rr.Hi, rr.Tolerance, rr.Residual, rr.Evaluations = r.Lo, r.Hi, r.Tolerance, r.Residual, r.Evaluations
+	}
+	return rr
+}
+
+// TraceStep returns the number of the step that produced a named result
+// (for example "burst_safety_factor"), or 0.
+func (a *Assessment) TraceStep(key string) int { return a.traceIndex[key] }
+
+// buildTrace writes the calculation record from the finished assessment.
+func (a *Assessment) buildTrace(sub *fluids.Substance) {
+	d := &a.Design
+	f := a.Fluid
+	tr := &tracer{by: map[string]int{}}
+	addFluid := func(tag string, temp float64) {
+		label := fmt.Sprintf("%s at %.2f K (%.1f °C)", tag, temp, units.KelvinToCelsius(temp))
+		if temp > sub.CriticalTemperature() {
+			return
+		}
+		if e, err := sub.ExplainVapourPressure(temp); err == nil {
+			tr.add("psat_"+tag, fromExplanation(StageFluid, "Vapour pressure, "+label, e))
+		}
+		if e, err := sub.ExplainLiquidDensity(temp); err == nil {
+			tr.add("rhol_"+tag, fromExplanation(StageFluid, "Saturated liquid density, "+label, e))
+		}
+		if e, err := sub.ExplainVapourDensity(temp); err == nil {
+			tr.add("rhov_"+tag, fromExplanation(StageFluid, "Saturated vapour density, "+label, e))
+		}
+	}
+	addFluid("sealing", d.SealingTemperatureK)
+	addFluid("hottest", d.HottestK)
+	addFluid("coldest", d.ColdestK)
+
+	// Vessel.
+	volIn := []Value{}
+	for _, p := range d.Vessel.Parts {
+		volIn = append(volIn, Value{Symbol: p.Name + " inner radius", Value: p.InnerRadius(), Unit: "m"})
+		if p.Shape == ShapeTube {
+			volIn = append(volIn, Value{Symbol: p.Name + " length", Value: p.LengthM, Unit: "m"})
+		}
+	}
+	volStep := Step{Stage: StageVessel, Title: "Internal volume", Method: "sum of part volumes",
+		Equation: "V = Σ (4/3)π rᵢ³ (spheres) + Σ π rᵢ² L (tubes)", Inputs: volIn,
+		Result: Value{Symbol: "V", Value: a.VolumeM3, Unit: "m³"}, Source: "geometry"}
+	if d.Vessel.InternalVolumeM3 > 0 {
+		volStep.Method, volStep.Equation = "measured volume", "V = measured internal volume"
+		volStep.Inputs = []Value{{Symbol: "V", Value: d.Vessel.InternalVolumeM3, Unit: "m³", Source: "design input"}}
+	}
+	tr.add("volume", volStep)
+	tr.add("fill_density", Step{Stage: StageVessel, Title: "Fill density", Method: "definition", Equation: "ρ_fill = m/V",
+		Inputs: []Value{{Symbol: "m", Value: d.FillMassKg, Unit: "kg", Source: "design input"}, {Symbol: "V", Value: a.VolumeM3, Unit: "m³"}},
+		Result: Value{Symbol: "ρ_fill", Value: a.FillDensity, Unit: "kg/m³"}, Source: "definition"})
+	gasMoles := a.vessel.gasMoles
+	tr.add("gas_moles", Step{Stage: StageVessel, Title: "Residual gas sealed in", Method: "ideal-gas law",
+		Equation: "n = P_res · V_g,seal /(R · T_seal),  V_g,seal = (ρl·V − m)/(ρl − ρv) at T_seal",
+		Inputs: []Value{{Symbol: "P_res", Value: d.ResidualGasPressurePa, Unit: "Pa", Source: "design input"},
+			{Symbol: "T_seal", Value: d.SealingTemperatureK, Unit: "K", Source: "design input"},
+			{Symbol: "R", Value: units.GasConstant, Unit: "J/(mol·K)", Source: "CODATA 2018"}},
+		Result: Value{Symbol: "n", Value: gasMoles, Unit: "mol"}, Source: "common practice"})
+
+	lf := Step{Stage: StageVessel, Title: "Liquid-full temperature", Method: "Rackett equation solved for T",
+		Equation: "ρl(T) = ρ_fill, solved in closed form: T = Tc·[1 − (w_ref − ln(ρ_fill/ρ_ref)/ln Z_RA)^(7/2)]",
+		Inputs: []Value{{Symbol: "ρ_fill", Value: a.FillDensity, Unit: "kg/m³"}, {Symbol: "Z_RA", Value: sub.RackettZ()},
+			{Symbol: "ρc", Value: sub.CriticalDensity(), Unit: "kg/m³", Source: f.CriticalDensity.Source}},
+		Source: "Rackett (1970), inverted (from memory)"}
+	if a.LiquidFullReached {
+		lf.Result = Value{Symbol: "T_full", Value: a.LiquidFullK, Unit: "K"}
+		if rho, err := sub.SaturatedLiquidDensity(a.LiquidFullK); err == nil {
+			lf.Root = &RootRecord{Equation: "ρl(T) − ρ_fill = 0", Lo: sub.MinTemperature(), Hi: sub.CriticalTemperature(), Unit: "K",
+				Residual: rho - a.FillDensity, Bound: BoundFound}
+		}
+	} else {
+		lf.Result = Value{Symbol: "T_full", Value: sub.CriticalTemperature(), Unit: "K"}
+		lf.Note = "The fill density is at or below the critical density: the vessel never goes liquid-full below Tc."
+	}
+	tr.add("liquid_full_temperature", lf)
+	tr.add("state_hot", a.stateStep("Vessel at the hottest temperature", a.Hot, "hottest", tr))
+	tr.add("state_cold", a.stateStep("Vessel at the coldest temperature", a.Cold, "coldest", tr))
+
+	// Stresses.
+	over := a.Hot.PressurePa - d.AmbientPressurePa
+	for i, p := range a.Parts {
+		part := d.Vessel.Parts[i]
+		eq := map[string]string{
+			ShapeSphere + WallThin:  "σ = ΔP · r_m /(2t)",
+			ShapeTube + WallThin:    "σ = ΔP · r_m / t",
+			ShapeSphere + WallThick: "σ = ΔP (r_o³ + 2r_i³)/(2(r_o³ − r_i³))",
+			ShapeTube + WallThick:   "σ = ΔP (r_o² + r_i²)/(r_o² − r_i²)",
+		}[p.Shape+p.Form]
+		tr.add(fmt.Sprintf("stress_%d", i), Step{Stage: StageStress, Title: "Hoop stress, " + p.Name,
+			Method: fmt.Sprintf("%s %s membrane stress (t/r_i = %.3f)", p.Form, p.Shape, p.WallRatio), Equation: eq,
+			Inputs: []Value{{Symbol: "ΔP", Value: math.Max(over, 0), Unit: "Pa", Source: "hottest pressure minus ambient"},
+				{Symbol: "r_o", Value: part.OuterDiameterM / 2, Unit: "m", Source: "design input"},
+				{Symbol: "t", Value: part.WallThicknessM, Unit: "m", Source: "design input"},
+				{Symbol: "r_m", Value: part.OuterDiameterM/2 - part.WallThicknessM/2, Unit: "m"},
+				{Symbol: "r_i", Value: part.InnerRadius(), Unit: "m"}},
+			Intermediate: []Value{{Symbol: "σ per pascal", Value: p.StressPerPascal}},
+			Result:       Value{Symbol: "σ", Value: p.HoopStressPa, Unit: "Pa"},
+			Source:       "Roark's Formulas for Stress and Strain, 7th ed., Tables 13.1 and 13.5 (from memory)"})
+	}
+	g := a.Glass
+	var sumIn []Value
+	for _, p := range a.Parts {
+		sumIn = append(sumIn, Value{Symbol: "A (" + p.Name + ")", Value: p.AreaM2, Unit: "m²"}, Value{Symbol: "k (" + p.Name + ")", Value: p.StressPerPascal})
+	}
+	sumIn = append(sumIn, Value{Symbol: "σ₀", Value: g.CharacteristicStrength.Value, Unit: "Pa", Source: g.CharacteristicStrength.Source},
+		Value{Symbol: "A₀", Value: g.ReferenceArea.Value, Unit: "m²", Source: g.ReferenceArea.Source},
+		Value{Symbol: "m", Value: g.WeibullModulus.Value, Source: g.WeibullModulus.Source})
+	tr.add("short_term_burst", Step{Stage: StageStrength, Title: "Short-term burst overpressure (63.2 % failure)",
+		Method: "Weibull weakest-link model", Equation: "ΔP_b = σ₀ / [Σ (Aᵢ/A₀) kᵢ^m]^(1/m)", Inputs: sumIn,
+		Result: Value{Symbol: "ΔP_b", Value: a.Strength.ShortTermBurstPa, Unit: "Pa"}, Source: "Weibull, J. Appl. Mech. 18, 293 (1951)"})
+	tr.add("long_term_burst", Step{Stage: StageStrength, Title: "Long-term burst overpressure (static fatigue)",
+		Method: "load-duration equivalence σⁿ·t = constant", Equation: "ΔP_bL = ΔP_b · (t₀/t)^(1/n)",
+		Inputs: []Value{{Symbol: "ΔP_b", Value: a.Strength.ShortTermBurstPa, Unit: "Pa"},
+			{Symbol: "t₀", Value: g.ReferenceLoad.Value, Unit: "s", Source: g.ReferenceLoad.Source},
+			{Symbol: "t", Value: d.HoursAtHottest * 3600, Unit: "s", Source: "design input (hours at the hottest temperature)"},
+			{Symbol: "n", Value: g.StressCorrosionExponent.Value, Source: g.StressCorrosionExponent.Source}},
+		Intermediate: []Value{{Symbol: "(t₀/t)^(1/n)", Value: a.Strength.DurationFactor},
+			{Symbol: "allowable stress, " + a.Parts[a.Strength.GoverningPart].Name, Value: a.Strength.AllowableStressPa, Unit: "Pa"}},
+		Result: Value{Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"},
+		Source: "ASTM E1300 glass failure prediction model (Beason and Morgan 1984) (from memory)"})
+	tr.add("burst_safety_factor", Step{Stage: StageSafety, Title: "Burst safety factor", Method: "ratio of capacity to load",
+		Equation: "SF = ΔP_bL / ΔP  (capped at 1000)",
+		Inputs:   []Value{{Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"}, {Symbol: "ΔP", Value: over, Unit: "Pa"}},
+		Result:   Value{Symbol: "SF", Value: a.BurstSafetyFactor}, Source: "definition"})
+	tr.add("failure_probability", Step{Stage: StageSafety, Title: "Failure probability over the service life",
+		Method: "Weibull distribution", Equation: "P_f = 1 − exp[−(ΔP/ΔP_bL)^m]",
+		Inputs: []Value{{Symbol: "ΔP", Value: math.Max(over, 0), Unit: "Pa"}, {Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"},
+			{Symbol: "m", Value: g.WeibullModulus.Value, Source: g.WeibullModulus.Source}},
+		Result: Value{Symbol: "P_f", Value: a.FailureProbability}, Source: "Weibull (1951)"})
+	var buckIn []Value
+	for _, p := range a.Parts {
+		buckIn = append(buckIn, Value{Symbol: "p_cr (" + p.Name + ")", Value: p.ClassicalBucklingPa, Unit: "Pa"},
+			Value{Symbol: "knock-down (" + p.Name + ")", Value: p.KnockDown, Source: "NASA SP-8032 / SP-8007 (from memory)"})
+	}
+	buckIn = append(buckIn, Value{Symbol: "E", Value: g.ElasticModulus.Value, Unit: "Pa", Source: g.ElasticModulus.Source},
+		Value{Symbol: "ν", Value: g.PoissonRatio.Value, Source: g.PoissonRatio.Source},
+		Value{Symbol: "ΔP_ext", Value: a.ExternalLoadPa, Unit: "Pa", Source: "ambient minus coldest pressure"})
+	tr.add("implosion_safety_factor", Step{Stage: StageSafety, Title: "Implosion safety factor",
+		Method: "classical elastic buckling with knock-down", Equation: "sphere p_cr = 2E(t/r_m)²/√(3(1−ν²)); tube p_cr = E(t/r_m)³/(4(1−ν²)); SF = min(knock-down · p_cr)/ΔP_ext",
+		Inputs: buckIn, Result: Value{Symbol: "SF_implosion", Value: a.ImplosionSafetyFactor},
+		Source: "Zoelly (1915); Bresse–Bryan; Timoshenko and Gere, Theory of Elastic Stability, 2nd ed. (from memory)"})
+
+	// Root-found limits.
+	ms := a.MaxSafe
+	rootP := rootRecord("P(T) − P_allow = 0", ms.PressureRoot, ms.TemperatureBound, "K")
+	if ms.TemperatureLimitBy == "ullage" {
+		rootP = rootRecord("ullage(T) − minimum ullage = 0", ms.UllageRoot, ms.TemperatureBound, "K")
+	}
+	tr.add("max_safe_temperature", Step{Stage: StageLimits, Title: "Maximum safe temperature (limited by " + ms.TemperatureLimitBy + ")",
+		Method: "Brent's method", Equation: rootP.Equation,
+		Inputs: []Value{{Symbol: "P_allow", Value: a.AllowablePressurePa(), Unit: "Pa", Source: "ambient + ΔP_bL / required safety factor"},
+			{Symbol: "required SF", Value: a.RequiredSafetyFactor, Source: "larger of the minimum safety factor and the one the failure-probability limit needs"},
+			{Symbol: "minimum ullage", Value: d.Criteria.MinUllagePercent, Unit: "%", Source: "criteria"}},
+		Result: Value{Symbol: "T_max", Value: ms.TemperatureK, Unit: "K"}, Root: rootP,
+		Source: "Brent, Algorithms for Minimization without Derivatives (1973)"})
+	tr.add("max_safe_fill", Step{Stage: StageLimits, Title: "Maximum safe fill at the hottest temperature",
+		Method: "Brent's method", Equation: "max[(P(m) − P_allow)/P_allow, (minimum ullage − ullage(m))/100] = 0",
+		Inputs: []Value{{Symbol: "P_allow", Value: a.AllowablePressurePa(), Unit: "Pa"}, {Symbol: "T_hot", Value: d.HottestK, Unit: "K"}},
+		Result: Value{Symbol: "m_max", Value: ms.FillMassKg, Unit: "kg"}, Root: rootRecord("as above, in the fill mass m", ms.FillRoot, ms.FillBound, "kg"),
+		Source: "Brent (1973)"})
+
+	// Rupture.
+	r := a.Rupture
+	tr.add("stored_energy", Step{Stage: StageRupture, Title: "Stored energy at the hottest temperature",
+		Method: "Brode's equation with the flashing liquid", Equation: "E = (P − P₀)(V_g + F·m_l/ρv)/(γ − 1) + ½(P − P_sat)²V_l/K;  F = 1 − exp(−c_p(T − T_b)/h_fg)",
+		Inputs: []Value{{Symbol: "P", Value: a.Hot.PressurePa, Unit: "Pa"}, {Symbol: "P₀", Value: d.AmbientPressurePa, Unit: "Pa"},
+			{Symbol: "V_g", Value: a.VolumeM3 * a.Hot.UllagePercent / 100, Unit: "m³"}, {Symbol: "m_l", Value: a.Hot.LiquidMassKg, Unit: "kg"},
+			{Symbol: "γ", Value: VapourHeatCapacityRatio, Source: "common practice (conservative)"},
+			{Symbol: "T_b", Value: f.NormalBoilingPoint.Value, Unit: "K", Source: f.NormalBoilingPoint.Source},
+			{Symbol: "c_p", Value: f.LiquidHeatCapacity.Value / f.MolarMass.Value, Unit: "J/(kg·K)", Source: f.LiquidHeatCapacity.Source}},
+		Intermediate: []Value{{Symbol: "F", Value: r.FlashFraction}, {Symbol: "E_gas", Value: r.GasEnergyJ, Unit: "J"},
+			{Symbol: "E_flash", Value: r.FlashEnergyJ, Unit: "J"}, {Symbol: "E_liquid", Value: r.LiquidStrainEnergyJ, Unit: "J"}},
+		Result: Value{Symbol: "E", Value: r.StoredEnergyJ, Unit: "J"},
+		Source: "Brode, Phys. Fluids 2, 217 (1959); CCPS Guidelines for Chemical Process Quantitative Risk Analysis, 2nd ed. (from memory)"})
+
+	// Release.
+	rel := a.release
+	room := d.Room
+	tr.add("room_model", Step{Stage: StageRelease, Title: "Well-mixed room after the breakage",
+		Method: "well-mixed box model, instantaneous release", Equation: "C(t) = (M/V_room)·exp(−Q t/(k V_room)),  Q = ACH·V_room/3600",
+		Inputs: []Value{{Symbol: "M", Value: d.FillMassKg * 1e6, Unit: "mg"}, {Symbol: "V_room", Value: room.VolumeM3, Unit: "m³", Source: "design input"},
+			{Symbol: "ACH", Value: room.AirChangesPerHour, Unit: "1/h", Source: "design input"}, {Symbol: "k", Value: room.MixingFactor, Source: "design input"}},
+		Intermediate: []Value{{Symbol: "C(0)", Value: rel.Concentration(WellMixedRoom, 0), Unit: "mg/m³"}, {Symbol: "Q/(kV)", Value: rel.roomRate, Unit: "1/s"}},
+		Result:       Value{Symbol: "C(0)", Value: units.MgPerM3ToPpm(rel.Concentration(WellMixedRoom, 0), f.MolarMass.Value), Unit: "ppm"},
+		Source:       "AIHA, Mathematical Models for Estimating Occupational Exposure to Chemicals, 2nd ed. (2009) (from memory); ppm = mg/m³ × 24.45/MW (NIOSH Pocket Guide)"})
+	tr.add("near_field_model", Step{Stage: StageRelease, Title: "Near field beside the breakage",
+		Method: "near-field/far-field two-zone model", Equation: "V_N dC_N/dt = β(C_F − C_N); V_F dC_F/dt = β(C_N − C_F) − Q C_F; β = ½·2πr²·s",
+		Inputs: []Value{{Symbol: "r", Value: room.NearFieldRadiusM, Unit: "m", Source: "design input"}, {Symbol: "s", Value: room.NearFieldAirSpeed, Unit: "m/s", Source: "design input"}},
+		Intermediate: []Value{{Symbol: "V_N", Value: rel.nearVolume, Unit: "m³"}, {Symbol: "β", Value: rel.beta, Unit: "m³/s"},
+			{Symbol: "λ₁", Value: rel.lambda1, Unit: "1/s"}, {Symbol: "λ₂", Value: rel.lambda2, Unit: "1/s"}},
+		Result: Value{Symbol: "C_N, 1-minute average", Value: units.MgPerM3ToPpm(rel.Average(NearField, NearFieldMinimumAverageS), f.MolarMass.Value), Unit: "ppm"},
+		Source: "Nicas, Appl. Occup. Environ. Hyg. 11(8) (1996) (from memory)"})
+	for _, e := range []struct {
+		key, title string
+		x          Exposure
+	}{{"peak", "Peak exposure", a.Release.Peak}, {"stel", "15-minute average exposure", a.Release.STEL}, {"twa", "8-hour time-weighted average", a.Release.TWA8h}} {
+		zone := "well-mixed room"
+		if e.x.Zone == NearField {
+			zone = "near field"
+		}
+		tr.add("exposure_"+e.key, Step{Stage: StageRelease, Title: e.title, Method: "larger of the room and near-field averages (" + zone + " governs)",
+			Equation:     "C̄ = (1/T_avg) ∫₀^min(T_avg, T_present) C(t) dt; near field never averaged over less than 60 s",
+			Inputs:       []Value{{Symbol: "T_avg", Value: e.x.AveragingS, Unit: "s"}, {Symbol: "T_present", Value: room.ExposureMinutes * 60, Unit: "s", Source: "design input"}},
+			Intermediate: []Value{{Symbol: "C̄", Value: e.x.MgM3, Unit: "mg/m³"}},
+			Result:       Value{Symbol: "C̄", Value: e.x.PPM, Unit: "ppm"}, Source: "as the models above"})
+	}
+	if f.Flammability.LFLPercent != nil {
+		tr.add("percent_lfl", Step{Stage: StageRelease, Title: "Peak as a percentage of the LFL", Method: "ratio", Equation: "%LFL = C_peak / (LFL·10⁴ ppm) × 100",
+			Inputs: []Value{{Symbol: "C_peak", Value: a.Release.Peak.PPM, Unit: "ppm"}, {Symbol: "LFL", Value: f.Flammability.LFLPercent.Value, Unit: "% vol", Source: f.Flammability.LFLPercent.Source}},
+			Result: Value{Symbol: "%LFL", Value: a.Release.PercentLFL, Unit: "%"}, Source: "definition"})
+	}
+
+	// Findings.
+	for i := range a.Findings {
+		fd := &a.Findings[i]
+		deps := findingDeps[fd.Criterion]
+		refs := []Value{}
+		for _, k := range deps {
+			if n := tr.by[k]; n > 0 {
+				refs = append(refs, Value{Symbol: "step", Value: float64(n), Source: k})
+			}
+		}
+		n := tr.add("finding_"+fd.Criterion, Step{Stage: StageFindings, Title: fd.Title, Method: "comparison with the criterion",
+			Equation: "status from value against limit (caution band as documented)", Inputs: refs,
+			Intermediate: []Value{{Symbol: "value", Value: fd.Value, Unit: fd.Unit}, {Symbol: "limit", Value: fd.Limit, Unit: fd.Unit, Source: fd.Source}},
+			Result:       Value{Symbol: string(fd.Status), Value: fd.Margin, Unit: "margin"}, Source: fd.Source, Note: fd.Message})
+		fd.Steps = append([]int{n}, stepNumbers(tr, deps)...)
+	}
+	a.Trace = tr.steps
+	a.traceIndex = tr.by
+}
+
+var findingDeps = map[string][]string{
+	CriterionUllage:         {"state_hot", "liquid_full_temperature"},
+	CriterionBurst:          {"burst_safety_factor", "long_term_burst", "state_hot"},
+	CriterionFailure:        {"failure_probability", "long_term_burst"},
+	CriterionImplosion:      {"implosion_safety_factor", "state_cold"},
+	CriterionIDLH:           {"exposure_peak", "near_field_model", "room_model"},
+	CriterionCeiling:        {"exposure_peak", "near_field_model", "room_model"},
+	CriterionSTEL:           {"exposure_stel", "near_field_model", "room_model"},
+	CriterionTWA:            {"exposure_twa", "room_model", "near_field_model"},
+	CriterionNoLimit:        {"exposure_peak"},
+	CriterionFlammability:   {"percent_lfl", "exposure_peak"},
+	CriterionCorrelationUse: {"psat_hottest", "state_hot"},
+}
+
+func stepNumbers(tr *tracer, keys []string) []int {
+	var out []int
+	for _, k := range keys {
+		if n := tr.by[k]; n > 0 {
+			out = append(out, n)
+		}
+	}
+	return out
+}
+
+// stateStep records how the vessel state at one temperature was found.
+func (a *Assessment) stateStep(title string, st VesselState, tag string, tr *tracer) Step {
+	d := &a.Design
+	s := Step{Stage: StageVessel, Title: fmt.Sprintf("%s, %.2f K (%.1f °C): %s", title, st.TemperatureK, units.KelvinToCelsius(st.TemperatureK), st.Phase),
+		Extrapolated: st.Flags.Extrapolated(), Result: Value{Symbol: "P", Value: st.PressurePa, Unit: "Pa"}}
+	refs := []Value{{Symbol: "m", Value: d.FillMassKg, Unit: "kg"}, {Symbol: "V", Value: a.VolumeM3, Unit: "m³"}}
+	if n := tr.by["psat_"+tag]; n > 0 {
+		refs = append(refs, Value{Symbol: "P_sat", Value: tr.steps[n-1].Result.Value, Unit: "Pa", Source: fmt.Sprintf("step %d", n)})
+	}
+	if n := tr.by["rhol_"+tag]; n > 0 {
+		refs = append(refs, Value{Symbol: "ρl", Value: tr.steps[n-1].Result.Value, Unit: "kg/m³", Source: fmt.Sprintf("step %d", n)})
+	}
+	if n := tr.by["rhov_"+tag]; n > 0 {
+		refs = append(refs, Value{Symbol: "ρv", Value: tr.steps[n-1].Result.Value, Unit: "kg/m³", Source: fmt.Sprintf("step %d", n)})
+	}
+	refs = append(refs, Value{Symbol: "n_gas", Value: a.vessel.gasMoles, Unit: "mol"})
+	s.Inputs = refs
+	s.Intermediate = []Value{{Symbol: "ullage", Value: st.UllagePercent, Unit: "%"}, {Symbol: "p_gas", Value: st.GasPressurePa, Unit: "Pa"},
+		{Symbol: "liquid mass", Value: st.LiquidMassKg, Unit: "kg"}, {Symbol: "vapour mass", Value: st.VapourMassKg, Unit: "kg"}}
+	switch {
+	case st.Phase == PhaseTwoPhase && a.vessel.gasMoles == 0:
+		s.Method = "mass balance of saturated liquid and vapour"
+		s.Equation = "V_l = (m − ρv·V)/(ρl − ρv);  ullage = 1 − V_l/V;  P = P_sat"
+		s.Source = "common practice (lever rule)"
+	case st.Phase == PhaseTwoPhase || (st.Phase == PhaseLiquidFull && a.vessel.gasMoles > 0):
+		s.Method = "mass balance with the residual gas squeezed by the liquid"
+		s.Equation = "V_g + (m − ρv·V_g)/ρl(T, P) = V,  P = P_sat + n·R·T/V_g  (ρl(T, P) from the Tait equation)"
+		s.Source = "common practice; Thomson, Brobst and Hankinson, AIChE J. 28, 671 (1982)"
+	case st.Phase == PhaseLiquidFull:
+		s.Method = "compressed liquid at the fill density"
+		s.Equation = "Tait: V = Vs[1 − C ln((B + P)/(B + P_sat))], solved for P at ρ = ρ_fill"
+		s.Source = "Thomson, Brobst and Hankinson, AIChE J. 28, 671 (1982)"
+	case st.Phase == PhaseVapour:
+		s.Method = "superheated vapour at the fill density"
+		s.Equation = "P = P_sat(T_dew) + P_PR(T, ρ) − P_PR(T_dew, ρ) + n·R·T/V"
+		s.Source = "Peng and Robinson (1976), anchored on the saturation curve"
+	default:
+		s.Method = "supercritical fluid at the fill density"
+		s.Equation = "P = P_sat(T_s) + P_PR(T, ρ) − P_PR(T_s, ρ) + n·R·T/V"
+		s.Source = "Peng and Robinson (1976), anchored on the saturation curve"
+	}
+	return s
+}
