@@ -56,6 +56,9 @@ func TestNoJumpAtHandOvers(t *testing.T) {
 			joins = append(joins, p.TMinK, p.TMaxK)
 		}
 		joins = append(joins, s.blendT, taitMaxTr*s.tc)
+		if s.liquid.corr != nil {
+			joins = append(joins, s.liquid.tJoin)
+		}
 		for _, tj := range joins {
 			if tj-eps < s.tMin || tj+eps > s.tc {
 				continue

@@ -2,6 +2,7 @@ package fluids
 
 import (
 	"fmt"
+	"math"
 )
 
 // Term is one named value substituted into an equation, with its unit and
@@ -100,21 +101,42 @@ func (s *Substance) ExplainLiquidDensity(t float64) (Explanation, error) {
 		return Explanation{}, err
 	}
 	f := s.fluid
-	return Explanation{
-		Quantity:    "saturated liquid density",
-		Correlation: "Rackett equation, reference-point form",
-		Equation:    "ρ = ρ_ref · Z_RA^−[(1 − T/Tc)^(2/7) − (1 − T_ref/Tc)^(2/7)],  Z_RA = (ρc/ρ_ref)^(1/(1 − T_ref/Tc)^(2/7))",
-		Terms: []Term{
-			{Symbol: "T", Value: t, Unit: "K"},
-			{Symbol: "ρ_ref", Value: f.LiquidDensity.Value, Unit: "kg/m³", Source: f.LiquidDensity.Source},
-			{Symbol: "T_ref", Value: f.LiquidDensity.TemperatureK, Unit: "K"},
-			{Symbol: "ρc", Value: s.rhoC, Unit: "kg/m³", Source: f.CriticalDensity.Source},
-			{Symbol: "Tc", Value: s.tc, Unit: "K", Source: f.CriticalTemperature.Source},
-			{Symbol: "Z_RA", Value: s.liquid.z()},
-		},
-		Result: rho, Unit: "kg/m³",
-		Source: "Rackett, J. Chem. Eng. Data 15, 514 (1970); Spencer and Danner, J. Chem. Eng. Data 17, 236 (1972) (from memory)",
-	}, nil
+	c := &s.liquid
+	e := Explanation{Quantity: "saturated liquid density", Result: rho, Unit: "kg/m³"}
+	tTerm := Term{Symbol: "T", Value: t, Unit: "K"}
+	if c.corr != nil && t <= c.tJoin {
+		k := c.corr
+		e.Source = k.Source
+		e.Extrapolated = t < k.TMinK
+		e.Terms = []Term{tTerm, {Symbol: "M", Value: s.molarMass * 1000, Unit: "kg/kmol", Source: f.MolarMass.Source},
+			{Symbol: "A", Value: k.A}, {Symbol: "B", Value: k.B}, {Symbol: "C", Value: k.C}, {Symbol: "D", Value: k.D}}
+		rng := fmt.Sprintf(", valid %.2f–%.2f K", k.TMinK, k.TMaxK)
+		if k.Form == FormDIPPR116 {
+			e.Correlation = "DIPPR equation 116" + rng
+			e.Equation = "ρ = M·(A + B·τ^0.35 + C·τ^(2/3) + D·τ + E·τ^(4/3)),  τ = 1 − T/Tc  (kmol/m³ × kg/kmol)"
+			e.Terms = append(e.Terms, Term{Symbol: "E", Value: k.E}, Term{Symbol: "Tc", Value: k.TcK, Unit: "K"})
+		} else {
+			e.Correlation = "DIPPR equation 105" + rng
+			e.Equation = "ρ = M·A / B^(1 + (1 − T/C)^D)  (kmol/m³ × kg/kmol)"
+		}
+		return e, nil
+	}
+	rr := &c.near
+	refSource := f.LiquidDensity.Source
+	if c.corr != nil {
+		refSource = "the published correlation at its hand-over temperature"
+	}
+	e.Correlation = "Rackett equation, reference-point form"
+	e.Equation = "ρ = ρ_ref · Z_RA^−[(1 − T/Tc)^(2/7) − (1 − T_ref/Tc)^(2/7)],  Z_RA = (ρc/ρ_ref)^(1/(1 − T_ref/Tc)^(2/7))"
+	e.Terms = []Term{tTerm,
+		{Symbol: "ρ_ref", Value: rr.rhoRef, Unit: "kg/m³", Source: refSource},
+		{Symbol: "T_ref", Value: rr.tc * (1 - math.Pow(rr.wRef, 3.5)), Unit: "K"},
+		{Symbol: "ρc", Value: s.rhoC, Unit: "kg/m³", Source: f.CriticalDensity.Source},
+		{Symbol: "Tc", Value: s.tc, Unit: "K", Source: f.CriticalTemperature.Source},
+		{Symbol: "Z_RA", Value: rr.z()},
+	}
+	e.Source = "Rackett, J. Chem. Eng. Data 15, 514 (1970); Spencer and Danner, J. Chem. Eng. Data 17, 236 (1972) (from memory)"
+	return e, nil
 }
 
 // ExplainVapourDensity shows how the saturated vapour density at t was

@@ -22,12 +22,15 @@ const (
 	// SupercriticalState: the state is above the critical temperature,
 	// described by the anchored equation of state.
 	SupercriticalState
+	// LiquidDensityExtrapolated: the saturated liquid density came from a
+	// published correlation below its lower temperature limit.
+	LiquidDensityExtrapolated
 )
 
 // Extrapolated reports whether any correlation was used outside its
 // stated range.
 func (f Flags) Extrapolated() bool {
-	return f&(VapourPressureExtrapolated|CompressedLiquidExtrapolated) != 0
+	return f&(VapourPressureExtrapolated|CompressedLiquidExtrapolated|LiquidDensityExtrapolated) != 0
 }
 
 // String lists the flags in words, or "none".
@@ -44,6 +47,9 @@ func (f Flags) String() string {
 	}
 	if f&CompressedLiquidExtrapolated != 0 {
 		parts = append(parts, "compressed liquid above Tr 0.95 (Tait range)")
+	}
+	if f&LiquidDensityExtrapolated != 0 {
+		parts = append(parts, "liquid density below its correlation's range")
 	}
 	if f&SupercriticalState != 0 {
 		parts = append(parts, "supercritical")

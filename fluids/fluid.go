@@ -40,13 +40,16 @@ type Fluid struct {
 	FreezingPoint       Sourced               `json:"freezing_point_k"`
 	VapourPressure      []VapourPressurePiece `json:"vapour_pressure"`
 	LiquidDensity       SourcedAt             `json:"liquid_density_kg_m3"`
-	HeatOfVaporisation  SourcedAt             `json:"heat_of_vaporisation_j_mol"`
-	LiquidHeatCapacity  SourcedAt             `json:"liquid_heat_capacity_j_mol_k"`
-	Flammability        Flammability          `json:"flammability"`
-	ExposureLimits      []ExposureLimit       `json:"exposure_limits"`
-	NoNumericLimit      []NonNumericLimit     `json:"no_numeric_limit"`
-	PotentialCarcinogen CarcinogenFlag        `json:"potential_carcinogen"`
-	Warnings            []string              `json:"warnings"`
+	// LiquidDensityCorrelation is optional: a published saturated-liquid
+	// density correlation used in place of the Rackett form below 0.95 Tc.
+	LiquidDensityCorrelation *LiquidDensityCorrelation `json:"liquid_density_correlation,omitempty"`
+	HeatOfVaporisation       SourcedAt                 `json:"heat_of_vaporisation_j_mol"`
+	LiquidHeatCapacity       SourcedAt                 `json:"liquid_heat_capacity_j_mol_k"`
+	Flammability             Flammability              `json:"flammability"`
+	ExposureLimits           []ExposureLimit           `json:"exposure_limits"`
+	NoNumericLimit           []NonNumericLimit         `json:"no_numeric_limit"`
+	PotentialCarcinogen      CarcinogenFlag            `json:"potential_carcinogen"`
+	Warnings                 []string                  `json:"warnings"`
 
 	// UserSupplied is true for a fluid loaded from a person's own file
 	// rather than the built-in library. It is not part of the JSON record.

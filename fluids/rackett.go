@@ -29,3 +29,18 @@ func (r *rackett) density(t float64) float64 {
 	phi := math.Pow(1-t/r.tc, 2.0/7.0) - r.wRef
 	return r.rhoRef * math.Exp(-phi*r.lnZ)
 }
+
+// inverse returns the temperature at which the Rackett density equals rho
+// (closed form), or tMin, false when rho is denser than at tMin.
+func (r *rackett) inverse(rho, tMin float64) (float64, bool) {
+	phi := -math.Log(rho/r.rhoRef) / r.lnZ
+	w := phi + r.wRef
+	if w <= 0 {
+		return r.tc, true
+	}
+	t := r.tc * (1 - math.Pow(w, 3.5))
+	if t < tMin {
+		return tMin, false
+	}
+	return t, true
+}

@@ -20,21 +20,12 @@ import (
 // correlation of Thomson, Brobst and Hankinson gives the pressure directly
 // instead, and the isochoric hand-over starts at Tr 0.95.
 
-// bubbleTemperature inverts the Rackett curve: the temperature at which the
-// saturated liquid density is rho (ρc ≤ ρ). It returns tMin, false when rho
-// is denser than the liquid at the freezing point.
+// bubbleTemperature inverts the saturated-liquid density curve: the
+// temperature at which the saturated liquid density is rho (ρc ≤ ρ). It
+// returns tMin, false when rho is denser than the liquid at the freezing
+// point.
 func (s *Substance) bubbleTemperature(rho float64) (float64, bool) {
-	r := &s.liquid
-	phi := -math.Log(rho/r.rhoRef) / r.lnZ
-	w := phi + r.wRef
-	if w <= 0 {
-		return s.tc, true
-	}
-	t := s.tc * (1 - math.Pow(w, 3.5))
-	if t < s.tMin {
-		return s.tMin, false
-	}
-	return t, true
+	return s.liquid.temperature(rho, s.tMin)
 }
 
 func (s *Substance) saturatedVapourDensity(t float64) float64 {
@@ -144,7 +135,7 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 
 func (s *Substance) taitPressure(t, rho float64) (float64, Flags) {
 	ps, fl, _ := s.SaturationPressure(t)
-	return s.compressed.pressure(t, rho, s.liquid.density(t), ps), fl
+	return s.compressed.pressure(t, rho, s.liquidDensity(t), ps), fl
 }
 
 // taitSlope is the Tait isochore's slope (∂P/∂T)_ρ by a central difference.
@@ -185,7 +176,7 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 	if p < ps*(1-1e-12) {
 		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
 	}
-	rhoSat := s.liquid.density(t)
+	rhoSat := s.liquidDensity(t)
 	if t > taitMaxTr*s.tc {
 		rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
 		return rho, fl | f2, err
@@ -270,7 +261,7 @@ func (s *Substance) LiquidFullTemperature(rho float64) (float64, bool) {
 // 1.5 times the liquid at the freezing point, or just short of the
 // equation of state's co-volume, whichever is lower.
 func (s *Substance) maxDensity() float64 {
-	rho := 1.5 * s.liquid.density(s.tMin)
+	rho := 1.5 * s.liquidDensity(s.tMin)
 	if v := 1.01*s.eos.b - s.eos.shift; v > 0 {
 		rho = math.Min(rho, s.molarMass/v)
 	}

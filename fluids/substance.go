@@ -15,7 +15,7 @@ type Substance struct {
 
 	tc, pc, rhoC, tMin, molarMass float64
 	vp                            *vapourPressureCurve
-	liquid                        rackett
+	liquid                        liquidDensityCurve
 	eos                           pengRobinson
 	compressed                    tait
 
@@ -53,7 +53,7 @@ func newSubstance(f *Fluid) (*Substance, error) {
 		return nil, fmt.Errorf("%w: %s: %v", ErrInvalidFluid, f.ID, err)
 	}
 	s.vp = vp
-	s.liquid = newRackett(s.tc, f.LiquidDensity.Value, f.LiquidDensity.TemperatureK, s.rhoC)
+	s.liquid = newLiquidDensityCurve(f)
 	s.eos = newPengRobinson(s.tc, s.pc, f.AcentricFactor.Value, s.molarMass, s.rhoC, units.GasConstant)
 	s.compressed = newTait(s.tc, s.pc, f.AcentricFactor.Value)
 	s.blendT = nearCriticalBlendTr * s.tc
@@ -62,7 +62,7 @@ func newSubstance(f *Fluid) (*Substance, error) {
 	}
 	lnP, _ := s.vp.lnP(s.blendT)
 	rhoV := s.eos.vapourDensity(s.blendT, math.Exp(lnP))
-	s.diameterAtBlend = 0.5 * (s.liquid.density(s.blendT) + rhoV)
+	s.diameterAtBlend = 0.5 * (s.liquidDensity(s.blendT) + rhoV)
 	return s, nil
 }
 
@@ -86,9 +86,15 @@ func (s *Substance) MinTemperature() float64 { return s.tMin }
 // MolarMass returns the molar mass in kg/mol.
 func (s *Substance) MolarMass() float64 { return s.molarMass }
 
-// RackettZ returns the Rackett compressibility factor Z_RA fitted to the
-// reference and critical densities.
-func (s *Substance) RackettZ() float64 { return s.liquid.z() }
+// RackettZ returns the Rackett compressibility factor Z_RA of the
+// near-critical liquid-density form (fitted to reach the critical density).
+func (s *Substance) RackettZ() float64 { return s.liquid.near.z() }
+
+// liquidDensity returns the saturated liquid density in kg/m³.
+func (s *Substance) liquidDensity(t float64) float64 {
+	d, _ := s.liquid.density(t)
+	return d
+}
 
 // Saturation is the state of liquid and vapour in equilibrium at one
 // temperature. Densities in kg/m³, pressure in Pa, heat of vaporisation in
@@ -139,7 +145,7 @@ func (s *Substance) SaturatedLiquidDensity(t float64) (float64, error) {
 	if t > s.tc {
 		return 0, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
 	}
-	return s.liquid.density(t), nil
+	return s.liquidDensity(t), nil
 }
 
 // Saturation returns the saturated liquid and vapour state at t (K). It
@@ -149,7 +155,10 @@ func (s *Substance) Saturation(t float64) (Saturation, error) {
 	if err != nil {
 		return Saturation{}, err
 	}
-	rhoL := s.liquid.density(t)
+	rhoL, below := s.liquid.density(t)
+	if below {
+		fl |= LiquidDensityExtrapolated
+	}
 	var rhoV float64
 	if t <= s.blendT {
 		rhoV = s.eos.vapourDensity(t, p)

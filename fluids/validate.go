@@ -112,6 +112,7 @@ func (f *Fluid) Validate() error {
 	v.number("liquid_heat_capacity_j_mol_k.temperature_k", cp.TemperatureK, tf, tc, "K")
 	v.source("liquid_heat_capacity_j_mol_k.source", cp.Source)
 	v.vapourPressure(f)
+	v.liquidDensityCorrelation(f)
 	v.flammability(f.Flammability)
 	v.limits(f)
 	if v.err != nil {
@@ -160,6 +161,51 @@ func (v *validator) vapourPressure(f *Fluid) {
 		}
 		if v.err != nil {
 			return
+		}
+	}
+}
+
+func (v *validator) liquidDensityCorrelation(f *Fluid) {
+	c := f.LiquidDensityCorrelation
+	if c == nil || v.err != nil {
+		return
+	}
+	const field = "liquid_density_correlation"
+	if c.Form != FormDIPPR105 && c.Form != FormDIPPR116 {
+		v.fail(field+".form", fmt.Sprintf("%q", c.Form), "must be %q or %q", FormDIPPR105, FormDIPPR116)
+		return
+	}
+	for name, x := range map[string]float64{"a": c.A, "b": c.B, "c": c.C, "d": c.D, "e": c.E, "tc_k": c.TcK} {
+		if !finite(x) || math.Abs(x) > 1e6 {
+			v.fail(field+"."+name, x, "must be a finite coefficient")
+		}
+	}
+	tc, tf := f.CriticalTemperature.Value, f.FreezingPoint.Value
+	v.number(field+".t_min_k", c.TMinK, tf*0.5, tc, "K")
+	v.number(field+".t_max_k", c.TMaxK, c.TMinK+1, tc*1.01, "K (above t_min_k, not beyond Tc)")
+	v.source(field+".source", c.Source)
+	if c.Form == FormDIPPR116 {
+		v.number(field+".tc_k", c.TcK, tc*0.98, tc*1.02, "K (the fluid's critical temperature)")
+	} else if !(c.B > 0 && c.D > 0 && c.C >= c.TMaxK) {
+		v.fail(field, fmt.Sprintf("b=%g c=%g d=%g", c.B, c.C, c.D), "DIPPR 105 needs b > 0, d > 0 and c at or above t_max_k")
+	}
+	if v.err != nil {
+		return
+	}
+	m := f.MolarMass.Value
+	prev := math.Inf(1)
+	for i := 0; i <= 100; i++ {
+		t := c.TMinK + (c.TMaxK-c.TMinK)*float64(i)/100
+		d := c.density(t, m)
+		if !finite(d) || d <= 0 || d >= prev {
+			v.fail(field, fmt.Sprintf("%.6g kg/m³ at %.2f K", d, t), "the liquid density must fall steadily with temperature over the correlation's range")
+			return
+		}
+		prev = d
+	}
+	if ref := f.LiquidDensity; ref.TemperatureK >= c.TMinK && ref.TemperatureK <= c.TMaxK {
+		if d := c.density(ref.TemperatureK, m); math.Abs(d/ref.Value-1) > 0.03 {
+			v.fail(field, fmt.Sprintf("%.6g kg/m³ at %.2f K", d, ref.TemperatureK), "disagrees by more than 3 %% with liquid_density_kg_m3 (%.6g kg/m³)", ref.Value)
 		}
 	}
 }
