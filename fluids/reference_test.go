@@ -24,12 +24,9 @@ type referenceSet struct {
 		Value  float64 `json:"value"`
 		Source string  `json:"source"`
 	} `json:"normal_boiling_point_k"`
-	LiquidDensity []struct {
-		TK     float64 `json:"t_k"`
-		KgM3   float64 `json:"kg_m3"`
-		Source string  `json:"source"`
-	} `json:"liquid_density"`
-	PocketGuide struct {
+	LiquidDensity    []densityRow `json:"liquid_density"`
+	LiquidDensityHot []densityRow `json:"liquid_density_hot"`
+	PocketGuide      struct {
 		Entry      string   `json:"entry"`
 		RELTWA     *float64 `json:"rel_twa_ppm"`
 		RELSTEL    *float64 `json:"rel_stel_ppm"`
@@ -42,6 +39,12 @@ type referenceSet struct {
 		LFL        *float64 `json:"lfl_volume_percent"`
 		UFL        *float64 `json:"ufl_volume_percent"`
 	} `json:"pocket_guide"`
+}
+
+type densityRow struct {
+	TK     float64 `json:"t_k"`
+	KgM3   float64 `json:"kg_m3"`
+	Source string  `json:"source"`
 }
 
 func loadReferences(t *testing.T) []referenceSet {
@@ -233,4 +236,33 @@ func findLimit(f *Fluid, body, averaging string, kinds []string) *float64 {
 		}
 	}
 	return nil
+}
+
+// TestHotLiquidDensity checks the saturated liquid density near the
+// boiling point and at 0.7–0.8 Tc within 2 % of published values (source
+// on each fixture row: IAPWS-95, reference equations of state used by the
+// NIST Chemistry WebBook, the VDI Heat Atlas). The liquid-full temperature
+// of a sealed vessel rests on this density.
+func TestHotLiquidDensity(t *testing.T) {
+	lib := builtinForTest(t)
+	for _, r := range loadReferences(t) {
+		s, err := lib.Lookup(r.Fluid)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if len(r.LiquidDensityHot) == 0 {
+			t.Errorf("%s: no published hot liquid density in its fixture", r.Fluid)
+		}
+		for _, row := range r.LiquidDensityHot {
+			got, err := s.SaturatedLiquidDensity(row.TK)
+			if err != nil {
+				t.Errorf("%s: %v", r.Fluid, err)
+				continue
+			}
+			if !scalar.EqualWithinRel(got, row.KgM3, 0.02) {
+				t.Errorf("%s at %g K: liquid density %.5g kg/m³, published %.5g (%+.2f %%), source: %s",
+					r.Fluid, row.TK, got, row.KgM3, 100*(got/row.KgM3-1), row.Source)
+			}
+		}
+	}
 }
