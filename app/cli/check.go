@@ -1,0 +1,284 @@
+package cli
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"sort"
+	"strings"
+	"time"
+
+	"ullage/app/buildinfo"
+	"ullage/fluids"
+	"ullage/hazards"
+	"ullage/hazards/designfile"
+	"ullage/report"
+)
+
+// checked is one design assessed by the check command.
+type checked struct {
+	path       string
+	file       *designfile.File
+	revision   *designfile.Revision
+	assessment *hazards.Assessment
+}
+
+func runCheck(args []string, stdout, stderr io.Writer) int {
+	o, err := parseArgs(args, []string{"json", "trace"}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids"})
+	if err != nil {
+		return usageError(stderr, "check", err)
+	}
+	if o.bools["trace"] && !o.bools["json"] {
+		return usageError(stderr, "check", fmt.Errorf("--trace adds the calculation record to --json output; give both"))
+	}
+	if len(o.positional) == 0 {
+		return usageError(stderr, "check", fmt.Errorf("name at least one design file or folder"))
+	}
+	ro, err := reportOptions(o)
+	if err != nil {
+		return usageError(stderr, "check", err)
+	}
+	lib, err := library(o)
+	if err != nil {
+		return usageError(stderr, "check", err)
+	}
+	paths, err := expandPaths(o.positional)
+	if err != nil {
+		return usageError(stderr, "check", err)
+	}
+	pdfPath := o.value("pdf", "")
+	if pdfPath != "" && len(paths) != 1 {
+		return usageError(stderr, "check", fmt.Errorf("--pdf writes one record: name exactly one design file (%d given)", len(paths)))
+	}
+	var results []checked
+	bad := 0
+	for _, p := range paths {
+		c, err := checkOne(p, o.value("rev", ""), lib)
+		if err != nil {
+			fmt.Fprintf(stderr, "ullage check: %v\n", err)
+			bad++
+			continue
+		}
+		results = append(results, c)
+	}
+	if pdfPath != "" {
+		if bad > 0 {
+			fmt.Fprintf(stderr, "ullage check: no record written to %s\n", pdfPath)
+			return ExitUsage
+		}
+		c := results[0]
+		var buf bytes.Buffer
+		if err := report.WriteAssessment(&buf, recordMeta(c.file, c.revision, o), c.assessment, ro); err != nil {
+			fmt.Fprintf(stderr, "ullage check: writing the record: %v\n", err)
+			return ExitUsage
+		}
+		if err := writeFileAtomic(pdfPath, buf.Bytes()); err != nil {
+			fmt.Fprintf(stderr, "ullage check: %v\n", err)
+			return ExitUsage
+		}
+	}
+	if o.bools["json"] {
+		if err := writeCheckJSON(stdout, results, len(paths) == 1 && !isDir(o.positional[0]), o.bools["trace"]); err != nil {
+			fmt.Fprintf(stderr, "ullage check: %v\n", err)
+			return ExitUsage
+		}
+	} else {
+		writeCheckText(stdout, results, ro.Units)
+	}
+	if bad > 0 {
+		return ExitUsage
+	}
+	for _, c := range results {
+		if c.assessment.Verdict == hazards.StatusFail {
+			return ExitFail
+		}
+	}
+	return ExitPass
+}
+
+func checkOne(path, rev string, lib *fluids.Library) (checked, error) {
+	f, err := designfile.Load(path)
+	if err != nil {
+		return checked{}, err
+	}
+	var r *designfile.Revision
+	if rev != "" {
+		r, err = f.Find(rev)
+	} else {
+		r, err = f.Latest()
+	}
+	if err != nil {
+		return checked{}, fmt.Errorf("%s: %w", path, err)
+	}
+	a, err := hazards.Assess(r.Design, lib)
+	if err != nil {
+		return checked{}, fmt.Errorf("%s, revision %s: %w", path, r.Label, err)
+	}
+	return checked{path: path, file: f, revision: r, assessment: a}, nil
+}
+
+// expandPaths replaces each folder by the design files (*.json) in it,
+// sorted by name.
+func expandPaths(args []string) ([]string, error) {
+	var out []string
+	for _, a := range args {
+		st, err := os.Stat(a)
+		if err != nil {
+			return nil, err
+		}
+		if !st.IsDir() {
+			out = append(out, a)
+			continue
+		}
+		matches, err := filepath.Glob(filepath.Join(a, "*.json"))
+		if err != nil {
+			return nil, err
+		}
+		if len(matches) == 0 {
+			return nil, fmt.Errorf("%s: no design files (*.json) in this folder", a)
+		}
+		sort.Strings(matches)
+		out = append(out, matches...)
+	}
+	return out, nil
+}
+
+func isDir(p string) bool {
+	st, err := os.Stat(p)
+	return err == nil && st.IsDir()
+}
+
+func reportOptions(o *options) (report.Options, error) {
+	ro := report.Options{Units: o.value("units", "si"), Paper: o.value("paper", "a4")}
+	if ro.Units != "si" && ro.Units != "us" {
+		return ro, fmt.Errorf("--units %q: use si or us", ro.Units)
+	}
+	if ro.Paper != "a4" && ro.Paper != "letter" {
+		return ro, fmt.Errorf("--paper %q: use a4 or letter", ro.Paper)
+	}
+	return ro, nil
+}
+
+func recordMeta(f *designfile.File, r *designfile.Revision, o *options) report.Meta {
+	return report.Meta{
+		Product:          f.Product.Name,
+		PartNumber:       f.Product.PartNumber,
+		Company:          f.Product.Company,
+		Revision:         r.Label,
+		RevisionDate:     r.Date,
+		RevisionAuthor:   r.Author,
+		ChangeNote:       r.ChangeNote,
+		Reviewer:         o.value("reviewer", ""),
+		Date:             time.Now(),
+		ToolVersion:      buildinfo.Version,
+		FluidDataVersion: fluids.DataVersion,
+		Fingerprint:      r.Fingerprint(),
+	}
+}
+
+// writeFileAtomic writes data to a temporary file beside path and renames
+// it into place, so a failure never leaves a partial file.
+func writeFileAtomic(path string, data []byte) error {
+	dir := filepath.Dir(path)
+	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
+	if err != nil {
+		return err
+	}
+	name := tmp.Name()
+	ok := false
+	defer func() {
+		if !ok {
+			os.Remove(name)
+		}
+	}()
+	if _, err := tmp.Write(data); err != nil {
+		tmp.Close()
+		return err
+	}
+	if err := tmp.Sync(); err != nil {
+		tmp.Close()
+		return err
+	}
+	if err := tmp.Close(); err != nil {
+		return err
+	}
+	if err := os.Rename(name, path); err != nil {
+		return err
+	}
+	ok = true
+	return nil
+}
+
+func writeCheckText(w io.Writer, results []checked, unitSystem string) {
+	if len(results) == 1 {
+		writeOneText(w, results[0], unitSystem)
+		return
+	}
+	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF")
+	for _, c := range results {
+		a := c.assessment
+		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a.BurstSafetyFactor))
+	}
+}
+
+func writeOneText(w io.Writer, c checked, unitSystem string) {
+	a := c.assessment
+	fmt.Fprintf(w, "%s — %s, revision %s (%s)\n", c.path, c.file.Product.Name, c.revision.Label, c.revision.Date)
+	fmt.Fprintf(w, "fluid %s, fill %s in %s\n", a.Fluid.Name, massText(a.Design.FillMassKg, unitSystem), volumeText(a.VolumeM3, unitSystem))
+	fmt.Fprintf(w, "at the hottest %s: %s, %s absolute, ullage %.1f %%\n", tempText(a.Design.HottestK, unitSystem), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent)
+	if a.LiquidFullReached {
+		fmt.Fprintf(w, "liquid-full at %s\n", tempText(a.LiquidFullK, unitSystem))
+	} else {
+		fmt.Fprintln(w, "never liquid-full below the critical temperature")
+	}
+	fmt.Fprintln(w)
+	for _, f := range a.Findings {
+		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(string(f.Status)), f.Title, f.Message)
+	}
+	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
+	fmt.Fprintf(w, "\n%s\n", hazards.StandardCautions[0])
+}
+
+func trim(s string, n int) string {
+	if len([]rune(s)) <= n {
+		return s
+	}
+	return string([]rune(s)[:n-1]) + "…"
+}
+
+func sfText(x float64) string {
+	if x >= hazards.SafetyFactorCap {
+		return fmt.Sprintf(">%g", float64(hazards.SafetyFactorCap))
+	}
+	return fmt.Sprintf("%.2f", x)
+}
+
+func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	one := func(c checked) designJSON {
+		d := checkJSON(c)
+		if trace {
+			d.Trace = c.assessment.Trace
+		}
+		return d
+	}
+	if single && len(results) == 1 {
+		return enc.Encode(one(results[0]))
+	}
+	all := struct {
+		Verdict string       `json:"verdict"`
+		Designs []designJSON `json:"designs"`
+	}{Verdict: string(hazards.StatusPass), Designs: []designJSON{}}
+	v := hazards.StatusPass
+	for _, c := range results {
+		all.Designs = append(all.Designs, one(c))
+		v = hazards.Worse(v, c.assessment.Verdict)
+	}
+	all.Verdict = string(v)
+	return enc.Encode(all)
+}

@@ -1,0 +1,126 @@
+package cli
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"io"
+
+	"ullage/hazards"
+	"ullage/hazards/compare"
+	"ullage/report"
+)
+
+func runCompare(args []string, stdout, stderr io.Writer) int {
+	o, err := parseArgs(args, []string{"json"}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids"})
+	if err != nil {
+		return usageError(stderr, "compare", err)
+	}
+	ro, err := reportOptions(o)
+	if err != nil {
+		return usageError(stderr, "compare", err)
+	}
+	lib, err := library(o)
+	if err != nil {
+		return usageError(stderr, "compare", err)
+	}
+	revs := o.values["rev"]
+	var pa, pb string
+	var la, lb string
+	switch {
+	case len(o.positional) == 1 && len(revs) == 2:
+		pa, pb, la, lb = o.positional[0], o.positional[0], revs[0], revs[1]
+	case len(o.positional) == 2 && len(revs) == 0:
+		pa, pb = o.positional[0], o.positional[1]
+	default:
+		return usageError(stderr, "compare", fmt.Errorf("give two files, or one file with --rev X --rev Y"))
+	}
+	a, err := checkOne(pa, la, lib)
+	if err != nil {
+		return usageError(stderr, "compare", err)
+	}
+	b, err := checkOne(pb, lb, lib)
+	if err != nil {
+		return usageError(stderr, "compare", err)
+	}
+	c := compare.Compare(
+		compare.Side{Label: sideLabel(a), Design: a.revision.Design, Assessment: a.assessment},
+		compare.Side{Label: sideLabel(b), Design: b.revision.Design, Assessment: b.assessment})
+	if pdf := o.value("pdf", ""); pdf != "" {
+		var buf bytes.Buffer
+		if err := report.WriteComparison(&buf, recordMeta(a.file, a.revision, o), recordMeta(b.file, b.revision, o), c, ro); err != nil {
+			fmt.Fprintf(stderr, "ullage compare: writing the record: %v\n", err)
+			return ExitUsage
+		}
+		if err := writeFileAtomic(pdf, buf.Bytes()); err != nil {
+			fmt.Fprintf(stderr, "ullage compare: %v\n", err)
+			return ExitUsage
+		}
+	}
+	if o.bools["json"] {
+		out := struct {
+			A        designJSON             `json:"a"`
+			B        designJSON             `json:"b"`
+			Inputs   []compare.InputChange  `json:"input_changes"`
+			Results  []compare.ResultChange `json:"result_changes"`
+			Statuses []compare.StatusChange `json:"status_changes"`
+		}{checkJSON(a), checkJSON(b), nonNil(c.Inputs), nonNil(c.Results), nonNil(c.Statuses)}
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		if err := enc.Encode(out); err != nil {
+			return usageError(stderr, "compare", err)
+		}
+	} else {
+		writeCompareText(stdout, a, b, c)
+	}
+	if b.assessment.Verdict == hazards.StatusFail {
+		return ExitFail
+	}
+	return ExitPass
+}
+
+func nonNil[T any](s []T) []T {
+	if s == nil {
+		return []T{}
+	}
+	return s
+}
+
+func sideLabel(c checked) string {
+	return fmt.Sprintf("%s rev %s", c.file.Product.Name, c.revision.Label)
+}
+
+func writeCompareText(w io.Writer, a, b checked, c compare.Comparison) {
+	fmt.Fprintf(w, "A: %s (%s)\nB: %s (%s)\n\n", sideLabel(a), a.path, sideLabel(b), b.path)
+	if len(c.Statuses) > 0 {
+		fmt.Fprintln(w, "Findings that changed status:")
+		for _, s := range c.Statuses {
+			fmt.Fprintf(w, "  %-50s %s → %s\n", s.Title, s.Old, s.New)
+		}
+		fmt.Fprintln(w)
+	} else {
+		fmt.Fprintln(w, "No finding changed status.")
+		fmt.Fprintln(w)
+	}
+	fmt.Fprintln(w, "Changed inputs:")
+	if len(c.Inputs) == 0 {
+		fmt.Fprintln(w, "  none")
+	}
+	for _, in := range c.Inputs {
+		fmt.Fprintf(w, "  %-45s %s → %s\n", in.Field, in.Old, in.New)
+	}
+	fmt.Fprintln(w, "\nResults:")
+	for _, r := range c.Results {
+		mark := ""
+		switch {
+		case r.Better:
+			mark = "better"
+		case r.Worse:
+			mark = "worse"
+		}
+		fmt.Fprintf(w, "  %-40s %12.4g → %-12.4g %-6s %s\n", r.Name, r.Old, r.New, r.Unit, mark)
+	}
+	fmt.Fprintf(w, "\nverdict: %s → %s\n", designfileVerdict(a), designfileVerdict(b))
+}
+
+func designfileVerdict(c checked) string { return string(c.assessment.Verdict) }

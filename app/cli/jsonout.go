@@ -1,0 +1,106 @@
+package cli
+
+import (
+	"math"
+
+	"ullage/fluids/units"
+	"ullage/hazards"
+)
+
+// designJSON is the stable, documented JSON form of one checked design.
+// SI units, absolute pressures; the unit is in each key's name.
+type designJSON struct {
+	File                   string        `json:"file"`
+	Product                string        `json:"product"`
+	Revision               string        `json:"revision"`
+	Fingerprint            string        `json:"fingerprint"`
+	Fluid                  string        `json:"fluid"`
+	Verdict                string        `json:"verdict"`
+	Phase                  string        `json:"phase"`
+	PressureKPa            float64       `json:"pressure_kpa"`
+	LiquidFullTemperatureC *float64      `json:"liquid_full_temperature_c"`
+	UllagePercent          float64       `json:"ullage_percent"`
+	BurstSafetyFactor      float64       `json:"burst_safety_factor"`
+	FailureProbability     float64       `json:"failure_probability"`
+	ImplosionSafetyFactor  float64       `json:"implosion_safety_factor"`
+	MaxSafeTemperatureC    float64       `json:"max_safe_temperature_c"`
+	MaxSafeTemperatureNote string        `json:"max_safe_temperature_bound"`
+	MaxSafeFillMassG       float64       `json:"max_safe_fill_mass_g"`
+	MaxSafeFillNote        string        `json:"max_safe_fill_bound"`
+	StoredEnergyJ          float64       `json:"stored_energy_j"`
+	FlashFraction          float64       `json:"flash_fraction"`
+	PeakConcentrationPPM   float64       `json:"peak_concentration_ppm"`
+	STELAveragePPM         float64       `json:"stel_average_ppm"`
+	TWA8hPPM               float64       `json:"twa_8h_ppm"`
+	PercentLFL             float64       `json:"percent_lfl"`
+	Extrapolated           bool          `json:"extrapolated"`
+	Findings               []findingJSON `json:"findings"`
+	Cautions               []string      `json:"cautions"`
+	// Trace is the calculation record, included with --trace.
+	Trace []hazards.Step `json:"trace,omitempty"`
+}
+
+type findingJSON struct {
+	Criterion string  `json:"criterion"`
+	Title     string  `json:"title"`
+	Status    string  `json:"status"`
+	Value     float64 `json:"value"`
+	Limit     float64 `json:"limit"`
+	Unit      string  `json:"unit"`
+	Margin    float64 `json:"margin"`
+	Source    string  `json:"source"`
+	Message   string  `json:"message"`
+	Steps     []int   `json:"steps"`
+}
+
+func round(x float64, digits int) float64 {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return 0
+	}
+	if x == 0 {
+		return 0
+	}
+	p := math.Pow(10, float64(digits)-math.Ceil(math.Log10(math.Abs(x))))
+	return math.Round(x*p) / p
+}
+
+func checkJSON(c checked) designJSON {
+	a := c.assessment
+	d := designJSON{
+		File:                   c.path,
+		Product:                c.file.Product.Name,
+		Revision:               c.revision.Label,
+		Fingerprint:            c.revision.Fingerprint(),
+		Fluid:                  a.Fluid.ID,
+		Verdict:                string(a.Verdict),
+		Phase:                  string(a.Hot.Phase),
+		PressureKPa:            round(a.Hot.PressurePa/1000, 6),
+		UllagePercent:          round(a.Hot.UllagePercent, 6),
+		BurstSafetyFactor:      round(a.BurstSafetyFactor, 6),
+		FailureProbability:     round(a.FailureProbability, 6),
+		ImplosionSafetyFactor:  round(a.ImplosionSafetyFactor, 6),
+		MaxSafeTemperatureC:    round(units.KelvinToCelsius(a.MaxSafe.TemperatureK), 6),
+		MaxSafeTemperatureNote: string(a.MaxSafe.TemperatureBound),
+		MaxSafeFillMassG:       round(a.MaxSafe.FillMassKg*1000, 6),
+		MaxSafeFillNote:        string(a.MaxSafe.FillBound),
+		StoredEnergyJ:          round(a.Rupture.StoredEnergyJ, 6),
+		FlashFraction:          round(a.Rupture.FlashFraction, 6),
+		PeakConcentrationPPM:   round(a.Release.Peak.PPM, 6),
+		STELAveragePPM:         round(a.Release.STEL.PPM, 6),
+		TWA8hPPM:               round(a.Release.TWA8h.PPM, 6),
+		PercentLFL:             round(a.Release.PercentLFL, 6),
+		Extrapolated:           a.Flags.Extrapolated(),
+		Cautions:               a.Cautions,
+	}
+	if a.LiquidFullReached {
+		t := round(units.KelvinToCelsius(a.LiquidFullK), 6)
+		d.LiquidFullTemperatureC = &t
+	}
+	for _, f := range a.Findings {
+		d.Findings = append(d.Findings, findingJSON{
+			Criterion: f.Criterion, Title: f.Title, Status: string(f.Status), Value: round(f.Value, 6), Limit: round(f.Limit, 6),
+			Unit: f.Unit, Margin: round(f.Margin, 6), Source: f.Source, Message: f.Message, Steps: f.Steps,
+		})
+	}
+	return d
+}

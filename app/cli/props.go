@@ -1,0 +1,74 @@
+package cli
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+
+	"ullage/fluids/units"
+)
+
+type propsJSON struct {
+	Fluid                 string   `json:"fluid"`
+	TemperatureC          float64  `json:"temperature_c"`
+	PsatKPa               float64  `json:"psat_kpa"`
+	LiquidDensityKgM3     float64  `json:"liquid_density_kg_m3"`
+	VapourDensityKgM3     float64  `json:"vapour_density_kg_m3"`
+	HeatOfVaporisationJKg float64  `json:"heat_of_vaporisation_j_kg"`
+	Extrapolated          bool     `json:"extrapolated"`
+	Notes                 []string `json:"notes"`
+}
+
+func runProps(args []string, stdout, stderr io.Writer) int {
+	o, err := parseArgs(args, []string{"json"}, []string{"temp-c", "fluids"})
+	if err != nil {
+		return usageError(stderr, "props", err)
+	}
+	if len(o.positional) != 1 {
+		return usageError(stderr, "props", fmt.Errorf("name one fluid (try: ullage fluids)"))
+	}
+	tc, ok, err := o.float("temp-c")
+	if err != nil {
+		return usageError(stderr, "props", err)
+	}
+	if !ok {
+		return usageError(stderr, "props", fmt.Errorf("give the temperature with --temp-c"))
+	}
+	lib, err := library(o)
+	if err != nil {
+		return usageError(stderr, "props", err)
+	}
+	s, err := lib.Lookup(o.positional[0])
+	if err != nil {
+		return usageError(stderr, "props", err)
+	}
+	sat, err := s.Saturation(units.CelsiusToKelvin(tc))
+	if err != nil {
+		return usageError(stderr, "props", err)
+	}
+	out := propsJSON{
+		Fluid: s.Fluid().ID, TemperatureC: tc, PsatKPa: round(sat.PressurePa/1000, 6),
+		LiquidDensityKgM3: round(sat.LiquidDensity, 6), VapourDensityKgM3: round(sat.VapourDensity, 6),
+		HeatOfVaporisationJKg: round(sat.HeatOfVaporisation, 6), Extrapolated: sat.Flags.Extrapolated(), Notes: []string{},
+	}
+	if sat.Flags != 0 {
+		out.Notes = append(out.Notes, sat.Flags.String())
+	}
+	if o.bools["json"] {
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		if err := enc.Encode(out); err != nil {
+			return usageError(stderr, "props", err)
+		}
+		return ExitPass
+	}
+	fmt.Fprintf(stdout, "%s at %g °C\n", s.Fluid().Name, tc)
+	fmt.Fprintf(stdout, "  vapour pressure        %.6g kPa\n", sat.PressurePa/1000)
+	fmt.Fprintf(stdout, "  saturated liquid      %.6g kg/m³\n", sat.LiquidDensity)
+	fmt.Fprintf(stdout, "  saturated vapour      %.6g kg/m³\n", sat.VapourDensity)
+	fmt.Fprintf(stdout, "  heat of vaporisation  %.6g kJ/kg\n", sat.HeatOfVaporisation/1000)
+	if sat.Flags != 0 {
+		fmt.Fprintf(stdout, "  note: %s\n", sat.Flags)
+	}
+	return ExitPass
+}
