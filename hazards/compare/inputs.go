@@ -1,0 +1,196 @@
+package compare
+
+import (
+	"fmt"
+	"reflect"
+	"strconv"
+	"strings"
+
+	"ullage/fluids/units"
+	"ullage/hazards"
+)
+
+// inputChanges walks both designs field by field under their JSON names
+// and lists every difference. Lists of parts are compared index by
+// index, so a part added or removed at the end shows as one change; lists
+// of plain values (limit bodies) are compared as a whole.
+func inputChanges(a, b *hazards.Design) []InputChange {
+	var out []InputChange
+	diff(&out, "", "", reflect.ValueOf(a).Elem(), reflect.ValueOf(b).Elem())
+	return out
+}
+
+// diff compares two values of the same type; name is the JSON name that
+// carries the unit (for a sourced value, its parent's).
+func diff(out *[]InputChange, path, name string, a, b reflect.Value) {
+	switch a.Kind() {
+	case reflect.Struct:
+		for _, f := range jsonFields(a.Type()) {
+			unitName := f.name
+			if f.name == "value" {
+				unitName = name // {"value": …, "source": …} under elastic_modulus_pa
+			}
+			diff(out, join(path, f.name), unitName, a.FieldByIndex(f.index), b.FieldByIndex(f.index))
+		}
+	case reflect.Pointer:
+		switch {
+		case a.IsNil() && b.IsNil():
+		case a.IsNil():
+			*out = append(*out, InputChange{Field: path, Old: Absent, New: describe(name, b.Elem())})
+		case b.IsNil():
+			*out = append(*out, InputChange{Field: path, Old: describe(name, a.Elem()), New: Absent})
+		default:
+			diff(out, path, name, a.Elem(), b.Elem())
+		}
+	case reflect.Slice:
+		if a.Type().Elem().Kind() != reflect.Struct {
+			if oldV, newV := describe(name, a), describe(name, b); oldV != newV {
+				*out = append(*out, InputChange{Field: path, Old: oldV, New: newV})
+			}
+			return
+		}
+		for i := 0; i < max(a.Len(), b.Len()); i++ {
+			at := fmt.Sprintf("%s[%d]", path, i)
+			switch {
+			case i >= a.Len():
+				*out = append(*out, InputChange{Field: at, Old: Absent, New: describe(name, b.Index(i))})
+			case i >= b.Len():
+				*out = append(*out, InputChange{Field: at, Old: describe(name, a.Index(i)), New: Absent})
+			default:
+				diff(out, at, name, a.Index(i), b.Index(i))
+			}
+		}
+	default:
+		if !sameScalar(a, b) {
+			*out = append(*out, InputChange{Field: path, Old: describe(name, a), New: describe(name, b)})
+		}
+	}
+}
+
+// sameScalar reports whether two plain values are equal (NaN equal to
+// NaN, so that bad input never reports a change that shows none).
+func sameScalar(a, b reflect.Value) bool {
+	if a.Kind() == reflect.Float64 || a.Kind() == reflect.Float32 {
+		x, y := a.Float(), b.Float()
+		return x == y || (x != x && y != y)
+	}
+	return a.Interface() == b.Interface()
+}
+
+// describe formats a value for a person: numbers with the unit their JSON
+// name carries, text quoted, lists in brackets, structures as
+// "name: value" pairs.
+func describe(name string, v reflect.Value) string {
+	switch v.Kind() {
+	case reflect.Struct:
+		var parts []string
+		for _, f := range jsonFields(v.Type()) {
+			unitName := f.name
+			if f.name == "value" {
+				unitName = name
+			}
+			parts = append(parts, f.name+": "+describe(unitName, v.FieldByIndex(f.index)))
+		}
+		return "{" + strings.Join(parts, ", ") + "}"
+	case reflect.Pointer:
+		if v.IsNil() {
+			return Absent
+		}
+		return describe(name, v.Elem())
+	case reflect.Slice:
+		items := make([]string, v.Len())
+		for i := range items {
+			items[i] = describe(name, v.Index(i))
+		}
+		return "[" + strings.Join(items, ", ") + "]"
+	case reflect.String:
+		return strconv.Quote(v.String())
+	case reflect.Float64, reflect.Float32:
+		return withUnit(name, v.Float())
+	}
+	return fmt.Sprint(v.Interface())
+}
+
+// kelvin is the unit that also shows degrees Celsius.
+const kelvin = "K"
+
+// inputUnits maps the ending of a JSON name to its unit; the first match
+// wins, so longer endings come before shorter ones they end with.
+var inputUnits = []struct{ suffix, unit string }{
+	{"_per_hour", "per hour"},
+	{"_per_k", "1/K"},
+	{"_k", kelvin},
+	{"_m_s", "m/s"},
+	{"_m3", "m³"},
+	{"_m2", "m²"},
+	{"_kg", "kg"},
+	{"_pa", "Pa"},
+	{"_m", "m"},
+	{"_years", "years"},
+	{"_minutes", "min"},
+	{"_seconds", "s"},
+	{"_percent", "%"},
+	{"_percent_lfl", "% of LFL"},
+	{"hours_at_hottest", "h"},
+}
+
+// withUnit formats x with the unit named by the JSON name; temperatures
+// in kelvin also show degrees Celsius.
+func withUnit(name string, x float64) string {
+	s := strconv.FormatFloat(x, 'g', -1, 64)
+	for _, u := range inputUnits {
+		if !strings.HasSuffix(name, u.suffix) {
+			continue
+		}
+		if u.unit == kelvin {
+			return s + " K (" + trimZeros(strconv.FormatFloat(units.KelvinToCelsius(x), 'f', 2, 64)) + " °C)"
+		}
+		return s + " " + u.unit
+	}
+	return s
+}
+
+// trimZeros drops trailing zeros after a decimal point: "76.00" → "76".
+func trimZeros(s string) string {
+	if !strings.Contains(s, ".") {
+		return s
+	}
+	s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
+	if s == "-0" {
+		return "0"
+	}
+	return s
+}
+
+// jsonField is one struct field under its JSON name.
+type jsonField struct {
+	name  string
+	index []int
+}
+
+// jsonFields lists a struct's exported fields under their JSON names.
+func jsonFields(t reflect.Type) []jsonField {
+	var out []jsonField
+	for i := 0; i < t.NumField(); i++ {
+		sf := t.Field(i)
+		if !sf.IsExported() {
+			continue
+		}
+		name, _, _ := strings.Cut(sf.Tag.Get("json"), ",")
+		if name == "-" {
+			continue
+		}
+		if name == "" {
+			name = sf.Name
+		}
+		out = append(out, jsonField{name: name, index: sf.Index})
+	}
+	return out
+}
+
+func join(path, key string) string {
+	if path == "" {
+		return key
+	}
+	return path + "." + key
+}

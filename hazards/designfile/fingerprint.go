@@ -1,0 +1,122 @@
+package designfile
+
+import (
+	"bytes"
+	"crypto/sha256"
+	"encoding/hex"
+	"fmt"
+	"math"
+	"reflect"
+	"sort"
+	"strconv"
+	"unicode/utf8"
+)
+
+// Fingerprint returns the hex SHA-256 of the canonical JSON of r.Design,
+// so that two revisions with equal designs have equal fingerprints
+// whatever the file's layout. Label, date, author and change note are not
+// part of it.
+//
+// The canonical JSON has no whitespace; object members sorted by key
+// (byte order) and every field present, a nil pointer as null; a nil list
+// written as [] like an empty one; numbers in Go's shortest round-trip
+// form, strconv.FormatFloat(x, 'g', -1, 64) (e.g. 0.006, 1e-12, 101325),
+// with −0 written as 0; text as a JSON string with only ", \ and control
+// characters escaped and invalid UTF-8 replaced by U+FFFD. (A number
+// that is not finite, which no valid design holds, is written as the
+// string "NaN", "+Inf" or "-Inf".) This form is fixed: changing it
+// changes every fingerprint already printed in a record.
+func (r *Revision) Fingerprint() string {
+	var b bytes.Buffer
+	writeCanonical(&b, reflect.ValueOf(r.Design))
+	sum := sha256.Sum256(b.Bytes())
+	return hex.EncodeToString(sum[:])
+}
+
+// canonicalJSON returns the canonical form of v, for tests.
+func canonicalJSON(v any) string {
+	var b bytes.Buffer
+	writeCanonical(&b, reflect.ValueOf(v))
+	return b.String()
+}
+
+func writeCanonical(b *bytes.Buffer, v reflect.Value) {
+	switch v.Kind() {
+	case reflect.Struct:
+		fields := jsonFields(v.Type())
+		sort.Slice(fields, func(i, j int) bool { return fields[i].name < fields[j].name })
+		b.WriteByte('{')
+		for i, f := range fields {
+			if i > 0 {
+				b.WriteByte(',')
+			}
+			writeString(b, f.name)
+			b.WriteByte(':')
+			writeCanonical(b, v.FieldByIndex(f.index))
+		}
+		b.WriteByte('}')
+	case reflect.Pointer, reflect.Interface:
+		if v.IsNil() {
+			b.WriteString("null")
+			return
+		}
+		writeCanonical(b, v.Elem())
+	case reflect.Slice, reflect.Array:
+		b.WriteByte('[')
+		for i := 0; i < v.Len(); i++ {
+			if i > 0 {
+				b.WriteByte(',')
+			}
+			writeCanonical(b, v.Index(i))
+		}
+		b.WriteByte(']')
+	case reflect.String:
+		writeString(b, v.String())
+	case reflect.Float32, reflect.Float64:
+		writeNumber(b, v.Float())
+	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
+		b.WriteString(strconv.FormatInt(v.Int(), 10))
+	case reflect.Uint, reflect.Uint8, reflect.Uint16, reflect.Uint32, reflect.Uint64:
+		b.WriteString(strconv.FormatUint(v.Uint(), 10))
+	case reflect.Bool:
+		b.WriteString(strconv.FormatBool(v.Bool()))
+	default:
+		panic(fmt.Sprintf("designfile: no canonical form for %s", v.Type()))
+	}
+}
+
+func writeNumber(b *bytes.Buffer, x float64) {
+	switch {
+	case math.IsNaN(x):
+		b.WriteString(`"NaN"`)
+	case math.IsInf(x, 1):
+		b.WriteString(`"+Inf"`)
+	case math.IsInf(x, -1):
+		b.WriteString(`"-Inf"`)
+	case x == 0:
+		b.WriteByte('0') // also −0
+	default:
+		b.WriteString(strconv.FormatFloat(x, 'g', -1, 64))
+	}
+}
+
+func writeString(b *bytes.Buffer, s string) {
+	const hexDigits = "0123456789abcdef"
+	b.WriteByte('"')
+	for i := 0; i < len(s); {
+		r, size := utf8.DecodeRuneInString(s[i:])
+		i += size
+		switch {
+		case r == '"' || r == '\\':
+			b.WriteByte('\\')
+			b.WriteRune(r)
+		case r < 0x20:
+			b.WriteString(`\u00`)
+			b.WriteByte(hexDigits[r>>4])
+			b.WriteByte(hexDigits[r&0xf])
+		default:
+			b.WriteRune(r) // utf8.RuneError for invalid bytes: U+FFFD
+		}
+	}
+	b.WriteByte('"')
+}

@@ -1,0 +1,174 @@
+package designfile
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"reflect"
+	"strconv"
+	"strings"
+)
+
+// strictDecoder fills Go values from a parsed tree, refusing unknown
+// fields, missing fields and values of the wrong type. A field is
+// required unless its JSON tag says omitempty.
+type strictDecoder struct {
+	data []byte
+}
+
+func (d *strictDecoder) fail(n *node, field, value, problem string, err error) *FileError {
+	return &FileError{Line: lineAt(d.data, n.offset), Field: field, Value: value, Problem: problem, Err: err}
+}
+
+// decode fills v (settable) from n; path is n's field path.
+func (d *strictDecoder) decode(n *node, v reflect.Value, path string) *FileError {
+	switch v.Kind() {
+	case reflect.Struct:
+		return d.object(n, v, path)
+	case reflect.Pointer:
+		if n.kind == kindNull {
+			v.SetZero()
+			return nil
+		}
+		p := reflect.New(v.Type().Elem())
+		if err := d.decode(n, p.Elem(), path); err != nil {
+			return err
+		}
+		v.Set(p)
+		return nil
+	case reflect.Slice:
+		if n.kind == kindNull {
+			v.SetZero()
+			return nil
+		}
+		if n.kind != kindArray {
+			return d.fail(n, path, n.shown(), "must be a list in square brackets [ … ]", nil)
+		}
+		s := reflect.MakeSlice(v.Type(), len(n.elems), len(n.elems))
+		for i, e := range n.elems {
+			if err := d.decode(e, s.Index(i), fmt.Sprintf("%s[%d]", path, i)); err != nil {
+				return err
+			}
+		}
+		v.Set(s)
+		return nil
+	case reflect.String:
+		if n.kind != kindString {
+			return d.fail(n, path, n.shown(), "must be text in double quotes", nil)
+		}
+		v.SetString(n.text)
+		return nil
+	case reflect.Float64, reflect.Float32:
+		if n.kind != kindNumber {
+			return d.fail(n, path, n.shown(), "must be a number", nil)
+		}
+		x, err := strconv.ParseFloat(n.text, v.Type().Bits())
+		if err != nil || math.IsInf(x, 0) {
+			return d.fail(n, path, n.shown(), "is too large to be a number this program can hold", err)
+		}
+		v.SetFloat(x)
+		return nil
+	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
+		if n.kind != kindNumber {
+			return d.fail(n, path, n.shown(), "must be a whole number", nil)
+		}
+		x, err := strconv.ParseInt(n.text, 10, v.Type().Bits())
+		if err != nil {
+			return d.fail(n, path, n.shown(), "must be a whole number in range", err)
+		}
+		v.SetInt(x)
+		return nil
+	case reflect.Bool:
+		if n.kind != kindBool {
+			return d.fail(n, path, n.shown(), "must be true or false", nil)
+		}
+		v.SetBool(n.boolean)
+		return nil
+	}
+	panic(fmt.Sprintf("designfile: no strict decoding for %s at %s", v.Type(), path))
+}
+
+// object fills a struct from a JSON object, field by field.
+func (d *strictDecoder) object(n *node, v reflect.Value, path string) *FileError {
+	if n.kind != kindObject {
+		return d.fail(n, path, n.shown(), "must be an object in braces { … }", nil)
+	}
+	fields := jsonFields(v.Type())
+	present := make(map[string]bool, len(n.members))
+	for _, m := range n.members {
+		f, ok := findField(fields, m.key)
+		if !ok {
+			problem := "unknown field; the fields here are " + fieldNames(fields)
+			for _, g := range fields {
+				if strings.EqualFold(g.name, m.key) {
+					problem = fmt.Sprintf("unknown field (names are lower case: did you mean %q?)", g.name)
+				}
+			}
+			return &FileError{Line: lineAt(d.data, m.offset), Field: joinPath(path, m.key), Problem: problem, Err: errUnknownField}
+		}
+		present[m.key] = true
+		if err := d.decode(m.value, v.FieldByIndex(f.index), joinPath(path, m.key)); err != nil {
+			return err
+		}
+	}
+	for _, f := range fields {
+		if !f.optional && !present[f.name] {
+			return &FileError{Line: lineAt(d.data, n.offset), Field: joinPath(path, f.name),
+				Problem: `is missing; every field must be given (write 0 or "" where it does not apply)`, Err: errMissingField}
+		}
+	}
+	return nil
+}
+
+// Causes for the two structural errors, so tests and callers can tell them
+// apart with errors.Is.
+var (
+	errUnknownField = errors.New("unknown field")
+	errMissingField = errors.New("missing field")
+)
+
+// jsonField is one struct field as named in JSON.
+type jsonField struct {
+	name     string
+	index    []int
+	optional bool
+}
+
+// jsonFields lists a struct's exported fields under their JSON names,
+// following the encoding/json tag rules this package relies on.
+func jsonFields(t reflect.Type) []jsonField {
+	var out []jsonField
+	for i := 0; i < t.NumField(); i++ {
+		sf := t.Field(i)
+		if !sf.IsExported() {
+			continue
+		}
+		tag := sf.Tag.Get("json")
+		if tag == "-" {
+			continue
+		}
+		name, opts, _ := strings.Cut(tag, ",")
+		if name == "" {
+			name = sf.Name
+		}
+		out = append(out, jsonField{name: name, index: sf.Index, optional: strings.Contains(","+opts+",", ",omitempty,")})
+	}
+	return out
+}
+
+func findField(fields []jsonField, name string) (jsonField, bool) {
+	for _, f := range fields {
+		if f.name == name {
+			return f, true
+		}
+	}
+	return jsonField{}, false
+}
+
+func fieldNames(fields []jsonField) string {
+	names := make([]string, len(fields))
+	for i, f := range fields {
+		names[i] = f.name
+	}
+	return strings.Join(names, ", ")
+}
