@@ -113,24 +113,14 @@ const (
 	probabilityCautionFactor = 0.1  // caution above a tenth of the allowed probability
 )
 
-// governingLimit returns the most protective numeric limit of the given
-// averaging among the chosen bodies, and whether there is one.
-func governingLimit(f *fluids.Fluid, averaging string, bodies []string) (fluids.ExposureLimit, bool) {
-	allowed := func(b string) bool {
-		if len(bodies) == 0 {
-			return true
-		}
-		for _, x := range bodies {
-			if x == b {
-				return true
-			}
-		}
-		return false
-	}
+// GoverningLimit returns the most protective numeric limit of the given
+// averaging (fluids.AveragingTWA, …) among the chosen bodies (all when
+// bodies is empty), and whether there is one.
+func GoverningLimit(f *fluids.Fluid, averaging string, bodies []string) (fluids.ExposureLimit, bool) {
 	var best fluids.ExposureLimit
 	found := false
 	for _, l := range f.ExposureLimits {
-		if l.Averaging != averaging || !allowed(l.Body) {
+		if l.Averaging != averaging || !bodyChosen(l.Body, bodies) {
 			continue
 		}
 		if !found || l.PPM < best.PPM {
@@ -138,6 +128,30 @@ func governingLimit(f *fluids.Fluid, averaging string, bodies []string) (fluids.
 		}
 	}
 	return best, found
+}
+
+// GoverningLimits returns the governing limit of each averaging that has
+// one, in the order IDLH, ceiling, STEL, TWA.
+func GoverningLimits(f *fluids.Fluid, bodies []string) []fluids.ExposureLimit {
+	var out []fluids.ExposureLimit
+	for _, avg := range []string{fluids.AveragingIDLH, fluids.AveragingCeiling, fluids.AveragingSTEL, fluids.AveragingTWA} {
+		if l, ok := GoverningLimit(f, avg, bodies); ok {
+			out = append(out, l)
+		}
+	}
+	return out
+}
+
+func bodyChosen(body string, bodies []string) bool {
+	if len(bodies) == 0 {
+		return true
+	}
+	for _, b := range bodies {
+		if b == body {
+			return true
+		}
+	}
+	return false
 }
 
 // exposureFindings compares the release with every published limit.
@@ -153,7 +167,7 @@ func exposureFindings(f *fluids.Fluid, rel *releaseModel, exposureS float64, cr 
 	}
 	var out []Finding
 	for _, k := range kinds {
-		lim, ok := governingLimit(f, k.averaging, cr.LimitBodies)
+		lim, ok := GoverningLimit(f, k.averaging, cr.LimitBodies)
 		if !ok {
 			continue
 		}

@@ -1,0 +1,148 @@
+package report
+
+import (
+	"fmt"
+	"strings"
+
+	"ullage/hazards"
+)
+
+// inputs prints the design as reviewed.
+func (w *assessmentWriter) inputs() {
+	d, a, u := w.d, w.a, w.u
+	ds := &a.Design
+	d.heading("Inputs")
+	d.subheading("Fill, vessel and service")
+	d.keyValues(designPairs(ds, a, u), 2)
+
+	d.subheading("Parts of the glass envelope")
+	d.drawTable(partsTable(ds.Vessel.Parts, u))
+
+	d.subheading("Release scenario")
+	d.keyValues(roomPairs(ds.Room, u), 2)
+
+	d.subheading("Review criteria")
+	d.drawTable(criteriaTable(ds.Criteria))
+}
+
+// designPairs lists the design's main inputs as label–value pairs.
+func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]string {
+	fluid := ds.Fluid
+	if a != nil && a.Fluid != nil {
+		fluid = fmt.Sprintf("%s (CAS %s, %s)", a.Fluid.Name, a.Fluid.CAS, a.Fluid.Formula)
+	}
+	vol := "computed from the parts"
+	if ds.Vessel.InternalVolumeM3 > 0 {
+		vol = u.vesselVolume(ds.Vessel.InternalVolumeM3) + " measured"
+	}
+	if ds.Vessel.VolumeToleranceM3 > 0 {
+		vol += ", " + u.plusMinus(u.vesselVolume(ds.Vessel.VolumeToleranceM3))
+	}
+	glass := ds.Glass.ID
+	if ds.Glass.Custom != nil {
+		glass = "custom: " + ds.Glass.Custom.Name
+	} else if a != nil && a.Glass.Name != "" {
+		glass = a.Glass.Name
+	}
+	pairs := [][2]string{
+		{"Fluid", fluid},
+		{"Fill mass", withTolerance(u.mass(ds.FillMassKg), ds.FillMassToleranceKg, u.mass)},
+		{"Internal volume", vol},
+	}
+	if a != nil {
+		pairs = append(pairs,
+			[2]string{"Volume used", u.vesselVolume(a.VolumeM3)},
+			[2]string{"Fill density", u.density(a.FillDensity)},
+			[2]string{"Liquid share at sealing", percent(a.LiquidFractionAtSealing, 3) + " of the volume"})
+	}
+	gas := u.pressure(ds.ResidualGasPressurePa)
+	if ds.ResidualGasPressurePa == 0 {
+		gas = "none (fully evacuated)"
+	}
+	pairs = append(pairs,
+		[2]string{"Sealing temperature", u.temperature(ds.SealingTemperatureK)},
+		[2]string{"Residual gas at sealing", gas},
+		[2]string{"Hottest temperature", u.temperature(ds.HottestK)},
+		[2]string{"Coldest temperature", u.temperature(ds.ColdestK)},
+		[2]string{"Ambient pressure", u.pressure(ds.AmbientPressurePa)},
+		[2]string{"Glass", glass},
+		[2]string{"Service life", plain(ds.ServiceLifeYears) + " years"},
+		[2]string{"Time at the hottest", plain(ds.HoursAtHottest) + " h over the life"},
+	)
+	return pairs
+}
+
+// partsTable lists the parts of the envelope.
+func partsTable(parts []hazards.Part, u unitSystem) table {
+	rows := make([][]cell, 0, len(parts))
+	for _, p := range parts {
+		length := noValue
+		if p.Shape == hazards.ShapeTube {
+			length = u.length(p.LengthM)
+		}
+		tol := "not stated"
+		if p.WallToleranceM > 0 {
+			tol = u.plusMinus(u.length(p.WallToleranceM))
+		}
+		rows = append(rows, []cell{
+			{text: p.Name}, {text: p.Shape}, {text: u.length(p.OuterDiameterM)}, {text: u.length(p.WallThicknessM)},
+			{text: tol}, {text: length}, {text: u.vesselVolume(p.InternalVolume())},
+		})
+	}
+	return table{cols: []col{
+		{"Part", 2, 'L'}, {"Shape", 1, 'L'}, {"Outer diameter", 1.3, 'R'}, {"Wall", 1.1, 'R'},
+		{"Wall tolerance", 1.3, 'R'}, {"Length", 1.1, 'R'}, {"Internal volume", 1.3, 'R'},
+	}, rows: rows, zebra: true}
+}
+
+// roomPairs lists the release scenario.
+func roomPairs(r hazards.Room, u unitSystem) [][2]string {
+	preset := r.PresetID
+	if preset == "" {
+		preset = "custom"
+	}
+	return [][2]string{
+		{"Room", preset},
+		{"Room volume", u.roomVolume(r.VolumeM3)},
+		{"Air changes per hour", plain(r.AirChangesPerHour) + " per hour"},
+		{"Mixing factor", plain(r.MixingFactor) + " (1 = perfectly mixed)"},
+		{"Near-field radius", u.roomLength(r.NearFieldRadiusM)},
+		{"Near-field air speed", u.speed(r.NearFieldAirSpeed)},
+		{"Time in the room", plain(r.ExposureMinutes) + " min after the breakage"},
+		{"Near-field volume", u.roomVolume(hazards.NearFieldVolume(r.NearFieldRadiusM))},
+	}
+}
+
+// criteriaTable lists the review criteria with their grounds.
+func criteriaTable(cr hazards.Criteria) table {
+	bodies := "all bodies"
+	if len(cr.LimitBodies) > 0 {
+		bodies = strings.Join(cr.LimitBodies, ", ")
+	}
+	def := hazards.DefaultCriteria()
+	row := func(name, key string, v, dv float64, text string) []cell {
+		grounds := hazards.DefaultCriteriaGrounds[key]
+		if v != dv {
+			grounds = "Set for this review (default " + plain(dv) + ": " + grounds + ")"
+		}
+		return []cell{{text: name}, {text: text}, {text: grounds, dim: true}}
+	}
+	rows := [][]cell{
+		row("Minimum burst safety factor", "min_burst_safety_factor", cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, plain(cr.MinBurstSafetyFactor)),
+		row("Minimum implosion safety factor", "min_implosion_safety_factor", cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, plain(cr.MinImplosionSafetyFactor)),
+		row("Maximum failure probability", "max_failure_probability", cr.MaxFailureProbability, def.MaxFailureProbability, plain(cr.MaxFailureProbability)),
+		row("Minimum ullage at the hottest", "min_ullage_percent", cr.MinUllagePercent, def.MinUllagePercent, plain(cr.MinUllagePercent)+" %"),
+		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, plain(cr.MaxFractionOfLimit)),
+		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, plain(cr.MaxPercentLFL)+" %"),
+		{{text: "Exposure limits from"}, {text: bodies}, {text: "Chosen for this review; for each averaging time the most protective limit of these bodies governs.", dim: true}},
+	}
+	return table{cols: []col{{"Criterion", 2.2, 'L'}, {"Value", 1.3, 'R'}, {"Grounds", 5, 'L'}}, rows: rows, zebra: true}
+}
+
+// withTolerance appends "± tolerance" when there is one.
+func withTolerance(value string, tol float64, format func(float64) string) string {
+	if tol <= 0 {
+		return value
+	}
+	return value + " ± " + format(tol)
+}

@@ -1,0 +1,194 @@
+package report
+
+import (
+	"fmt"
+	"strings"
+
+	"ullage/fluids"
+	"ullage/fluids/units"
+	"ullage/hazards"
+)
+
+// provenance prints the source of every fluid and glass value used, each
+// correlation's validity range and where it was stretched.
+func (w *assessmentWriter) provenance() {
+	d, a := w.d, w.a
+	d.heading("Data provenance")
+	origin := "the built-in fluid library"
+	if a.Fluid.UserSupplied {
+		origin = "a fluid file supplied by the user, not the built-in library"
+	}
+	d.lead(fmt.Sprintf("Fluid data for %s (CAS %s, library record “%s”) come from %s, data version %s. Every value below is printed with the publication it was taken from, as stored in the library.",
+		a.Fluid.Name, a.Fluid.CAS, a.Fluid.ID, origin, firstNonBlank(w.m.FluidDataVersion, "not stated")))
+	d.subheading("Fluid properties")
+	d.drawTable(fluidTable(a.Fluid, w.u))
+	d.subheading("Vapour-pressure correlation")
+	d.drawTable(vapourPressureTable(a.Fluid, w.u))
+	use := "Outside the published pieces the curve is extended to the critical point by a Riedel-type hand-over, flagged as extrapolated wherever it is used."
+	if a.Flags&fluids.VapourPressureExtrapolated != 0 {
+		use = "‡ This review used the curve outside its published pieces. " + use
+	}
+	d.note(use)
+	d.subheading("Exposure limits")
+	d.drawTable(limitsTable(a.Fluid, a.Design.Criteria.LimitBodies))
+	for _, n := range a.Fluid.NoNumericLimit {
+		d.note(n.Body + " " + n.Kind + ": " + n.Note)
+	}
+	d.subheading("Glass: " + a.Glass.Name)
+	d.drawTable(glassTable(&a.Glass, w.u))
+	if a.Glass.Note != "" {
+		d.note(a.Glass.Note)
+	}
+	d.subheading("Correlations, their ranges and where they were used")
+	d.drawTable(validityTable(a, w.u))
+	if a.Flags.Extrapolated() {
+		d.note("‡ marks a value computed outside a correlation's published range (over the whole review: " + a.Flags.String() + "). Treat such values as estimates and confirm them by test.")
+	} else {
+		d.note("No value in this record was computed outside a correlation's published range.")
+	}
+}
+
+// sourceCell is a small, dim cell for a source text.
+func sourceCell(s string) cell {
+	if strings.TrimSpace(s) == "" {
+		s = "no source given"
+	}
+	return cell{text: s, dim: true}
+}
+
+// fluidTable lists the fluid's sourced constants.
+func fluidTable(f *fluids.Fluid, u unitSystem) table {
+	at := func(t float64) string { return "at " + u.temperature(t) }
+	rows := [][]cell{
+		{{text: "Molar mass"}, {text: sig(f.MolarMass.Value*1000, 5) + " g/mol"}, {}, sourceCell(f.MolarMass.Source)},
+		{{text: "Critical temperature"}, {text: u.temperature(f.CriticalTemperature.Value)}, {}, sourceCell(f.CriticalTemperature.Source)},
+		{{text: "Critical pressure"}, {text: u.pressure(f.CriticalPressure.Value)}, {}, sourceCell(f.CriticalPressure.Source)},
+		{{text: "Critical density"}, {text: u.density(f.CriticalDensity.Value)}, {}, sourceCell(f.CriticalDensity.Source)},
+		{{text: "Acentric factor"}, {text: sig(f.AcentricFactor.Value, 4)}, {}, sourceCell(f.AcentricFactor.Source)},
+		{{text: "Normal boiling point"}, {text: u.temperature(f.NormalBoilingPoint.Value)}, {}, sourceCell(f.NormalBoilingPoint.Source)},
+		{{text: "Freezing point"}, {text: u.temperature(f.FreezingPoint.Value)}, {text: "lowest temperature accepted"}, sourceCell(f.FreezingPoint.Source)},
+		{{text: "Liquid density"}, {text: u.density(f.LiquidDensity.Value)}, {text: at(f.LiquidDensity.TemperatureK)}, sourceCell(f.LiquidDensity.Source)},
+		{{text: "Heat of vaporisation"}, {text: sig(f.HeatOfVaporisation.Value/1000, 4) + " kJ/mol"}, {text: at(f.HeatOfVaporisation.TemperatureK)}, sourceCell(f.HeatOfVaporisation.Source)},
+		{{text: "Liquid heat capacity"}, {text: sig(f.LiquidHeatCapacity.Value, 4) + " J/(mol·K)"}, {text: at(f.LiquidHeatCapacity.TemperatureK)}, sourceCell(f.LiquidHeatCapacity.Source)},
+	}
+	fl := f.Flammability
+	flam := "no"
+	if fl.Flammable {
+		flam = "yes"
+	}
+	rows = append(rows, []cell{{text: "Flammable"}, {text: flam}, {}, sourceCell(firstNonBlank(fl.Note, "library"))})
+	opt := func(name string, s *fluids.Sourced, format func(float64) string) {
+		if s != nil {
+			rows = append(rows, []cell{{text: name}, {text: format(s.Value)}, {}, sourceCell(s.Source)})
+		}
+	}
+	vol := func(x float64) string { return sig(x, 3) + " % by volume" }
+	opt("Lower flammability limit", fl.LFLPercent, vol)
+	opt("Upper flammability limit", fl.UFLPercent, vol)
+	opt("Flash point", fl.FlashPointK, u.temperature)
+	opt("Autoignition temperature", fl.AutoignitionK, u.temperature)
+	if f.PotentialCarcinogen.Value {
+		rows = append(rows, []cell{{text: "Potential carcinogen"}, {text: "listed by " + f.PotentialCarcinogen.Body}, {}, sourceCell(f.PotentialCarcinogen.Source)})
+	}
+	return table{cols: []col{{"Property", 1.5, 'L'}, {"Value", 1.3, 'R'}, {"Conditions", 1.1, 'L'}, {"Source", 4.6, 'L'}}, rows: rows, size: 7.5, zebra: true}
+}
+
+// vapourPressureTable lists the published pieces with their ranges.
+func vapourPressureTable(f *fluids.Fluid, u unitSystem) table {
+	var rows [][]cell
+	for _, p := range f.VapourPressure {
+		coef := fmt.Sprintf("A = %s, B = %s, C = %s", sig(p.A, 6), sig(p.B, 6), sig(p.C, 6))
+		if p.D != 0 {
+			coef += ", D = " + sig(p.D, 6)
+		}
+		rows = append(rows, []cell{{text: p.Form}, {text: coef, mono: true}, {text: u.temperature(p.TMinK) + " to " + u.temperature(p.TMaxK)}, sourceCell(p.Source)})
+	}
+	return table{cols: []col{{"Form", 1, 'L'}, {"Coefficients", 2.4, 'L'}, {"Valid range", 1.4, 'L'}, {"Source", 3.7, 'L'}}, rows: rows, size: 7.5}
+}
+
+// limitsTable lists every published exposure limit, marking those that
+// govern the review.
+func limitsTable(f *fluids.Fluid, bodies []string) table {
+	gov := map[fluids.ExposureLimit]bool{}
+	for _, l := range hazards.GoverningLimits(f, bodies) {
+		gov[l] = true
+	}
+	var rows [][]cell
+	for _, l := range f.ExposureLimits {
+		period := noValue
+		if l.Minutes > 0 {
+			period = plain(l.Minutes) + " min"
+		}
+		g := ""
+		if gov[l] {
+			g = "governs"
+		}
+		rows = append(rows, []cell{
+			{text: l.Body, bold: gov[l]}, {text: l.Kind, bold: gov[l]}, {text: l.Averaging, bold: gov[l]}, {text: period},
+			{text: plain(l.PPM), bold: gov[l]}, {text: sig(units.PpmToMgPerM3(l.PPM, f.MolarMass.Value), 3)}, {text: g, bold: true}, sourceCell(l.Source),
+		})
+	}
+	if len(rows) == 0 {
+		rows = append(rows, []cell{{text: "none"}, {}, {}, {}, {}, {}, {}, {text: "no numeric limit in the library", dim: true}})
+	}
+	return table{cols: []col{
+		{"Body", 0.8, 'L'}, {"Kind", 0.7, 'L'}, {"Averaging", 0.9, 'L'}, {"Period", 0.8, 'R'}, {"ppm", 0.7, 'R'},
+		{"mg/m³", 0.8, 'R'}, {"", 0.8, 'L'}, {"Source", 3.6, 'L'},
+	}, rows: rows, size: 7.5, zebra: true}
+}
+
+// glassTable lists the glass properties with their sources.
+func glassTable(g *hazards.Glass, u unitSystem) table {
+	rows := [][]cell{
+		{{text: "Elastic modulus"}, {text: u.stress(g.ElasticModulus.Value)}, sourceCell(g.ElasticModulus.Source)},
+		{{text: "Poisson's ratio"}, {text: sig(g.PoissonRatio.Value, 3)}, sourceCell(g.PoissonRatio.Source)},
+		{{text: "Thermal expansion"}, {text: sig(g.Expansion.Value*1e6, 3) + " ×10⁻⁶ /K"}, sourceCell(g.Expansion.Source)},
+		{{text: "Characteristic strength"}, {text: u.stress(g.CharacteristicStrength.Value)}, sourceCell(g.CharacteristicStrength.Source)},
+		{{text: "Reference area"}, {text: u.surface(g.ReferenceArea.Value)}, sourceCell(g.ReferenceArea.Source)},
+		{{text: "Reference load time"}, {text: plain(g.ReferenceLoad.Value) + " s"}, sourceCell(g.ReferenceLoad.Source)},
+		{{text: "Weibull modulus"}, {text: sig(g.WeibullModulus.Value, 3)}, sourceCell(g.WeibullModulus.Source)},
+		{{text: "Stress-corrosion exponent"}, {text: sig(g.StressCorrosionExponent.Value, 3)}, sourceCell(g.StressCorrosionExponent.Source)},
+	}
+	return table{cols: []col{{"Property", 1.9, 'L'}, {"Value", 1.2, 'R'}, {"Source", 5.4, 'L'}}, rows: rows, size: 7.5, zebra: true}
+}
+
+// validityTable says, for each correlation, its range and whether it was
+// used outside it at the coldest and hottest temperatures.
+func validityTable(a *hazards.Assessment, u unitSystem) table {
+	f := a.Fluid
+	tc := f.CriticalTemperature.Value
+	lo, hi := tc, 0.0
+	for _, p := range f.VapourPressure {
+		lo, hi = min(lo, p.TMinK), max(hi, p.TMaxK)
+	}
+	type corr struct {
+		name, rng string
+		flag      fluids.Flags
+		stretched bool // the flag means use outside the range
+	}
+	cs := []corr{
+		{"Vapour pressure (published pieces)", u.temperature(lo) + " to " + u.temperature(hi), fluids.VapourPressureExtrapolated, true},
+		{"Compressed liquid (Tait form)", "reduced temperature up to 0.95, i.e. up to " + u.temperature(0.95*tc), fluids.CompressedLiquidExtrapolated, true},
+		{"Saturated vapour near the critical point (rectilinear diameter)", "used close to the critical point, " + u.temperature(tc), fluids.NearCriticalVapour, false},
+		{"Supercritical state (anchored equation of state)", "above the critical temperature, " + u.temperature(tc), fluids.SupercriticalState, false},
+	}
+	use := func(fl fluids.Flags, c corr) string {
+		switch {
+		case fl&c.flag != 0 && c.stretched:
+			return "outside its range ‡"
+		case fl&c.flag != 0:
+			return "used"
+		case c.stretched:
+			return "within range"
+		}
+		return "not used"
+	}
+	var rows [][]cell
+	for _, c := range cs {
+		rows = append(rows, []cell{{text: c.name}, {text: c.rng}, {text: use(a.Cold.Flags, c), bold: a.Cold.Flags&c.flag != 0 && c.stretched},
+			{text: use(a.Hot.Flags, c), bold: a.Hot.Flags&c.flag != 0 && c.stretched}})
+	}
+	return table{cols: []col{{"Correlation", 2.5, 'L'}, {"Published or stated range", 2.4, 'L'},
+		{"At the coldest, " + u.temperature(a.Design.ColdestK), 1.6, 'L'}, {"At the hottest, " + u.temperature(a.Design.HottestK), 1.6, 'L'}},
+		rows: rows, size: 7.5, zebra: true}
+}

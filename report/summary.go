@@ -1,0 +1,187 @@
+package report
+
+import (
+	"fmt"
+	"strings"
+
+	"ullage/fluids"
+	"ullage/hazards"
+)
+
+// titleBlock prints the record's identity on the first page.
+func (w *assessmentWriter) titleBlock() {
+	d, m := w.d, w.m
+	d.recordTitle("TECHNICAL FILE RECORD · HAZARD ASSESSMENT",
+		firstNonBlank(m.Product, "Unnamed product"),
+		fmt.Sprintf("Sealed glass device filled with %s: burst, implosion, liquid-full and release review", w.a.Fluid.Name))
+	d.keyValues([][2]string{
+		{"Product", orBlank(m.Product)},
+		{"Part number", orBlank(m.PartNumber)},
+		{"Company", orBlank(m.Company)},
+		{"Record date", orBlank(dateOrBlank(m))},
+		{"Revision", orBlank(m.Revision)},
+		{"Revision date", orBlank(m.RevisionDate)},
+		{"Revision author", orBlank(m.RevisionAuthor)},
+		{"Reviewer", orBlank(m.Reviewer)},
+		{"Tool version", orBlank(creator(m))},
+		{"Fluid-data version", orBlank(m.FluidDataVersion)},
+	}, 2)
+	d.y -= 1.5
+	d.drawTable(table{cols: []col{{weight: 1.15}, {weight: 4.85}}, noHeader: true, keep: 1, rows: [][]cell{
+		{{text: "Change note", dim: true}, {text: orBlank(m.ChangeNote)}},
+		{{text: "Design fingerprint", dim: true}, {text: orBlank(m.Fingerprint), mono: true}},
+		{{text: "Units", dim: true}, {text: w.u.name() + "; pressures are absolute unless marked as over ambient"}},
+	}})
+}
+
+func dateOrBlank(m Meta) string {
+	if m.Date.IsZero() {
+		return ""
+	}
+	return m.Date.Format("2006-01-02")
+}
+
+// summary prints the verdict box and the table of findings.
+func (w *assessmentWriter) summary() {
+	d, a := w.d, w.a
+	d.space(2)
+	counts := map[hazards.Status]int{}
+	for _, f := range a.Findings {
+		counts[f.Status]++
+	}
+	var expl string
+	switch a.Verdict {
+	case hazards.StatusFail:
+		expl = "The design does not meet every review criterion. It should not be released as it stands; see the findings below and in section 7."
+	case hazards.StatusCaution:
+		expl = "The design meets the review criteria, but at least one narrowly or with a value that could not be judged cleanly. Read each caution before signing."
+	default:
+		expl = "The design meets every review criterion with margin, within the models and data stated in this record."
+	}
+	tally := fmt.Sprintf("%d pass · %d caution · %d fail, of %d criteria", counts[hazards.StatusPass], counts[hazards.StatusCaution], counts[hazards.StatusFail], len(a.Findings))
+	d.verdictBox("Overall verdict", a.Verdict, tally, expl)
+	d.subheading("Summary of findings")
+	rows := make([][]cell, 0, len(a.Findings))
+	for _, f := range a.Findings {
+		v := findingNumbers(f, a.Fluid)
+		rows = append(rows, []cell{{status: f.Status}, {text: f.Title}, {text: v.value}, {text: v.limit}, {text: v.margin}})
+	}
+	d.drawTable(table{cols: []col{
+		{"Status", 1.25, 'L'}, {"Criterion", 3.6, 'L'}, {"Value", 1.35, 'R'}, {"Limit", 1.35, 'R'}, {"Margin", 1.1, 'R'},
+	}, rows: rows, size: 8.5, keep: len(rows)})
+	d.statusLegend()
+	d.note("Margin is how far the value lies on the safe side of the limit, as a share of the limit (percentage points for ullage); a negative margin means the limit is exceeded.")
+}
+
+// verdictBox draws the boxed overall verdict: a large status mark, the
+// status word, a tally and an explanation.
+func (d *doc) verdictBox(title string, s hazards.Status, tally, expl string) {
+	d.use(body)
+	textX := d.left + 30
+	lines := d.wrap(expl, d.right-3-textX)
+	lh := lineHeight(body.size)
+	h := 4 + lineHeight(14) + lineHeight(8) + float64(len(lines))*lh + 3
+	h = max(h, 22)
+	d.need(h)
+	c := d.c
+	c.setDash()
+	c.setStroke(black)
+	c.setLineWidth(boxWeight(s))
+	c.setFill(paleGrey)
+	c.rect(d.left, d.y, d.width(), h, fillStroke)
+	d.drawStatusMark(d.left+6, d.y+(h-14)/2, 14, s)
+	y := d.y + 3
+	d.use(style{faceBold, 8, darkGrey})
+	c.drawText(textX, baseline(y, lineHeight(8), 8), strings.ToUpper(title))
+	y += lineHeight(8)
+	word := statusWord(s)
+	wordW := d.textWidthIn(style{faceBold, 14, black}, word)
+	c.drawText(textX, baseline(y, lineHeight(14), 14), word)
+	d.use(style{faceRegular, 9, darkGrey})
+	c.drawText(textX+wordW+5, baseline(y, lineHeight(14), 14)-0.2, tally)
+	y += lineHeight(14)
+	d.use(body)
+	for _, ln := range lines {
+		c.drawText(textX, baseline(y, lh, body.size), ln)
+		y += lh
+	}
+	d.y += h + 3
+}
+
+// boxWeight is the frame weight of a verdict box: heavier for worse.
+func boxWeight(s hazards.Status) float64 {
+	switch s {
+	case hazards.StatusFail:
+		return 1.2
+	case hazards.StatusCaution:
+		return 0.8
+	}
+	return 0.5
+}
+
+func (d *doc) textWidthIn(st style, s string) float64 {
+	d.use(st)
+	return d.c.textWidth(s)
+}
+
+// findingText is a finding's value, limit and margin as printed.
+type findingText struct{ value, limit, margin string }
+
+// atLeastCriteria are the criteria whose value must reach the limit; the
+// others must stay below it.
+var atLeastCriteria = map[string]bool{
+	hazards.CriterionUllage: true, hazards.CriterionBurst: true, hazards.CriterionImplosion: true,
+}
+
+// findingNumbers formats a finding's value, limit and margin.
+func findingNumbers(f hazards.Finding, fluid *fluids.Fluid) findingText {
+	rel := "≤ "
+	if atLeastCriteria[f.Criterion] {
+		rel = "≥ "
+	}
+	num := func(x float64) string {
+		switch f.Criterion {
+		case hazards.CriterionFailure:
+			return sig(x, 2)
+		case hazards.CriterionUllage:
+			return fixed(x, 1) + " %"
+		case hazards.CriterionBurst, hazards.CriterionImplosion:
+			if x >= hazards.SafetyFactorCap {
+				return "≥ " + sig(hazards.SafetyFactorCap, 4)
+			}
+			return sig(x, 3)
+		}
+		s := sig(x, 3)
+		if f.Unit != "" {
+			s += " " + f.Unit
+		}
+		return s
+	}
+	lim := plain(f.Limit)
+	if f.Criterion == hazards.CriterionUllage {
+		lim += " %"
+	} else if f.Unit != "" {
+		lim += " " + f.Unit
+	}
+	t := findingText{value: num(f.Value), limit: rel + lim, margin: margin(f.Margin, atLeastCriteria[f.Criterion])}
+	switch f.Criterion {
+	case hazards.CriterionUllage:
+		t.margin = signed(f.Margin, fixed(f.Margin*100, 1)) + " pts"
+	case hazards.CriterionCorrelationUse:
+		t = findingText{value: "extrapolated", limit: "within range", margin: noValue}
+	case hazards.CriterionNoLimit:
+		t.limit, t.margin = "none published", noValue
+	case hazards.CriterionFlammability:
+		if fluid == nil || !fluid.Flammability.Flammable {
+			t.value, t.margin = "not flammable", noValue
+		}
+	case hazards.CriterionBurst, hazards.CriterionImplosion:
+		if f.Value >= hazards.SafetyFactorCap {
+			t.margin = "no load"
+		}
+	}
+	if f.Criterion == hazards.CriterionFailure && f.Value == 0 {
+		t.value, t.margin = "0 (no load)", noValue
+	}
+	return t
+}
