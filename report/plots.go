@@ -182,7 +182,6 @@ func convertXY(pts []xy, xq, yq quantity) []xy {
 	return out
 }
 
-
 // limitLabel names a limit briefly: "STEL 16 ppm (EPA ECEL)".
 func limitLabel(l fluids.ExposureLimit) string {
 	who := l.Body + " " + l.Kind
