@@ -84,6 +84,7 @@ func (w *assessmentWriter) write() {
 	w.cautions()
 	w.provenance()
 	w.d.signOff(w.m.Reviewer)
+	w.calculationRecord()
 	w.d.finishPages()
 }
 

@@ -13,7 +13,11 @@ func (w *assessmentWriter) findings() {
 	d.heading("Findings")
 	for _, f := range w.a.Findings {
 		n := findingNumbers(f, w.a.Fluid)
-		d.findingBlock(f.Status, f.Title, "Value "+n.value+"   ·   Limit "+n.limit+"   ·   Margin "+n.margin, f.Message, "Source of the limit: "+f.Source)
+		source := "Source of the limit: " + f.Source
+		if steps := stepList(f.Steps); steps != "" {
+			source += ".  " + steps + "."
+		}
+		d.findingBlock(f.Status, f.Title, "Value "+n.value+"   ·   Limit "+n.limit+"   ·   Margin "+n.margin, f.Message, source)
 	}
 }
 

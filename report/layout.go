@@ -245,6 +245,17 @@ func (d *doc) subheading(title string) {
 	}})
 }
 
+// subheadingSmall queues a bold body-size heading, printed with the next
+// block.
+func (d *doc) subheadingSmall(title string) {
+	lh := lineHeight(bodyBold.size)
+	d.pending = append(d.pending, pendingHeading{gap: 1, height: lh + 0.3, draw: func() {
+		d.use(bodyBold)
+		d.c.drawText(d.left, baseline(d.y, lh, bodyBold.size), title)
+		d.y += lh + 0.3
+	}})
+}
+
 // lead queues an introductory paragraph, printed with the next block so
 // that it never stands alone at the foot of a page.
 func (d *doc) lead(s string) {

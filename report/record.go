@@ -1,0 +1,100 @@
+package report
+
+import (
+	"fmt"
+	"strconv"
+	"strings"
+
+	"ullage/hazards"
+)
+
+// calculationRecord prints the appendix that walks through the engine's
+// trace in the order a hand check follows: fluid properties, vessel
+// state, stresses, allowable stress, safety factor and failure
+// probability, limits, rupture, release, findings. Each step carries its
+// number so that a reviewer can write "checked, step 14" in the margin.
+// Values are printed in SI, as computed, with six significant figures.
+func (w *assessmentWriter) calculationRecord() {
+	d := w.d
+	if len(w.a.Trace) == 0 {
+		return
+	}
+	d.newPage()
+	d.heading("Appendix: Calculation record")
+	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding in section 7 lists the steps behind it.")
+	stage := ""
+	for _, s := range w.a.Trace {
+		if s.Stage != stage {
+			stage = s.Stage
+			d.subheading(stage)
+		}
+		w.traceStep(s)
+	}
+}
+
+func (w *assessmentWriter) traceStep(s hazards.Step) {
+	d := w.d
+	title := fmt.Sprintf("Step %d.  %s", s.Number, s.Title)
+	if s.Extrapolated {
+		title += "  ‡"
+	}
+	rows := [][]cell{
+		{{text: "Method", dim: true}, {text: s.Method}},
+		{{text: "Equation", dim: true}, {text: s.Equation, mono: true}},
+	}
+	for _, v := range s.Inputs {
+		rows = append(rows, []cell{{text: v.Symbol, dim: true}, {text: traceValue(v)}})
+	}
+	for _, v := range s.Intermediate {
+		rows = append(rows, []cell{{text: v.Symbol, dim: true, italic: true}, {text: traceValue(v), italic: true}})
+	}
+	rows = append(rows, []cell{{text: "Result", bold: true}, {text: traceValue(s.Result), bold: true}})
+	if s.Root != nil {
+		r := s.Root
+		text := fmt.Sprintf("solved %s over [%s, %s] %s, tolerance %s, residual %s, %d evaluations (%s)",
+			r.Equation, g6(r.Lo), g6(r.Hi), r.Unit, g6(r.Tolerance), g6(r.Residual), r.Evaluations, r.Bound)
+		rows = append(rows, []cell{{text: "Root", dim: true}, {text: text}})
+	}
+	rows = append(rows, []cell{{text: "Source", dim: true}, {text: s.Source, italic: true}})
+	if s.Note != "" {
+		rows = append(rows, []cell{{text: "Note", dim: true}, {text: s.Note, italic: true}})
+	}
+	d.subheadingSmall(title)
+	d.drawTable(table{cols: []col{{"", 0.22, 'L'}, {"", 0.78, 'L'}}, rows: rows, noHeader: true, size: 7.5, keep: 3})
+	d.space(1.5)
+}
+
+// traceValue prints a value with its unit and source.
+func traceValue(v hazards.Value) string {
+	s := g6(v.Value)
+	if v.Unit != "" {
+		s += " " + v.Unit
+	}
+	if v.Source != "" {
+		s += "   [" + v.Source + "]"
+	}
+	return s
+}
+
+// g6 formats a number to six significant figures, enough to repeat a
+// step by hand.
+func g6(x float64) string {
+	s := strconv.FormatFloat(x, 'g', 6, 64)
+	return strings.Replace(s, "e", "×10^", 1)
+}
+
+// stepList is "steps 41, 22, 21" for a finding.
+func stepList(steps []int) string {
+	if len(steps) == 0 {
+		return ""
+	}
+	parts := make([]string, len(steps))
+	for i, n := range steps {
+		parts[i] = strconv.Itoa(n)
+	}
+	word := "steps"
+	if len(steps) == 1 {
+		word = "step"
+	}
+	return "Working: calculation record, " + word + " " + strings.Join(parts, ", ")
+}
