@@ -170,7 +170,6 @@ func (d *Design) Validate() error {
 
 func (v *Vessel) validate(c *checker) {
 	c.number("vessel.internal_volume_m3", v.InternalVolumeM3, 0, 0.1, "m³ (0 means compute from the parts)")
-	c.number("vessel.volume_tolerance_m3", v.VolumeToleranceM3, 0, math.Max(v.InternalVolumeM3, 0.1)*0.5, "m³")
 	if len(v.Parts) == 0 {
 		c.fail("vessel.parts", "[]", "describe at least one sphere or tube")
 	}
@@ -196,6 +195,9 @@ func (v *Vessel) validate(c *checker) {
 	}
 	if c.err == nil && v.InternalVolumeM3 == 0 && v.PartsVolume() <= 0 {
 		c.fail("vessel.parts", "", "give the parts an internal volume")
+	}
+	if c.err == nil {
+		c.number("vessel.volume_tolerance_m3", v.VolumeToleranceM3, 0, 0.5*math.Max(v.InternalVolumeM3, v.PartsVolume()), "m³ (at most half the internal volume)")
 	}
 }
 

@@ -1,0 +1,27 @@
+package tolerance
+
+import "testing"
+
+func TestHistogram(t *testing.T) {
+	x := []float64{-1, 0, 0.01, 0.5, 0.99, 1, 2}
+	h := newHistogram(x, 0, 1)
+	if len(h.Edges) != HistogramBins+1 || len(h.Counts) != HistogramBins {
+		t.Fatalf("histogram has %d edges and %d counts, want %d and %d", len(h.Edges), len(h.Counts), HistogramBins+1, HistogramBins)
+	}
+	if h.Edges[0] != 0 || h.Edges[HistogramBins] != 1 {
+		t.Errorf("edges run %g to %g, want 0 to 1", h.Edges[0], h.Edges[HistogramBins])
+	}
+	// 0 and 0.01 fall in the first bin (width 0.025), 0.5 in bin 20,
+	// 0.99 and the upper edge 1 in the last.
+	want := map[int]int{0: 2, 20: 1, HistogramBins - 1: 2}
+	total := 0
+	for i, c := range h.Counts {
+		total += c
+		if c != want[i] {
+			t.Errorf("bin %d [%g, %g) holds %d, want %d", i, h.Edges[i], h.Edges[i+1], c, want[i])
+		}
+	}
+	if h.Below != 1 || h.Above != 1 || total+h.Below+h.Above != len(x) {
+		t.Errorf("below %d, above %d, in bins %d: want 1, 1 and %d", h.Below, h.Above, total, len(x)-2)
+	}
+}
