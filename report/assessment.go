@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"ullage/hazards"
+	"ullage/hazards/tolerance"
 )
 
 // WriteAssessment writes the PDF record of one assessed revision to w: a
@@ -39,7 +40,7 @@ func WriteAssessment(w io.Writer, m Meta, a *hazards.Assessment, o Options) erro
 	info.fixedDate = o.creationDate(m)
 	c := newCanvas(o.Paper, info)
 	d := newDoc(c, newUnitSystem(o.Units), "Hazard assessment · "+recordName(m)+" · "+recordDate(m), footerText(m))
-	aw := &assessmentWriter{d: d, m: m, a: a, u: d.u}
+	aw := &assessmentWriter{d: d, m: m, a: a, u: d.u, tol: o.Tolerance}
 	aw.write()
 	if err := c.err(); err != nil {
 		return fmt.Errorf("report: drawing the assessment: %w", err)
@@ -68,6 +69,8 @@ type assessmentWriter struct {
 	m Meta
 	a *hazards.Assessment
 	u unitSystem
+	// tol is the tolerance study to print, or nil.
+	tol *tolerance.Result
 }
 
 func (w *assessmentWriter) write() {
@@ -81,6 +84,7 @@ func (w *assessmentWriter) write() {
 	w.rupture()
 	w.release()
 	w.findings()
+	w.toleranceStudy()
 	w.cautions()
 	w.provenance()
 	w.d.signOff(w.m.Reviewer)

@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"time"
+
+	"ullage/hazards/tolerance"
 )
 
 // Meta identifies the record: the product, the revision being reviewed and
@@ -41,6 +43,9 @@ type Options struct {
 	// FixedDate when that is zero) and sorts the PDF catalogue, so that the
 	// same inputs give a byte-identical file.
 	Deterministic bool
+	// Tolerance, when not nil, adds the sampled tolerance study of the
+	// same design as a section of the assessment record.
+	Tolerance *tolerance.Result
 }
 
 // FixedDate is the creation date written in Deterministic mode when the

@@ -2,6 +2,7 @@ package cli
 
 import (
 	"bytes"
+	"context"
 	"encoding/json"
 	"fmt"
 	"io"
@@ -15,6 +16,7 @@ import (
 	"ullage/fluids"
 	"ullage/hazards"
 	"ullage/hazards/designfile"
+	"ullage/hazards/tolerance"
 	"ullage/report"
 )
 
@@ -24,10 +26,11 @@ type checked struct {
 	file       *designfile.File
 	revision   *designfile.Revision
 	assessment *hazards.Assessment
+	tolerance  *tolerance.Result
 }
 
 func runCheck(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs(args, []string{"json", "trace"}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids"})
+	o, err := parseArgs(args, []string{"json", "trace"}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids", "samples", "seed", "hot-spread-k"})
 	if err != nil {
 		return usageError(stderr, "check", err)
 	}
@@ -49,6 +52,10 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return usageError(stderr, "check", err)
 	}
+	study, err := studySettings(o)
+	if err != nil {
+		return usageError(stderr, "check", err)
+	}
 	pdfPath := o.value("pdf", "")
 	if pdfPath != "" && len(paths) != 1 {
 		return usageError(stderr, "check", fmt.Errorf("--pdf writes one record: name exactly one design file (%d given)", len(paths)))
@@ -57,6 +64,12 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	bad := 0
 	for _, p := range paths {
 		c, err := checkOne(p, o.value("rev", ""), lib)
+		if err == nil && study != nil {
+			c.tolerance, err = tolerance.Run(context.Background(), c.revision.Design, lib, *study)
+			if err != nil {
+				err = fmt.Errorf("%s: tolerance study: %w", p, err)
+			}
+		}
 		if err != nil {
 			fmt.Fprintf(stderr, "ullage check: %v\n", err)
 			bad++
@@ -71,6 +84,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		}
 		c := results[0]
 		var buf bytes.Buffer
+		ro.Tolerance = c.tolerance
 		if err := report.WriteAssessment(&buf, recordMeta(c.file, c.revision, o), c.assessment, ro); err != nil {
 			fmt.Fprintf(stderr, "ullage check: writing the record: %v\n", err)
 			return ExitUsage
@@ -122,6 +136,36 @@ func checkOne(path, rev string, lib *fluids.Library) (checked, error) {
 
 // expandPaths replaces each folder by the design files (*.json) in it,
 // sorted by name.
+// studySettings reads --samples, --seed and --hot-spread-k; nil when no
+// tolerance study was asked for.
+func studySettings(o *options) (*tolerance.Settings, error) {
+	n, err := o.integer("samples", 0)
+	if err != nil {
+		return nil, err
+	}
+	if _, given := o.values["samples"]; !given {
+		if _, s := o.values["seed"]; s {
+			return nil, fmt.Errorf("--seed needs --samples")
+		}
+		return nil, nil
+	}
+	if n < 1 || n > tolerance.MaxSamples {
+		return nil, fmt.Errorf("--samples %d: give 1 to %d units", n, tolerance.MaxSamples)
+	}
+	seed, err := o.integer("seed", 1)
+	if err != nil {
+		return nil, err
+	}
+	if seed < 0 {
+		return nil, fmt.Errorf("--seed %d: give a whole number of zero or more", seed)
+	}
+	spread, _, err := o.float("hot-spread-k")
+	if err != nil {
+		return nil, err
+	}
+	return &tolerance.Settings{Samples: n, Seed: uint64(seed), HottestSpreadK: spread}, nil
+}
+
 func expandPaths(args []string) ([]string, error) {
 	var out []string
 	for _, a := range args {
@@ -240,7 +284,22 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(string(f.Status)), f.Title, f.Message)
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
+	if r := c.tolerance; r != nil {
+		fmt.Fprintf(w, "\ntolerance study: %d units, seed %d\n", r.Samples, r.Seed)
+		fmt.Fprintf(w, "  liquid-full below the hottest  %s\n", proportionText(r.LiquidFullFraction))
+		fmt.Fprintf(w, "  burst over the service life    %s\n", proportionText(r.BurstFraction))
+		if r.ExposureLimited {
+			fmt.Fprintf(w, "  release above a limit          %s\n", proportionText(r.ExposureExceedFraction))
+		}
+		if len(r.Sensitivity) > 0 {
+			fmt.Fprintf(w, "  strongest driver of the margin %s (rank correlation %+.2f)\n", r.Sensitivity[0].Label, r.Sensitivity[0].RankCorrelation)
+		}
+	}
 	fmt.Fprintf(w, "\n%s\n", hazards.StandardCautions[0])
+}
+
+func proportionText(p tolerance.Proportion) string {
+	return fmt.Sprintf("%d of %d (%.3g %%, 95 %% interval %.3g – %.3g %%)", p.Count, p.Total, 100*p.Estimate, 100*p.Low, 100*p.High)
 }
 
 func trim(s string, n int) string {

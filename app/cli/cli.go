@@ -71,6 +71,9 @@ Usage:
       --paper a4|letter paper size of the PDF (default a4)
       --reviewer NAME   reviewer printed on the PDF
       --trace           add the calculation record to the --json output
+      --samples N       add a tolerance study of N sampled units
+      --seed S          seed of the study (default 1; same seed, same answer)
+      --hot-spread-k K  ± spread of the hottest temperature in the study
       --fluids FILE     add fluids from a JSON file of your own
   ullage compare A.json B.json [flags]     compare the latest revisions of two files
   ullage compare FILE --rev X --rev Y      compare two revisions of one file

@@ -192,3 +192,44 @@ func TestTraceInJSON(t *testing.T) {
 		t.Errorf("--trace without --json: exit %d, want %d", code, ExitUsage)
 	}
 }
+
+// TestToleranceStudyJSON: check --samples adds the study with its
+// intervals, and the same seed gives the same answer.
+func TestToleranceStudyJSON(t *testing.T) {
+	runStudy := func(seed string) map[string]any {
+		code, out, errs := run("check", "--json", "--samples", "4000", "--seed", seed, "--rev", "A", "testdata/good.json")
+		if code != ExitFail {
+			t.Fatalf("exit %d: %s", code, errs)
+		}
+		var m map[string]any
+		if err := json.Unmarshal([]byte(out), &m); err != nil {
+			t.Fatal(err)
+		}
+		tol, ok := m["tolerance"].(map[string]any)
+		if !ok {
+			t.Fatalf("no tolerance block in %s", out)
+		}
+		return tol
+	}
+	a, b := runStudy("7"), runStudy("7")
+	for _, k := range []string{"liquid_full_fraction", "burst_fraction", "exposure_exceed_fraction", "pressure_pa", "safety_factor", "sensitivity", "histogram"} {
+		if _, ok := a[k]; !ok {
+			t.Errorf("tolerance lacks %q", k)
+		}
+	}
+	ja, _ := json.Marshal(a)
+	jb, _ := json.Marshal(b)
+	if string(ja) != string(jb) {
+		t.Error("same seed gave different studies")
+	}
+	lf := a["liquid_full_fraction"].(map[string]any)
+	if est := lf["estimate"].(float64); est < 0.5 {
+		t.Errorf("revision A goes liquid-full at its nominal fill; the study says only %.3g of units do", est)
+	}
+	for _, bad := range [][]string{{"--samples", "0"}, {"--samples", "many"}, {"--seed", "3"}} {
+		args := append([]string{"check", "testdata/good.json"}, bad...)
+		if code, _, _ := run(args...); code != ExitUsage {
+			t.Errorf("%v: exit %d, want %d", bad, code, ExitUsage)
+		}
+	}
+}

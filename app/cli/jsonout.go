@@ -5,6 +5,7 @@ import (
 
 	"ullage/fluids/units"
 	"ullage/hazards"
+	"ullage/hazards/tolerance"
 )
 
 // designJSON is the stable, documented JSON form of one checked design.
@@ -36,6 +37,8 @@ type designJSON struct {
 	Extrapolated           bool          `json:"extrapolated"`
 	Findings               []findingJSON `json:"findings"`
 	Cautions               []string      `json:"cautions"`
+	// Tolerance is the sampled tolerance study, included with --samples.
+	Tolerance *tolerance.Result `json:"tolerance,omitempty"`
 	// Trace is the calculation record, included with --trace.
 	Trace []hazards.Step `json:"trace,omitempty"`
 }
@@ -91,6 +94,7 @@ func checkJSON(c checked) designJSON {
 		PercentLFL:             round(a.Release.PercentLFL, 6),
 		Extrapolated:           a.Flags.Extrapolated(),
 		Cautions:               a.Cautions,
+		Tolerance:              c.tolerance,
 	}
 	if a.LiquidFullReached {
 		t := round(units.KelvinToCelsius(a.LiquidFullK), 6)
