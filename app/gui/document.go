@@ -1,0 +1,211 @@
+package gui
+
+import (
+	"bytes"
+	"encoding/json"
+	"fmt"
+	"path/filepath"
+	"slices"
+	"time"
+
+	"ullage/assets"
+	"ullage/hazards"
+	"ullage/hazards/designfile"
+)
+
+// document is the plain state of what the reviewer is working on: the
+// design file (product and revision history), where it lives, and the
+// working copy of the design being edited.
+type document struct {
+	// File is the product and its revisions as they will be saved.
+	File *designfile.File
+	// Path is where the file lives; "" for the bundled example or a new
+	// file that has never been saved.
+	Path string
+	// Name is what the window title calls the file.
+	Name string
+	// Base is the label of the revision the working copy started from.
+	Base string
+	// Work is the working copy of the design, edited by the form.
+	Work hazards.Design
+	// saved is the encoded file at the last load or save; it tells
+	// whether the product or the revision list changed since.
+	saved []byte
+}
+
+// newDocument wraps a loaded file, taking the newest revision as the
+// working copy.
+func newDocument(f *designfile.File, path, name string) (*document, error) {
+	latest, err := f.Latest()
+	if err != nil {
+		return nil, err
+	}
+	d := &document{File: f, Path: path, Name: name}
+	d.setWork(latest)
+	d.markSaved()
+	return d, nil
+}
+
+// exampleDocument opens the bundled example; it has no path, so saving
+// it asks where.
+func exampleDocument() (*document, error) {
+	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	if err != nil {
+		return nil, fmt.Errorf("the bundled example does not load: %w", err)
+	}
+	return newDocument(f, "", assets.ExampleName+" (example)")
+}
+
+// newBlankDocument starts a new product with no revision yet; its working
+// copy starts from the bundled example's newest design with the given
+// review criteria.
+func newBlankDocument(criteria hazards.Criteria) (*document, error) {
+	ex, err := exampleDocument()
+	if err != nil {
+		return nil, err
+	}
+	work := cloneDesign(ex.Work)
+	work.Criteria = criteria
+	work.Criteria.LimitBodies = nil
+	f := &designfile.File{Format: designfile.FormatCurrent, Product: designfile.Product{Name: "New product"}}
+	return &document{File: f, Name: "new design", Work: work}, nil
+}
+
+// loadDocument opens a design file from disk.
+func loadDocument(path string) (*document, error) {
+	f, err := designfile.Load(path)
+	if err != nil {
+		return nil, err
+	}
+	return newDocument(f, path, filepath.Base(path))
+}
+
+// exampleDesignForChecks returns a valid design, used to validate a part
+// of a design (the criteria) on its own.
+func exampleDesignForChecks() hazards.Design {
+	doc, err := exampleDocument()
+	if err != nil {
+		return hazards.Design{}
+	}
+	return doc.Work
+}
+
+// setWork makes a copy of a revision's design the working copy.
+func (d *document) setWork(r *designfile.Revision) {
+	d.Base = r.Label
+	d.Work = cloneDesign(r.Design)
+}
+
+// cloneDesign copies a design deeply, so that the copy shares no slice
+// or pointer with the original.
+func cloneDesign(x hazards.Design) hazards.Design {
+	x.Vessel.Parts = slices.Clone(x.Vessel.Parts)
+	x.Criteria.LimitBodies = slices.Clone(x.Criteria.LimitBodies)
+	if x.Glass.Custom != nil {
+		g := *x.Glass.Custom
+		x.Glass.Custom = &g
+	}
+	return x
+}
+
+// encoded returns the file as it would be written.
+func (d *document) encoded() []byte {
+	var b bytes.Buffer
+	if err := designfile.Encode(&b, d.File); err != nil {
+		return nil
+	}
+	return b.Bytes()
+}
+
+// markSaved records the file's current content as saved.
+func (d *document) markSaved() { d.saved = d.encoded() }
+
+// fileChanged reports whether the product or revision list changed since
+// the last load or save.
+func (d *document) fileChanged() bool { return !bytes.Equal(d.saved, d.encoded()) }
+
+// base returns the revision the working copy started from, or nil.
+func (d *document) base() *designfile.Revision {
+	r, err := d.File.Find(d.Base)
+	if err != nil {
+		return nil
+	}
+	return r
+}
+
+// workChanged reports whether the working copy differs from the revision
+// it started from.
+func (d *document) workChanged() bool {
+	b := d.base()
+	if b == nil {
+		return true
+	}
+	w := designfile.Revision{Design: d.Work}
+	return w.Fingerprint() != b.Fingerprint()
+}
+
+// dirty reports whether anything would be lost by closing now.
+func (d *document) dirty() bool { return d.fileChanged() || d.workChanged() }
+
+// newRevision returns a revision holding the working copy, dated today.
+func (d *document) newRevision(label, author, note string, now time.Time) designfile.Revision {
+	return designfile.Revision{
+		Label:      label,
+		Date:       now.Format("2006-01-02"),
+		Author:     author,
+		ChangeNote: note,
+		Design:     cloneDesign(d.Work),
+	}
+}
+
+// addRevision appends the working copy as a new revision and makes it the
+// base of the working copy. The file is checked as it would be on saving,
+// and left unchanged when the revision is refused.
+func (d *document) addRevision(r designfile.Revision) error {
+	trial := *d.File
+	trial.Revisions = slices.Clone(d.File.Revisions)
+	if err := trial.AddRevision(r); err != nil {
+		return err
+	}
+	if err := trial.Validate(); err != nil {
+		return err
+	}
+	d.File.Revisions = trial.Revisions
+	d.Base = r.Label
+	return nil
+}
+
+// snapshot is what autosave keeps of a document, enough to restore it
+// after a crash.
+type snapshot struct {
+	Path  string          `json:"path"`
+	Name  string          `json:"name"`
+	Base  string          `json:"base"`
+	Saved time.Time       `json:"saved"`
+	File  json.RawMessage `json:"file"`
+	Work  hazards.Design  `json:"work"`
+}
+
+// snapshotOf captures the document for autosave.
+func (d *document) snapshotOf(now time.Time) ([]byte, error) {
+	s := snapshot{Path: d.Path, Name: d.Name, Base: d.Base, Saved: now, File: d.encoded(), Work: d.Work}
+	return json.MarshalIndent(s, "", "  ")
+}
+
+// restoreSnapshot rebuilds a document from an autosaved snapshot. The
+// restored document counts as changed, so that it is saved on purpose.
+func restoreSnapshot(b []byte) (*document, time.Time, error) {
+	var s snapshot
+	if err := json.Unmarshal(b, &s); err != nil {
+		return nil, time.Time{}, fmt.Errorf("the recovered work cannot be read: %w", err)
+	}
+	f, err := designfile.Decode(bytes.NewReader(s.File), "recovered work")
+	if err != nil {
+		return nil, time.Time{}, err
+	}
+	d := &document{File: f, Path: s.Path, Name: s.Name, Base: s.Base, Work: cloneDesign(s.Work)}
+	if d.Name == "" {
+		d.Name = "recovered work"
+	}
+	return d, s.Saved, nil
+}

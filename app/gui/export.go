@@ -1,0 +1,150 @@
+package gui
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"strings"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/dialog"
+	"fyne.io/fyne/v2/storage"
+
+	"ullage/app/buildinfo"
+	"ullage/fluids"
+	"ullage/hazards/designfile"
+	"ullage/report"
+)
+
+// pdfFilter limits the export chooser to PDF files.
+var pdfFilter = storage.NewExtensionFileFilter([]string{".pdf"})
+
+// errNoResults: there are no current results to export.
+var errNoResults = errors.New("there are no current results to export: fix the marked inputs first")
+
+// recordMeta describes the working copy for a record: the revision it
+// is, or the revision it was changed from.
+func (s *session) recordMeta() report.Meta {
+	doc := s.doc
+	p := doc.File.Product
+	m := report.Meta{
+		Product: p.Name, PartNumber: p.PartNumber, Company: p.Company,
+		Reviewer: s.settings.Reviewer, Date: s.opts.now(),
+		ToolVersion: buildinfo.Version, FluidDataVersion: fluids.DataVersion,
+	}
+	work := designfile.Revision{Design: doc.Work}
+	m.Fingerprint = work.Fingerprint()
+	if b := doc.base(); b != nil {
+		m.Revision, m.RevisionDate, m.RevisionAuthor, m.ChangeNote = b.Label, b.Date, b.Author, b.ChangeNote
+		if doc.workChanged() {
+			m.Revision = b.Label + " with changes not yet kept as a revision"
+			m.ChangeNote = "Working copy changed from revision " + b.Label + "; not yet a revision of the design file."
+		}
+	} else {
+		m.Revision = "working copy"
+	}
+	return m
+}
+
+// revisionMeta describes a kept revision, or the working copy for "".
+func (s *session) revisionMeta(label string) report.Meta {
+	if label == "" {
+		return s.recordMeta()
+	}
+	m := s.recordMeta()
+	r, err := s.doc.File.Find(label)
+	if err != nil {
+		return m
+	}
+	m.Revision, m.RevisionDate, m.RevisionAuthor, m.ChangeNote = r.Label, r.Date, r.Author, r.ChangeNote
+	m.Fingerprint = r.Fingerprint()
+	return m
+}
+
+// writeAssessmentPDF writes the assessment record of the working copy;
+// both the Export menu and --smoke come through here.
+func (s *session) writeAssessmentPDF(w io.Writer) error {
+	if s.last.assessment == nil || s.stale() {
+		return errNoResults
+	}
+	var buf bytes.Buffer
+	if err := report.WriteAssessment(&buf, s.recordMeta(), s.last.assessment, s.settings.reportOptions()); err != nil {
+		return fmt.Errorf("the record could not be written: %w", err)
+	}
+	_, err := w.Write(buf.Bytes())
+	return err
+}
+
+// writeComparisonPDF writes the comparison record shown on the compare
+// screen.
+func (s *session) writeComparisonPDF(w io.Writer) error {
+	c, ok := s.cmp.current()
+	if !ok {
+		return errors.New("both sides of the comparison must be assessed before it can be exported")
+	}
+	la, lb := s.cmp.sideLabels()
+	var buf bytes.Buffer
+	if err := report.WriteComparison(&buf, s.revisionMeta(la), s.revisionMeta(lb), *c, s.settings.reportOptions()); err != nil {
+		return fmt.Errorf("the comparison record could not be written: %w", err)
+	}
+	_, err := w.Write(buf.Bytes())
+	return err
+}
+
+// exportAssessmentDialog asks where to write the assessment record.
+func (s *session) exportAssessmentDialog() {
+	if s.last.assessment == nil || s.stale() {
+		dialog.ShowError(errNoResults, s.win)
+		return
+	}
+	name := suggestedName(s.doc.File.Product.Name, "-rev-"+labelPart(s.doc.Base)+"-assessment", ".pdf")
+	s.exportDialog(name, s.writeAssessmentPDF)
+}
+
+// exportComparisonDialog asks where to write the comparison record.
+func (s *session) exportComparisonDialog() {
+	if _, ok := s.cmp.current(); !ok {
+		dialog.ShowError(errors.New("both sides of the comparison must be assessed before it can be exported"), s.win)
+		return
+	}
+	la, lb := s.cmp.sideLabels()
+	name := suggestedName(s.doc.File.Product.Name, "-rev-"+labelPart(la)+"-to-"+labelPart(lb), ".pdf")
+	s.exportDialog(name, s.writeComparisonPDF)
+}
+
+// labelPart is a revision label for a file name.
+func labelPart(l string) string {
+	if l == "" {
+		return "working"
+	}
+	return strings.ToLower(l)
+}
+
+// exportDialog shows a save chooser and writes a record through write.
+func (s *session) exportDialog(name string, write func(io.Writer) error) {
+	d := dialog.NewFileSave(func(w fyne.URIWriteCloser, err error) {
+		if err != nil {
+			dialog.ShowError(err, s.win)
+			return
+		}
+		if w == nil {
+			return
+		}
+		werr := write(w)
+		cerr := w.Close()
+		if werr == nil {
+			werr = cerr
+		}
+		if werr != nil {
+			dialog.ShowError(werr, s.win)
+			return
+		}
+		dialog.ShowInformation("Record written", "The PDF record was written to\n"+w.URI().Path(), s.win)
+	}, s.win)
+	d.SetFilter(pdfFilter)
+	d.SetFileName(name)
+	s.startIn(d)
+	d.Resize(fyne.NewSize(900, 600))
+	d.Show()
+}

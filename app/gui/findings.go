@@ -1,0 +1,149 @@
+package gui
+
+import (
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// findingsList is the table of findings, one row per criterion, with the
+// selected finding's message and source under it.
+type findingsList struct {
+	rows     []hazards.Finding
+	stale    bool
+	selected int
+
+	list   *widget.List
+	detail *widget.RichText
+	object fyne.CanvasObject
+}
+
+// Column widths of the findings table: status, criterion, value, limit,
+// margin (fractions of the width left after the status column).
+var findingColumns = columns{fractions: []float32{0, 0.44, 0.18, 0.20, 0.18}}
+
+const statusColumnWidth = 104
+
+func newFindingsList() *findingsList {
+	fl := &findingsList{selected: -1}
+	fl.list = widget.NewList(
+		func() int { return len(fl.rows) },
+		func() fyne.CanvasObject {
+			icon := widget.NewIcon(nil)
+			word := widget.NewLabelWithStyle("CAUTION", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+			status := container.New(fixedWidth{statusColumnWidth}, container.NewBorder(nil, nil, icon, nil, word))
+			cells := []fyne.CanvasObject{status}
+			for i := 0; i < 4; i++ {
+				l := widget.NewLabel("")
+				l.Truncation = fyne.TextTruncateEllipsis
+				cells = append(cells, l)
+			}
+			return container.New(findingColumns, cells...)
+		},
+		func(id widget.ListItemID, o fyne.CanvasObject) {
+			if id < 0 || id >= len(fl.rows) {
+				return
+			}
+			f := fl.rows[id]
+			cells := o.(*fyne.Container).Objects
+			status := cells[0].(*fyne.Container).Objects[0].(*fyne.Container)
+			status.Objects[1].(*widget.Icon).SetResource(statusIcon(f.Status))
+			word := status.Objects[0].(*widget.Label)
+			word.SetText(statusWord(f.Status))
+			word.Importance = statusImportance(f.Status, fl.stale)
+			word.Refresh()
+			cells[1].(*widget.Label).SetText(f.Title)
+			cells[2].(*widget.Label).SetText(findingValue(f, f.Value))
+			cells[3].(*widget.Label).SetText(findingLimit(f))
+			cells[4].(*widget.Label).SetText(findingMargin(f))
+		})
+	fl.list.OnSelected = func(id widget.ListItemID) {
+		fl.selected = id
+		fl.describe()
+	}
+	head := []fyne.CanvasObject{container.New(fixedWidth{statusColumnWidth}, bold("Status"))}
+	for _, h := range []string{"Criterion", "Value", "Limit", "Margin"} {
+		head = append(head, bold(h))
+	}
+	fl.detail = widget.NewRichText()
+	fl.detail.Wrapping = fyne.TextWrapWord
+	detail := container.NewVBox(widget.NewSeparator(), fl.detail)
+	fl.object = container.NewBorder(container.New(findingColumns, head...), detail, nil, nil, fl.list)
+	return fl
+}
+
+func bold(s string) *widget.Label {
+	return widget.NewLabelWithStyle(s, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+}
+
+// statusImportance colours a status word; out-of-date words are grey.
+func statusImportance(s hazards.Status, stale bool) widget.Importance {
+	if stale {
+		return widget.LowImportance
+	}
+	switch s {
+	case hazards.StatusPass:
+		return widget.SuccessImportance
+	case hazards.StatusCaution:
+		return widget.WarningImportance
+	case hazards.StatusFail:
+		return widget.DangerImportance
+	}
+	return widget.MediumImportance
+}
+
+// set shows new findings, keeping the selected criterion selected, or
+// selecting the first that is not a pass.
+func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
+	keep := ""
+	if fl.selected >= 0 && fl.selected < len(fl.rows) {
+		keep = fl.rows[fl.selected].Criterion
+	}
+	fl.rows, fl.stale = fs, stale
+	fl.selected = -1
+	for i, f := range fs {
+		if f.Criterion == keep {
+			fl.selected = i
+		}
+	}
+	if fl.selected < 0 {
+		for i, f := range fs {
+			if f.Status != hazards.StatusPass {
+				fl.selected = i
+				break
+			}
+		}
+	}
+	if fl.selected < 0 && len(fs) > 0 {
+		fl.selected = 0
+	}
+	fl.list.Refresh()
+	if fl.selected >= 0 {
+		fl.list.Select(fl.selected)
+	} else {
+		fl.list.UnselectAll()
+	}
+	fl.describe()
+}
+
+// describe shows the selected finding's message and limit source.
+func (fl *findingsList) describe() {
+	if fl.selected < 0 || fl.selected >= len(fl.rows) {
+		fl.detail.Segments = nil
+		fl.detail.Refresh()
+		return
+	}
+	f := fl.rows[fl.selected]
+	fl.detail.Segments = []widget.RichTextSegment{
+		&widget.TextSegment{Text: statusWord(f.Status) + " — " + f.Title + ". ", Style: widget.RichTextStyle{Inline: true, TextStyle: fyne.TextStyle{Bold: true}}},
+		&widget.TextSegment{Text: f.Message, Style: widget.RichTextStyleParagraph},
+		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
+	}
+	fl.detail.Refresh()
+}
+
+// detailText returns the selected finding's description as shown.
+func (fl *findingsList) detailText() string { return fl.detail.String() }

@@ -1,0 +1,257 @@
+package gui
+
+import (
+	"strings"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// designForm is the left-hand form: every input of the working copy,
+// grouped the way a reviewer goes through a design.
+type designForm struct {
+	s *session
+	// fields are the number fields outside the parts list, in form order;
+	// partFields those of the parts list, rebuilt with it.
+	fields     []*numField
+	partFields []*numField
+	byPath     map[string]*numField
+
+	product  *productSection
+	fluid    *fluidSection
+	vessel   *vesselSection
+	temps    *temperatureSection
+	room     *roomSection
+	criteria *criteriaSection
+
+	// scroll holds the sections; sections are their objects in order.
+	scroll   *container.Scroll
+	sections []fyne.CanvasObject
+
+	// general shows a problem that belongs to no single number field.
+	general    *widget.Label
+	generalRow *fyne.Container
+
+	object fyne.CanvasObject
+}
+
+// newDesignForm builds the form with all its sections.
+func newDesignForm(s *session) *designForm {
+	f := &designForm{s: s, byPath: map[string]*numField{}}
+	s.form = f
+	f.general = widget.NewLabel("")
+	f.general.Wrapping = fyne.TextWrapWord
+	f.general.Importance = widget.DangerImportance
+	f.generalRow = container.NewBorder(nil, nil, widget.NewIcon(theme.ErrorIcon()), nil, f.general)
+	f.generalRow.Hide()
+	f.sections = []fyne.CanvasObject{
+		newProductSection(f),
+		newFluidSection(f),
+		newVesselSection(f),
+		newTemperatureSection(f),
+		newRoomSection(f),
+		newCriteriaSection(f),
+	}
+	f.scroll = container.NewVScroll(container.NewVBox(f.sections...))
+	f.object = container.NewBorder(f.generalRow, nil, nil, nil, f.scroll)
+	return f
+}
+
+// reveal scrolls the form to the field a problem names and puts the
+// cursor in it.
+func (f *designForm) reveal(p *problem) {
+	if p == nil {
+		return
+	}
+	var target fyne.CanvasObject
+	var focus fyne.Focusable
+	if nf, ok := f.byPath[p.Path]; ok {
+		target, focus = nf.object, nf.entry
+	} else if p.Path == "fluid" {
+		target, focus = f.fluid.choose, f.fluid.choose
+	} else if strings.HasPrefix(p.Path, "glass") {
+		target, focus = f.vessel.glass, f.vessel.glass
+	} else if strings.HasPrefix(p.Path, "vessel.") {
+		target = f.vessel.parts
+	}
+	if target == nil {
+		return
+	}
+	d := fyne.CurrentApp().Driver()
+	y := d.AbsolutePositionForObject(target).Y - d.AbsolutePositionForObject(f.scroll.Content).Y
+	f.scroll.ScrollToOffset(fyne.NewPos(0, max(y-60, 0)))
+	if focus != nil {
+		if c := fyne.CurrentApp().Driver().CanvasForObject(f.scroll); c != nil {
+			c.Focus(focus)
+		}
+	}
+}
+
+// scrollTo brings section i (0 product … 5 criteria) to the top.
+func (f *designForm) scrollTo(i int) {
+	if i < 0 || i >= len(f.sections) {
+		return
+	}
+	f.scroll.ScrollToOffset(fyne.NewPos(0, f.sections[i].Position().Y))
+}
+
+// field creates a number field of the form and registers it.
+func (f *designForm) field(path, label string, q quantity, get func(*hazards.Design) float64, set func(*hazards.Design, float64)) *numField {
+	nf := newNumField(path, label, q, get, set, f.edited)
+	f.fields = append(f.fields, nf)
+	f.byPath[path] = nf
+	return nf
+}
+
+// edited handles a keystroke in a number field.
+func (f *designForm) edited(nf *numField) {
+	if f.s.loading {
+		return
+	}
+	ok := nf.read(&f.s.doc.Work, f.s.units())
+	if ok {
+		f.afterNumber(nf.path)
+	}
+	f.showProblems(f.s.problem)
+	f.s.edited()
+}
+
+// afterNumber keeps the preset selectors in step with typed values.
+func (f *designForm) afterNumber(path string) {
+	switch {
+	case path == "hottest_k" || path == "coldest_k":
+		f.temps.syncPresets()
+	case strings.HasPrefix(path, "room."):
+		f.room.typed()
+	case strings.HasPrefix(path, "vessel."):
+		f.vessel.updateVolume()
+	}
+}
+
+// load fills every widget from the document.
+func (f *designForm) load() {
+	d := &f.s.doc.Work
+	u := f.s.units()
+	f.product.load()
+	f.fluid.load()
+	f.vessel.load()
+	for _, nf := range f.fields {
+		nf.show(d, u)
+	}
+	f.temps.syncPresets()
+	f.room.load()
+	f.criteria.load()
+	f.showProblems(f.s.problem)
+}
+
+// updateHeader refreshes the line saying which revision is being edited.
+func (f *designForm) updateHeader() { f.product.updateHeader() }
+
+// all returns every number field in form order.
+func (f *designForm) all() []*numField {
+	out := make([]*numField, 0, len(f.fields)+len(f.partFields))
+	// the parts come after the fill and before the temperatures; the
+	// order only matters for which problem is named first.
+	out = append(out, f.fields...)
+	return append(out, f.partFields...)
+}
+
+// firstParseProblem returns the first field whose text is not a number.
+func (f *designForm) firstParseProblem() *numField {
+	for _, nf := range f.all() {
+		if nf.parseProblem != "" {
+			return nf
+		}
+	}
+	return nil
+}
+
+// quantityOf returns the quantity of the field at a JSON path.
+func (f *designForm) quantityOf(path string) (quantity, bool) {
+	if nf, ok := f.byPath[path]; ok {
+		return nf.q, true
+	}
+	return qNumber, false
+}
+
+// labelOf names the field at a JSON path for messages.
+func (f *designForm) labelOf(path string) string {
+	if nf, ok := f.byPath[path]; ok {
+		return nf.label
+	}
+	switch {
+	case path == "fluid":
+		return "Fluid"
+	case strings.HasPrefix(path, "glass"):
+		return "Glass"
+	case path == "vessel.parts":
+		return "Parts of the vessel"
+	case strings.HasPrefix(path, "criteria.limit_bodies"):
+		return "Bodies whose limits apply"
+	case path == "temperature":
+		return "Temperature"
+	}
+	return path
+}
+
+// showProblems marks every field: its own parse problem first, then the
+// engine's problem when it names this field. A problem that names no
+// field of the form is shown at the top of the form.
+func (f *designForm) showProblems(p *problem) {
+	placed := false
+	for _, nf := range f.all() {
+		msg := nf.parseProblem
+		if msg == "" && p != nil && p.Path == nf.path {
+			msg = p.Text
+		}
+		if p != nil && p.Path == nf.path {
+			placed = true
+		}
+		nf.setProblem(msg)
+	}
+	placed = f.fluid.showProblem(p) || placed
+	placed = f.vessel.showProblem(p) || placed
+	if p == nil || placed {
+		f.generalRow.Hide()
+		return
+	}
+	text := p.Text
+	if p.Path != "" {
+		text = f.labelOf(p.Path) + ": " + text
+	}
+	f.general.SetText(text)
+	f.generalRow.Show()
+}
+
+// section wraps a group of the form under a heading.
+func section(title string, objs ...fyne.CanvasObject) fyne.CanvasObject {
+	head := widget.NewLabelWithStyle(title, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	head.SizeName = theme.SizeNameSubHeadingText
+	items := append([]fyne.CanvasObject{head, widget.NewSeparator()}, objs...)
+	return container.NewVBox(append(items, widget.NewLabel(""))...)
+}
+
+// hint is a small wrapped note under a field: a source, a ground, a unit
+// explanation.
+func hint(text string) *widget.Label {
+	l := widget.NewLabel(text)
+	l.Wrapping = fyne.TextWrapWord
+	l.SizeName = theme.SizeNameCaptionText
+	return l
+}
+
+// indented places an object under the entry column of the form.
+func indented(o fyne.CanvasObject) fyne.CanvasObject {
+	return container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}), nil, o)
+}
+
+// labelled places a widget in the entry column with a label on the left.
+func labelled(label string, o fyne.CanvasObject) fyne.CanvasObject {
+	l := widget.NewLabel(label)
+	l.Truncation = fyne.TextTruncateEllipsis
+	return container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}, l), nil, o)
+}

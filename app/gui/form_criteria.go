@@ -1,0 +1,79 @@
+package gui
+
+import (
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// criteriaSection holds the review's pass marks, each with its grounds.
+type criteriaSection struct {
+	f      *designForm
+	fields []*numField
+}
+
+// criterionField describes one criterion on screen.
+type criterionField struct {
+	key   string
+	label string
+	q     quantity
+}
+
+// criterionFields lists the criteria in the order they are shown.
+var criterionFields = []criterionField{
+	{"min_burst_safety_factor", "Least burst safety factor", qNumber},
+	{"min_implosion_safety_factor", "Least implosion safety factor", qNumber},
+	{"max_failure_probability", "Highest failure probability", qProbability},
+	{"min_ullage_percent", "Least ullage at the hottest", qPercent},
+	{"max_fraction_of_limit", "Highest fraction of a limit", qNumber},
+	{"max_percent_lfl", "Highest share of the LFL", qPercent},
+}
+
+// newCriteriaSection builds the "Review criteria" group.
+func newCriteriaSection(f *designForm) fyne.CanvasObject {
+	c := &criteriaSection{f: f}
+	f.criteria = c
+	var objs []fyne.CanvasObject
+	for _, cf := range criterionFields {
+		get := criterionGetter(cf.key)
+		nf := f.field("criteria."+cf.key, cf.label, cf.q,
+			func(d *hazards.Design) float64 { return *get(&d.Criteria) },
+			func(d *hazards.Design, x float64) { *get(&d.Criteria) = x })
+		c.fields = append(c.fields, nf)
+		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cf.key])))
+	}
+	reset := widget.NewButtonWithIcon("Use my default criteria", theme.HistoryIcon(), c.useDefaults)
+	objs = append(objs, indented(container.NewHBox(reset)))
+	return section("Review criteria", objs...)
+}
+
+// criterionGetter returns the accessor of a criterion by its JSON key.
+func criterionGetter(key string) func(*hazards.Criteria) *float64 {
+	for _, cp := range criterionPrefs {
+		if cp.key == key {
+			return cp.get
+		}
+	}
+	panic("gui: unknown criterion " + key)
+}
+
+// load is a no-op: the criteria are number fields filled with the rest.
+func (c *criteriaSection) load() {}
+
+// useDefaults replaces the criteria by the reviewer's defaults.
+func (c *criteriaSection) useDefaults() {
+	s := c.f.s
+	bodies := s.doc.Work.Criteria.LimitBodies
+	s.doc.Work.Criteria = s.settings.Criteria
+	s.doc.Work.Criteria.LimitBodies = bodies
+	s.loading = true
+	for _, nf := range c.fields {
+		nf.show(&s.doc.Work, s.units())
+	}
+	s.loading = false
+	c.f.showProblems(s.problem)
+	s.edited()
+}

@@ -1,0 +1,93 @@
+package gui
+
+import (
+	"fmt"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards/designfile"
+)
+
+// productSection names the product and says which revision the working
+// copy is based on.
+type productSection struct {
+	f                            *designForm
+	name, partNo, company, descr *widget.Entry
+	header                       *widget.Label
+	changed                      *widget.Label
+}
+
+// newProductSection builds the "Product and revision" group.
+func newProductSection(f *designForm) fyne.CanvasObject {
+	p := &productSection{f: f}
+	f.product = p
+	entry := func(set func(string)) *widget.Entry {
+		e := widget.NewEntry()
+		e.OnChanged = func(t string) {
+			if f.s.loading {
+				return
+			}
+			set(t)
+			f.s.edited()
+		}
+		return e
+	}
+	prod := func() *designfile.Product { return &f.s.doc.File.Product }
+	p.name = entry(func(t string) { prod().Name = t })
+	p.partNo = entry(func(t string) { prod().PartNumber = t })
+	p.company = entry(func(t string) { prod().Company = t })
+	p.descr = entry(func(t string) { prod().Description = t })
+	p.descr.MultiLine = true
+	p.descr.Wrapping = fyne.TextWrapWord
+	p.descr.SetMinRowsVisible(2)
+	p.header = widget.NewLabel("")
+	p.header.Wrapping = fyne.TextWrapWord
+	p.changed = widget.NewLabel("")
+	p.changed.TextStyle = fyne.TextStyle{Bold: true}
+	keep := widget.NewButtonWithIcon("Keep as a new revision…", theme.DocumentSaveIcon(), func() { f.s.revs.askNewRevision(nil) })
+	return section("Product and revision",
+		labelled("Product", p.name),
+		labelled("Part number", p.partNo),
+		labelled("Company", p.company),
+		labelled("Description", p.descr),
+		indented(p.header),
+		indented(container.NewBorder(nil, nil, nil, keep, p.changed)),
+	)
+}
+
+// load fills the product entries.
+func (p *productSection) load() {
+	pr := p.f.s.doc.File.Product
+	p.name.SetText(pr.Name)
+	p.partNo.SetText(pr.PartNumber)
+	p.company.SetText(pr.Company)
+	p.descr.SetText(pr.Description)
+	p.updateHeader()
+}
+
+// updateHeader says which revision the working copy is based on and
+// whether it has changed since.
+func (p *productSection) updateHeader() {
+	doc := p.f.s.doc
+	b := doc.base()
+	if b == nil {
+		p.header.SetText("Working copy, not yet kept as a revision.")
+	} else {
+		note := b.ChangeNote
+		if note == "" {
+			note = "no change note"
+		}
+		p.header.SetText(fmt.Sprintf("Working copy of revision %s (%s, %s): %s", b.Label, b.Date, b.Author, note))
+	}
+	switch {
+	case b == nil:
+		p.changed.SetText("Not yet a revision")
+	case doc.workChanged():
+		p.changed.SetText("Changed since revision " + b.Label)
+	default:
+		p.changed.SetText("Same as revision " + b.Label)
+	}
+}

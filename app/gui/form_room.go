@@ -1,0 +1,162 @@
+package gui
+
+import (
+	"math"
+	"strings"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// customRoom is the preset choice for a room described by the reviewer.
+const customRoom = "Your own room"
+
+// limitBodies are the bodies whose exposure limits a review may apply.
+var limitBodies = []string{"NIOSH", "OSHA", "EPA", "AIHA", "ACGIH"}
+
+// roomSection is the release scenario: the room a broken device empties
+// into, and whose exposure limits apply.
+type roomSection struct {
+	f       *designForm
+	presets []hazards.RoomPreset
+	pick    *widget.Select
+	source  *widget.Label
+	fields  []*numField
+	bodies  *widget.CheckGroup
+}
+
+// newRoomSection builds the "Release into a room" group.
+func newRoomSection(f *designForm) fyne.CanvasObject {
+	r := &roomSection{f: f}
+	f.room = r
+	r.presets, _ = hazards.RoomPresets()
+	opts := []string{customRoom}
+	for _, p := range r.presets {
+		opts = append(opts, p.Name)
+	}
+	r.source = hint("")
+	r.pick = widget.NewSelect(opts, func(opt string) {
+		if f.s.loading {
+			return
+		}
+		d := &f.s.doc.Work
+		if p, ok := r.byName(opt); ok {
+			d.Room = p.Room(d.Room.ExposureMinutes)
+			f.s.loading = true
+			for _, nf := range r.fields {
+				nf.show(d, f.s.units())
+			}
+			f.s.loading = false
+		} else {
+			d.Room.PresetID = ""
+		}
+		r.describe()
+		f.showProblems(f.s.problem)
+		f.s.edited()
+	})
+	rf := func(path, label string, q quantity, get func(*hazards.Room) float64, set func(*hazards.Room, float64)) *numField {
+		nf := f.field(path, label, q,
+			func(d *hazards.Design) float64 { return get(&d.Room) },
+			func(d *hazards.Design, x float64) { set(&d.Room, x) })
+		r.fields = append(r.fields, nf)
+		return nf
+	}
+	vol := rf("room.volume_m3", "Room volume", qRoomVolume, func(r *hazards.Room) float64 { return r.VolumeM3 }, func(r *hazards.Room, x float64) { r.VolumeM3 = x })
+	ach := rf("room.air_changes_per_hour", "Air changes", qPerHour, func(r *hazards.Room) float64 { return r.AirChangesPerHour }, func(r *hazards.Room, x float64) { r.AirChangesPerHour = x })
+	mix := rf("room.mixing_factor", "Mixing factor", qNumber, func(r *hazards.Room) float64 { return r.MixingFactor }, func(r *hazards.Room, x float64) { r.MixingFactor = x })
+	nfr := rf("room.near_field_radius_m", "Near-field radius", qRoomLength, func(r *hazards.Room) float64 { return r.NearFieldRadiusM }, func(r *hazards.Room, x float64) { r.NearFieldRadiusM = x })
+	nfs := rf("room.near_field_air_speed_m_s", "Air speed near the breakage", qAirSpeed, func(r *hazards.Room) float64 { return r.NearFieldAirSpeed }, func(r *hazards.Room, x float64) { r.NearFieldAirSpeed = x })
+	exp := rf("room.exposure_minutes", "Time a person stays", qMinutes, func(r *hazards.Room) float64 { return r.ExposureMinutes }, func(r *hazards.Room, x float64) { r.ExposureMinutes = x })
+	r.bodies = widget.NewCheckGroup(limitBodies, func(sel []string) {
+		if f.s.loading {
+			return
+		}
+		// keep the bodies in their usual order
+		var out []string
+		for _, b := range limitBodies {
+			for _, s := range sel {
+				if s == b {
+					out = append(out, b)
+				}
+			}
+		}
+		f.s.doc.Work.Criteria.LimitBodies = out
+		f.s.edited()
+	})
+	r.bodies.Horizontal = true
+	return section("Release into a room",
+		labelled("Room", r.pick), indented(r.source),
+		vol.object, ach.object,
+		mix.object, indented(hint("1 = perfectly mixed; larger values slow the removal of vapour by ventilation.")),
+		nfr.object, nfs.object, exp.object,
+		labelled("Limits from", r.bodies),
+		indented(hint("None ticked: the limits of every body apply and the most protective governs.")),
+	)
+}
+
+func (r *roomSection) byName(name string) (hazards.RoomPreset, bool) {
+	for _, p := range r.presets {
+		if p.Name == name {
+			return p, true
+		}
+	}
+	return hazards.RoomPreset{}, false
+}
+
+func (r *roomSection) byID(id string) (hazards.RoomPreset, bool) {
+	for _, p := range r.presets {
+		if p.ID == id {
+			return p, true
+		}
+	}
+	return hazards.RoomPreset{}, false
+}
+
+// load selects the room's preset and the limit bodies.
+func (r *roomSection) load() {
+	d := &r.f.s.doc.Work
+	choice := customRoom
+	if p, ok := r.byID(d.Room.PresetID); ok {
+		choice = p.Name
+	}
+	r.pick.SetSelected(choice)
+	r.bodies.SetSelected(append([]string(nil), d.Criteria.LimitBodies...))
+	r.describe()
+}
+
+// typed is called after a room value was typed: a room that no longer
+// matches its preset becomes the reviewer's own.
+func (r *roomSection) typed() {
+	d := &r.f.s.doc.Work
+	p, ok := r.byID(d.Room.PresetID)
+	if !ok {
+		return
+	}
+	want := p.Room(d.Room.ExposureMinutes)
+	same := func(a, b float64) bool { return math.Abs(a-b) <= 1e-9*math.Max(1, math.Abs(b)) }
+	if same(want.VolumeM3, d.Room.VolumeM3) && same(want.AirChangesPerHour, d.Room.AirChangesPerHour) &&
+		same(want.MixingFactor, d.Room.MixingFactor) && same(want.NearFieldRadiusM, d.Room.NearFieldRadiusM) &&
+		same(want.NearFieldAirSpeed, d.Room.NearFieldAirSpeed) {
+		return
+	}
+	d.Room.PresetID = ""
+	r.f.s.loading = true
+	r.pick.SetSelected(customRoom)
+	r.f.s.loading = false
+	r.describe()
+}
+
+// describe shows the preset's note and the source of each value.
+func (r *roomSection) describe() {
+	p, ok := r.byName(r.pick.Selected)
+	if !ok {
+		r.source.SetText("Your own room: state its grounds in the change note.")
+		return
+	}
+	var b strings.Builder
+	b.WriteString(p.Note)
+	b.WriteString(" Volume: " + p.Volume.Source + ". Air changes: " + p.AirChangesPerHour.Source + ". Mixing: " + p.MixingFactor.Source + ".")
+	r.source.SetText(b.String())
+}

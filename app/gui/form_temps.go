@@ -1,0 +1,138 @@
+package gui
+
+import (
+	"math"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// customValue is the preset choice for a value typed by the reviewer.
+const customValue = "Your own value"
+
+// temperatureSection holds the temperatures the device meets, with the
+// named presets and their sources, and its service.
+type temperatureSection struct {
+	f                     *designForm
+	presets               []hazards.TemperaturePreset
+	hotPick, coldPick     *widget.Select
+	hotSource, coldSource *widget.Label
+	hot, cold             *numField
+}
+
+// newTemperatureSection builds the "Temperatures and service" group.
+func newTemperatureSection(f *designForm) fyne.CanvasObject {
+	t := &temperatureSection{f: f}
+	f.temps = t
+	t.presets, _ = hazards.TemperaturePresets()
+	t.hot = f.field("hottest_k", "Hottest temperature", qTemperature,
+		func(d *hazards.Design) float64 { return d.HottestK },
+		func(d *hazards.Design, x float64) { d.HottestK = x })
+	t.cold = f.field("coldest_k", "Coldest temperature", qTemperature,
+		func(d *hazards.Design) float64 { return d.ColdestK },
+		func(d *hazards.Design, x float64) { d.ColdestK = x })
+	t.hotPick, t.hotSource = t.picker("hottest", t.hot)
+	t.coldPick, t.coldSource = t.picker("coldest", t.cold)
+	seal := f.field("sealing_temperature_k", "Sealing temperature", qTemperature,
+		func(d *hazards.Design) float64 { return d.SealingTemperatureK },
+		func(d *hazards.Design, x float64) { d.SealingTemperatureK = x })
+	gas := f.field("residual_gas_pressure_pa", "Residual air when sealed", qPressure,
+		func(d *hazards.Design) float64 { return d.ResidualGasPressurePa },
+		func(d *hazards.Design, x float64) { d.ResidualGasPressurePa = x })
+	amb := f.field("ambient_pressure_pa", "Outside pressure", qPressure,
+		func(d *hazards.Design) float64 { return d.AmbientPressurePa },
+		func(d *hazards.Design, x float64) { d.AmbientPressurePa = x })
+	life := f.field("service_life_years", "Service life", qYears,
+		func(d *hazards.Design) float64 { return d.ServiceLifeYears },
+		func(d *hazards.Design, x float64) { d.ServiceLifeYears = x })
+	hours := f.field("hours_at_hottest", "Time at the hottest, in all", qHours,
+		func(d *hazards.Design) float64 { return d.HoursAtHottest },
+		func(d *hazards.Design, x float64) { d.HoursAtHottest = x })
+	return section("Temperatures and service",
+		labelled("Hottest it will meet", t.hotPick), t.hot.object, indented(t.hotSource),
+		labelled("Coldest it will meet", t.coldPick), t.cold.object, indented(t.coldSource),
+		seal.object, indented(hint("Temperature of the fill when the glass was flame-sealed.")),
+		gas.object, indented(hint("Partial pressure of air left inside at the sealing temperature; 0 for a fully evacuated vessel.")),
+		amb.object,
+		life.object, hours.object,
+		indented(hint("Total hours over the whole life spent at the hottest temperature: the load duration for the glass's static fatigue.")),
+	)
+}
+
+// picker builds a preset selector for one kind of temperature.
+func (t *temperatureSection) picker(kind string, field *numField) (*widget.Select, *widget.Label) {
+	opts := []string{customValue}
+	for _, p := range t.presets {
+		if p.Kind == kind {
+			opts = append(opts, p.Name)
+		}
+	}
+	source := hint("")
+	var sel *widget.Select
+	sel = widget.NewSelect(opts, func(opt string) {
+		if t.f.s.loading {
+			return
+		}
+		p, ok := t.byName(opt)
+		if !ok {
+			t.describe(sel, source)
+			return
+		}
+		field.set(&t.f.s.doc.Work, p.Temperature.Value)
+		t.f.s.loading = true
+		field.show(&t.f.s.doc.Work, t.f.s.units())
+		t.f.s.loading = false
+		t.describe(sel, source)
+		t.f.showProblems(t.f.s.problem)
+		t.f.s.edited()
+	})
+	return sel, source
+}
+
+func (t *temperatureSection) byName(name string) (hazards.TemperaturePreset, bool) {
+	for _, p := range t.presets {
+		if p.Name == name {
+			return p, true
+		}
+	}
+	return hazards.TemperaturePreset{}, false
+}
+
+// describe shows the source and note of the selected preset.
+func (t *temperatureSection) describe(sel *widget.Select, source *widget.Label) {
+	p, ok := t.byName(sel.Selected)
+	if !ok {
+		source.SetText("Your own value: state its grounds in the change note.")
+		return
+	}
+	source.SetText("Source: " + p.Temperature.Source + ". " + p.Note)
+}
+
+// syncPresets selects the preset matching each typed temperature, or
+// "your own value".
+func (t *temperatureSection) syncPresets() {
+	d := &t.f.s.doc.Work
+	was := t.f.s.loading
+	t.f.s.loading = true
+	defer func() { t.f.s.loading = was }()
+	for _, x := range []struct {
+		sel    *widget.Select
+		source *widget.Label
+		kind   string
+		k      float64
+	}{{t.hotPick, t.hotSource, "hottest", d.HottestK}, {t.coldPick, t.coldSource, "coldest", d.ColdestK}} {
+		choice := customValue
+		for _, p := range t.presets {
+			if p.Kind == x.kind && math.Abs(p.Temperature.Value-x.k) < 0.005 {
+				choice = p.Name
+				break
+			}
+		}
+		if x.sel.Selected != choice {
+			x.sel.SetSelected(choice)
+		}
+		t.describe(x.sel, x.source)
+	}
+}

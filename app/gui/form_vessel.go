@@ -1,0 +1,293 @@
+package gui
+
+import (
+	"fmt"
+	"strings"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/fluids/units"
+	"ullage/hazards"
+)
+
+// vesselSection describes the glass envelope: its parts, its volume and
+// the glass it is made of.
+type vesselSection struct {
+	f            *designForm
+	parts        *fyne.Container
+	volumeInfo   *widget.Label
+	partsProblem *widget.Label
+
+	glass        *widget.Select
+	glassIDs     map[string]string
+	glassInfo    *widget.Label
+	glassProblem *widget.Label
+}
+
+// Shape names on screen.
+const (
+	shapeSphereText = "Sphere"
+	shapeTubeText   = "Tube"
+)
+
+// newTubeLength is the length a part gets when it becomes a tube.
+const newTubeLength = 0.05
+
+// newVesselSection builds the "Vessel and glass" group.
+func newVesselSection(f *designForm) fyne.CanvasObject {
+	v := &vesselSection{f: f}
+	f.vessel = v
+	v.parts = container.NewVBox()
+	v.volumeInfo = hint("")
+	v.partsProblem = widget.NewLabel("")
+	v.partsProblem.Importance = widget.DangerImportance
+	v.partsProblem.Wrapping = fyne.TextWrapWord
+	v.partsProblem.Hide()
+	addSphere := widget.NewButtonWithIcon("Add a sphere", theme.ContentAddIcon(), func() {
+		v.addPart(hazards.Part{Name: "bulb", Shape: hazards.ShapeSphere, OuterDiameterM: 0.03, WallThicknessM: 0.0015, WallToleranceM: 0.0002})
+	})
+	addTube := widget.NewButtonWithIcon("Add a tube", theme.ContentAddIcon(), func() {
+		v.addPart(hazards.Part{Name: "tube", Shape: hazards.ShapeTube, OuterDiameterM: 0.008, WallThicknessM: 0.0012, WallToleranceM: 0.0002, LengthM: newTubeLength})
+	})
+	vol := f.field("vessel.internal_volume_m3", "Measured internal volume", qVesselVolume,
+		func(d *hazards.Design) float64 { return d.Vessel.InternalVolumeM3 },
+		func(d *hazards.Design, x float64) { d.Vessel.InternalVolumeM3 = x })
+	volTol := f.field("vessel.volume_tolerance_m3", "Volume tolerance (±)", qVesselVolume,
+		func(d *hazards.Design) float64 { return d.Vessel.VolumeToleranceM3 },
+		func(d *hazards.Design, x float64) { d.Vessel.VolumeToleranceM3 = x })
+
+	v.glass = widget.NewSelect(nil, func(opt string) {
+		if f.s.loading {
+			return
+		}
+		id, ok := v.glassIDs[opt]
+		if !ok {
+			return
+		}
+		f.s.doc.Work.Glass = hazards.GlassChoice{ID: id}
+		v.describeGlass()
+		f.s.edited()
+	})
+	v.glass.PlaceHolder = "Choose a glass"
+	v.glassInfo = hint("")
+	v.glassProblem = widget.NewLabel("")
+	v.glassProblem.Importance = widget.DangerImportance
+	v.glassProblem.Wrapping = fyne.TextWrapWord
+	v.glassProblem.Hide()
+	return section("Vessel and glass",
+		v.parts,
+		indented(v.partsProblem),
+		indented(container.NewHBox(addSphere, addTube)),
+		vol.object,
+		indented(v.volumeInfo),
+		volTol.object,
+		labelled("Glass", v.glass),
+		indented(v.glassProblem),
+		indented(v.glassInfo),
+	)
+}
+
+// load rebuilds the parts list and selects the glass.
+func (v *vesselSection) load() {
+	v.rebuildParts()
+	gl, err := hazards.Glasses()
+	v.glassIDs = map[string]string{}
+	var opts []string
+	if err == nil {
+		for _, g := range gl {
+			v.glassIDs[g.Name] = g.ID
+			opts = append(opts, g.Name)
+		}
+	}
+	d := &v.f.s.doc.Work
+	if d.Glass.Custom != nil {
+		name := "Custom glass from the file: " + d.Glass.Custom.Name
+		opts = append(opts, name)
+		v.glass.Options = opts
+		v.glass.SetSelected(name)
+	} else {
+		v.glass.Options = opts
+		v.glass.ClearSelected()
+		for name, id := range v.glassIDs {
+			if id == d.Glass.ID {
+				v.glass.SetSelected(name)
+			}
+		}
+	}
+	v.glass.Refresh()
+	v.describeGlass()
+	v.updateVolume()
+}
+
+// describeGlass summarises the chosen glass's strength data.
+func (v *vesselSection) describeGlass() {
+	d := &v.f.s.doc.Work
+	var g hazards.Glass
+	if d.Glass.Custom != nil {
+		g = *d.Glass.Custom
+	} else {
+		var err error
+		if g, err = hazards.LookupGlass(d.Glass.ID); err != nil {
+			v.glassInfo.SetText("")
+			return
+		}
+	}
+	u := v.f.s.units()
+	strength := sigFigures(g.CharacteristicStrength.Value/1e6, 3) + " MPa"
+	if u == unitsUS {
+		strength = sigFigures(g.CharacteristicStrength.Value/units.PsiPa, 3) + " psi"
+	}
+	v.glassInfo.SetText(fmt.Sprintf("Characteristic strength %s, Weibull modulus %s, stress-corrosion exponent %s. %s",
+		strength, sigFigures(g.WeibullModulus.Value, 3), sigFigures(g.StressCorrosionExponent.Value, 3), g.Note))
+}
+
+// updateVolume shows the volume the parts add up to.
+func (v *vesselSection) updateVolume() {
+	d := &v.f.s.doc.Work
+	u := v.f.s.units()
+	pv := d.Vessel.PartsVolume()
+	if d.Vessel.InternalVolumeM3 > 0 {
+		v.volumeInfo.SetText(fmt.Sprintf("The measured volume is used. The parts add up to %s.", u.show(qVesselVolume, pv, 4)))
+	} else {
+		v.volumeInfo.SetText(fmt.Sprintf("0 means the volume is computed from the parts: %s.", u.show(qVesselVolume, pv, 4)))
+	}
+}
+
+// addPart appends a part and rebuilds the list.
+func (v *vesselSection) addPart(p hazards.Part) {
+	d := &v.f.s.doc.Work
+	p.Name = fmt.Sprintf("%s %d", p.Name, len(d.Vessel.Parts)+1)
+	d.Vessel.Parts = append(d.Vessel.Parts, p)
+	v.rebuildParts()
+	v.updateVolume()
+	v.f.s.edited()
+}
+
+// removePart deletes part i and rebuilds the list.
+func (v *vesselSection) removePart(i int) {
+	d := &v.f.s.doc.Work
+	if i < 0 || i >= len(d.Vessel.Parts) || len(d.Vessel.Parts) == 1 {
+		return
+	}
+	d.Vessel.Parts = append(d.Vessel.Parts[:i:i], d.Vessel.Parts[i+1:]...)
+	v.rebuildParts()
+	v.updateVolume()
+	v.f.s.edited()
+}
+
+// rebuildParts recreates one block per part with its own fields.
+func (v *vesselSection) rebuildParts() {
+	f := v.f
+	for _, nf := range f.partFields {
+		delete(f.byPath, nf.path)
+	}
+	f.partFields = nil
+	d := &f.s.doc.Work
+	u := f.s.units()
+	var blocks []fyne.CanvasObject
+	wasLoading := f.s.loading
+	f.s.loading = true
+	for i := range d.Vessel.Parts {
+		if i > 0 {
+			blocks = append(blocks, indented(widget.NewSeparator()))
+		}
+		blocks = append(blocks, v.partBlock(i, d, u))
+	}
+	f.s.loading = wasLoading
+	v.parts.Objects = blocks
+	v.parts.Refresh()
+	if f.scroll != nil {
+		// The section grew or shrank: lay the whole form out again.
+		f.scroll.Refresh()
+	}
+	f.showProblems(f.s.problem)
+}
+
+// partBlock builds the block of part i: name, shape, remove, and its
+// dimensions.
+func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.CanvasObject {
+	f := v.f
+	part := func(d *hazards.Design) *hazards.Part { return &d.Vessel.Parts[i] }
+	path := fmt.Sprintf("vessel.parts[%d].", i)
+	pf := func(key, label string, get func(*hazards.Part) float64, set func(*hazards.Part, float64)) *numField {
+		nf := newNumField(path+key, label, qLength,
+			func(d *hazards.Design) float64 { return get(part(d)) },
+			func(d *hazards.Design, x float64) { set(part(d), x) }, f.edited)
+		f.partFields = append(f.partFields, nf)
+		f.byPath[nf.path] = nf
+		nf.show(d, u)
+		return nf
+	}
+	name := widget.NewEntry()
+	name.SetText(d.Vessel.Parts[i].Name)
+	name.OnChanged = func(t string) {
+		if f.s.loading {
+			return
+		}
+		part(&f.s.doc.Work).Name = t
+		f.s.edited()
+	}
+	shape := widget.NewSelect([]string{shapeSphereText, shapeTubeText}, nil)
+	if d.Vessel.Parts[i].Shape == hazards.ShapeTube {
+		shape.SetSelected(shapeTubeText)
+	} else {
+		shape.SetSelected(shapeSphereText)
+	}
+	shape.OnChanged = func(opt string) {
+		if f.s.loading {
+			return
+		}
+		p := part(&f.s.doc.Work)
+		if opt == shapeTubeText {
+			p.Shape = hazards.ShapeTube
+			if p.LengthM == 0 {
+				p.LengthM = newTubeLength
+			}
+		} else {
+			p.Shape, p.LengthM = hazards.ShapeSphere, 0
+		}
+		v.rebuildParts()
+		v.updateVolume()
+		f.s.edited()
+	}
+	remove := widget.NewButtonWithIcon("Remove", theme.DeleteIcon(), func() { v.removePart(i) })
+	if len(d.Vessel.Parts) == 1 {
+		remove.Disable()
+	}
+	od := pf("outer_diameter_m", "Outer diameter", func(p *hazards.Part) float64 { return p.OuterDiameterM }, func(p *hazards.Part, x float64) { p.OuterDiameterM = x })
+	wall := pf("wall_thickness_m", "Wall thickness", func(p *hazards.Part) float64 { return p.WallThicknessM }, func(p *hazards.Part, x float64) { p.WallThicknessM = x })
+	wtol := pf("wall_tolerance_m", "Wall tolerance (±)", func(p *hazards.Part) float64 { return p.WallToleranceM }, func(p *hazards.Part, x float64) { p.WallToleranceM = x })
+	rows := []fyne.CanvasObject{
+		labelled(fmt.Sprintf("Part %d", i+1), container.NewBorder(nil, nil, nil, container.NewHBox(shape, remove), name)),
+		od.object, wall.object, wtol.object,
+	}
+	if d.Vessel.Parts[i].Shape == hazards.ShapeTube {
+		length := pf("length_m", "Length", func(p *hazards.Part) float64 { return p.LengthM }, func(p *hazards.Part, x float64) { p.LengthM = x })
+		rows = append(rows, length.object)
+	}
+	return container.NewVBox(rows...)
+}
+
+// showProblem shows an engine problem about the parts list or the glass
+// that no number field carries; it reports whether it was placed here.
+func (v *vesselSection) showProblem(p *problem) bool {
+	v.partsProblem.Hide()
+	v.glassProblem.Hide()
+	if p == nil {
+		return false
+	}
+	switch {
+	case p.Path == "vessel.parts" || (strings.HasPrefix(p.Path, "vessel.parts[") && v.f.byPath[p.Path] == nil):
+		v.partsProblem.SetText(p.Text)
+		v.partsProblem.Show()
+		return true
+	case strings.HasPrefix(p.Path, "glass"):
+		v.glassProblem.SetText(p.Text)
+		v.glassProblem.Show()
+		return true
+	}
+	return false
+}

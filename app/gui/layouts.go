@@ -1,0 +1,71 @@
+package gui
+
+import (
+	"fyne.io/fyne/v2"
+)
+
+// fixedWidth lays out its objects stacked, at least w wide: it keeps the
+// labels of a form in one column.
+type fixedWidth struct{ w float32 }
+
+// MinSize is the widest of w and the objects' own widths.
+func (f fixedWidth) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	s := fyne.NewSize(f.w, 0)
+	for _, o := range objs {
+		if !o.Visible() {
+			continue
+		}
+		m := o.MinSize()
+		s.Height = max(s.Height, m.Height)
+	}
+	return s
+}
+
+// Layout stretches every object over the whole space.
+func (f fixedWidth) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(size)
+	}
+}
+
+// columns lays out a row of cells at fixed fractions of the width, the
+// same in every row, so that rows line up as a table. A fraction of 0
+// gives the cell its minimum width.
+type columns struct{ fractions []float32 }
+
+// MinSize is the sum of the cells' minimum widths and the tallest cell.
+func (c columns) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var s fyne.Size
+	for _, o := range objs {
+		m := o.MinSize()
+		s.Width += m.Width + 6
+		s.Height = max(s.Height, m.Height)
+	}
+	return s
+}
+
+// Layout places the cells left to right.
+func (c columns) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	const gap = 6
+	fixed := float32(0)
+	for i, o := range objs {
+		if i >= len(c.fractions) || c.fractions[i] == 0 {
+			fixed += o.MinSize().Width
+		}
+	}
+	flex := size.Width - fixed - gap*float32(max(len(objs)-1, 0))
+	if flex < 0 {
+		flex = 0
+	}
+	x := float32(0)
+	for i, o := range objs {
+		w := o.MinSize().Width
+		if i < len(c.fractions) && c.fractions[i] > 0 {
+			w = flex * c.fractions[i]
+		}
+		o.Move(fyne.NewPos(x, 0))
+		o.Resize(fyne.NewSize(w, size.Height))
+		x += w + gap
+	}
+}

@@ -1,0 +1,25 @@
+package gui
+
+// Preference keys. Every value the program keeps between runs is stored
+// under one of these names in the app's preferences.
+const (
+	// prefUnits holds "si" or "us".
+	prefUnits = "units"
+	// prefPaper holds "a4" or "letter".
+	prefPaper = "paper"
+	// prefReviewer holds the reviewer's name printed on records.
+	prefReviewer = "reviewer"
+	// prefRecent holds the recently opened design files, newest first.
+	prefRecent = "recent_files"
+	// prefCriteriaPrefix prefixes the default criteria, one key per
+	// criterion named by its JSON field (criteria.min_burst_safety_factor …).
+	prefCriteriaPrefix = "criteria."
+	// prefUserFluids holds the paths of the fluid files the reviewer
+	// added, reloaded at start.
+	prefUserFluids = "user_fluid_files"
+	// prefLastFolder holds the folder of the last file opened or saved.
+	prefLastFolder = "last_folder"
+)
+
+// maxRecent is the number of recent files remembered.
+const maxRecent = 8

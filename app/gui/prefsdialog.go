@@ -1,0 +1,137 @@
+package gui
+
+import (
+	"fmt"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/dialog"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+	"ullage/report"
+)
+
+// Unit and paper choices as shown.
+const (
+	unitsSIText     = "SI (°C, g, mm, mL, kPa, m³)"
+	unitsUSText     = "US customary (°F, oz, in, in³, psi, ft³)"
+	paperA4Text     = "A4"
+	paperLetterText = "US Letter"
+)
+
+// preferencesPanel is the content of the preferences dialog over a copy
+// of the settings.
+type preferencesPanel struct {
+	s        *session
+	units    *widget.RadioGroup
+	paper    *widget.RadioGroup
+	reviewer *widget.Entry
+	criteria map[string]*widget.Entry
+	problem  *widget.Label
+	object   fyne.CanvasObject
+}
+
+// newPreferencesPanel builds the preferences form from the settings.
+func newPreferencesPanel(s *session) *preferencesPanel {
+	p := &preferencesPanel{s: s, criteria: map[string]*widget.Entry{}}
+	p.units = widget.NewRadioGroup([]string{unitsSIText, unitsUSText}, nil)
+	p.units.Required = true
+	p.units.SetSelected(unitsSIText)
+	if s.settings.Units == unitsUS {
+		p.units.SetSelected(unitsUSText)
+	}
+	p.paper = widget.NewRadioGroup([]string{paperA4Text, paperLetterText}, nil)
+	p.paper.Horizontal = true
+	p.paper.Required = true
+	p.paper.SetSelected(paperA4Text)
+	if s.settings.Paper == report.PaperLetter {
+		p.paper.SetSelected(paperLetterText)
+	}
+	p.reviewer = widget.NewEntry()
+	p.reviewer.SetText(s.settings.Reviewer)
+	p.reviewer.SetPlaceHolder("your name, as printed on records")
+	items := []fyne.CanvasObject{
+		labelled("Units", p.units),
+		labelled("Paper for records", p.paper),
+		labelled("Reviewer", p.reviewer),
+		sectionHeading("Default review criteria for new designs"),
+	}
+	c := s.settings.Criteria
+	for _, cf := range criterionFields {
+		e := widget.NewEntry()
+		e.SetText(entryText(*criterionGetter(cf.key)(&c)))
+		p.criteria[cf.key] = e
+		unit := widget.NewLabel(unitsSI.unit(cf.q))
+		items = append(items,
+			container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}, widget.NewLabel(cf.label)), container.New(fixedWidth{unitWidth}, unit), e),
+			indented(hint(hazards.DefaultCriteriaGrounds[cf.key])))
+	}
+	reset := widget.NewButtonWithIcon("Restore the built-in criteria", theme.HistoryIcon(), func() {
+		d := hazards.DefaultCriteria()
+		for _, cf := range criterionFields {
+			p.criteria[cf.key].SetText(entryText(*criterionGetter(cf.key)(&d)))
+		}
+	})
+	p.problem = widget.NewLabel("")
+	p.problem.Importance = widget.DangerImportance
+	p.problem.Wrapping = fyne.TextWrapWord
+	items = append(items, indented(container.NewHBox(reset)), p.problem)
+	p.object = container.NewVScroll(container.NewVBox(items...))
+	return p
+}
+
+// read returns the settings the panel describes, or a problem.
+func (p *preferencesPanel) read() (settings, error) {
+	st := p.s.settings
+	st.Units = unitsSI
+	if p.units.Selected == unitsUSText {
+		st.Units = unitsUS
+	}
+	st.Paper = report.PaperA4
+	if p.paper.Selected == paperLetterText {
+		st.Paper = report.PaperLetter
+	}
+	st.Reviewer = p.reviewer.Text
+	c := st.Criteria
+	for _, cf := range criterionFields {
+		x, ok := parseNumber(p.criteria[cf.key].Text)
+		if !ok {
+			return st, fmt.Errorf("%s: %q is not a number", cf.label, p.criteria[cf.key].Text)
+		}
+		*criterionGetter(cf.key)(&c) = x
+	}
+	probe := hazards.Design{Criteria: c}
+	if err := criteriaError(&probe); err != nil {
+		pr := problemOf(err, unitsSI, func(string) (quantity, bool) { return qNumber, false })
+		return st, fmt.Errorf("%s: %s", p.s.form.labelOf(pr.Path), pr.Text)
+	}
+	st.Criteria = c
+	return st, nil
+}
+
+// showPreferences opens the preferences dialog.
+func (s *session) showPreferences() {
+	p := newPreferencesPanel(s)
+	var dlg *dialog.CustomDialog
+	ok := widget.NewButtonWithIcon("Save preferences", theme.ConfirmIcon(), func() {
+		st, err := p.read()
+		if err != nil {
+			p.problem.SetText(err.Error())
+			return
+		}
+		units := st.Units
+		st.Units = s.settings.Units
+		s.settings = st
+		s.settings.save(s.app.Preferences())
+		s.setUnits(units)
+		dlg.Hide()
+	})
+	ok.Importance = widget.HighImportance
+	cancel := widget.NewButtonWithIcon("Cancel", theme.CancelIcon(), func() { dlg.Hide() })
+	dlg = dialog.NewCustomWithoutButtons("Preferences", p.object, s.win)
+	dlg.SetButtons([]fyne.CanvasObject{cancel, ok})
+	dlg.Resize(fyne.NewSize(760, 640))
+	dlg.Show()
+}

@@ -1,0 +1,183 @@
+package gui
+
+import (
+	"fmt"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/canvas"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// resultsPanel shows the last good results: the verdict, the findings,
+// the key numbers and the charts, marked out of date when the inputs on
+// the form are not acceptable.
+type resultsPanel struct {
+	s *session
+
+	verdict   *verdictBanner
+	stale     *fyne.Container
+	staleText *widget.Label
+
+	list     *findingsList
+	keys     *keyNumbers
+	pt, conc *chart
+	tabs     *container.AppTabs
+
+	object fyne.CanvasObject
+}
+
+// newResultsPanel builds the right-hand side of the review screen.
+func newResultsPanel(s *session) *resultsPanel {
+	r := &resultsPanel{s: s}
+	s.results = r
+	r.verdict = newVerdictBanner()
+	r.staleText = widget.NewLabel("")
+	r.staleText.Wrapping = fyne.TextWrapWord
+	r.staleText.TextStyle = fyne.TextStyle{Bold: true}
+	staleBg := canvas.NewRectangle(tint(statusColour(hazards.StatusCaution), 70))
+	show := widget.NewButton("Show the field", func() { s.form.reveal(s.problem) })
+	r.stale = container.NewStack(staleBg, container.NewBorder(nil, nil,
+		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText))
+	r.stale.Hide()
+	r.list = newFindingsList()
+	r.keys = newKeyNumbers()
+	r.pt, r.conc = newChart(), newChart()
+	r.tabs = container.NewAppTabs(
+		container.NewTabItem("Pressure against temperature", r.pt),
+		container.NewTabItem("Vapour in the room", r.conc),
+		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
+	)
+	split := container.NewVSplit(r.list.object, r.tabs)
+	split.SetOffset(0.58)
+	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)
+	return r
+}
+
+// show redraws everything from the session's last outcome and problem.
+func (r *resultsPanel) show() {
+	s := r.s
+	o := s.last
+	u := s.units()
+	if s.problem != nil {
+		where := ""
+		if s.problem.Path != "" {
+			where = s.form.labelOf(s.problem.Path) + ": "
+		}
+		if o.assessment == nil {
+			r.staleText.SetText("No results yet. Fix the marked input — " + where + s.problem.Text)
+		} else {
+			r.staleText.SetText("OUT OF DATE: the results below are for the last acceptable inputs. Fix the marked input — " + where + s.problem.Text)
+		}
+		r.stale.Show()
+	} else {
+		r.stale.Hide()
+	}
+	a := o.assessment
+	if a == nil {
+		r.verdict.clear()
+		r.list.set(nil, true)
+		r.keys.set(nil, u)
+		r.pt.set(chartSpec{Empty: "No results yet."}, false)
+		r.conc.set(chartSpec{Empty: "No results yet."}, false)
+		return
+	}
+	stale := s.problem != nil
+	r.verdict.set(a, s.revisionNote(), stale)
+	r.list.set(a.Findings, stale)
+	r.keys.set(a, u)
+	r.pt.set(pressureChart([]ptSide{{curve: o.pt}}, u), stale)
+	r.conc.set(releaseChart(o.conc, u), stale)
+}
+
+// revisionNote says what the results are of: which revision, changed or
+// not.
+func (s *session) revisionNote() string {
+	if s.doc == nil {
+		return ""
+	}
+	note := s.doc.File.Product.Name
+	if s.doc.Base != "" {
+		note += " — revision " + s.doc.Base
+		if s.doc.workChanged() {
+			note += " with changes not yet kept"
+		}
+	}
+	return note
+}
+
+// verdictBanner is the overall verdict, large, in a word and a symbol,
+// with the count of findings by status and what the results are of.
+type verdictBanner struct {
+	bg      *canvas.Rectangle
+	icon    *widget.Icon
+	caption *canvas.Text
+	word    *canvas.Text
+	counts  *widget.Label
+	note    *widget.Label
+	object  fyne.CanvasObject
+}
+
+func newVerdictBanner() *verdictBanner {
+	v := &verdictBanner{}
+	v.bg = canvas.NewRectangle(tint(statusColour(""), 0))
+	v.bg.CornerRadius = 4
+	v.icon = widget.NewIcon(theme.QuestionIcon())
+	v.caption = canvas.NewText("OVERALL VERDICT", statusColour(""))
+	v.caption.TextSize = 10
+	v.caption.TextStyle = fyne.TextStyle{Bold: true}
+	v.word = canvas.NewText("—", statusColour(""))
+	v.word.TextSize = 28
+	v.word.TextStyle = fyne.TextStyle{Bold: true}
+	v.counts = widget.NewLabel("")
+	v.counts.TextStyle = fyne.TextStyle{Bold: true}
+	v.counts.Truncation = fyne.TextTruncateEllipsis
+	v.note = widget.NewLabel("")
+	v.note.Truncation = fyne.TextTruncateEllipsis
+	iconBox := container.New(fixedWidth{44}, v.icon)
+	words := container.New(fixedWidth{150}, container.NewVBox(v.caption, v.word))
+	left := container.NewHBox(iconBox, words)
+	right := container.NewVBox(v.counts, v.note)
+	v.object = container.NewStack(v.bg, container.NewPadded(container.NewBorder(nil, nil, left, nil, right)))
+	return v
+}
+
+func (v *verdictBanner) clear() {
+	v.icon.SetResource(theme.QuestionIcon())
+	v.word.Text = "NONE"
+	v.word.Color = statusColour("")
+	v.word.Refresh()
+	v.bg.FillColor = tint(statusColour(""), 0)
+	v.bg.Refresh()
+	v.counts.SetText("No results yet")
+	v.note.SetText("")
+}
+
+func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
+	pass, caution, fail := countStatuses(a.Findings)
+	v.icon.SetResource(statusIcon(a.Verdict))
+	v.word.Text = statusWord(a.Verdict)
+	v.word.Color = statusColour(a.Verdict)
+	if stale {
+		v.word.Color = tint(statusColour(a.Verdict), 110)
+	}
+	v.caption.Color = statusColour(a.Verdict)
+	alpha := uint8(55)
+	counts := fmt.Sprintf("%d of %d criteria fail, %s, %d pass", fail, len(a.Findings), plural(caution, "caution"), pass)
+	if stale {
+		alpha = 18
+		v.caption.Text = "OUT OF DATE"
+		counts = "Last acceptable inputs: " + counts
+	} else {
+		v.caption.Text = "OVERALL VERDICT"
+	}
+	v.caption.Refresh()
+	v.word.Refresh()
+	v.bg.FillColor = tint(statusColour(a.Verdict), alpha)
+	v.bg.Refresh()
+	v.counts.SetText(counts)
+	v.note.SetText(note)
+}

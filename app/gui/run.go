@@ -1,0 +1,239 @@
+package gui
+
+import (
+	"fmt"
+	"os"
+	"sync/atomic"
+	"time"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/app"
+	"fyne.io/fyne/v2/dialog"
+	"fyne.io/fyne/v2/storage"
+
+	"ullage/assets"
+)
+
+// appID is the application's identity, as in FyneApp.toml.
+const appID = "org.ullage.desktop"
+
+// smokeTimeout bounds how long --smoke waits for the first results.
+const smokeTimeout = 90 * time.Second
+
+// Run starts the review window; args may name a design file to open.
+// With --smoke OUT.pdf it opens the bundled example, assesses it, writes
+// its assessment record to OUT.pdf through the Export command's own code
+// and quits: status 0 when the record was written, 1 otherwise. Bad
+// arguments give status 2.
+func Run(args []string) int {
+	ra, err := parseRunArgs(args)
+	if err != nil {
+		fmt.Fprintf(os.Stderr, "ullage: %v\n", err)
+		return 2
+	}
+	a := app.NewWithID(appID)
+	a.SetIcon(fyne.NewStaticResource("icon.png", assets.Icon()))
+	w := a.NewWindow("Ullage")
+	s, err := newSession(a, w, options{delay: typingDelay})
+	if err != nil {
+		fmt.Fprintf(os.Stderr, "ullage: %v\n", err)
+		return 1
+	}
+	sh := buildWindow(s)
+	w.SetContent(sh.object)
+	w.Resize(fyne.NewSize(1280, 800))
+	w.SetCloseIntercept(s.requestClose)
+
+	doc, openErr := s.firstDocument(ra)
+	if doc == nil {
+		fmt.Fprintf(os.Stderr, "ullage: %v\n", openErr)
+		return 1
+	}
+	if ra.smoke != "" && openErr != nil {
+		fmt.Fprintf(os.Stderr, "ullage --smoke: %v\n", openErr)
+		return 1
+	}
+	s.open(doc)
+
+	var status atomic.Int32
+	switch {
+	case ra.smoke != "":
+		go s.smoke(ra.smoke, &status)
+	default:
+		if openErr != nil {
+			s.showFileProblem("The design file cannot be opened", openErr)
+		} else if ra.show == "" {
+			s.offerRecovery()
+		}
+		s.startAutosave(autosavePeriod)
+		if ra.show != "" {
+			go s.whenIdle(func() { s.showScreen(ra.show) })
+		}
+	}
+	w.ShowAndRun()
+	return int(status.Load())
+}
+
+// runArgs are the window's command-line arguments.
+type runArgs struct {
+	file  string
+	smoke string
+	show  string
+}
+
+// parseRunArgs reads [FILE] [--smoke OUT.pdf] [--show SCREEN].
+func parseRunArgs(args []string) (runArgs, error) {
+	var ra runArgs
+	for i := 0; i < len(args); i++ {
+		switch a := args[i]; a {
+		case "--smoke", "--show":
+			if i+1 >= len(args) {
+				return ra, fmt.Errorf("%s needs a value", a)
+			}
+			i++
+			if a == "--smoke" {
+				ra.smoke = args[i]
+			} else {
+				ra.show = args[i]
+			}
+		default:
+			if len(a) > 1 && a[0] == '-' {
+				return ra, fmt.Errorf("unknown option %q (try: ullage help)", a)
+			}
+			if ra.file != "" {
+				return ra, fmt.Errorf("name one design file to open (%q and %q given)", ra.file, a)
+			}
+			ra.file = a
+		}
+	}
+	return ra, nil
+}
+
+// firstDocument picks what to open: the named file, else (not in smoke
+// mode) the most recent file that loads, else the bundled example. When
+// the named file fails, the example opens and the error comes back.
+func (s *session) firstDocument(ra runArgs) (*document, error) {
+	if ra.file != "" {
+		doc, err := loadDocument(ra.file)
+		if err == nil {
+			s.rememberFile(ra.file)
+			return doc, nil
+		}
+		ex, exErr := exampleDocument()
+		if exErr != nil {
+			return nil, err
+		}
+		return ex, err
+	}
+	if ra.smoke == "" {
+		for _, p := range s.recentFiles() {
+			if doc, err := loadDocument(p); err == nil {
+				return doc, nil
+			}
+		}
+	}
+	return exampleDocument()
+}
+
+// whenIdle waits, off the UI goroutine, until no assessment is pending,
+// then runs f on the UI goroutine. It gives up after smokeTimeout and
+// reports whether f ran.
+func (s *session) whenIdle(f func()) bool {
+	deadline := time.Now().Add(smokeTimeout)
+	for time.Now().Before(deadline) {
+		if s.assess.pending.Load() == 0 {
+			done := make(chan struct{})
+			s.opts.post(func() {
+				defer close(done)
+				if s.assess.pending.Load() == 0 {
+					f()
+					f = nil
+				}
+			})
+			<-done
+			if f == nil {
+				return true
+			}
+		}
+		time.Sleep(20 * time.Millisecond)
+	}
+	return false
+}
+
+// smoke writes the example's assessment record to out and quits.
+func (s *session) smoke(out string, status *atomic.Int32) {
+	status.Store(1)
+	ran := s.whenIdle(func() {
+		defer s.app.Quit()
+		if s.last.assessment == nil {
+			fmt.Fprintln(os.Stderr, "ullage --smoke: the example gave no results")
+			return
+		}
+		if err := s.exportTo(out); err != nil {
+			fmt.Fprintf(os.Stderr, "ullage --smoke: %v\n", err)
+			return
+		}
+		status.Store(0)
+	})
+	if !ran {
+		fmt.Fprintln(os.Stderr, "ullage --smoke: no results within", smokeTimeout)
+		s.opts.post(s.app.Quit)
+	}
+}
+
+// exportTo writes the assessment record to a path through the same
+// writer the Export command uses.
+func (s *session) exportTo(path string) error {
+	w, err := storage.Writer(storage.NewFileURI(path))
+	if err != nil {
+		return err
+	}
+	werr := s.writeAssessmentPDF(w)
+	if cerr := w.Close(); werr == nil {
+		werr = cerr
+	}
+	return werr
+}
+
+// showScreen opens one screen or state, for screenshots of the program.
+func (s *session) showScreen(name string) {
+	sh := s.shell
+	switch name {
+	case "review", "findings":
+	case "pressure":
+		s.results.tabs.SelectIndex(0)
+	case "release":
+		s.results.tabs.SelectIndex(1)
+	case "keys":
+		s.results.tabs.SelectIndex(2)
+	case "fluid", "vessel", "temperatures", "room", "criteria":
+		s.form.scrollTo(map[string]int{"fluid": 1, "vessel": 2, "temperatures": 3, "room": 4, "criteria": 5}[name])
+	case "revisions":
+		sh.showRevisions()
+	case "compare":
+		sh.showCompare()
+	case "preferences":
+		s.showPreferences()
+	case "about":
+		s.showAbout()
+	case "newrev":
+		s.form.byPath["fill_mass_kg"].entry.SetText("20")
+		s.revs.askNewRevision(nil)
+	case "error":
+		s.form.byPath["fill_mass_kg"].entry.SetText("-5")
+	case "typo":
+		s.form.byPath["hottest_k"].entry.SetText("7O")
+	case "failing":
+		s.revs.openRevision("A")
+	case "us":
+		s.setUnits(unitsUS)
+		s.form.scrollTo(2)
+	case "open":
+		s.openDialog()
+	case "unsaved":
+		s.form.byPath["fill_mass_kg"].entry.SetText("20")
+		s.requestClose()
+	default:
+		dialog.ShowInformation("Unknown screen", "No screen called "+name, s.win)
+	}
+}

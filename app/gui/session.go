@@ -1,0 +1,215 @@
+package gui
+
+import (
+	"fmt"
+	"strings"
+	"time"
+
+	"fyne.io/fyne/v2"
+
+	"ullage/fluids"
+)
+
+// options adjust a session for tests; the program uses the defaults.
+type options struct {
+	// post runs a function on the UI goroutine; fyne.Do when nil.
+	post func(func())
+	// delay is the pause after a keystroke before the assessment runs.
+	delay time.Duration
+	// dataDir is where the working copy is autosaved; the app's storage
+	// when empty.
+	dataDir string
+	// autosaveEvery is the autosave period; 0 turns autosave off.
+	autosaveEvery time.Duration
+	// now gives the time for revision dates; time.Now when nil.
+	now func() time.Time
+}
+
+// typingDelay is how long the form waits after the last keystroke before
+// assessing: long enough to merge a burst of typing, short enough to feel
+// immediate.
+const typingDelay = 150 * time.Millisecond
+
+// autosavePeriod is how often the working copy is kept in the app's
+// storage while it has unsaved changes.
+const autosavePeriod = 30 * time.Second
+
+// session is one review window: the document, the reviewer's settings,
+// the fluid library, the last results and the panels that show them.
+type session struct {
+	app  fyne.App
+	win  fyne.Window
+	opts options
+
+	settings settings
+	builtin  *fluids.Library
+	user     []*fluids.Substance
+	lib      *fluids.Library
+
+	doc *document
+
+	assess *assessor
+	// last is the newest good outcome; its assessment is nil before the
+	// first one arrives.
+	last outcome
+	// problem is the input the engine refused, nil when the inputs are
+	// good; parseProblems counts fields whose text is not a number.
+	problem *problem
+	// loading is true while the widgets are filled from the document, so
+	// that their change callbacks do not count as edits.
+	loading bool
+
+	form    *designForm
+	results *resultsPanel
+	revs    *revisionsPanel
+	cmp     *comparePanel
+	shell   *shell
+
+	stopAutosave chan struct{}
+}
+
+// newSession builds a session on a window, without content yet.
+func newSession(a fyne.App, w fyne.Window, o options) (*session, error) {
+	if o.post == nil {
+		o.post = fyne.Do
+	}
+	if o.now == nil {
+		o.now = time.Now
+	}
+	lib, err := fluids.Builtin()
+	if err != nil {
+		return nil, fmt.Errorf("the fluid library does not load: %w", err)
+	}
+	s := &session{app: a, win: w, opts: o, builtin: lib, lib: lib}
+	s.settings = loadSettings(a.Preferences())
+	s.assess = &assessor{delay: o.delay, post: o.post}
+	s.loadUserFluidsFromPrefs()
+	return s, nil
+}
+
+// units returns the unit system in use.
+func (s *session) units() unitSystem { return s.settings.Units }
+
+// open makes doc the document of the window and shows it everywhere.
+func (s *session) open(doc *document) {
+	s.assess.cancel()
+	s.doc = doc
+	s.last = outcome{}
+	s.problem = nil
+	s.refreshAll()
+	s.reassess(true)
+}
+
+// refreshAll fills every panel from the document.
+func (s *session) refreshAll() {
+	s.loading = true
+	s.form.load()
+	s.loading = false
+	s.results.show()
+	s.revs.refresh()
+	s.cmp.refresh()
+	s.updateTitle()
+}
+
+// edited is called after any change to the working copy or the product.
+func (s *session) edited() {
+	if s.loading {
+		return
+	}
+	s.updateTitle()
+	s.form.updateHeader()
+	s.reassess(false)
+}
+
+// reassess schedules an assessment of the working copy, unless a field
+// holds text that is not a number, in which case the results are marked
+// out of date until it is fixed.
+func (s *session) reassess(now bool) {
+	if f := s.form.firstParseProblem(); f != nil {
+		s.assess.cancel()
+		s.problem = &problem{Path: f.path, Text: f.parseProblem}
+		s.form.showProblems(s.problem)
+		s.results.show()
+		return
+	}
+	delay := s.assess.delay
+	if now {
+		s.assess.delay = 0
+	}
+	s.assess.schedule(s.doc.Work, s.lib, s.applyOutcome)
+	s.assess.delay = delay
+}
+
+// applyOutcome shows a finished assessment; on the UI goroutine.
+func (s *session) applyOutcome(o outcome) {
+	if o.err != nil {
+		p := problemOf(o.err, s.units(), s.form.quantityOf)
+		s.problem = &p
+	} else {
+		s.problem = nil
+		s.last = o
+	}
+	s.form.showProblems(s.problem)
+	s.results.show()
+	if o.err == nil {
+		s.revs.workingVerdict(o.assessment.Verdict)
+	}
+}
+
+// stale reports whether the results on screen are older than the inputs.
+func (s *session) stale() bool { return s.problem != nil }
+
+// setUnits switches the unit system everywhere.
+func (s *session) setUnits(u unitSystem) {
+	if s.settings.Units == u {
+		return
+	}
+	s.settings.Units = u
+	s.settings.save(s.app.Preferences())
+	s.loading = true
+	s.form.load()
+	s.loading = false
+	if s.problem != nil {
+		s.reassess(true)
+	}
+	s.form.showProblems(s.problem)
+	s.results.show()
+	s.cmp.refresh()
+	s.shell.syncUnits()
+}
+
+// updateTitle names the file, the revision and unsaved changes in the
+// window title.
+func (s *session) updateTitle() {
+	if s.doc == nil {
+		return
+	}
+	t := "Ullage — " + s.doc.Name
+	if s.doc.Base != "" {
+		t += " — revision " + s.doc.Base
+		if s.doc.workChanged() {
+			t += " with changes"
+		}
+	}
+	if s.doc.dirty() {
+		t += " (unsaved)"
+	}
+	s.win.SetTitle(t)
+}
+
+// rebuildLibrary rebuilds the library from the built-in fluids and the
+// reviewer's own.
+func (s *session) rebuildLibrary() {
+	s.lib = s.builtin.With(s.user...)
+}
+
+// plural returns "n thing" or "n things".
+func plural(n int, thing string) string {
+	if n == 1 {
+		return fmt.Sprintf("1 %s", thing)
+	}
+	if strings.HasSuffix(thing, "y") {
+		return fmt.Sprintf("%d %sies", n, strings.TrimSuffix(thing, "y"))
+	}
+	return fmt.Sprintf("%d %ss", n, thing)
+}

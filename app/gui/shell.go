@@ -1,0 +1,198 @@
+package gui
+
+import (
+	"path/filepath"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/driver/desktop"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// shell is the window's frame: menus, tool bar, the three screens and
+// the caution footer.
+type shell struct {
+	s       *session
+	tabs    *container.AppTabs
+	review  *container.TabItem
+	revs    *container.TabItem
+	compare *container.TabItem
+	units   *widget.RadioGroup
+	object  fyne.CanvasObject
+}
+
+// Keyboard shortcuts of the main commands.
+var (
+	shortcutOpen   = &desktop.CustomShortcut{KeyName: fyne.KeyO, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutSave   = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutSaveAs = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
+	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
+)
+
+// Unit choices on the tool bar.
+const (
+	unitsBarSI = "SI"
+	unitsBarUS = "US customary"
+)
+
+// buildWindow assembles every panel into the window.
+func buildWindow(s *session) *shell {
+	sh := &shell{s: s}
+	s.shell = sh
+	form := newDesignForm(s)
+	results := newResultsPanel(s)
+	revs := newRevisionsPanel(s)
+	cmp := newComparePanel(s)
+
+	split := container.NewHSplit(form.object, results.object)
+	split.SetOffset(0.44)
+	sh.review = container.NewTabItemWithIcon("Design review", theme.DocumentCreateIcon(), split)
+	sh.revs = container.NewTabItemWithIcon("Revisions", theme.ListIcon(), revs.object)
+	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), cmp.object)
+	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare)
+
+	sh.units = widget.NewRadioGroup([]string{unitsBarSI, unitsBarUS}, func(opt string) {
+		if s.loading {
+			return
+		}
+		if opt == unitsBarUS {
+			s.setUnits(unitsUS)
+		} else if opt == unitsBarSI {
+			s.setUnits(unitsSI)
+		}
+	})
+	sh.units.Horizontal = true
+	sh.units.Required = true
+	sh.syncUnits()
+	bar := container.NewHBox(
+		widget.NewButtonWithIcon("Open…", theme.FolderOpenIcon(), s.openDialog),
+		widget.NewButtonWithIcon("Save", theme.DocumentSaveIcon(), func() { s.save(nil) }),
+		widget.NewButtonWithIcon("Keep as revision…", theme.ContentAddIcon(), func() { s.revs.askNewRevision(nil) }),
+		widget.NewButtonWithIcon("Export assessment PDF…", theme.DocumentPrintIcon(), s.exportAssessmentDialog),
+		widget.NewSeparator(),
+		widget.NewLabel("Units:"), sh.units,
+	)
+	footer := newCautionFooter()
+	sh.object = container.NewBorder(container.NewVBox(bar, widget.NewSeparator()), footer, nil, nil, sh.tabs)
+	sh.rebuildMenu()
+	for _, sc := range []struct {
+		sc desktop.CustomShortcut
+		do func()
+	}{
+		{*shortcutOpen, s.openDialog},
+		{*shortcutSave, func() { s.save(nil) }},
+		{*shortcutSaveAs, func() { s.saveAs(nil) }},
+		{*shortcutExport, s.exportAssessmentDialog},
+	} {
+		do := sc.do
+		s.win.Canvas().AddShortcut(&sc.sc, func(fyne.Shortcut) { do() })
+	}
+	return sh
+}
+
+// newCautionFooter shows the first standard caution at all times.
+func newCautionFooter() fyne.CanvasObject {
+	l := widget.NewLabel(hazards.StandardCautions[0])
+	l.Wrapping = fyne.TextWrapWord
+	l.SizeName = theme.SizeNameCaptionText
+	return container.NewVBox(widget.NewSeparator(),
+		container.NewBorder(nil, nil, widget.NewIcon(theme.InfoIcon()), nil, l))
+}
+
+// syncUnits sets the tool bar's unit choice from the settings.
+func (sh *shell) syncUnits() {
+	want := unitsBarSI
+	if sh.s.settings.Units == unitsUS {
+		want = unitsBarUS
+	}
+	if sh.units.Selected != want {
+		was := sh.s.loading
+		sh.s.loading = true
+		sh.units.SetSelected(want)
+		sh.s.loading = was
+	}
+}
+
+// rebuildMenu sets the main menu, with the current recent files.
+func (sh *shell) rebuildMenu() {
+	s := sh.s
+	recent := fyne.NewMenuItem("Open recent", nil)
+	var items []*fyne.MenuItem
+	for _, p := range s.recentFiles() {
+		path := p
+		items = append(items, fyne.NewMenuItem(filepath.Base(path)+"  —  "+filepath.Dir(path), func() {
+			s.confirmLeave("open another file", func() { s.openPath(path) })
+		}))
+	}
+	if len(items) == 0 {
+		none := fyne.NewMenuItem("No recent files", nil)
+		none.Disabled = true
+		items = append(items, none)
+	}
+	recent.ChildMenu = fyne.NewMenu("", items...)
+
+	item := func(label string, sc fyne.Shortcut, do func()) *fyne.MenuItem {
+		m := fyne.NewMenuItem(label, do)
+		m.Shortcut = sc
+		return m
+	}
+	example := fyne.NewMenuItem("Open the example", func() {
+		s.confirmLeave("open the example", func() {
+			if doc, err := exampleDocument(); err == nil {
+				s.open(doc)
+			}
+		})
+	})
+	newDesign := fyne.NewMenuItem("New design", func() {
+		s.confirmLeave("start a new design", func() {
+			if doc, err := newBlankDocument(s.settings.Criteria); err == nil {
+				s.open(doc)
+				s.shell.showReview()
+			}
+		})
+	})
+	quit := fyne.NewMenuItem("Quit", func() { s.requestClose() })
+	quit.IsQuit = true
+	file := fyne.NewMenu("File",
+		newDesign,
+		item("Open…", shortcutOpen, s.openDialog),
+		recent, example,
+		fyne.NewMenuItemSeparator(),
+		item("Save", shortcutSave, func() { s.save(nil) }),
+		item("Save as…", shortcutSaveAs, func() { s.saveAs(nil) }),
+		fyne.NewMenuItemSeparator(),
+		item("Export assessment PDF…", shortcutExport, s.exportAssessmentDialog),
+		fyne.NewMenuItem("Export comparison PDF…", func() { sh.showCompare(); s.exportComparisonDialog() }),
+		fyne.NewMenuItemSeparator(),
+		fyne.NewMenuItem("Add a fluid from a file…", s.askUserFluid),
+		fyne.NewMenuItem("Preferences…", s.showPreferences),
+		fyne.NewMenuItemSeparator(),
+		quit,
+	)
+	revision := fyne.NewMenu("Revision",
+		fyne.NewMenuItem("Keep the working copy as a new revision…", func() { s.revs.askNewRevision(nil) }),
+		fyne.NewMenuItem("List revisions", sh.showRevisions),
+		fyne.NewMenuItem("Compare revisions", sh.showCompare),
+	)
+	help := fyne.NewMenu("Help", fyne.NewMenuItem("About Ullage", s.showAbout))
+	s.win.SetMainMenu(fyne.NewMainMenu(file, revision, help))
+}
+
+func (sh *shell) showReview()    { sh.tabs.Select(sh.review) }
+func (sh *shell) showRevisions() { sh.tabs.Select(sh.revs) }
+func (sh *shell) showCompare()   { sh.tabs.Select(sh.compare) }
+
+// requestClose asks before closing when work would be lost.
+func (s *session) requestClose() {
+	s.confirmLeave("close Ullage", func() {
+		s.stopAutosaving()
+		s.assess.cancel()
+		if s.doc == nil || !s.doc.dirty() {
+			s.clearAutosave()
+		}
+		s.app.Quit()
+	})
+}

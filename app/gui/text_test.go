@@ -1,0 +1,158 @@
+package gui
+
+import (
+	"os"
+	"strings"
+	"testing"
+
+	"ullage/hazards"
+)
+
+func TestHumaniseShowsLimitsInScreenUnits(t *testing.T) {
+	tests := []struct {
+		msg  string
+		q    quantity
+		u    unitSystem
+		want string
+	}{
+		// Messages from hazards.Design.Validate.
+		{"must be from 20 to 800 K", qTemperature, unitsSI, "must be from -253.15 to 526.85 °C"},
+		{"must be from 20 to 800 K", qTemperature, unitsUS, "must be from -423.67 to 980.33 °F"},
+		{"must be greater than zero and at most 10 kg", qMass, unitsSI, "must be greater than zero and at most 10000 g"},
+		{"must be less than the outer radius (0.02 m)", qLength, unitsSI, "must be less than the outer radius (20 mm)"},
+		{"must not be above hottest_k (349.15 K)", qTemperature, unitsSI, "must not be above the hottest temperature (76 °C)"},
+		{"must be at or above the freezing point of Ethanol, 159.05 K (-114.1 °C)", qTemperature, unitsSI, "must be at or above the freezing point of Ethanol, -114.1 °C"},
+		{"must be from 1 to 20 (1 = perfectly mixed)", qNumber, unitsSI, "must be from 1 to 20 (1 = perfectly mixed)"},
+		{"must be from 0 to 0.1 m³ (0 means compute from the parts)", qVesselVolume, unitsSI, "must be from 0 to 100000 mL (0 means compute from the parts)"},
+	}
+	for _, tc := range tests {
+		if got := humanise(tc.msg, tc.q, tc.u); got != tc.want {
+			t.Errorf("humanise(%q, %v, %s) = %q, want %q", tc.msg, tc.q, tc.u, got, tc.want)
+		}
+	}
+}
+
+func TestParseNumber(t *testing.T) {
+	tests := []struct {
+		in   string
+		want float64
+		ok   bool
+	}{
+		{"21", 21, true}, {" 21.5 ", 21.5, true}, {"21,5", 21.5, true}, {"1e-4", 1e-4, true},
+		{"", 0, false}, {"7O", 0, false}, {"1,000.5", 0, false}, {"NaN", 0, false}, {"Inf", 0, false},
+	}
+	for _, tc := range tests {
+		got, ok := parseNumber(tc.in)
+		if ok != tc.ok || (ok && got != tc.want) {
+			t.Errorf("parseNumber(%q) = %g, %v; want %g, %v", tc.in, got, ok, tc.want, tc.ok)
+		}
+	}
+}
+
+func TestUnitConversionsRoundTrip(t *testing.T) {
+	for _, u := range []unitSystem{unitsSI, unitsUS} {
+		for q := qNumber; q <= qProbability; q++ {
+			for _, x := range []float64{0.0015, 1, 349.15, 101325} {
+				back := u.toSI(q, u.fromSI(q, x))
+				if d := back - x; d > 1e-9*x || d < -1e-9*x {
+					t.Errorf("%s quantity %d: %g → %g", u, q, x, back)
+				}
+			}
+		}
+	}
+	// 1 psi = 6.894757 kPa, 1 in = 25.4 mm (NIST SP 811 appendix B).
+	if got := unitsUS.show(qPressure, 6894.757293168, 4); got != "1 psi" {
+		t.Errorf("1 psi shown as %q", got)
+	}
+	if got := unitsUS.show(qLength, 0.0254, 4); got != "1 in" {
+		t.Errorf("1 in shown as %q", got)
+	}
+}
+
+func TestParseRunArgs(t *testing.T) {
+	tests := []struct {
+		args    []string
+		want    runArgs
+		wantErr string
+	}{
+		{nil, runArgs{}, ""},
+		{[]string{"a.json"}, runArgs{file: "a.json"}, ""},
+		{[]string{"--smoke", "out.pdf"}, runArgs{smoke: "out.pdf"}, ""},
+		{[]string{"a.json", "--show", "compare"}, runArgs{file: "a.json", show: "compare"}, ""},
+		{[]string{"--smoke"}, runArgs{}, "needs a value"},
+		{[]string{"--frobnicate"}, runArgs{}, "unknown option"},
+		{[]string{"a.json", "b.json"}, runArgs{}, "one design file"},
+	}
+	for _, tc := range tests {
+		got, err := parseRunArgs(tc.args)
+		if tc.wantErr != "" {
+			if err == nil || !strings.Contains(err.Error(), tc.wantErr) {
+				t.Errorf("parseRunArgs(%q) error %v, want %q", tc.args, err, tc.wantErr)
+			}
+			continue
+		}
+		if err != nil || got != tc.want {
+			t.Errorf("parseRunArgs(%q) = %+v, %v", tc.args, got, err)
+		}
+	}
+}
+
+func TestUserFluidIsCheckedBeforeUse(t *testing.T) {
+	h := newHarness(t)
+	bad, err := os.Open("testdata/fluid_bad.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer bad.Close()
+	if _, err := readUserFluids(bad); err == nil {
+		t.Error("a fluid whose curve misses its boiling point was accepted")
+	}
+	good, err := os.Open("testdata/fluid_good.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer good.Close()
+	subs, err := readUserFluids(good)
+	if err != nil {
+		t.Fatal(err)
+	}
+	h.s.addUserFluids("", subs)
+	h.idle()
+	opt := fluidOption(subs[0].Fluid())
+	found := false
+	for _, o := range h.s.form.fluid.choose.Options {
+		found = found || o == opt
+	}
+	if !found {
+		t.Fatalf("%q not offered among %v", opt, h.s.form.fluid.choose.Options)
+	}
+	h.s.form.fluid.choose.SetSelected(opt)
+	h.idle()
+	if h.s.last.assessment == nil || h.s.last.assessment.Fluid.ID != subs[0].Fluid().ID {
+		t.Error("the design was not assessed with the added fluid")
+	}
+	if !strings.Contains(h.s.form.fluid.info.Text, "supplied by you") {
+		t.Errorf("fluid summary does not say the data are the reviewer's: %q", h.s.form.fluid.info.Text)
+	}
+}
+
+func TestFindingTexts(t *testing.T) {
+	tests := []struct {
+		f                    hazards.Finding
+		value, limit, margin string
+	}{
+		{hazards.Finding{Criterion: hazards.CriterionUllage, Unit: "%", Value: 23.1, Limit: 5, Margin: 0.181}, "23.1 %", "≥ 5 %", "+18 points"},
+		{hazards.Finding{Criterion: hazards.CriterionUllage, Unit: "%", Value: 8.8e-7, Limit: 5, Margin: -0.05}, "0 %", "≥ 5 %", "−5 points"},
+		{hazards.Finding{Criterion: hazards.CriterionBurst, Value: 1.21, Limit: 4, Margin: -0.6975}, "1.21", "≥ 4", "−70 %"},
+		{hazards.Finding{Criterion: hazards.CriterionBurst, Value: 1000, Limit: 4, Margin: 249}, "over 1000", "≥ 4", "no load"},
+		{hazards.Finding{Criterion: hazards.CriterionFailure, Value: 0.23, Limit: 1e-4, Margin: -2299}, "0.23", "≤ 1 × 10⁻⁴", "2300 × limit"},
+		{hazards.Finding{Criterion: hazards.CriterionIDLH, Unit: "ppm", Value: 882, Limit: 3300, Margin: 0.733}, "882 ppm", "≤ 3300 ppm", "+73 %"},
+		{hazards.Finding{Criterion: hazards.CriterionCorrelationUse}, "—", "—", "—"},
+	}
+	for _, tc := range tests {
+		v, l, m := findingValue(tc.f, tc.f.Value), findingLimit(tc.f), findingMargin(tc.f)
+		if v != tc.value || l != tc.limit || m != tc.margin {
+			t.Errorf("%s: %q %q %q, want %q %q %q", tc.f.Criterion, v, l, m, tc.value, tc.limit, tc.margin)
+		}
+	}
+}

@@ -1,0 +1,237 @@
+package gui
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"ullage/fluids/units"
+)
+
+// unitSystem is the set of units the form and results are shown in.
+type unitSystem string
+
+// The two unit systems a reviewer can choose.
+const (
+	unitsSI unitSystem = "si"
+	unitsUS unitSystem = "us"
+)
+
+// parseUnitSystem returns the unit system named s, SI for anything else.
+func parseUnitSystem(s string) unitSystem {
+	if s == string(unitsUS) {
+		return unitsUS
+	}
+	return unitsSI
+}
+
+// quantity is the kind of a number on screen: it decides the unit shown
+// and the conversion from and to the engine's SI value.
+type quantity int
+
+// Quantities shown on screen.
+const (
+	qNumber       quantity = iota // dimensionless (safety factor, mixing factor)
+	qTemperature                  // K ↔ °C / °F
+	qMass                         // kg ↔ g / oz
+	qLength                       // m ↔ mm / in (glass dimensions)
+	qVesselVolume                 // m³ ↔ mL / in³
+	qPressure                     // Pa ↔ kPa / psi
+	qRoomVolume                   // m³ ↔ m³ / ft³
+	qRoomLength                   // m ↔ m / ft
+	qAirSpeed                     // m/s ↔ m/s / ft/min
+	qPercent                      // %
+	qMinutes                      // min
+	qHours                        // h
+	qYears                        // years
+	qPerHour                      // air changes per hour
+	qProbability                  // a probability, no unit
+)
+
+// US customary factors: the size of one US unit in SI.
+const (
+	ounceKg        = units.PoundKg / 16
+	footM          = 12 * units.InchM
+	cubicInchM3    = units.InchM * units.InchM * units.InchM
+	footPerMinuteS = footM / 60
+)
+
+// unit returns the unit label of q in the system, "" for plain numbers.
+func (u unitSystem) unit(q quantity) string {
+	us := u == unitsUS
+	pick := func(si, usName string) string {
+		if us {
+			return usName
+		}
+		return si
+	}
+	switch q {
+	case qTemperature:
+		return pick("°C", "°F")
+	case qMass:
+		return pick("g", "oz")
+	case qLength:
+		return pick("mm", "in")
+	case qVesselVolume:
+		return pick("mL", "in³")
+	case qPressure:
+		return pick("kPa", "psi")
+	case qRoomVolume:
+		return pick("m³", "ft³")
+	case qRoomLength:
+		return pick("m", "ft")
+	case qAirSpeed:
+		return pick("m/s", "ft/min")
+	case qPercent:
+		return "%"
+	case qMinutes:
+		return "min"
+	case qHours:
+		return "h"
+	case qYears:
+		return "years"
+	case qPerHour:
+		return "per h"
+	}
+	return ""
+}
+
+// scale returns the size of one display unit of q in SI; temperature is
+// handled apart because it is affine.
+func (u unitSystem) scale(q quantity) float64 {
+	us := u == unitsUS
+	pick := func(si, usScale float64) float64 {
+		if us {
+			return usScale
+		}
+		return si
+	}
+	switch q {
+	case qMass:
+		return pick(1e-3, ounceKg)
+	case qLength:
+		return pick(1e-3, units.InchM)
+	case qVesselVolume:
+		return pick(1e-6, cubicInchM3)
+	case qPressure:
+		return pick(1e3, units.PsiPa)
+	case qRoomVolume:
+		return pick(1, units.CubicFootM3)
+	case qRoomLength:
+		return pick(1, footM)
+	case qAirSpeed:
+		return pick(1, footPerMinuteS)
+	}
+	return 1
+}
+
+// fromSI converts an engine value to the display unit.
+func (u unitSystem) fromSI(q quantity, x float64) float64 {
+	if q == qTemperature {
+		if u == unitsUS {
+			return units.KelvinToFahrenheit(x)
+		}
+		return units.KelvinToCelsius(x)
+	}
+	return x / u.scale(q)
+}
+
+// toSI converts a typed value in the display unit to the engine's SI.
+func (u unitSystem) toSI(q quantity, x float64) float64 {
+	if q == qTemperature {
+		if u == unitsUS {
+			return units.FahrenheitToKelvin(x)
+		}
+		return units.CelsiusToKelvin(x)
+	}
+	return x * u.scale(q)
+}
+
+// show formats an SI value in the display unit with its unit label, to n
+// significant digits.
+func (u unitSystem) show(q quantity, x float64, n int) string {
+	s := sigFigures(u.fromSI(q, x), n)
+	if lbl := u.unit(q); lbl != "" {
+		s += " " + lbl
+	}
+	return s
+}
+
+// entryText formats a value for an entry field to six significant
+// digits: what people type, without the noise a unit conversion leaves.
+// The engine keeps the exact value until the field is edited.
+func entryText(x float64) string {
+	if x == 0 {
+		return "0"
+	}
+	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', 6, 64), 64)
+	if err != nil {
+		return strconv.FormatFloat(x, 'g', -1, 64)
+	}
+	return strconv.FormatFloat(r, 'g', -1, 64)
+}
+
+// sigFigures formats x to n significant digits in plain notation where it
+// reads well (0.001 to 10⁷) and in scientific notation otherwise.
+func sigFigures(x float64, n int) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return "—"
+	}
+	if x == 0 {
+		return "0"
+	}
+	ax := math.Abs(x)
+	if ax >= 1e-3 && ax < 1e7 {
+		digits := n - 1 - int(math.Floor(math.Log10(ax)))
+		if digits < 0 {
+			p := math.Pow(10, float64(-digits))
+			return strconv.FormatFloat(math.Round(x/p)*p, 'f', 0, 64)
+		}
+		return trimZeros(strconv.FormatFloat(x, 'f', digits, 64))
+	}
+	s := strconv.FormatFloat(x, 'e', n-1, 64)
+	mant, exp, _ := strings.Cut(s, "e")
+	e, _ := strconv.Atoi(exp)
+	return trimZeros(mant) + " × 10" + superscript(e)
+}
+
+// trimZeros removes trailing zeros after a decimal point.
+func trimZeros(s string) string {
+	if !strings.Contains(s, ".") {
+		return s
+	}
+	s = strings.TrimRight(s, "0")
+	return strings.TrimSuffix(s, ".")
+}
+
+// superscript writes an integer exponent in superscript digits.
+func superscript(n int) string {
+	const digits = "⁰¹²³⁴⁵⁶⁷⁸⁹"
+	sup := []rune(digits)
+	var b strings.Builder
+	if n < 0 {
+		b.WriteRune('⁻')
+		n = -n
+	}
+	for _, c := range strconv.Itoa(n) {
+		b.WriteRune(sup[c-'0'])
+	}
+	return b.String()
+}
+
+// parseNumber reads a number typed by a person: surrounding blanks are
+// ignored and a single decimal comma is accepted in place of a point.
+func parseNumber(s string) (float64, bool) {
+	s = strings.TrimSpace(s)
+	if s == "" {
+		return 0, false
+	}
+	if strings.Count(s, ",") == 1 && !strings.Contains(s, ".") {
+		s = strings.Replace(s, ",", ".", 1)
+	}
+	x, err := strconv.ParseFloat(s, 64)
+	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+		return 0, false
+	}
+	return x, true
+}
