@@ -235,3 +235,19 @@ func BenchmarkSinglePhasePressureLiquid(b *testing.B) {
 		}
 	}
 }
+
+func TestLimitLabel(t *testing.T) {
+	tests := []struct {
+		l    ExposureLimit
+		want string
+	}{
+		{ExposureLimit{Body: "NIOSH", Kind: "REL", Averaging: AveragingTWA}, "NIOSH REL TWA"},
+		{ExposureLimit{Body: "NIOSH", Kind: "IDLH", Averaging: AveragingIDLH}, "NIOSH IDLH"},
+		{ExposureLimit{Body: "OSHA", Kind: "PEL", Averaging: AveragingCeiling}, "OSHA PEL ceiling"},
+	}
+	for _, tt := range tests {
+		if got := tt.l.Label(); got != tt.want {
+			t.Errorf("Label() = %q, want %q", got, tt.want)
+		}
+	}
+}

@@ -101,6 +101,16 @@ type ExposureLimit struct {
 	Source    string  `json:"source"`
 }
 
+// Label names the limit for people: body, kind and averaging, without
+// repeating a word ("NIOSH REL TWA", "OSHA PEL ceiling", "NIOSH IDLH").
+func (l ExposureLimit) Label() string {
+	s := l.Body + " " + l.Kind
+	if l.Averaging != l.Kind {
+		s += " " + l.Averaging
+	}
+	return s
+}
+
 // NonNumericLimit records a limit that exists but has no number, such as
 // NIOSH's "lowest feasible concentration" for a potential carcinogen.
 type NonNumericLimit struct {

@@ -177,7 +177,7 @@ func exposureFindings(f *fluids.Fluid, rel *releaseModel, exposureS float64, cr 
 		}
 		e := rel.exposure(period, exposureS, f.MolarMass.Value)
 		fd := atMost(k.id, k.title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
-			fmt.Sprintf("%s %s %s %g ppm: %s", lim.Body, lim.Kind, lim.Averaging, lim.PPM, lim.Source))
+			fmt.Sprintf("%s %g ppm: %s", lim.Label(), lim.PPM, lim.Source))
 		where := "the whole room, well mixed"
 		if e.Zone == NearField {
 			where = "the near field beside the breakage"
