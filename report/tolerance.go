@@ -5,7 +5,6 @@ import (
 	"math"
 	"strings"
 
-	"ullage/hazards"
 	"ullage/hazards/tolerance"
 )
 
@@ -122,8 +121,8 @@ func (w *assessmentWriter) histogramChart(h tolerance.Histogram) {
 	if h.Below+h.Above > 0 {
 		d.note(fmt.Sprintf("%d units below and %d above the range shown.", h.Below, h.Above))
 	}
-	if hi >= 0.99*hazards.SafetyFactorCap {
-		d.note(fmt.Sprintf("Units not over-pressurised at their hottest temperature carry no burst load; they are counted at the cap of %d.", hazards.SafetyFactorCap))
+	if h.NoLoad > 0 {
+		d.note(fmt.Sprintf("%d units are not over-pressurised at their hottest temperature and carry no burst load; they are not drawn.", h.NoLoad))
 	}
 }
 

@@ -62,14 +62,17 @@ func (s *session) revisionMeta(label string) report.Meta {
 	return m
 }
 
-// writeAssessmentPDF writes the assessment record of the working copy;
-// both the Export menu and --smoke come through here.
+// writeAssessmentPDF writes the assessment record of the working copy,
+// with the tolerance study when one was run on the working copy as it is
+// now; both the Export menu and --smoke come through here.
 func (s *session) writeAssessmentPDF(w io.Writer) error {
 	if s.last.assessment == nil || s.stale() {
 		return errNoResults
 	}
+	opts := s.settings.reportOptions()
+	opts.Tolerance = s.currentStudy()
 	var buf bytes.Buffer
-	if err := report.WriteAssessment(&buf, s.recordMeta(), s.last.assessment, s.settings.reportOptions()); err != nil {
+	if err := report.WriteAssessment(&buf, s.recordMeta(), s.last.assessment, opts); err != nil {
 		return fmt.Errorf("the record could not be written: %w", err)
 	}
 	_, err := w.Write(buf.Bytes())

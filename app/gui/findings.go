@@ -15,10 +15,17 @@ type findingsList struct {
 	rows     []hazards.Finding
 	stale    bool
 	selected int
+	// quiet is true while the list selects a row itself, so that only the
+	// reviewer's own choice opens the working.
+	quiet bool
+	// onPick runs when the reviewer chooses a finding, or asks for the
+	// working of the one selected.
+	onPick func(hazards.Finding)
 
-	list   *widget.List
-	detail *widget.RichText
-	object fyne.CanvasObject
+	list    *widget.List
+	detail  *widget.RichText
+	working *widget.Button
+	object  fyne.CanvasObject
 }
 
 // Column widths of the findings table: status, criterion, value, limit,
@@ -63,6 +70,9 @@ func newFindingsList() *findingsList {
 	fl.list.OnSelected = func(id widget.ListItemID) {
 		fl.selected = id
 		fl.describe()
+		if !fl.quiet {
+			fl.pick()
+		}
 	}
 	head := []fyne.CanvasObject{container.New(fixedWidth{statusColumnWidth}, bold("Status"))}
 	for _, h := range []string{"Criterion", "Value", "Limit", "Margin"} {
@@ -70,7 +80,11 @@ func newFindingsList() *findingsList {
 	}
 	fl.detail = widget.NewRichText()
 	fl.detail.Wrapping = fyne.TextWrapWord
-	detail := container.NewVBox(widget.NewSeparator(), fl.detail)
+	fl.working = widget.NewButtonWithIcon("Show the working", theme.NavigateNextIcon(), fl.pick)
+	fl.working.IconPlacement = widget.ButtonIconTrailingText
+	fl.working.Disable()
+	detail := container.NewVBox(widget.NewSeparator(),
+		container.NewBorder(nil, nil, nil, container.NewVBox(fl.working), fl.detail))
 	fl.object = container.NewBorder(container.New(findingColumns, head...), detail, nil, nil, fl.list)
 	return fl
 }
@@ -121,12 +135,33 @@ func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 		fl.selected = 0
 	}
 	fl.list.Refresh()
+	fl.quiet = true
 	if fl.selected >= 0 {
 		fl.list.Select(fl.selected)
 	} else {
 		fl.list.UnselectAll()
 	}
+	fl.quiet = false
 	fl.describe()
+}
+
+// selectCriterion selects the finding of a criterion without opening
+// its working again.
+func (fl *findingsList) selectCriterion(c string) {
+	for i, f := range fl.rows {
+		if f.Criterion == c && i != fl.selected {
+			fl.quiet = true
+			fl.list.Select(i)
+			fl.quiet = false
+		}
+	}
+}
+
+// pick opens the working of the selected finding.
+func (fl *findingsList) pick() {
+	if fl.onPick != nil && fl.selected >= 0 && fl.selected < len(fl.rows) {
+		fl.onPick(fl.rows[fl.selected])
+	}
 }
 
 // describe shows the selected finding's message and limit source.
@@ -134,13 +169,21 @@ func (fl *findingsList) describe() {
 	if fl.selected < 0 || fl.selected >= len(fl.rows) {
 		fl.detail.Segments = nil
 		fl.detail.Refresh()
+		fl.working.Disable()
 		return
 	}
 	f := fl.rows[fl.selected]
+	fl.working.Enable()
 	fl.detail.Segments = []widget.RichTextSegment{
 		&widget.TextSegment{Text: statusWord(f.Status) + " — " + f.Title + ". ", Style: widget.RichTextStyle{Inline: true, TextStyle: fyne.TextStyle{Bold: true}}},
 		&widget.TextSegment{Text: f.Message, Style: widget.RichTextStyleParagraph},
 		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
+	}
+	if len(f.Steps) > 0 {
+		fl.detail.Segments = append(fl.detail.Segments, &widget.TextSegment{
+			Text:  "Working: " + stepsPhrase(f.Steps) + " of the calculation record.",
+			Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground},
+		})
 	}
 	fl.detail.Refresh()
 }

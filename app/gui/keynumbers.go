@@ -5,6 +5,7 @@ import (
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
@@ -12,20 +13,34 @@ import (
 
 // keyNumbers lists the numbers behind the findings: the vessel at the
 // hottest and coldest temperatures, the glass, the limits, the rupture
-// and the release.
+// and the release. Tapping a row opens the working behind it.
 type keyNumbers struct {
-	grid   *fyne.Container
+	box    *fyne.Container
+	rows   []keyRow
+	taps   []*tapRow
 	object fyne.CanvasObject
+	// onPick runs when the reviewer taps a row.
+	onPick func(keyRow)
+	// marked is the label of the row whose working is shown, "" for none.
+	marked string
 }
 
 func newKeyNumbers() *keyNumbers {
-	k := &keyNumbers{grid: container.New(keyLayout{})}
-	k.object = container.NewPadded(k.grid)
+	k := &keyNumbers{box: container.NewVBox()}
+	k.object = container.NewPadded(k.box)
 	return k
 }
 
-// keyRows returns the label and value of every key number.
-func keyRows(a *hazards.Assessment, u unitSystem) [][2]string {
+// keyRow is one key number: its label, its value as shown and the
+// calculation-record steps behind it, named by their trace keys
+// (hazards.Assessment.TraceStep), the one that produced it first.
+type keyRow struct {
+	label, value string
+	trace        []string
+}
+
+// keyRows returns every key number with the steps behind it.
+func keyRows(a *hazards.Assessment, u unitSystem) []keyRow {
 	d := a.Design
 	lf := "never, below the critical temperature"
 	if a.LiquidFullReached {
@@ -40,38 +55,53 @@ func keyRows(a *hazards.Assessment, u unitSystem) [][2]string {
 		}
 		return ""
 	}
-	rows := [][2]string{
-		{"Fluid", a.Fluid.Name},
-		{"Internal volume", u.show(qVesselVolume, a.VolumeM3, 4)},
-		{"Fill density", sigFigures(a.FillDensity, 4) + " kg/m³"},
-		{"Liquid share when sealed", sigFigures(a.LiquidFractionAtSealing*100, 3) + " %"},
-		{"State at the hottest", fmt.Sprintf("%s at %s", a.Hot.Phase, u.show(qTemperature, d.HottestK, 4))},
-		{"Pressure at the hottest (absolute)", u.show(qPressure, a.Hot.PressurePa, 4)},
-		{"Ullage at the hottest", sigFigures(a.Hot.UllagePercent, 3) + " %"},
-		{"Goes liquid-full at", lf},
-		{"Allowable pressure (absolute)", u.show(qPressure, a.AllowablePressurePa(), 4) + " at safety factor " + sigFigures(a.RequiredSafetyFactor, 3)},
-		{"Long-term burst overpressure", u.show(qPressure, a.Strength.LongTermBurstPa, 3)},
-		{"Burst safety factor", findingValue(hazards.Finding{}, a.BurstSafetyFactor)},
-		{"Failure probability over the life", sigFigures(a.FailureProbability, 2)},
-		{"Pressure at the coldest (absolute)", u.show(qPressure, a.Cold.PressurePa, 4)},
-		{"Implosion safety factor", findingValue(hazards.Finding{}, a.ImplosionSafetyFactor)},
-		{"Maximum safe temperature", u.show(qTemperature, a.MaxSafe.TemperatureK, 4) + ", set by " + a.MaxSafe.TemperatureLimitBy + bound(a.MaxSafe.TemperatureBound)},
-		{"Maximum safe fill", u.show(qMass, a.MaxSafe.FillMassKg, 4) + bound(a.MaxSafe.FillBound)},
-		{"Stored energy at rupture", sigFigures(a.Rupture.StoredEnergyJ, 3) + " J"},
-		{"Flash fraction", sigFigures(a.Rupture.FlashFraction*100, 3) + " %"},
-		{"Peak concentration", sigFigures(a.Release.Peak.PPM, 3) + " ppm (" + zoneName(a.Release.Peak.Zone) + ")"},
-		{"15-minute average", sigFigures(a.Release.STEL.PPM, 3) + " ppm"},
-		{"8-hour average", sigFigures(a.Release.TWA8h.PPM, 3) + " ppm"},
-		{"Peak share of the LFL", sigFigures(a.Release.PercentLFL, 3) + " %"},
+	row := func(label, value string, trace ...string) keyRow { return keyRow{label, value, trace} }
+	rows := []keyRow{
+		row("Fluid", a.Fluid.Name, "psat_hottest", "rhol_hottest", "rhov_hottest"),
+		row("Internal volume", u.show(qVesselVolume, a.VolumeM3, 4), "volume"),
+		row("Fill density", sigFigures(a.FillDensity, 4)+" kg/m³", "fill_density", "volume"),
+		row("Liquid share when sealed", sigFigures(a.LiquidFractionAtSealing*100, 3)+" %", "fill_density", "rhol_sealing", "rhov_sealing", "gas_moles"),
+		row("State at the hottest", fmt.Sprintf("%s at %s", a.Hot.Phase, u.show(qTemperature, d.HottestK, 4)), "state_hot"),
+		row("Pressure at the hottest (absolute)", u.show(qPressure, a.Hot.PressurePa, 4), "state_hot", "psat_hottest"),
+		row("Ullage at the hottest", sigFigures(a.Hot.UllagePercent, 3)+" %", "state_hot", "liquid_full_temperature"),
+		row("Goes liquid-full at", lf, "liquid_full_temperature"),
+		row("Allowable pressure (absolute)", u.show(qPressure, a.AllowablePressurePa(), 4)+" at safety factor "+sigFigures(a.RequiredSafetyFactor, 3), "max_safe_temperature", "long_term_burst"),
+		row("Long-term burst overpressure", u.show(qPressure, a.Strength.LongTermBurstPa, 3), "long_term_burst", "short_term_burst"),
+		row("Burst safety factor", findingValue(hazards.Finding{}, a.BurstSafetyFactor), "burst_safety_factor", "long_term_burst", "state_hot"),
+		row("Failure probability over the life", sigFigures(a.FailureProbability, 2), "failure_probability", "long_term_burst"),
+		row("Pressure at the coldest (absolute)", u.show(qPressure, a.Cold.PressurePa, 4), "state_cold", "psat_coldest"),
+		row("Implosion safety factor", findingValue(hazards.Finding{}, a.ImplosionSafetyFactor), "implosion_safety_factor", "state_cold"),
+		row("Maximum safe temperature", u.show(qTemperature, a.MaxSafe.TemperatureK, 4)+", set by "+a.MaxSafe.TemperatureLimitBy+bound(a.MaxSafe.TemperatureBound), "max_safe_temperature"),
+		row("Maximum safe fill", u.show(qMass, a.MaxSafe.FillMassKg, 4)+bound(a.MaxSafe.FillBound), "max_safe_fill"),
+		row("Stored energy at rupture", sigFigures(a.Rupture.StoredEnergyJ, 3)+" J", "stored_energy", "state_hot"),
+		row("Flash fraction", sigFigures(a.Rupture.FlashFraction*100, 3)+" %", "stored_energy"),
+		row("Peak concentration", sigFigures(a.Release.Peak.PPM, 3)+" ppm ("+zoneName(a.Release.Peak.Zone)+")", "exposure_peak", "near_field_model", "room_model"),
+		row("15-minute average", sigFigures(a.Release.STEL.PPM, 3)+" ppm", "exposure_stel", "near_field_model", "room_model"),
+		row("8-hour average", sigFigures(a.Release.TWA8h.PPM, 3)+" ppm", "exposure_twa", "room_model", "near_field_model"),
+		row("Peak share of the LFL", sigFigures(a.Release.PercentLFL, 3)+" %", "percent_lfl", "exposure_peak"),
 	}
 	for i, p := range a.Parts {
-		rows = append(rows, [2]string{fmt.Sprintf("Hoop stress, part %d (%s)", i+1, p.Name),
-			stressText(p.HoopStressPa, u) + ", " + p.Form})
+		rows = append(rows, row(fmt.Sprintf("Hoop stress, part %d (%s)", i+1, p.Name),
+			stressText(p.HoopStressPa, u)+", "+p.Form, fmt.Sprintf("stress_%d", i), "state_hot"))
 	}
 	if a.Flags.Extrapolated() {
-		rows = append(rows, [2]string{"Correlations stretched", a.Flags.String()})
+		rows = append(rows, row("Correlations stretched", a.Flags.String(), "psat_hottest", "state_hot"))
 	}
 	return rows
+}
+
+// steps returns the numbers of the steps behind a key number, without
+// repeats, skipping keys the record does not hold.
+func (r keyRow) steps(a *hazards.Assessment) []int {
+	var out []int
+	seen := map[int]bool{}
+	for _, k := range r.trace {
+		if n := a.TraceStep(k); n > 0 && !seen[n] {
+			seen[n] = true
+			out = append(out, n)
+		}
+	}
+	return out
 }
 
 // stressText shows a stress in MPa or psi.
@@ -96,48 +126,73 @@ func zoneName(z hazards.Zone) string {
 // set shows an assessment's key numbers.
 func (k *keyNumbers) set(a *hazards.Assessment, u unitSystem) {
 	if a == nil {
-		k.grid.Objects = nil
-		k.grid.Refresh()
+		k.rows, k.taps = nil, nil
+		k.box.Objects = nil
+		k.box.Refresh()
 		return
 	}
-	rows := keyRows(a, u)
-	objs := make([]fyne.CanvasObject, 0, 2*len(rows))
-	for _, r := range rows {
-		l := widget.NewLabel(r[0])
-		v := widget.NewLabelWithStyle(r[1], fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	k.rows = keyRows(a, u)
+	k.taps = make([]*tapRow, len(k.rows))
+	objs := make([]fyne.CanvasObject, len(k.rows))
+	for i, r := range k.rows {
+		l := widget.NewLabel(r.label)
+		v := widget.NewLabelWithStyle(r.value, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
 		v.Wrapping = fyne.TextWrapWord
-		objs = append(objs, l, v)
+		hint := widget.NewRichText()
+		if steps := r.steps(a); len(steps) > 0 {
+			hint.Segments = []widget.RichTextSegment{&widget.TextSegment{Text: fmt.Sprintf("step %d ›", steps[0]),
+				Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNamePlaceHolder, Alignment: fyne.TextAlignTrailing}}}
+		}
+		row := r
+		k.taps[i] = newTapRow(container.New(keyLayout{}, l, v, hint), func() {
+			if k.onPick != nil {
+				k.onPick(row)
+			}
+		})
+		k.taps[i].selected = r.label == k.marked
+		objs[i] = k.taps[i]
 	}
-	k.grid.Objects = objs
-	k.grid.Refresh()
+	k.box.Objects = objs
+	k.box.Refresh()
 }
 
-// keyLayout is a two-column table: labels at their natural width (up to
-// a limit), values filling the rest.
+// mark highlights the row with the given label, none for "".
+func (k *keyNumbers) mark(label string) {
+	k.marked = label
+	for i, t := range k.taps {
+		t.setSelected(label != "" && k.rows[i].label == label)
+	}
+}
+
+// keyLayout is one row of the key numbers: the label at a fixed width,
+// the value filling the rest, and the step it comes from at the right.
 type keyLayout struct{}
 
-const keyLabelWidth = 270
+const (
+	keyLabelWidth = 270
+	keyHintWidth  = 76
+)
 
-// MinSize is one label column and a narrow value column.
+// MinSize is the label column, a narrow value column and the hint.
 func (keyLayout) MinSize(objs []fyne.CanvasObject) fyne.Size {
-	var h float32
-	for i := 0; i+1 < len(objs); i += 2 {
-		h += max(objs[i].MinSize().Height, objs[i+1].MinSize().Height)
+	h := float32(0)
+	for _, o := range objs {
+		h = max(h, o.MinSize().Height)
 	}
-	return fyne.NewSize(keyLabelWidth+200, h)
+	return fyne.NewSize(keyLabelWidth+200+keyHintWidth, h)
 }
 
-// Layout places the pairs row by row.
+// Layout places the label, the value and the hint.
 func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
-	y := float32(0)
-	for i := 0; i+1 < len(objs); i += 2 {
-		vw := size.Width - keyLabelWidth
-		objs[i+1].Resize(fyne.NewSize(vw, objs[i+1].MinSize().Height))
-		h := max(objs[i].MinSize().Height, objs[i+1].MinSize().Height)
-		objs[i].Move(fyne.NewPos(0, y))
-		objs[i].Resize(fyne.NewSize(keyLabelWidth, h))
-		objs[i+1].Move(fyne.NewPos(keyLabelWidth, y))
-		objs[i+1].Resize(fyne.NewSize(vw, h))
-		y += h
+	if len(objs) < 3 {
+		return
 	}
+	vw := max(size.Width-keyLabelWidth-keyHintWidth, 0)
+	objs[1].Resize(fyne.NewSize(vw, objs[1].MinSize().Height))
+	objs[0].Move(fyne.NewPos(0, 0))
+	objs[0].Resize(fyne.NewSize(keyLabelWidth, size.Height))
+	objs[1].Move(fyne.NewPos(keyLabelWidth, 0))
+	objs[1].Resize(fyne.NewSize(vw, size.Height))
+	objs[2].Move(fyne.NewPos(keyLabelWidth+vw, 0))
+	objs[2].Resize(fyne.NewSize(keyHintWidth, size.Height))
 }

@@ -69,3 +69,32 @@ func (c columns) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 		x += w + gap
 	}
 }
+
+// labelColumn lays out a label at a fixed width w and a text filling the
+// rest of the row, the row as tall as the taller of the two at those
+// widths (the text may wrap).
+type labelColumn struct{ w float32 }
+
+// MinSize is the label column, a narrow text column and the height of
+// the taller cell.
+func (l labelColumn) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	h := float32(0)
+	for _, o := range objs {
+		h = max(h, o.MinSize().Height)
+	}
+	return fyne.NewSize(l.w+160, h)
+}
+
+// Layout places the label and, after it, the text.
+func (l labelColumn) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	if len(objs) < 2 {
+		return
+	}
+	tw := max(size.Width-l.w, 0)
+	objs[0].Resize(fyne.NewSize(l.w, objs[0].MinSize().Height))
+	objs[1].Resize(fyne.NewSize(tw, objs[1].MinSize().Height))
+	objs[0].Move(fyne.NewPos(0, 0))
+	objs[0].Resize(fyne.NewSize(l.w, size.Height))
+	objs[1].Move(fyne.NewPos(l.w, 0))
+	objs[1].Resize(fyne.NewSize(tw, size.Height))
+}

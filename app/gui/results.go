@@ -39,7 +39,10 @@ func newResultsPanel(s *session) *resultsPanel {
 	r.staleText.Wrapping = fyne.TextWrapWord
 	r.staleText.TextStyle = fyne.TextStyle{Bold: true}
 	staleBg := canvas.NewRectangle(tint(statusColour(hazards.StatusCaution), 70))
-	show := widget.NewButton("Show the field", func() { s.form.reveal(s.problem) })
+	show := widget.NewButton("Show the field", func() {
+		s.shell.hideWorking()
+		s.form.reveal(s.problem)
+	})
 	r.stale = container.NewStack(staleBg, container.NewBorder(nil, nil,
 		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText))
 	r.stale.Hide()
@@ -57,8 +60,17 @@ func newResultsPanel(s *session) *resultsPanel {
 	return r
 }
 
-// show redraws everything from the session's last outcome and problem.
+// show redraws everything from the session's last outcome and problem,
+// and the panels that follow them: the working and the tolerance study,
+// which is out of date once the design differs from the one it ran on.
 func (r *resultsPanel) show() {
+	r.draw()
+	r.s.working.refresh()
+	r.s.tol.refresh()
+}
+
+// draw redraws the results panel itself.
+func (r *resultsPanel) draw() {
 	s := r.s
 	o := s.last
 	u := s.units()

@@ -12,6 +12,7 @@ import (
 	"fyne.io/fyne/v2/storage"
 
 	"ullage/assets"
+	"ullage/hazards"
 )
 
 // appID is the application's identity, as in FyneApp.toml.
@@ -212,6 +213,34 @@ func (s *session) showScreen(name string) {
 		sh.showRevisions()
 	case "compare":
 		sh.showCompare()
+	case "working":
+		s.working.show(workSubject{criterion: hazards.CriterionBurst})
+	case "keyworking":
+		s.results.tabs.SelectIndex(2)
+		s.working.show(workSubject{keyLabel: "Maximum safe temperature"})
+	case "record":
+		s.working.show(workSubject{criterion: hazards.CriterionBurst})
+		s.working.mode.SetSelected(workingWhole)
+	case "study":
+		sh.showStudy()
+		s.tol.run()
+	case "study-spread":
+		s.revs.openRevision("A")
+		sh.showStudy()
+		s.tol.spread.SetText("5")
+		s.tol.hotDist.SetSelected(distributionNames["triangle"])
+		s.tol.run()
+	case "study-charts":
+		s.revs.openRevision("A")
+		sh.showStudy()
+		s.tol.spread.SetText("5")
+		s.tol.afterRun = func() {
+			go func() {
+				time.Sleep(500 * time.Millisecond)
+				s.opts.post(func() { s.tol.scroll.ScrollToOffset(fyne.NewPos(0, 520)) })
+			}()
+		}
+		s.tol.run()
 	case "preferences":
 		s.showPreferences()
 	case "about":

@@ -61,6 +61,8 @@ type session struct {
 
 	form    *designForm
 	results *resultsPanel
+	working *workingPanel
+	tol     *tolerancePanel
 	revs    *revisionsPanel
 	cmp     *comparePanel
 	shell   *shell

@@ -20,6 +20,8 @@ type shell struct {
 	review  *container.TabItem
 	revs    *container.TabItem
 	compare *container.TabItem
+	study   *container.TabItem
+	form    fyne.CanvasObject
 	units   *widget.RadioGroup
 	object  fyne.CanvasObject
 }
@@ -44,15 +46,21 @@ func buildWindow(s *session) *shell {
 	s.shell = sh
 	form := newDesignForm(s)
 	results := newResultsPanel(s)
+	working := newWorkingPanel(s)
 	revs := newRevisionsPanel(s)
 	cmp := newComparePanel(s)
+	study := newTolerancePanel(s)
+	results.list.onPick = func(f hazards.Finding) { working.show(workSubject{criterion: f.Criterion}) }
+	results.keys.onPick = func(r keyRow) { working.show(workSubject{keyLabel: r.label}) }
 
-	split := container.NewHSplit(form.object, results.object)
+	sh.form = form.object
+	split := container.NewHSplit(container.NewStack(form.object, working.object), results.object)
 	split.SetOffset(0.44)
 	sh.review = container.NewTabItemWithIcon("Design review", theme.DocumentCreateIcon(), split)
 	sh.revs = container.NewTabItemWithIcon("Revisions", theme.ListIcon(), revs.object)
 	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), cmp.object)
-	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare)
+	sh.study = container.NewTabItemWithIcon("Tolerance study", theme.GridIcon(), study.object)
+	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare, sh.study)
 
 	sh.units = widget.NewRadioGroup([]string{unitsBarSI, unitsBarUS}, func(opt string) {
 		if s.loading {
@@ -184,12 +192,35 @@ func (sh *shell) rebuildMenu() {
 func (sh *shell) showReview()    { sh.tabs.Select(sh.review) }
 func (sh *shell) showRevisions() { sh.tabs.Select(sh.revs) }
 func (sh *shell) showCompare()   { sh.tabs.Select(sh.compare) }
+func (sh *shell) showStudy()     { sh.tabs.Select(sh.study) }
+
+// showWorking puts the working panel in the design form's place.
+func (sh *shell) showWorking() {
+	wp := sh.s.working
+	wp.open = true
+	sh.form.Hide()
+	wp.object.Show()
+	sh.showReview()
+}
+
+// hideWorking brings the design form back.
+func (sh *shell) hideWorking() {
+	wp := sh.s.working
+	if !wp.open {
+		return
+	}
+	wp.open = false
+	wp.object.Hide()
+	sh.form.Show()
+	wp.refresh()
+}
 
 // requestClose asks before closing when work would be lost.
 func (s *session) requestClose() {
 	s.confirmLeave("close Ullage", func() {
 		s.stopAutosaving()
 		s.assess.cancel()
+		s.stopStudy()
 		if s.doc == nil || !s.doc.dirty() {
 			s.clearAutosave()
 		}

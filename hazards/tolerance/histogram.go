@@ -1,17 +1,44 @@
 package tolerance
 
+import (
+	"math"
+
+	"ullage/hazards"
+)
+
 // HistogramBins is the number of bins in Result.Histogram.
 const HistogramBins = 40
 
 // Histogram counts sampled values in equal bins from Edges[0] to
 // Edges[len(Edges)−1], for a chart. Bin i holds Edges[i] ≤ x < Edges[i+1]
 // (the last bin also holds its upper edge); Below and Above count the
-// values outside.
+// values outside. NoLoad counts the units left out because they carry no
+// burst load (their safety factor sits at hazards.SafetyFactorCap), so
+// that they do not squash the bins of the units that do.
 type Histogram struct {
 	Edges  []float64 `json:"edges"`
 	Counts []int     `json:"counts"`
 	Below  int       `json:"below"`
 	Above  int       `json:"above"`
+	NoLoad int       `json:"no_load"`
+}
+
+// loadedHistogram bins the safety factors of the units under burst load,
+// from 0 to the 99th percentile of those units (at least 1).
+func loadedHistogram(factors []float64) Histogram {
+	loaded := make([]float64, 0, len(factors))
+	for _, v := range factors {
+		if v < hazards.SafetyFactorCap {
+			loaded = append(loaded, v)
+		}
+	}
+	hi := 1.0
+	if len(loaded) > 0 {
+		hi = math.Max(percentiles(append([]float64(nil), loaded...), len(loaded)).P99, 1)
+	}
+	h := newHistogram(loaded, 0, hi)
+	h.NoLoad = len(factors) - len(loaded)
+	return h
 }
 
 // newHistogram counts x in HistogramBins equal bins from lo to hi (hi > lo).

@@ -25,3 +25,23 @@ func TestHistogram(t *testing.T) {
 		t.Errorf("below %d, above %d, in bins %d: want 1, 1 and %d", h.Below, h.Above, total, len(x)-2)
 	}
 }
+
+// TestLoadedHistogramLeavesOutUnloadedUnits: units at the safety-factor
+// cap (no burst load) are counted apart so they do not squash the bins.
+func TestLoadedHistogramLeavesOutUnloadedUnits(t *testing.T) {
+	x := []float64{0.5, 0.9, 1.5, 2.5, 1000, 1000, 1000}
+	h := loadedHistogram(x)
+	if h.NoLoad != 3 {
+		t.Errorf("NoLoad = %d, want 3", h.NoLoad)
+	}
+	total := h.Below + h.Above
+	for _, c := range h.Counts {
+		total += c
+	}
+	if total != 4 {
+		t.Errorf("binned %d units, want the 4 under load", total)
+	}
+	if top := h.Edges[len(h.Edges)-1]; top > 2.5 || top < 1 {
+		t.Errorf("top edge %g, want the loaded units' 99th percentile (≤ 2.5)", top)
+	}
+}

@@ -66,8 +66,9 @@ type Result struct {
 	// over-pressurised).
 	PressurePa   Percentiles `json:"pressure_pa"`
 	SafetyFactor Percentiles `json:"safety_factor"`
-	// Histogram counts the units' burst safety factors from 0 to their
-	// 99th percentile (or to 1 when that is smaller), for a chart.
+	// Histogram counts the burst safety factors of the units under burst
+	// load, from 0 to their 99th percentile (or to 1 when that is
+	// smaller), for a chart; units with no load are counted in NoLoad.
 	Histogram Histogram `json:"histogram"`
 
 	// Sensitivity ranks the varying inputs by how strongly they move the

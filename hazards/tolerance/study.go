@@ -207,8 +207,8 @@ func (st *study) result(limited bool) *Result {
 		func() { r.Sensitivity = sensitivity(p.inputs, st.columns, y, max(s.Workers-2, 1)) },
 		func() { r.PressurePa = percentiles(st.pressure, n-all.unsealable) },
 		func() {
+			r.Histogram = loadedHistogram(st.factor)
 			r.SafetyFactor = percentiles(st.factor, n)
-			r.Histogram = newHistogram(st.factor, 0, math.Max(r.SafetyFactor.P99, 1))
 		})
 	return r
 }

@@ -1,0 +1,37 @@
+package gui
+
+import (
+	"image/color"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/theme"
+)
+
+// compactTheme is the app's theme with tighter padding, for long runs of
+// short lines such as the steps of the working. Everything but the
+// padding comes from the theme in use when it is asked.
+type compactTheme struct{}
+
+func (compactTheme) current() fyne.Theme { return fyne.CurrentApp().Settings().Theme() }
+
+// Color is the current theme's colour.
+func (t compactTheme) Color(n fyne.ThemeColorName, v fyne.ThemeVariant) color.Color {
+	return t.current().Color(n, v)
+}
+
+// Font is the current theme's font.
+func (t compactTheme) Font(s fyne.TextStyle) fyne.Resource { return t.current().Font(s) }
+
+// Icon is the current theme's icon.
+func (t compactTheme) Icon(n fyne.ThemeIconName) fyne.Resource { return t.current().Icon(n) }
+
+// Size is the current theme's size, with less padding around text.
+func (t compactTheme) Size(n fyne.ThemeSizeName) float32 {
+	switch n {
+	case theme.SizeNameInnerPadding:
+		return 3
+	case theme.SizeNamePadding:
+		return 2
+	}
+	return t.current().Size(n)
+}

@@ -1,0 +1,198 @@
+package gui
+
+import (
+	"bytes"
+	"context"
+	"errors"
+	"reflect"
+	"strings"
+	"testing"
+)
+
+// runStudyWith types the study's settings, taps Run and waits for it.
+func (h *harness) runStudyWith(units, seed, spread string) {
+	h.t.Helper()
+	tp := h.s.tol
+	tp.units.SetText(units)
+	tp.seed.SetText(seed)
+	tp.spread.SetText(spread)
+	button(h.t, tp.object, "Run the study").OnTapped()
+	h.idle()
+}
+
+func TestSmallStudyFillsThePanel(t *testing.T) {
+	h := newHarness(t)
+	tp := h.s.tol
+	if !tp.empty.Visible() || tp.results.Visible() {
+		t.Fatal("results shown before any study")
+	}
+	h.runStudyWith("2000", "7", "5")
+	r := tp.st.result
+	if r == nil {
+		t.Fatalf("no result; status %q, error %v", tp.status.Text, tp.st.err)
+	}
+	if r.Samples != 2000 || r.Seed != 7 || r.HottestSpreadK != 5 {
+		t.Errorf("study ran with %d units, seed %d, spread %g K", r.Samples, r.Seed, r.HottestSpreadK)
+	}
+	if tp.empty.Visible() || !tp.results.Visible() || tp.staleBox.Visible() {
+		t.Error("the results are not shown as current")
+	}
+	text := shownText(tp.results)
+	for _, want := range []string{
+		proportionText(r.LiquidFullFraction), proportionText(r.BurstFraction),
+		"Release above a governing exposure limit", "P50", "Unit safety factor", "Hottest temperature",
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("the panel lacks %q", want)
+		}
+	}
+	n := tp.hist.hist.Below + tp.hist.hist.Above + tp.hist.hist.NoLoad
+	for _, c := range tp.hist.hist.Counts {
+		n += c
+	}
+	if n != 2000 {
+		t.Errorf("the histogram accounts for %d units, want 2000", n)
+	}
+	if len(tp.drivers.drivers) != len(r.Sensitivity) || len(r.Sensitivity) == 0 {
+		t.Errorf("%d drivers drawn of %d", len(tp.drivers.drivers), len(r.Sensitivity))
+	}
+	if !strings.HasPrefix(tp.status.Text, "Finished") || tp.busy.Visible() || tp.runBtn.Disabled() || !tp.cancelBtn.Disabled() {
+		t.Errorf("the panel still looks busy: %q", tp.status.Text)
+	}
+
+	// The same seed gives the same numbers; another seed other numbers.
+	first := *r
+	h.runStudyWith("2000", "7", "5")
+	if !reflect.DeepEqual(first, *tp.st.result) || shownText(tp.results) != text {
+		t.Error("the same seed gave different numbers")
+	}
+	h.runStudyWith("2000", "8", "5")
+	if reflect.DeepEqual(first.PressurePa, tp.st.result.PressurePa) {
+		t.Error("another seed gave the same pressures")
+	}
+}
+
+func TestStudyRefusesBadSettings(t *testing.T) {
+	tests := []struct {
+		units, seed, spread string
+		want                string
+	}{
+		{"lots", "1", "0", "units to draw \"lots\""},
+		{"0", "1", "0", "from 1 to"},
+		{"20000000", "1", "0", "from 1 to"},
+		{"100", "-3", "0", "seed \"-3\""},
+		{"100", "1", "200", "0 to 100 K"},
+		{"100", "1", "x", "hottest temperature spread \"x\""},
+	}
+	for _, tc := range tests {
+		h := newHarness(t)
+		h.runStudyWith(tc.units, tc.seed, tc.spread)
+		tp := h.s.tol
+		if tp.st.result != nil || !tp.problem.Visible() || !strings.Contains(tp.problem.Text, tc.want) {
+			t.Errorf("%q, %q, %q: message %q (shown %v), want it to mention %q", tc.units, tc.seed, tc.spread, tp.problem.Text, tp.problem.Visible(), tc.want)
+		}
+	}
+}
+
+func TestStudyCanBeCancelled(t *testing.T) {
+	h := newHarness(t)
+	tp := h.s.tol
+	tp.units.SetText("3000000")
+	tp.run()
+	if !tp.busy.Visible() || !tp.runBtn.Disabled() || tp.cancelBtn.Disabled() {
+		t.Error("a running study shows no busy state")
+	}
+	tp.cancelBtn.OnTapped()
+	h.idle()
+	if !errors.Is(tp.st.err, context.Canceled) || tp.st.result != nil || !strings.HasPrefix(tp.status.Text, "Cancelled") {
+		t.Errorf("after cancelling: error %v, status %q", tp.st.err, tp.status.Text)
+	}
+	if tp.busy.Visible() || tp.runBtn.Disabled() {
+		t.Error("the panel still looks busy after cancelling")
+	}
+}
+
+func TestStudyGoesOutOfDateWhenTheDesignChanges(t *testing.T) {
+	h := newHarness(t)
+	h.runStudyWith("2000", "1", "0")
+	if h.s.currentStudy() == nil {
+		t.Fatal("a fresh study is not current")
+	}
+	h.typeInto("fill_mass_kg", "15")
+	tp := h.s.tol
+	if h.s.currentStudy() != nil || !tp.staleBox.Visible() || !tp.hist.faded {
+		t.Error("the study is not marked out of date after the fill changed")
+	}
+	if !strings.Contains(tp.about.Text, "out of date") {
+		t.Errorf("the panel does not say the study is left out of the record: %q", tp.about.Text)
+	}
+}
+
+func TestExportCarriesTheStudy(t *testing.T) {
+	h := newHarness(t)
+	export := func() string {
+		var buf bytes.Buffer
+		if err := h.s.writeAssessmentPDF(&buf); err != nil {
+			t.Fatal(err)
+		}
+		return pdfText(t, buf.Bytes())
+	}
+	if strings.Contains(export(), "Tolerance study") {
+		t.Error("a record with no study run has a tolerance section")
+	}
+	h.runStudyWith("2000", "1", "0")
+	if text := export(); !strings.Contains(text, "Tolerance study") || !strings.Contains(text, "2000 units were drawn") {
+		t.Error("the record lacks the tolerance study")
+	}
+	h.typeInto("fill_mass_kg", "15")
+	if strings.Contains(export(), "Tolerance study") {
+		t.Error("an out-of-date study went into the record")
+	}
+}
+
+func TestStudySpreadFollowsTheUnits(t *testing.T) {
+	h := newHarness(t)
+	tp := h.s.tol
+	tp.spread.SetText("5")
+	h.s.setUnits(unitsUS)
+	h.idle()
+	// A difference of 5 K is 9 °F (1 K = 1.8 °F, NIST SP 811 appendix B).
+	if tp.spread.Text != "9" || tp.spreadUnit.Text != "°F" {
+		t.Errorf("5 K in US units reads %q %s, want 9 °F", tp.spread.Text, tp.spreadUnit.Text)
+	}
+	set, err := tp.settings()
+	if err != nil || set.HottestSpreadK < 4.999999 || set.HottestSpreadK > 5.000001 {
+		t.Errorf("the study would run with a spread of %g K (%v), want 5", set.HottestSpreadK, err)
+	}
+}
+
+func TestGroupDigits(t *testing.T) {
+	tests := []struct {
+		in   int
+		want string
+	}{
+		{0, "0"}, {999, "999"}, {1000, "1\u202f000"}, {100000, "100\u202f000"}, {10000000, "10\u202f000\u202f000"}, {-1234, "−1\u202f234"},
+	}
+	for _, tc := range tests {
+		if got := groupDigits(tc.in); got != tc.want {
+			t.Errorf("groupDigits(%d) = %q, want %q", tc.in, got, tc.want)
+		}
+	}
+}
+
+func TestParseCount(t *testing.T) {
+	tests := []struct {
+		in   string
+		want uint64
+		ok   bool
+	}{
+		{"100000", 100000, true}, {"100 000", 100000, true}, {"100_000", 100000, true}, {" 7 ", 7, true},
+		{"", 0, false}, {"1e5", 0, false}, {"-3", 0, false}, {"1,5", 0, false}, {"2.5", 0, false},
+	}
+	for _, tc := range tests {
+		got, ok := parseCount(tc.in)
+		if ok != tc.ok || got != tc.want {
+			t.Errorf("parseCount(%q) = %d, %v; want %d, %v", tc.in, got, ok, tc.want, tc.ok)
+		}
+	}
+}

@@ -1,0 +1,392 @@
+package gui
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"strings"
+	"time"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/canvas"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+	"ullage/hazards/tolerance"
+)
+
+// Defaults of the study's settings.
+const (
+	defaultStudyUnits = 100_000
+	defaultStudySeed  = 1
+)
+
+// tolerancePanel is the tolerance study screen: the study's settings and
+// Run and Cancel on the left, the fractions of units that fail with their
+// intervals, the spread of pressure and safety factor, a histogram and
+// the ranked drivers of the margin on the right.
+type tolerancePanel struct {
+	s  *session
+	st study
+
+	units, seed, spread *widget.Entry
+	spreadUnit          *widget.Label
+	hotDist, dimDist    *widget.Select
+	varies              *widget.Label
+	problem             *widget.Label
+	runBtn, cancelBtn   *widget.Button
+	busy                *widget.ProgressBarInfinite
+	status              *widget.Label
+
+	// spreadK is the ± spread of the hottest temperature in kelvin, as
+	// last read; shownUnits the unit system the spread entry is in.
+	spreadK    float64
+	shownUnits unitSystem
+
+	empty     *widget.Label
+	staleBox  *fyne.Container
+	about     *widget.Label
+	fractions *fyne.Container
+	spreadTab *fyne.Container
+	hist      *barChart
+	histNote  *widget.Label
+	drivers   *barChart
+	driveNote *widget.Label
+	inputs    *fyne.Container
+	results   *fyne.Container
+	scroll    *container.Scroll
+	// afterRun, when set, runs once after the next study ends.
+	afterRun func()
+
+	object fyne.CanvasObject
+}
+
+// newTolerancePanel builds the study screen.
+func newTolerancePanel(s *session) *tolerancePanel {
+	tp := &tolerancePanel{s: s, shownUnits: s.units()}
+	s.tol = tp
+	tp.units = widget.NewEntry()
+	tp.units.SetText(fmt.Sprint(defaultStudyUnits))
+	tp.units.Validator = func(t string) error { _, err := readStudyUnits(t); return err }
+	tp.seed = widget.NewEntry()
+	tp.seed.SetText(fmt.Sprint(defaultStudySeed))
+	tp.seed.Validator = func(t string) error { _, err := readStudySeed(t); return err }
+	tp.spread = widget.NewEntry()
+	tp.spread.SetText("0")
+	tp.spread.Validator = func(t string) error { _, err := readStudySpread(t, tp.s.units()); return err }
+	tp.spread.OnChanged = func(string) { tp.showVaries() }
+	tp.spreadUnit = widget.NewLabel(spreadUnit(s.units()))
+	names := []string{distributionNames[tolerance.Normal], distributionNames[tolerance.Uniform], distributionNames[tolerance.Triangle]}
+	tp.hotDist = widget.NewSelect(names, nil)
+	tp.hotDist.SetSelected(names[0])
+	tp.dimDist = widget.NewSelect(names[:2], nil)
+	tp.dimDist.SetSelected(names[0])
+
+	form := widget.NewForm(
+		&widget.FormItem{Text: "Units to draw", Widget: tp.units, HintText: fmt.Sprintf("1 to %s", groupDigits(tolerance.MaxSamples))},
+		&widget.FormItem{Text: "Seed", Widget: tp.seed, HintText: "the same seed gives the same numbers"},
+		&widget.FormItem{Text: "Hottest temperature ±", Widget: container.NewBorder(nil, nil, nil, tp.spreadUnit, tp.spread), HintText: "0: every unit at the design's hottest"},
+		&widget.FormItem{Text: "Hottest spread as", Widget: tp.hotDist},
+		&widget.FormItem{Text: "Fill, volume, walls as", Widget: tp.dimDist, HintText: "the ± tolerances on the design form"},
+	)
+	intro := widget.NewLabel("Draws many units of the working copy, each with its own fill, walls, hottest temperature and glass strength, and counts those that go liquid-full, burst or would release too much vapour.")
+	intro.Wrapping = fyne.TextWrapWord
+	tp.varies = widget.NewLabel("")
+	tp.varies.Wrapping = fyne.TextWrapWord
+	tp.problem = widget.NewLabel("")
+	tp.problem.Wrapping = fyne.TextWrapWord
+	tp.problem.Importance = widget.DangerImportance
+	tp.problem.Hide()
+	tp.runBtn = widget.NewButtonWithIcon("Run the study", theme.MediaPlayIcon(), tp.run)
+	tp.runBtn.Importance = widget.HighImportance
+	tp.cancelBtn = widget.NewButtonWithIcon("Cancel", theme.CancelIcon(), s.stopStudy)
+	tp.cancelBtn.Disable()
+	tp.busy = widget.NewProgressBarInfinite()
+	tp.busy.Stop()
+	tp.busy.Hide()
+	tp.status = widget.NewLabel("")
+	tp.status.Wrapping = fyne.TextWrapWord
+	left := container.NewVBox(
+		heading("Unit-to-unit variation"), intro, form, tp.problem,
+		container.NewGridWithColumns(2, tp.runBtn, tp.cancelBtn), tp.busy, tp.status,
+		widget.NewSeparator(), bold("What varies from unit to unit"), tp.varies,
+	)
+
+	tp.empty = widget.NewLabel("No study yet. Choose the settings on the left and run it; it takes a second or so.")
+	tp.empty.Wrapping = fyne.TextWrapWord
+	staleText := widget.NewLabel("OUT OF DATE: the design changed after this study was run. It is left out of the exported record until it is run again.")
+	staleText.Wrapping = fyne.TextWrapWord
+	staleText.TextStyle = fyne.TextStyle{Bold: true}
+	tp.staleBox = container.NewStack(canvas.NewRectangle(tint(statusColour(hazards.StatusCaution), 70)),
+		container.NewBorder(nil, nil, widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), nil, staleText))
+	tp.staleBox.Hide()
+	tp.about = widget.NewLabel("")
+	tp.about.Wrapping = fyne.TextWrapWord
+	tp.fractions = container.NewVBox()
+	tp.spreadTab = container.NewVBox()
+	tp.hist = newBarChart(barsHistogram)
+	tp.histNote = caption("")
+	tp.drivers = newBarChart(barsDrivers)
+	tp.driveNote = caption("")
+	tp.inputs = container.NewVBox()
+	tp.results = container.NewVBox(
+		tp.about,
+		heading("Units that fail"), tp.fractions,
+		caption("Intervals are 95 % Wilson score intervals (Wilson, J. Am. Stat. Assoc. 22, 209 (1927)). A unit bursts when its own glass strength, a Weibull draw, is below its hoop stress at its hottest temperature. The expected burst fraction averages each unit's failure probability with the strength integrated out: far more precise than the count when bursts are rare."),
+		heading("Spread over the units"), tp.spreadTab,
+		tp.hist, tp.histNote,
+		tp.drivers, tp.driveNote,
+		heading("Inputs that varied"), tp.inputs,
+	)
+	tp.results.Hide()
+	right := container.NewVScroll(container.NewPadded(container.NewVBox(tp.staleBox, tp.empty, tp.results)))
+	tp.scroll = right
+
+	split := container.NewHSplit(container.NewVScroll(container.NewPadded(left)), right)
+	split.SetOffset(0.32)
+	tp.object = split
+	return tp
+}
+
+// heading is a section heading of the study screen.
+func heading(s string) *widget.Label {
+	l := widget.NewLabelWithStyle(s, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	l.SizeName = theme.SizeNameSubHeadingText
+	return l
+}
+
+// caption is a small wrapped note.
+func caption(s string) *widget.Label {
+	l := widget.NewLabel(s)
+	l.Wrapping = fyne.TextWrapWord
+	l.SizeName = theme.SizeNameCaptionText
+	return l
+}
+
+// readStudyUnits reads the number of units.
+func readStudyUnits(t string) (int, error) {
+	n, ok := parseCount(t)
+	if !ok || n < 1 || n > tolerance.MaxSamples {
+		return 0, fmt.Errorf("units to draw %q: give a whole number from 1 to %s", strings.TrimSpace(t), groupDigits(tolerance.MaxSamples))
+	}
+	return int(n), nil
+}
+
+// readStudySeed reads the seed.
+func readStudySeed(t string) (uint64, error) {
+	n, ok := parseCount(t)
+	if !ok {
+		return 0, fmt.Errorf("seed %q: give a whole number, 0 or more", strings.TrimSpace(t))
+	}
+	return n, nil
+}
+
+// readStudySpread reads the hottest temperature's spread, typed in K or
+// °F, and returns it in kelvin.
+func readStudySpread(t string, u unitSystem) (float64, error) {
+	x, ok := parseNumber(t)
+	k := x * spreadScale(u)
+	if !ok || k < 0 || k > 100 {
+		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s %s", strings.TrimSpace(t), sigFigures(100/spreadScale(u), 3), spreadUnit(u))
+	}
+	return k, nil
+}
+
+// settings reads the study's settings from the panel, or says which
+// entry is not acceptable.
+func (tp *tolerancePanel) settings() (tolerance.Settings, error) {
+	n, err := readStudyUnits(tp.units.Text)
+	if err != nil {
+		return tolerance.Settings{}, err
+	}
+	seed, err := readStudySeed(tp.seed.Text)
+	if err != nil {
+		return tolerance.Settings{}, err
+	}
+	spread, err := readStudySpread(tp.spread.Text, tp.s.units())
+	if err != nil {
+		return tolerance.Settings{}, err
+	}
+	return tolerance.Settings{
+		Samples: n, Seed: seed, Workers: studyWorkers(), HottestSpreadK: spread,
+		HottestDistribution: distributionOf(tp.hotDist.Selected), DimensionDistribution: distributionOf(tp.dimDist.Selected),
+	}, nil
+}
+
+// run starts a study of the working copy with the panel's settings.
+func (tp *tolerancePanel) run() {
+	s := tp.s
+	set, err := tp.settings()
+	if err == nil && s.form.firstParseProblem() != nil {
+		err = errors.New("a field on the design form is not a number: fix the marked input first")
+	}
+	if err != nil {
+		tp.problem.SetText(err.Error())
+		tp.problem.Show()
+		return
+	}
+	tp.problem.Hide()
+	s.startStudy(set, func() {
+		tp.refresh()
+		if f := tp.afterRun; f != nil {
+			tp.afterRun = nil
+			f()
+		}
+	})
+	tp.status.SetText(fmt.Sprintf("Drawing %s units…", groupDigits(set.Samples)))
+	tp.refresh()
+}
+
+// showVaries lists what will vary, from the design and the spread typed.
+func (tp *tolerancePanel) showVaries() {
+	if tp.s.doc == nil {
+		return
+	}
+	k, err := readStudySpread(tp.spread.Text, tp.s.units())
+	if err != nil {
+		k = tp.spreadK
+	}
+	tp.spreadK = k
+	tp.varies.SetText("• " + strings.Join(variedInputs(&tp.s.doc.Work, k, tp.s.units()), "\n• "))
+}
+
+// refresh redraws the panel from the study's state.
+func (tp *tolerancePanel) refresh() {
+	s, st := tp.s, &tp.st
+	u := s.units()
+	if u != tp.shownUnits {
+		tp.shownUnits = u
+		tp.spread.SetText(entryText(tp.spreadK / spreadScale(u)))
+		tp.spreadUnit.SetText(spreadUnit(u))
+	}
+	tp.showVaries()
+	if st.running {
+		tp.runBtn.Disable()
+		tp.cancelBtn.Enable()
+		tp.busy.Show()
+		tp.busy.Start()
+	} else {
+		tp.runBtn.Enable()
+		tp.cancelBtn.Disable()
+		tp.busy.Stop()
+		tp.busy.Hide()
+		switch {
+		case errors.Is(st.err, context.Canceled):
+			tp.status.SetText("Cancelled. The results shown, if any, are from the run before.")
+		case st.err != nil:
+			tp.status.SetText("The study could not run: " + st.err.Error())
+		case st.result != nil:
+			tp.status.SetText(fmt.Sprintf("Finished in %s.", durationText(st.took)))
+		}
+	}
+	r := st.result
+	if r == nil {
+		tp.empty.Show()
+		tp.results.Hide()
+		tp.staleBox.Hide()
+		return
+	}
+	tp.empty.Hide()
+	current := s.studyCurrent()
+	if current {
+		tp.staleBox.Hide()
+	} else {
+		tp.staleBox.Show()
+	}
+	in := "It goes into the exported assessment record."
+	if !current {
+		in = "It is out of date and stays out of the exported record."
+	}
+	tp.about.SetText(fmt.Sprintf("%s units of %s, seed %d, hottest temperature ± %s %s (%s), fill, volume and walls %s. %s",
+		groupDigits(r.Samples), st.of, r.Seed, sigFigures(r.HottestSpreadK/spreadScale(u), 3), spreadUnit(u), r.HottestDistribution, r.DimensionDistribution, in))
+	tp.showFractions(r)
+	tp.showSpread(r, u)
+	tp.hist.setHistogram(r.Histogram, !current)
+	tp.histNote.SetText(histogramNotes(r.Histogram, r))
+	tp.drivers.setDrivers(r.Sensitivity, !current)
+	tp.driveNote.SetText(fmt.Sprintf("Spearman rank correlation of each input with the unit safety factor over the first %s units, strongest first. A filled bar to the left means a larger value lowers the margin; tighten those tolerances first. An outlined bar to the right means it raises the margin.", groupDigits(r.SensitivityUnits)))
+	tp.showInputs(r, u)
+	tp.results.Show()
+}
+
+// showFractions lists the fractions of units that fail, each with its
+// interval.
+func (tp *tolerancePanel) showFractions(r *tolerance.Result) {
+	rows := [][2]string{
+		{"Liquid-full below their hottest temperature", proportionText(r.LiquidFullFraction)},
+		{"Burst over the service life", proportionText(r.BurstFraction)},
+	}
+	if r.ExposureLimited {
+		rows = append(rows, [2]string{"Release above a governing exposure limit", proportionText(r.ExposureExceedFraction)})
+	} else {
+		rows = append(rows, [2]string{"Release above a governing exposure limit", "not assessed: no published numeric limit applies to this fluid"})
+	}
+	rows = append(rows, [2]string{"Expected burst fraction", sigFigures(r.MeanFailureProbability, 2)})
+	if r.ExtrapolatedUnits > 0 {
+		rows = append(rows, [2]string{"Outside a correlation's range ‡", plural(r.ExtrapolatedUnits, "unit") + ": the fractions are estimates to confirm by test"})
+	}
+	tp.fractions.Objects = pairRows(rows)
+	tp.fractions.Refresh()
+}
+
+// showSpread tabulates the percentiles of pressure and safety factor.
+func (tp *tolerancePanel) showSpread(r *tolerance.Result, u unitSystem) {
+	cells := []fyne.CanvasObject{bold("")}
+	for _, h := range []string{"P1", "P5", "P50", "P95", "P99"} {
+		cells = append(cells, widget.NewLabelWithStyle(h, fyne.TextAlignTrailing, fyne.TextStyle{Bold: true}))
+	}
+	row := func(name string, p tolerance.Percentiles, f func(float64) string) {
+		cells = append(cells, widget.NewLabel(name))
+		for _, x := range []float64{p.P1, p.P5, p.P50, p.P95, p.P99} {
+			cells = append(cells, widget.NewLabelWithStyle(f(x), fyne.TextAlignTrailing, fyne.TextStyle{}))
+		}
+	}
+	row("Pressure, "+u.unit(qPressure)+" abs.", r.PressurePa, func(x float64) string { return sigFigures(u.fromSI(qPressure, x), 4) })
+	row("Unit safety factor", r.SafetyFactor, func(x float64) string {
+		if x >= hazards.SafetyFactorCap {
+			return "over " + sigFigures(hazards.SafetyFactorCap, 4)
+		}
+		return sigFigures(x, 3)
+	})
+	tp.spreadTab.Objects = []fyne.CanvasObject{container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[:6]...),
+		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[6:12]...),
+		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[12:]...)}
+	tp.spreadTab.Refresh()
+}
+
+// showInputs lists the inputs that varied and their distributions.
+func (tp *tolerancePanel) showInputs(r *tolerance.Result, u unitSystem) {
+	rows := make([][2]string, 0, len(r.Inputs))
+	for _, in := range r.Inputs {
+		v := studyInputValue(in.Key, in.Nominal, u) + ", " + studyInputSpread(in, u)
+		if in.Distribution != tolerance.Weibull {
+			v += " (" + in.Distribution + ")"
+		}
+		rows = append(rows, [2]string{capitalise(in.Label), v})
+	}
+	tp.inputs.Objects = pairRows(rows)
+	tp.inputs.Refresh()
+}
+
+// studyLabelWidth is the label column of the study's results.
+const studyLabelWidth = 250
+
+// pairRows lays label and value pairs out as rows of two columns.
+func pairRows(rows [][2]string) []fyne.CanvasObject {
+	out := make([]fyne.CanvasObject, len(rows))
+	for i, r := range rows {
+		v := widget.NewLabelWithStyle(r[1], fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+		v.Wrapping = fyne.TextWrapWord
+		l := widget.NewLabel(r[0])
+		l.Wrapping = fyne.TextWrapWord
+		out[i] = container.New(labelColumn{w: studyLabelWidth}, l, v)
+	}
+	return out
+}
+
+// durationText is a short duration: 0.42 s, 3.1 s.
+func durationText(d time.Duration) string {
+	return sigFigures(d.Seconds(), 2) + " s"
+}
