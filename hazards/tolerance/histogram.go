@@ -23,8 +23,15 @@ type Histogram struct {
 	NoLoad int       `json:"no_load"`
 }
 
+// HistogramTop is the highest safety factor a histogram shows: margins are
+// judged between 1 and a few times the minimum safety factor, and a few
+// lightly loaded units with factors in the hundreds would otherwise squash
+// every bin that matters into one.
+const HistogramTop = 20
+
 // loadedHistogram bins the safety factors of the units under burst load,
-// from 0 to the 99th percentile of those units (at least 1).
+// from 0 to the 99th percentile of those units, at least 1 and at most
+// HistogramTop.
 func loadedHistogram(factors []float64) Histogram {
 	loaded := make([]float64, 0, len(factors))
 	for _, v := range factors {
@@ -34,7 +41,7 @@ func loadedHistogram(factors []float64) Histogram {
 	}
 	hi := 1.0
 	if len(loaded) > 0 {
-		hi = math.Max(percentiles(append([]float64(nil), loaded...), len(loaded)).P99, 1)
+		hi = math.Min(math.Max(percentiles(append([]float64(nil), loaded...), len(loaded)).P99, 1), HistogramTop)
 	}
 	h := newHistogram(loaded, 0, hi)
 	h.NoLoad = len(factors) - len(loaded)

@@ -67,8 +67,8 @@ type Result struct {
 	PressurePa   Percentiles `json:"pressure_pa"`
 	SafetyFactor Percentiles `json:"safety_factor"`
 	// Histogram counts the burst safety factors of the units under burst
-	// load, from 0 to their 99th percentile (or to 1 when that is
-	// smaller), for a chart; units with no load are counted in NoLoad.
+	// load, from 0 to their 99th percentile (at least 1, at most
+	// HistogramTop), for a chart; units with no load are counted in NoLoad.
 	Histogram Histogram `json:"histogram"`
 
 	// Sensitivity ranks the varying inputs by how strongly they move the
