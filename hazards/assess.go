@@ -114,17 +114,8 @@ type Release struct {
 // design first and returns an *InputError (wrapping ErrInvalidInput) for
 // any bad input; no NaN or infinity reaches a result.
 func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
-	if err := d.Validate(); err != nil {
-		return nil, err
-	}
-	sub, err := lib.Lookup(d.Fluid)
+	sub, glass, err := prepare(d, lib)
 	if err != nil {
-		return nil, &InputError{Field: "fluid", Value: fmt.Sprintf("%q", d.Fluid), Want: err.Error()}
-	}
-	glass := Glass{}
-	if d.Glass.Custom != nil {
-		glass = *d.Glass.Custom
-	} else if glass, err = LookupGlass(d.Glass.ID); err != nil {
 		return nil, err
 	}
 	a := &Assessment{Design: d, Fluid: sub.Fluid(), Glass: glass}
@@ -179,6 +170,23 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	a.findings(sub)
 	a.buildTrace(sub)
 	return a, nil
+}
+
+// prepare validates the design and looks up its fluid and glass, the
+// first steps of Assess and NewUnitModel alike.
+func prepare(d Design, lib *fluids.Library) (*fluids.Substance, Glass, error) {
+	if err := d.Validate(); err != nil {
+		return nil, Glass{}, err
+	}
+	sub, err := lib.Lookup(d.Fluid)
+	if err != nil {
+		return nil, Glass{}, &InputError{Field: "fluid", Value: fmt.Sprintf("%q", d.Fluid), Want: err.Error()}
+	}
+	if d.Glass.Custom != nil {
+		return sub, *d.Glass.Custom, nil
+	}
+	glass, err := LookupGlass(d.Glass.ID)
+	return sub, glass, err
 }
 
 // StateAt returns the vessel's state at any temperature (K) at or above

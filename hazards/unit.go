@@ -77,17 +77,8 @@ type UnitResult struct {
 // returns a model for Evaluate. Errors are those of Assess: an *InputError
 // wrapping ErrInvalidInput for bad input.
 func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
-	if err := d.Validate(); err != nil {
-		return nil, err
-	}
-	sub, err := lib.Lookup(d.Fluid)
+	sub, glass, err := prepare(d, lib)
 	if err != nil {
-		return nil, &InputError{Field: "fluid", Value: fmt.Sprintf("%q", d.Fluid), Want: err.Error()}
-	}
-	glass := Glass{}
-	if d.Glass.Custom != nil {
-		glass = *d.Glass.Custom
-	} else if glass, err = LookupGlass(d.Glass.ID); err != nil {
 		return nil, err
 	}
 	if d.SealingTemperatureK < sub.MinTemperature() {

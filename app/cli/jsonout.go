@@ -11,49 +11,36 @@ import (
 // designJSON is the stable, documented JSON form of one checked design.
 // SI units, absolute pressures; the unit is in each key's name.
 type designJSON struct {
-	File                   string        `json:"file"`
-	Product                string        `json:"product"`
-	Revision               string        `json:"revision"`
-	Fingerprint            string        `json:"fingerprint"`
-	Fluid                  string        `json:"fluid"`
-	Verdict                string        `json:"verdict"`
-	Phase                  string        `json:"phase"`
-	PressureKPa            float64       `json:"pressure_kpa"`
-	LiquidFullTemperatureC *float64      `json:"liquid_full_temperature_c"`
-	UllagePercent          float64       `json:"ullage_percent"`
-	BurstSafetyFactor      float64       `json:"burst_safety_factor"`
-	FailureProbability     float64       `json:"failure_probability"`
-	ImplosionSafetyFactor  float64       `json:"implosion_safety_factor"`
-	MaxSafeTemperatureC    float64       `json:"max_safe_temperature_c"`
-	MaxSafeTemperatureNote string        `json:"max_safe_temperature_bound"`
-	MaxSafeFillMassG       float64       `json:"max_safe_fill_mass_g"`
-	MaxSafeFillNote        string        `json:"max_safe_fill_bound"`
-	StoredEnergyJ          float64       `json:"stored_energy_j"`
-	FlashFraction          float64       `json:"flash_fraction"`
-	PeakConcentrationPPM   float64       `json:"peak_concentration_ppm"`
-	STELAveragePPM         float64       `json:"stel_average_ppm"`
-	TWA8hPPM               float64       `json:"twa_8h_ppm"`
-	PercentLFL             float64       `json:"percent_lfl"`
-	Extrapolated           bool          `json:"extrapolated"`
-	Findings               []findingJSON `json:"findings"`
-	Cautions               []string      `json:"cautions"`
+	File                   string            `json:"file"`
+	Product                string            `json:"product"`
+	Revision               string            `json:"revision"`
+	Fingerprint            string            `json:"fingerprint"`
+	Fluid                  string            `json:"fluid"`
+	Verdict                string            `json:"verdict"`
+	Phase                  string            `json:"phase"`
+	PressureKPa            float64           `json:"pressure_kpa"`
+	LiquidFullTemperatureC *float64          `json:"liquid_full_temperature_c"`
+	UllagePercent          float64           `json:"ullage_percent"`
+	BurstSafetyFactor      float64           `json:"burst_safety_factor"`
+	FailureProbability     float64           `json:"failure_probability"`
+	ImplosionSafetyFactor  float64           `json:"implosion_safety_factor"`
+	MaxSafeTemperatureC    float64           `json:"max_safe_temperature_c"`
+	MaxSafeTemperatureNote string            `json:"max_safe_temperature_bound"`
+	MaxSafeFillMassG       float64           `json:"max_safe_fill_mass_g"`
+	MaxSafeFillNote        string            `json:"max_safe_fill_bound"`
+	StoredEnergyJ          float64           `json:"stored_energy_j"`
+	FlashFraction          float64           `json:"flash_fraction"`
+	PeakConcentrationPPM   float64           `json:"peak_concentration_ppm"`
+	STELAveragePPM         float64           `json:"stel_average_ppm"`
+	TWA8hPPM               float64           `json:"twa_8h_ppm"`
+	PercentLFL             float64           `json:"percent_lfl"`
+	Extrapolated           bool              `json:"extrapolated"`
+	Findings               []hazards.Finding `json:"findings"`
+	Cautions               []string          `json:"cautions"`
 	// Tolerance is the sampled tolerance study, included with --samples.
 	Tolerance *tolerance.Result `json:"tolerance,omitempty"`
 	// Trace is the calculation record, included with --trace.
 	Trace []hazards.Step `json:"trace,omitempty"`
-}
-
-type findingJSON struct {
-	Criterion string  `json:"criterion"`
-	Title     string  `json:"title"`
-	Status    string  `json:"status"`
-	Value     float64 `json:"value"`
-	Limit     float64 `json:"limit"`
-	Unit      string  `json:"unit"`
-	Margin    float64 `json:"margin"`
-	Source    string  `json:"source"`
-	Message   string  `json:"message"`
-	Steps     []int   `json:"steps"`
 }
 
 func round(x float64, digits int) float64 {
@@ -101,10 +88,8 @@ func checkJSON(c checked) designJSON {
 		d.LiquidFullTemperatureC = &t
 	}
 	for _, f := range a.Findings {
-		d.Findings = append(d.Findings, findingJSON{
-			Criterion: f.Criterion, Title: f.Title, Status: string(f.Status), Value: round(f.Value, 6), Limit: round(f.Limit, 6),
-			Unit: f.Unit, Margin: round(f.Margin, 6), Source: f.Source, Message: f.Message, Steps: f.Steps,
-		})
+		f.Value, f.Limit, f.Margin = round(f.Value, 6), round(f.Limit, 6), round(f.Margin, 6)
+		d.Findings = append(d.Findings, f)
 	}
 	return d
 }
