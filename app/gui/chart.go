@@ -194,20 +194,8 @@ func (r *chartRenderer) build() {
 	fg := th.Color(theme.ColorNameForeground, v)
 	grid := th.Color(theme.ColorNameSeparator, v)
 	bg := th.Color(theme.ColorNameInputBackground, v)
-	objs := make([]fyne.CanvasObject, 0, 256)
-	add := func(o fyne.CanvasObject) { objs = append(objs, o) }
-	text := func(s string, x, y float32, size float32, col color.Color, bold bool) *canvas.Text {
-		t := canvas.NewText(s, col)
-		t.TextSize = size
-		t.TextStyle = fyne.TextStyle{Bold: bold}
-		t.Move(fyne.NewPos(x, y))
-		t.Resize(t.MinSize())
-		add(t)
-		return t
-	}
-	back := canvas.NewRectangle(bg)
-	back.Resize(size)
-	add(back)
+	dr := newDrawing(make([]fyne.CanvasObject, 0, 256), size, bg)
+	add, text := dr.add, dr.text
 
 	top := float32(6)
 	if spec.Title != "" {
@@ -236,7 +224,7 @@ func (r *chartRenderer) build() {
 			w = 2
 		}
 		if s.Dashed {
-			objs = append(objs, dashes(lx, top+8, lx+24, top+8, col, w)...)
+			dr.objs = append(dr.objs, dashes(lx, top+8, lx+24, top+8, col, w)...)
 		} else {
 			add(line(lx, top+8, lx+24, top+8, col, w))
 		}
@@ -253,12 +241,12 @@ func (r *chartRenderer) build() {
 			msg = "No results to draw yet."
 		}
 		text(msg, chartLeft, top+20, chartText+1, fg, false)
-		r.objs = objs
+		r.objs = dr.objs
 		return
 	}
 	p := &plotArea{x0: chartLeft, y0: top, w: size.Width - chartLeft - chartRight, h: size.Height - top - chartBottom}
 	if p.w < 40 || p.h < 40 {
-		r.objs = objs
+		r.objs = dr.objs
 		return
 	}
 	p.xMin, p.xMax, p.yMin, p.yMax = dataRange(spec)
@@ -321,7 +309,7 @@ func (r *chartRenderer) build() {
 			}
 			lp.curves = append(lp.curves, box{min(x1, x2) - 2, min(y1, y2) - 2, abs32(x2-x1) + 4, abs32(y2-y1) + 4})
 			if s.Dashed {
-				objs = append(objs, dashes(x1, y1, x2, y2, col, wdt)...)
+				dr.objs = append(dr.objs, dashes(x1, y1, x2, y2, col, wdt)...)
 			} else {
 				add(line(x1, y1, x2, y2, col, wdt))
 			}
@@ -370,7 +358,7 @@ func (r *chartRenderer) build() {
 				continue
 			}
 			x := p.px(m.Value)
-			objs = append(objs, markLine(x, p.y0, x, p.y0+p.h, col, m.Dashed)...)
+			dr.objs = append(dr.objs, markLine(x, p.y0, x, p.y0+p.h, col, m.Dashed)...)
 			var cands []fyne.Position
 			for k := float32(0); k < 8; k++ {
 				cands = append(cands, fyne.Position{X: x + 3, Y: p.y0 + 3 + k*(lh+1)}, fyne.Position{X: x - 3 - w, Y: p.y0 + 3 + k*(lh+1)})
@@ -382,7 +370,7 @@ func (r *chartRenderer) build() {
 			continue
 		}
 		y := p.py(m.Value)
-		objs = append(objs, markLine(p.x0, y, p.x0+p.w, y, col, m.Dashed)...)
+		dr.objs = append(dr.objs, markLine(p.x0, y, p.x0+p.w, y, col, m.Dashed)...)
 		lines = append(lines, pending{m.Label, col, []fyne.Position{
 			{X: p.x0 + p.w - w - 4, Y: y - lh - 1}, {X: p.x0 + 4, Y: y - lh - 1},
 			{X: p.x0 + p.w - w - 4, Y: y + 2}, {X: p.x0 + 4, Y: y + 2},
@@ -397,7 +385,7 @@ func (r *chartRenderer) build() {
 	for _, l := range lines {
 		label(l.lbl, l.col, false, l.cands...)
 	}
-	r.objs = objs
+	r.objs = dr.objs
 }
 
 // fade washes a colour out when the results are out of date.

@@ -188,7 +188,7 @@ func exposureSummary(f *fluids.Fluid) string {
 		if out != "" {
 			out += "; "
 		}
-		out += l.Body + " " + l.Kind + " " + l.Averaging + " " + sigFigures(l.PPM, 4) + " ppm"
+		out += l.Label() + " " + sigFigures(l.PPM, 4) + " ppm"
 	}
 	if out == "" {
 		return "no published numeric exposure limit in the library"

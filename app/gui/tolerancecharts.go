@@ -105,20 +105,9 @@ func (r *barRenderer) build() {
 		size = r.c.Size()
 	}
 	fg, grid, light, dark, bg := r.palette()
-	r.objs = r.objs[:0]
-	add := func(o fyne.CanvasObject) { r.objs = append(r.objs, o) }
-	text := func(s string, x, y, sz float32, bold bool) *canvas.Text {
-		t := canvas.NewText(s, fg)
-		t.TextSize = sz
-		t.TextStyle = fyne.TextStyle{Bold: bold}
-		t.Move(fyne.NewPos(x, y))
-		t.Resize(t.MinSize())
-		add(t)
-		return t
-	}
-	back := canvas.NewRectangle(bg)
-	back.Resize(size)
-	add(back)
+	dr := newDrawing(r.objs, size, bg)
+	add := dr.add
+	text := func(s string, x, y, sz float32, bold bool) *canvas.Text { return dr.text(s, x, y, sz, fg, bold) }
 	bar := func(x, y, w, h float32, fill color.Color) {
 		if w < 0 {
 			x, w = x+w, -w
@@ -135,6 +124,7 @@ func (r *barRenderer) build() {
 	} else {
 		r.driverBars(size, text, bar, fg, grid, light, dark, add)
 	}
+	r.objs = dr.objs
 }
 
 type textFn func(s string, x, y, sz float32, bold bool) *canvas.Text
