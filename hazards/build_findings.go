@@ -11,7 +11,6 @@ func (a *Assessment) findings(sub *fluids.Substance) {
 	d := &a.Design
 	cr := d.Criteria
 	f := a.Fluid
-	hotC := units.KelvinToCelsius(d.HottestK)
 	var fs []Finding
 
 	// Ullage and the liquid-full point.
@@ -21,29 +20,34 @@ func (a *Assessment) findings(sub *fluids.Substance) {
 	if u.Status == StatusPass && a.Hot.UllagePercent < cr.MinUllagePercent+ullageCautionPoints {
 		u.Status = StatusCaution
 	}
-	switch {
-	case a.Hot.Phase == PhaseLiquidFull:
+	if a.Hot.Phase == PhaseLiquidFull {
 		u.Status = StatusFail
-		u.Message = fmt.Sprintf("The vessel goes liquid-full at %.1f °C, below the hottest temperature %.1f °C; past that point the pressure climbs by about a megapascal per kelvin and the glass will break.",
-			units.KelvinToCelsius(a.LiquidFullK), hotC)
-	case a.LiquidFullReached:
-		u.Message = fmt.Sprintf("%.1f %% of the volume is vapour space at %.1f °C; the vessel would go liquid-full at %.1f °C.",
-			a.Hot.UllagePercent, hotC, units.KelvinToCelsius(a.LiquidFullK))
-	default:
-		u.Message = fmt.Sprintf("%.1f %% of the volume is vapour space at %.1f °C; the fill is too small for the vessel ever to go liquid-full.", a.Hot.UllagePercent, hotC)
 	}
+	u.Message, u.MessageUS = inBoth(func(m measure) string {
+		switch {
+		case a.Hot.Phase == PhaseLiquidFull:
+			return fmt.Sprintf("The vessel goes liquid-full at %s, below the hottest temperature %s; past that point the pressure climbs by about a megapascal per kelvin (some 80 psi per °F) and the glass will break.",
+				m.temp(a.LiquidFullK), m.temp(d.HottestK))
+		case a.LiquidFullReached:
+			return fmt.Sprintf("%.1f %% of the volume is vapour space at %s; the vessel would go liquid-full at %s.",
+				a.Hot.UllagePercent, m.temp(d.HottestK), m.temp(a.LiquidFullK))
+		default:
+			return fmt.Sprintf("%.1f %% of the volume is vapour space at %s; the fill is too small for the vessel ever to go liquid-full.", a.Hot.UllagePercent, m.temp(d.HottestK))
+		}
+	})
 	fs = append(fs, u)
 
 	// Burst.
 	b := atLeast(CriterionBurst, "Burst safety factor at the hottest temperature", "", a.BurstSafetyFactor, cr.MinBurstSafetyFactor,
 		safetyFactorCautionBand, DefaultCriteriaGrounds["min_burst_safety_factor"])
 	over := a.Hot.PressurePa - d.AmbientPressurePa
-	if over <= 0 {
-		b.Message = fmt.Sprintf("The vessel is not over-pressurised at %.1f °C (%.1f kPa inside, %.1f kPa outside).", hotC, a.Hot.PressurePa/1000, d.AmbientPressurePa/1000)
-	} else {
-		b.Message = fmt.Sprintf("%.1f kPa over ambient at %.1f °C against a long-term burst overpressure of %.1f kPa (%s, %s).",
-			over/1000, hotC, a.Strength.LongTermBurstPa/1000, a.Glass.Name, a.Parts[a.Strength.GoverningPart].Name)
-	}
+	b.Message, b.MessageUS = inBoth(func(m measure) string {
+		if over <= 0 {
+			return fmt.Sprintf("The vessel is not over-pressurised at %s (%s inside, %s outside).", m.temp(d.HottestK), m.pressure(a.Hot.PressurePa), m.pressure(d.AmbientPressurePa))
+		}
+		return fmt.Sprintf("%s over ambient at %s against a long-term burst overpressure of %s (%s, %s).",
+			m.pressure(over), m.temp(d.HottestK), m.pressure(a.Strength.LongTermBurstPa), a.Glass.Name, a.Parts[a.Strength.GoverningPart].Name)
+	})
 	fs = append(fs, b)
 
 	p := atMost(CriterionFailure, "Failure probability over the service life", "", a.FailureProbability, cr.MaxFailureProbability, probabilityCautionFactor,
@@ -54,12 +58,13 @@ func (a *Assessment) findings(sub *fluids.Substance) {
 
 	im := atLeast(CriterionImplosion, "Implosion safety factor at the coldest temperature", "", a.ImplosionSafetyFactor, cr.MinImplosionSafetyFactor,
 		safetyFactorCautionBand, DefaultCriteriaGrounds["min_implosion_safety_factor"])
-	if a.ExternalLoadPa <= 0 {
-		im.Message = fmt.Sprintf("The vessel is not under external pressure at %.1f °C.", units.KelvinToCelsius(d.ColdestK))
-	} else {
-		im.Message = fmt.Sprintf("%.1f kPa of external pressure at %.1f °C against a knocked-down buckling pressure of %.4g kPa.",
-			a.ExternalLoadPa/1000, units.KelvinToCelsius(d.ColdestK), a.ImplosionSafetyFactor*a.ExternalLoadPa/1000)
-	}
+	im.Message, im.MessageUS = inBoth(func(m measure) string {
+		if a.ExternalLoadPa <= 0 {
+			return fmt.Sprintf("The vessel is not under external pressure at %s.", m.temp(d.ColdestK))
+		}
+		return fmt.Sprintf("%s of external pressure at %s against a knocked-down buckling pressure of %s.",
+			m.pressure(a.ExternalLoadPa), m.temp(d.ColdestK), m.pressure(a.ImplosionSafetyFactor*a.ExternalLoadPa))
+	})
 	fs = append(fs, im)
 
 	fs = append(fs, exposureFindings(f, a.release, d.Room.ExposureMinutes*60, cr)...)
@@ -85,11 +90,15 @@ func (a *Assessment) findings(sub *fluids.Substance) {
 				if fs[i].Status == StatusPass {
 					fs[i].Status = StatusCaution
 					fs[i].Message += " Computed outside a correlation's range: not a clean pass."
+					fs[i].MessageUS += " Computed outside a correlation's range: not a clean pass."
 				}
 			}
 		}
 	}
 	for i := range fs {
+		if fs[i].MessageUS == "" {
+			fs[i].MessageUS = fs[i].Message
+		}
 		fs[i].Value = finiteOr(fs[i].Value, 0)
 		fs[i].Margin = finiteOr(fs[i].Margin, 0)
 	}
@@ -100,4 +109,27 @@ func (a *Assessment) findings(sub *fluids.Substance) {
 		a.Verdict = Worse(a.Verdict, x.Status)
 	}
 	a.Cautions = append(append([]string(nil), StandardCautions...), fluidCautions(f)...)
+}
+
+// measure writes temperatures and pressures in one unit system, for the
+// words of a finding.
+type measure struct{ us bool }
+
+func (m measure) temp(k float64) string {
+	if m.us {
+		return fmt.Sprintf("%.1f °F", units.KelvinToFahrenheit(k))
+	}
+	return fmt.Sprintf("%.1f °C", units.KelvinToCelsius(k))
+}
+
+func (m measure) pressure(pa float64) string {
+	if m.us {
+		return fmt.Sprintf("%.4g psi", pa/units.PsiPa)
+	}
+	return fmt.Sprintf("%.4g kPa", pa/1000)
+}
+
+// inBoth writes a message in SI and in US customary units.
+func inBoth(say func(measure) string) (si, us string) {
+	return say(measure{}), say(measure{us: true})
 }

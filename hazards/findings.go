@@ -66,9 +66,20 @@ type Finding struct {
 	Margin    float64 `json:"margin"`
 	Source    string  `json:"source"`
 	Message   string  `json:"message"`
+	// MessageUS is the same message with US customary units.
+	MessageUS string `json:"message_us"`
 	// Steps are the numbers of the calculation-record steps behind this
 	// finding, its own comparison step first.
 	Steps []int `json:"steps"`
+}
+
+// MessageIn returns the message in US customary units when us is true,
+// otherwise in SI.
+func (f Finding) MessageIn(us bool) string {
+	if us && f.MessageUS != "" {
+		return f.MessageUS
+	}
+	return f.Message
 }
 
 // atLeast returns a minimum-type finding: pass when value ≥ limit·cautionFactor,
@@ -182,9 +193,9 @@ func exposureFindings(f *fluids.Fluid, rel *releaseModel, exposureS float64, cr 
 		if e.Zone == NearField {
 			where = "the near field beside the breakage"
 		}
-		avg := "peak"
+		avg := "Peak"
 		if period > 0 {
-			avg = fmt.Sprintf("%g-minute average", lim.Minutes)
+			avg = fmt.Sprintf("The %g-minute average", lim.Minutes)
 		}
 		fd.Message = fmt.Sprintf("%s in %s: %.3g ppm against %s %s %.4g ppm (%.0f %% of the limit).",
 			avg, where, e.PPM, lim.Body, lim.Kind, lim.PPM, 100*e.PPM/lim.PPM)

@@ -17,7 +17,7 @@ func (w *assessmentWriter) findings() {
 		if steps := stepList(f.Steps); steps != "" {
 			source += ".  " + steps + "."
 		}
-		d.findingBlock(f.Status, f.Title, "Value "+n.value+"   ·   Limit "+n.limit+"   ·   Margin "+n.margin, f.Message, source)
+		d.findingBlock(f.Status, f.Title, "Value "+n.value+"   ·   Limit "+n.limit+"   ·   Margin "+n.margin, f.MessageIn(w.u.us), source)
 	}
 }
 

@@ -21,6 +21,9 @@ type findingsList struct {
 	// onPick runs when the reviewer chooses a finding, or asks for the
 	// working of the one selected.
 	onPick func(hazards.Finding)
+	// us reports whether the window shows US customary units, for the
+	// words of each finding.
+	us func() bool
 
 	list    *widget.List
 	detail  *widget.RichText
@@ -176,7 +179,7 @@ func (fl *findingsList) describe() {
 	fl.working.Enable()
 	fl.detail.Segments = []widget.RichTextSegment{
 		&widget.TextSegment{Text: statusWord(f.Status) + " — " + f.Title + ". ", Style: widget.RichTextStyle{Inline: true, TextStyle: fyne.TextStyle{Bold: true}}},
-		&widget.TextSegment{Text: f.Message, Style: widget.RichTextStyleParagraph},
+		&widget.TextSegment{Text: f.MessageIn(fl.us != nil && fl.us()), Style: widget.RichTextStyleParagraph},
 		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
 	}
 	if len(f.Steps) > 0 {

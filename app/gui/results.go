@@ -47,6 +47,7 @@ func newResultsPanel(s *session) *resultsPanel {
 		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText))
 	r.stale.Hide()
 	r.list = newFindingsList()
+	r.list.us = func() bool { return s.units() == unitsUS }
 	r.keys = newKeyNumbers()
 	r.pt, r.conc = newChart(), newChart()
 	r.tabs = container.NewAppTabs(
