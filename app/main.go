@@ -22,9 +22,10 @@ func main() {
 }
 
 // plainLocale replaces the POSIX "C" locale, common on servers and in
-// pipelines, with US English, which the program's text is written in. The
-// window toolkit reads the locale lazily and logs an error for "C"; this
-// keeps that noise off the command line's stderr.
+// pipelines, with US English, which the program's text is written in, for
+// the window toolkit's later look-ups. The toolkit also reads the locale
+// once while the program loads, before this can run, and logs a harmless
+// error for "C"; setting LANG (for example LANG=en_US.UTF-8) silences it.
 func plainLocale() {
 	for _, k := range []string{"LC_ALL", "LC_MESSAGES", "LANG", "LANGUAGE"} {
 		v := os.Getenv(k)

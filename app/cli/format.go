@@ -17,7 +17,7 @@ func tempText(k float64, system string) string {
 
 func pressureText(pa float64, system string) string {
 	if system == "us" {
-		return fmt.Sprintf("%.4g psia", pa/units.PsiPa)
+		return fmt.Sprintf("%.4g psi", pa/units.PsiPa)
 	}
 	return fmt.Sprintf("%.4g kPa", pa/1000)
 }
