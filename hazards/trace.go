@@ -104,7 +104,7 @@ func (a *Assessment) TraceStep(key string) int { return a.traceIndex[key] }
 func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	d := &a.Design
 	f := a.Fluid
-	tr := &tracer{by: map[string]int{}}
+	tr := &tracer{steps: make([]Step, 0, 48), by: make(map[string]int, 48)}
 	addFluid := func(tag string, temp float64) {
 		label := fmt.Sprintf("%s at %.2f K (%.1f °C)", tag, temp, units.KelvinToCelsius(temp))
 		if temp > sub.CriticalTemperature() {
