@@ -167,7 +167,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	}
 	a.rupture(sub)
 	a.releaseModel()
-	a.findings(sub)
+	a.findings()
 	a.buildTrace(sub)
 	return a, nil
 }

@@ -3,11 +3,10 @@ package hazards
 import (
 	"fmt"
 
-	"ullage/fluids"
 	"ullage/fluids/units"
 )
 
-func (a *Assessment) findings(sub *fluids.Substance) {
+func (a *Assessment) findings() {
 	d := &a.Design
 	cr := d.Criteria
 	f := a.Fluid

@@ -1,7 +1,6 @@
 package cli
 
 import (
-	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -124,5 +123,3 @@ func usageError(stderr io.Writer, cmd string, err error) int {
 	fmt.Fprintf(stderr, "ullage %s: %v\n", cmd, err)
 	return ExitUsage
 }
-
-var errUsage = errors.New("usage")
