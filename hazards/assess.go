@@ -25,6 +25,10 @@ type Assessment struct {
 
 	// Hot and Cold are the vessel at the hottest and coldest temperatures.
 	Hot, Cold VesselState
+	// Worst is the worst-case unit within the stated tolerances (most fill,
+	// least internal volume) at the hottest temperature; nil when the
+	// design states no tolerances.
+	Worst *WorstCase
 	// LiquidFullK is the temperature at which the vessel goes liquid-full;
 	// LiquidFullReached is false when it does not below Tc.
 	LiquidFullK       float64
@@ -145,6 +149,10 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 		return nil, fmt.Errorf("state at the coldest temperature: %w", err)
 	}
 	a.Flags = a.Hot.Flags | a.Cold.Flags
+	a.Worst = worstCase(d, sub)
+	if a.Worst != nil && a.Worst.Sealable {
+		a.Flags |= a.Worst.Hot.Flags
+	}
 	a.LiquidFullK, a.LiquidFullReached = v.liquidFullTemperature()
 
 	// Glass.

@@ -35,6 +35,9 @@ func (a *Assessment) findings() {
 		}
 	})
 	fs = append(fs, u)
+	if w := a.Worst; w != nil {
+		fs = append(fs, worstCaseFinding(a, w))
+	}
 
 	// Burst.
 	b := atLeast(CriterionBurst, "Burst safety factor at the hottest temperature", "", a.BurstSafetyFactor, cr.MinBurstSafetyFactor,
@@ -85,7 +88,7 @@ func (a *Assessment) findings() {
 			Message: "Part of this review was computed outside a correlation's published range (" + a.Flags.String() + "); treat the affected numbers as estimates and confirm by test."})
 		for i := range fs {
 			switch fs[i].Criterion {
-			case CriterionUllage, CriterionBurst, CriterionFailure, CriterionImplosion:
+			case CriterionUllage, CriterionUllageWorst, CriterionBurst, CriterionFailure, CriterionImplosion:
 				if fs[i].Status == StatusPass {
 					fs[i].Status = StatusCaution
 					fs[i].Message += " Computed outside a correlation's range: not a clean pass."
@@ -121,6 +124,21 @@ func (m measure) temp(k float64) string {
 	return fmt.Sprintf("%.1f °C", units.KelvinToCelsius(k))
 }
 
+func (m measure) mass(kg float64) string {
+	if m.us {
+		return fmt.Sprintf("%.4g oz", kg/units.PoundKg*16)
+	}
+	return fmt.Sprintf("%.4g g", kg*1000)
+}
+
+func (m measure) volume(m3 float64) string {
+	if m.us {
+		in := units.InchM
+		return fmt.Sprintf("%.4g in³", m3/(in*in*in))
+	}
+	return fmt.Sprintf("%.4g mL", m3*1e6)
+}
+
 func (m measure) pressure(pa float64) string {
 	if m.us {
 		return fmt.Sprintf("%.4g psi", pa/units.PsiPa)
@@ -131,4 +149,34 @@ func (m measure) pressure(pa float64) string {
 // inBoth writes a message in SI and in US customary units.
 func inBoth(say func(measure) string) (si, us string) {
 	return say(measure{}), say(measure{us: true})
+}
+
+// worstCaseFinding judges the worst-case unit's ullage by the same rule as
+// the nominal unit's.
+func worstCaseFinding(a *Assessment, w *WorstCase) Finding {
+	d := &a.Design
+	cr := d.Criteria
+	f := atLeast(CriterionUllageWorst, "Ullage at the hottest temperature, worst-case unit", "%", w.Hot.UllagePercent, cr.MinUllagePercent, 1,
+		DefaultCriteriaGrounds["min_ullage_percent"]+"; worst case: fill at its upper tolerance, internal volume at its lower (common practice)")
+	f.Margin = (w.Hot.UllagePercent - cr.MinUllagePercent) / 100
+	if f.Status == StatusPass && w.Hot.UllagePercent < cr.MinUllagePercent+ullageCautionPoints {
+		f.Status = StatusCaution
+	}
+	if !w.Sealable || w.Hot.Phase == PhaseLiquidFull {
+		f.Status = StatusFail
+	}
+	f.Message, f.MessageUS = inBoth(func(m measure) string {
+		unit := fmt.Sprintf("A unit with %s of fill in %s (the tolerances stacked)", m.mass(w.FillMassKg), m.volume(w.VolumeM3))
+		switch {
+		case !w.Sealable:
+			return unit + " cannot even be sealed: the fill, as liquid, does not fit at the sealing temperature."
+		case w.Hot.Phase == PhaseLiquidFull:
+			return fmt.Sprintf("%s goes liquid-full at %s, below the hottest temperature %s.", unit, m.temp(w.LiquidFullK), m.temp(d.HottestK))
+		case w.LiquidFullReached:
+			return fmt.Sprintf("%s keeps %.1f %% vapour space at %s and would go liquid-full at %s.", unit, w.Hot.UllagePercent, m.temp(d.HottestK), m.temp(w.LiquidFullK))
+		default:
+			return fmt.Sprintf("%s keeps %.1f %% vapour space at %s and never goes liquid-full.", unit, w.Hot.UllagePercent, m.temp(d.HottestK))
+		}
+	})
+	return f
 }

@@ -41,6 +41,7 @@ func Worse(a, b Status) Status {
 // saved results, JSON output and comparisons.
 const (
 	CriterionUllage         = "ullage-at-hottest"
+	CriterionUllageWorst    = "ullage-worst-case-unit"
 	CriterionBurst          = "burst-safety-factor"
 	CriterionFailure        = "failure-probability"
 	CriterionImplosion      = "implosion-safety-factor"
@@ -221,9 +222,9 @@ func exposureFindings(f *fluids.Fluid, rel *releaseModel, exposureS float64, cr 
 
 func sortFindings(fs []Finding) {
 	order := map[string]int{
-		CriterionUllage: 0, CriterionBurst: 1, CriterionFailure: 2, CriterionImplosion: 3,
-		CriterionIDLH: 4, CriterionCeiling: 5, CriterionSTEL: 6, CriterionTWA: 7, CriterionNoLimit: 8,
-		CriterionFlammability: 9, CriterionCorrelationUse: 10,
+		CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionFailure: 3, CriterionImplosion: 4,
+		CriterionIDLH: 5, CriterionCeiling: 6, CriterionSTEL: 7, CriterionTWA: 8, CriterionNoLimit: 9,
+		CriterionFlammability: 10, CriterionCorrelationUse: 11,
 	}
 	sort.SliceStable(fs, func(i, j int) bool { return order[fs[i].Criterion] < order[fs[j].Criterion] })
 }

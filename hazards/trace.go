@@ -169,6 +169,22 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	tr.add("liquid_full_temperature", lf)
 	tr.add("state_hot", a.stateStep("Vessel at the hottest temperature", a.Hot, "hottest", tr))
 	tr.add("state_cold", a.stateStep("Vessel at the coldest temperature", a.Cold, "coldest", tr))
+	if w := a.Worst; w != nil {
+		ws := Step{Stage: StageVessel, Title: "Worst-case unit at the hottest temperature", Method: "tolerances stacked: most fill, least internal volume",
+			Equation: "m_w = m + Δm;  V_w = V − ΔV (measured volume) or V(walls + Δt) (volume from the parts); state as for the nominal unit",
+			Inputs: []Value{{Symbol: "m_w", Value: w.FillMassKg, Unit: "kg", Source: "design fill plus its tolerance"},
+				{Symbol: "V_w", Value: w.VolumeM3, Unit: "m³", Source: "design volume less its tolerance"},
+				{Symbol: "T_hot", Value: d.HottestK, Unit: "K", Source: "design input"}},
+			Source: "common practice (worst-case tolerance stack)"}
+		if w.Sealable {
+			ws.Intermediate = []Value{{Symbol: "ullage", Value: w.Hot.UllagePercent, Unit: "%"}, {Symbol: "T_full", Value: w.LiquidFullK, Unit: "K"}}
+			ws.Result = Value{Symbol: "P", Value: w.Hot.PressurePa, Unit: "Pa"}
+			ws.Extrapolated = w.Hot.Flags.Extrapolated()
+		} else {
+			ws.Note = "The worst-case fill does not fit as liquid at the sealing temperature."
+		}
+		tr.add("state_worst", ws)
+	}
 
 	// Stresses.
 	over := a.Hot.PressurePa - d.AmbientPressurePa
@@ -326,6 +342,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 
 var findingDeps = map[string][]string{
 	CriterionUllage:         {"state_hot", "liquid_full_temperature"},
+	CriterionUllageWorst:    {"state_worst", "state_hot"},
 	CriterionBurst:          {"burst_safety_factor", "long_term_burst", "state_hot"},
 	CriterionFailure:        {"failure_probability", "long_term_burst"},
 	CriterionImplosion:      {"implosion_safety_factor", "state_cold"},

@@ -130,7 +130,7 @@ type findingText struct{ value, limit, margin string }
 // atLeastCriteria are the criteria whose value must reach the limit; the
 // others must stay below it.
 var atLeastCriteria = map[string]bool{
-	hazards.CriterionUllage: true, hazards.CriterionBurst: true, hazards.CriterionImplosion: true,
+	hazards.CriterionUllage: true, hazards.CriterionUllageWorst: true, hazards.CriterionBurst: true, hazards.CriterionImplosion: true,
 }
 
 // findingNumbers formats a finding's value, limit and margin.
@@ -143,7 +143,7 @@ func findingNumbers(f hazards.Finding, fluid *fluids.Fluid) findingText {
 		switch f.Criterion {
 		case hazards.CriterionFailure:
 			return sig(x, 2)
-		case hazards.CriterionUllage:
+		case hazards.CriterionUllage, hazards.CriterionUllageWorst:
 			return fixed(x, 1) + " %"
 		case hazards.CriterionBurst, hazards.CriterionImplosion:
 			if x >= hazards.SafetyFactorCap {
@@ -158,14 +158,14 @@ func findingNumbers(f hazards.Finding, fluid *fluids.Fluid) findingText {
 		return s
 	}
 	lim := plain(f.Limit)
-	if f.Criterion == hazards.CriterionUllage {
+	if f.Criterion == hazards.CriterionUllage || f.Criterion == hazards.CriterionUllageWorst {
 		lim += " %"
 	} else if f.Unit != "" {
 		lim += " " + f.Unit
 	}
 	t := findingText{value: num(f.Value), limit: rel + lim, margin: margin(f.Margin, atLeastCriteria[f.Criterion])}
 	switch f.Criterion {
-	case hazards.CriterionUllage:
+	case hazards.CriterionUllage, hazards.CriterionUllageWorst:
 		t.margin = signed(f.Margin, fixed(f.Margin*100, 1)) + " pts"
 	case hazards.CriterionCorrelationUse:
 		t = findingText{value: "extrapolated", limit: "within range", margin: noValue}

@@ -39,7 +39,7 @@ func findingLimit(f hazards.Finding) string {
 		return "—"
 	case hazards.CriterionNoLimit:
 		return "none published"
-	case hazards.CriterionUllage, hazards.CriterionBurst, hazards.CriterionImplosion:
+	case hazards.CriterionUllage, hazards.CriterionUllageWorst, hazards.CriterionBurst, hazards.CriterionImplosion:
 		return "≥ " + findingValue(f, f.Limit)
 	}
 	if f.Limit == 0 {
@@ -53,7 +53,7 @@ func findingMargin(f hazards.Finding) string {
 	switch f.Criterion {
 	case hazards.CriterionCorrelationUse, hazards.CriterionNoLimit:
 		return "—"
-	case hazards.CriterionUllage:
+	case hazards.CriterionUllage, hazards.CriterionUllageWorst:
 		return signedText(f.Margin*100, 2) + " points"
 	case hazards.CriterionBurst, hazards.CriterionImplosion:
 		if f.Value >= hazards.SafetyFactorCap {
