@@ -126,15 +126,14 @@ func (m measure) temp(k float64) string {
 
 func (m measure) mass(kg float64) string {
 	if m.us {
-		return fmt.Sprintf("%.4g oz", kg/units.PoundKg*16)
+		return fmt.Sprintf("%.4g oz", kg/units.OunceKg)
 	}
 	return fmt.Sprintf("%.4g g", kg*1000)
 }
 
 func (m measure) volume(m3 float64) string {
 	if m.us {
-		in := units.InchM
-		return fmt.Sprintf("%.4g in³", m3/(in*in*in))
+		return fmt.Sprintf("%.4g in³", m3/units.CubicInchM3)
 	}
 	return fmt.Sprintf("%.4g mL", m3*1e6)
 }

@@ -7,14 +7,10 @@ import (
 // Conversion factors for US customary display, derived from the exact
 // definitions in package units.
 const (
-	ounceKg      = units.PoundKg / 16        // avoirdupois ounce (exact)
-	footM        = 12 * units.InchM          // international foot (exact)
-	standardG    = 9.80665                   // standard gravity, m/s² (CGPM 1901, exact)
-	poundForceN  = units.PoundKg * standardG // pound-force (exact)
-	footPoundJ   = footM * poundForceN       // foot pound-force (exact)
-	cubicInchM3  = units.InchM * units.InchM * units.InchM
-	poundPerFt3  = units.PoundKg / units.CubicFootM3 // lb/ft³ in kg/m³
-	feetPerMinMS = footM / 60
+	standardG   = 9.80665                           // standard gravity, m/s² (CGPM 1901, exact)
+	poundForceN = units.PoundKg * standardG         // pound-force (exact)
+	footPoundJ  = units.FootM * poundForceN         // foot pound-force (exact)
+	poundPerFt3 = units.PoundKg / units.CubicFootM3 // lb/ft³ in kg/m³
 )
 
 // unitSystem turns SI values into the strings a reader sees, in SI or US
@@ -57,13 +53,13 @@ func (u unitSystem) lengthQ() quantity {
 	return u.pick(quantity{"mm", scale(1e-3)}, quantity{"in", scale(units.InchM)})
 }
 func (u unitSystem) roomLengthQ() quantity {
-	return u.pick(quantity{"m", scale(1)}, quantity{"ft", scale(footM)})
+	return u.pick(quantity{"m", scale(1)}, quantity{"ft", scale(units.FootM)})
 }
 func (u unitSystem) massQ() quantity {
-	return u.pick(quantity{"g", scale(1e-3)}, quantity{"oz", scale(ounceKg)})
+	return u.pick(quantity{"g", scale(1e-3)}, quantity{"oz", scale(units.OunceKg)})
 }
 func (u unitSystem) vesselVolumeQ() quantity {
-	return u.pick(quantity{"mL", scale(1e-6)}, quantity{"in³", scale(cubicInchM3)})
+	return u.pick(quantity{"mL", scale(1e-6)}, quantity{"in³", scale(units.CubicInchM3)})
 }
 func (u unitSystem) roomVolumeQ() quantity {
 	return u.pick(quantity{"m³", scale(1)}, quantity{"ft³", scale(units.CubicFootM3)})
@@ -72,13 +68,13 @@ func (u unitSystem) areaQ() quantity {
 	return u.pick(quantity{"cm²", scale(1e-4)}, quantity{"in²", scale(units.InchM * units.InchM)})
 }
 func (u unitSystem) surfaceQ() quantity {
-	return u.pick(quantity{"m²", scale(1)}, quantity{"ft²", scale(footM * footM)})
+	return u.pick(quantity{"m²", scale(1)}, quantity{"ft²", scale(units.FootM * units.FootM)})
 }
 func (u unitSystem) densityQ() quantity {
 	return u.pick(quantity{"kg/m³", scale(1)}, quantity{"lb/ft³", scale(poundPerFt3)})
 }
 func (u unitSystem) speedQ() quantity {
-	return u.pick(quantity{"m/s", scale(1)}, quantity{"ft/min", scale(feetPerMinMS)})
+	return u.pick(quantity{"m/s", scale(1)}, quantity{"ft/min", scale(units.FootPerMinuteMS)})
 }
 func (u unitSystem) energyQ() quantity {
 	return u.pick(quantity{"J", scale(1)}, quantity{"ft·lbf", scale(footPoundJ)})

@@ -24,14 +24,14 @@ func pressureText(pa float64, system string) string {
 
 func massText(kg float64, system string) string {
 	if system == "us" {
-		return fmt.Sprintf("%.4g oz", kg/units.PoundKg*16)
+		return fmt.Sprintf("%.4g oz", kg/units.OunceKg)
 	}
 	return fmt.Sprintf("%.4g g", kg*1000)
 }
 
 func volumeText(m3 float64, system string) string {
 	if system == "us" {
-		return fmt.Sprintf("%.4g in³", m3/(units.InchM*units.InchM*units.InchM))
+		return fmt.Sprintf("%.4g in³", m3/units.CubicInchM3)
 	}
 	return fmt.Sprintf("%.4g mL", m3*1e6)
 }

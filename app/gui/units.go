@@ -48,14 +48,6 @@ const (
 	qProbability                  // a probability, no unit
 )
 
-// US customary factors: the size of one US unit in SI.
-const (
-	ounceKg        = units.PoundKg / 16
-	footM          = 12 * units.InchM
-	cubicInchM3    = units.InchM * units.InchM * units.InchM
-	footPerMinuteS = footM / 60
-)
-
 // unit returns the unit label of q in the system, "" for plain numbers.
 func (u unitSystem) unit(q quantity) string {
 	us := u == unitsUS
@@ -108,19 +100,19 @@ func (u unitSystem) scale(q quantity) float64 {
 	}
 	switch q {
 	case qMass:
-		return pick(1e-3, ounceKg)
+		return pick(1e-3, units.OunceKg)
 	case qLength:
 		return pick(1e-3, units.InchM)
 	case qVesselVolume:
-		return pick(1e-6, cubicInchM3)
+		return pick(1e-6, units.CubicInchM3)
 	case qPressure:
 		return pick(1e3, units.PsiPa)
 	case qRoomVolume:
 		return pick(1, units.CubicFootM3)
 	case qRoomLength:
-		return pick(1, footM)
+		return pick(1, units.FootM)
 	case qAirSpeed:
-		return pick(1, footPerMinuteS)
+		return pick(1, units.FootPerMinuteMS)
 	}
 	return 1
 }

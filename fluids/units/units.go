@@ -22,6 +22,15 @@ const (
 	PoundKg = 0.45359237
 	// CubicFootM3 is one cubic foot in cubic metres (exact).
 	CubicFootM3 = 0.028316846592
+	// OunceKg is one avoirdupois ounce in kilograms, a sixteenth of a
+	// pound (exact).
+	OunceKg = PoundKg / 16
+	// FootM is one international foot in metres, twelve inches (exact).
+	FootM = 12 * InchM
+	// CubicInchM3 is one cubic inch in cubic metres (exact).
+	CubicInchM3 = InchM * InchM * InchM
+	// FootPerMinuteMS is one foot per minute in metres per second (exact).
+	FootPerMinuteMS = FootM / 60
 	// MolarVolume25CL is the molar volume of an ideal gas at 25 °C and
 	// 1 atm in litres per mole, the figure used to convert ppm to mg/m³ in
 	// the NIOSH Pocket Guide (DHHS (NIOSH) Publication 2005-149,
