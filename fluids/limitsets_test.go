@@ -11,11 +11,12 @@ import (
 )
 
 // pendingFluids are built-in fluids whose records are being added to
-// data/ at the same time as the limit tables. Their CAS numbers were
-// checked by check digit and, for R-1234ze(Z), R-141b, R-113 and
-// 2-methylpentane, against published identifications (NRC AEGL Volume 3,
-// Table 4-2 for HCFC-141b; CRC-style data compilations for the others).
-// Once a record exists in the library its own CAS is used instead.
+// data/ at the same time as the limit tables. Every CAS number passes its
+// check digit; R-141b is as printed in NRC AEGL Volume 3, Table 4-2;
+// R-113 and 2-methylpentane as in Montgomery's groundwater-chemicals
+// handbook entries; R-1234ze(Z), R-1336mzz(Z) and
+// perfluoro(2-methyl-3-pentanone) as in public refrigerant-property
+// tables. Once a record exists in the library its own CAS is used instead.
 var pendingFluids = map[string]string{
 	"trans-1-chloro-3-3-3-trifluoropropene": "102687-65-0",
 	"cis-1-3-3-3-tetrafluoropropene":        "29118-25-0",
