@@ -196,7 +196,7 @@ func TestUSPublicAcuteAgainstSources(t *testing.T) {
 
 func TestEUOccupationalAgainstSources(t *testing.T) {
 	checkLimits(t, LimitSetEUOccupational, []limitCheck{
-		{"acetone", "IOELV", 480, 500, 1210, "Directive 2000/39/EC Annex: acetone 1210 mg/m³, 500 ppm, 8 h (from memory)"},
+		{"acetone", "IOELV", 480, 500, 1210, "Directive 2000/39/EC Annex: acetone 1210 mg/m³, 500 ppm, 8 h (from memory); 500 ppm also in the secondary SmartQHSE OEL crosswalk (2026), column eu_ioelv"},
 		{"dichloromethane", "IOELV", 15, 200, 706, "Directive (EU) 2017/164 Annex: methylene chloride short-term 706 mg/m³, 200 ppm (from memory)"},
 		{"toluene", "IOELV", 15, 100, 384, "Directive 2006/15/EC Annex: toluene short-term 384 mg/m³, 100 ppm (from memory)"},
 		{"n-hexane", "IOELV", 480, 20, 72, "Directive 2006/15/EC Annex: n-hexane 72 mg/m³, 20 ppm (from memory)"},
@@ -211,7 +211,7 @@ func TestUKWELAgainstSources(t *testing.T) {
 		// Hazardous Chemicals Handbook, Table 5.12 (UK occupational
 		// exposure limits): acetone STEL 1500 ppm, 3620 mg/m³.
 		{"acetone", "WEL", 15, 1500, 3620, "Hazardous Chemicals Handbook Table 5.12, UK STEL for acetone"},
-		{"ammonia", "WEL", 480, 25, 18, "EH40/2005 Table 1, ammonia anhydrous, long-term (from memory)"},
+		{"ammonia", "WEL", 480, 25, 18, "EH40/2005 Table 1, ammonia anhydrous, long-term (from memory); 25 ppm also in the secondary SmartQHSE OEL crosswalk (2026), column uk_wel_twa_eh40"},
 		{"methanol", "WEL", 15, 250, 333, "EH40/2005 Table 1, methanol, short-term (from memory)"},
 		{"dichloromethane", "WEL", 480, 100, 353, "EH40/2005 (2020) Table 1, dichloromethane, long-term (from memory)"},
 	})
