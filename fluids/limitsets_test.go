@@ -170,7 +170,80 @@ func TestUSPublicAcuteAgainstSources(t *testing.T) {
 		{"chloroform", "AEGL-2", 60, 64, 0, "DOE PAC database, chloroform record: TEEL-2 = AEGL-2"},
 		{"n-butane", "AEGL-3", 10, 77000, 0, "NRC AEGL Volume 12 (2012), Butane, Appendix A: 10-min AEGL-3 77,000 ppm"},
 		{"n-butane", "AEGL-3", 480, 53000, 0, "NRC AEGL Volume 12 (2012), Butane, Appendix A: 8-h AEGL-3 set equal to 53,000 ppm"},
+		{"acetone", "AEGL-1", 480, 200, 0, "EPA interim AEGLs for acetone: AEGL-1 200 ppm at every duration (from memory)"},
+		{"acetone", "AEGL-2", 60, 3200, 0, "EPA interim AEGLs for acetone: 1-h AEGL-2 3,200 ppm (from memory)"},
+		{"acetone", "AEGL-3", 10, 16000, 0, "EPA interim AEGLs for acetone: 10-min AEGL-3 16,000 ppm (from memory)"},
+		{"toluene", "AEGL-1", 10, 67, 0, "NRC final AEGLs for toluene: AEGL-1 67 ppm at every duration (from memory)"},
+		{"toluene", "AEGL-2", 480, 250, 0, "NRC final AEGLs for toluene: 8-h AEGL-2 250 ppm (from memory)"},
+		{"toluene", "AEGL-3", 60, 3700, 0, "NRC final AEGLs for toluene: 1-h AEGL-3 3,700 ppm (from memory)"},
+		{"ethanol", "PAC-2", 60, 3300, 0, "DOE PAC data set, ethanol: PAC-2 3,300 ppm (from memory)"},
+		{"ethanol", "PAC-3", 60, 15000, 0, "DOE PAC data set, ethanol: PAC-3 15,000 ppm (from memory)"},
+		{"2-propanol", "PAC-1", 60, 400, 0, "DOE PAC data set, isopropyl alcohol: PAC-1 400 ppm = ERPG-1 (from memory)"},
+		{"2-propanol", "PAC-3", 60, 12000, 0, "DOE PAC data set, isopropyl alcohol: PAC-3 12,000 ppm = ERPG-3 (from memory)"},
 	})
+	// An AEGL table is ordered: at each duration AEGL-1 < AEGL-2 < AEGL-3,
+	// and no level rises with duration (NRC 2001 standing operating
+	// procedures, definitions of the three levels). The same order holds
+	// for PAC-1 < PAC-2 < PAC-3.
+	sets, err := LookupLimitSet(LimitSetUSPublicAcute)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, sub := range sets.Substances {
+		val := map[string]map[float64]float64{}
+		for _, e := range sub.Entries {
+			if e.NotRecommended {
+				continue
+			}
+			if val[e.Kind] == nil {
+				val[e.Kind] = map[float64]float64{}
+			}
+			val[e.Kind][e.Minutes] = e.PPM
+		}
+		for _, fam := range []string{"AEGL", "PAC"} {
+			for _, m := range []float64{10, 30, 60, 240, 480} {
+				prev := 0.0
+				for _, lvl := range []string{"-1", "-2", "-3"} {
+					v, ok := val[fam+lvl][m]
+					if !ok {
+						continue
+					}
+					if v <= prev {
+						t.Errorf("%s %s%s %v min = %v ppm, not above the level below it (%v)", sub.FluidID, fam, lvl, m, v, prev)
+					}
+					prev = v
+				}
+			}
+			for _, lvl := range []string{"-1", "-2", "-3"} {
+				prev := math.Inf(1)
+				for _, m := range []float64{10, 30, 60, 240, 480} {
+					v, ok := val[fam+lvl][m]
+					if !ok {
+						continue
+					}
+					if v > prev {
+						t.Errorf("%s %s%s rises with duration at %v min (%v > %v)", sub.FluidID, fam, lvl, m, v, prev)
+					}
+					prev = v
+				}
+			}
+		}
+	}
+	// Recalled values must say so beside the number.
+	for _, f := range []string{"acetone", "toluene", "ethanol", "2-propanol"} {
+		sub, err := LimitsFor(f, LimitSetUSPublicAcute)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, e := range sub.Entries {
+			if !strings.Contains(e.Source, "(from memory") {
+				t.Errorf("%s %s: recalled value without \"(from memory)\" in its source: %q", f, e.Label(), e.Source)
+			}
+		}
+	}
+	if e := find(t, "acetone", LimitSetUSPublicAcute, "AEGL-2", 60); e.Status != StatusInterim {
+		t.Errorf("acetone AEGL status %q, want interim (from memory)", e.Status)
+	}
 	// DOE PAC chloroform record: "Due to insufficient data, an AEGL-1
 	// does not exist for this chemical".
 	for _, m := range []float64{10, 30, 60, 240, 480} {
