@@ -8,6 +8,8 @@
 // safety review needs.
 //
 // Every built-in number carries its source in the embedded JSON files
-// under data/. All quantities are SI: K, Pa, kg, m³, J. Conversions to
+// under data/. The limit sets under limits/ (limitsets.go) hold the
+// public acute benchmarks (AEGL, DOE PAC) and the EU, UK and German
+// occupational limits, one table per set, apart from the fluid records. All quantities are SI: K, Pa, kg, m³, J. Conversions to
 // °C, bar or ppm belong to the edges of the program (see package units).
 package fluids

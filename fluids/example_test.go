@@ -44,3 +44,24 @@ func ExampleSubstance_LiquidFullTemperature() {
 	fmt.Printf("liquid-full at %.1f °C (%v)\n", units.KelvinToCelsius(t), ok)
 	// Output: liquid-full at 95.1 °C (true)
 }
+
+// The public acute benchmarks for ammonia over one hour, in the shape
+// the exposure rule evaluates.
+func ExampleLimitsFor() {
+	sub, err := fluids.LimitsFor("ammonia", fluids.LimitSetUSPublicAcute)
+	if err != nil {
+		panic(err)
+	}
+	for _, e := range sub.Entries {
+		if e.Minutes == 60 {
+			fmt.Printf("%s: %g ppm (%s)\n", e.Label(), e.PPM, e.Status)
+		}
+	}
+	water, _ := fluids.LimitsFor("water", fluids.LimitSetEUOccupational)
+	fmt.Println("water, EU:", water.Coverage)
+	// Output:
+	// AEGL-1 60 min: 30 ppm (final)
+	// AEGL-2 60 min: 160 ppm (final)
+	// AEGL-3 60 min: 1100 ppm (final)
+	// water, EU: none published
+}

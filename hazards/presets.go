@@ -5,6 +5,7 @@ import (
 	_ "embed"
 	"encoding/json"
 	"fmt"
+	"math"
 	"sync"
 )
 
@@ -90,9 +91,23 @@ var roomPresets = sync.OnceValues(func() ([]RoomPreset, error) {
 		return nil, fmt.Errorf("room presets: %w", err)
 	}
 	for _, p := range doc.Presets {
+		field := "room_presets[" + p.ID + "]"
 		r := p.Room(480)
-		if err := r.Validate("room_presets[" + p.ID + "]"); err != nil {
+		if err := r.Validate(field); err != nil {
 			return nil, err
+		}
+		// The ranges were checked by Validate; here every value must also
+		// carry its source.
+		c := &checker{}
+		for _, v := range []struct {
+			name string
+			v    Sourced
+		}{{"volume_m3", p.Volume}, {"air_changes_per_hour", p.AirChangesPerHour}, {"mixing_factor", p.MixingFactor},
+			{"near_field_radius_m", p.NearFieldRadius}, {"near_field_air_speed_m_s", p.NearFieldAirSpeed}} {
+			c.sourced(field+"."+v.name, v.v, math.Inf(-1), math.Inf(1), "")
+		}
+		if c.err != nil {
+			return nil, c.err
 		}
 	}
 	return doc.Presets, nil
