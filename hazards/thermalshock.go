@@ -224,35 +224,31 @@ func (a *Assessment) thermalShockFindings() []Finding {
 			preset = d.ThermalShock.ColdToHotPresetID
 		}
 		f.Message, f.MessageUS = inBoth(func(m measure) string {
-			where := "on the suddenly cooled outer surface"
+			where := "on the cooled outer surface"
 			if c.Direction == ShockColdToHot {
-				where = "on the inner surface and around the warmed patch (taken at the cooled-surface bound, which it cannot exceed)"
+				where = "on the inner surface (bounded by the cooled-surface value)"
 			}
-			msg := fmt.Sprintf("A %s of %s from %s%s puts %s of tension %s (%s per kelvin), with %s from the pressure",
+			msg := fmt.Sprintf("A %s of %s from %s%s: %s of tension %s (%s per kelvin)",
 				shockDirectionWords(c.Direction), m.tempDiff(c.DeltaK), m.temp(c.StartK), shockPresetName(preset),
-				m.stress(c.ThermalStressPa), where, m.stress(ps.StressPerKelvin), m.stress(c.PressureStressPa))
-			if c.ResidualStressPa > 0 {
-				msg += fmt.Sprintf(" and %s residual stress at the seal", m.stress(c.ResidualStressPa))
+				m.stress(c.ThermalStressPa), where, m.stress(ps.StressPerKelvin))
+			if c.PressureStressPa > 0 {
+				msg += fmt.Sprintf(" plus %s from the pressure", m.stress(c.PressureStressPa))
 			}
-			msg += fmt.Sprintf(", against a short-term strength of %s: safety factor %.3g, probability of breaking %.2g per event. %s withstands a sudden change of about %s at the required safety factor.",
-				m.stress(ps.StrengthPa), c.SafetyFactor, c.FailureProbability, capitalise(ps.Name), m.tempDiff(ps.AllowableDeltaK))
+			if c.ResidualStressPa > 0 {
+				msg += fmt.Sprintf(" plus %s residual at the seal", m.stress(c.ResidualStressPa))
+			}
+			msg += fmt.Sprintf(", against a short-term strength of %s: safety factor %.3g, %.2g breakages per event; it withstands about %s at the required safety factor.",
+				m.stress(ps.StrengthPa), c.SafetyFactor, c.FailureProbability, m.tempDiff(ps.AllowableDeltaK))
 			if g.RatedShockDifference.Value > 0 {
-				msg += fmt.Sprintf(" Stated rating for this glass: %s (%s).", m.tempDiff(g.RatedShockDifference.Value), g.RatedShockDifference.Source)
+				msg += fmt.Sprintf(" Stated rating of the glass: %s (%s).", m.tempDiff(g.RatedShockDifference.Value), g.RatedShockDifference.Source)
 			} else {
-				msg += " No stated thermal-shock rating for this glass is in the library (ISO 718 and ASTM C149 are the test methods for ware)."
+				msg += " No stated rating for this glass in the library."
 			}
 			return msg
 		})
 		out = append(out, f)
 	}
 	return out
-}
-
-func capitalise(s string) string {
-	if s == "" {
-		return s
-	}
-	return strings.ToUpper(s[:1]) + s[1:]
 }
 
 // tempDiff writes a temperature difference.
