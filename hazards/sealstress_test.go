@@ -3,6 +3,7 @@ package hazards
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -154,6 +155,26 @@ func TestSealStressInputErrors(t *testing.T) {
 		var ie *InputError
 		if _, err := Assess(d, lib); !errors.As(err, &ie) || ie.Field != tt.field {
 			t.Errorf("%s: %v; want an error naming %s", tt.name, err, tt.field)
+		}
+	}
+}
+
+// The burst and failure-probability findings say that the seal's
+// residual stress is in them, in both unit systems.
+func TestSealStressNamedInTheFindings(t *testing.T) {
+	d := typicalDesign()
+	d.SealStress = SealStress{Part: "lower bulb", ResidualStressPa: 6e6}
+	a, err := Assess(d, testLibrary(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, f := range a.Findings {
+		if f.Criterion != CriterionBurst && f.Criterion != CriterionFailure {
+			continue
+		}
+		if !strings.Contains(f.Message, "6 MPa of residual stress at the seal of the lower bulb") ||
+			!strings.Contains(f.MessageUS, "psi of residual stress") || strings.Contains(f.MessageUS, "MPa") {
+			t.Errorf("%s: %q / %q", f.Criterion, f.Message, f.MessageUS)
 		}
 	}
 }

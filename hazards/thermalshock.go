@@ -246,9 +246,36 @@ func (a *Assessment) thermalShockFindings() []Finding {
 			}
 			return msg
 		})
+		if a.Flags.Extrapolated() && f.Status == StatusPass {
+			f.Status = StatusCaution
+			f.Message += " Computed outside a correlation's range: not a clean pass."
+			f.MessageUS += " Computed outside a correlation's range: not a clean pass."
+		}
 		out = append(out, f)
 	}
 	return out
+}
+
+// withShockAndSeal appends the thermal-shock findings and, when the seal
+// carries a residual stress, says so in the burst and failure-probability
+// findings it changed.
+func (a *Assessment) withShockAndSeal(fs []Finding) []Finding {
+	if s := a.Seal; s != nil {
+		for i := range fs {
+			if fs[i].Criterion != CriterionBurst && fs[i].Criterion != CriterionFailure {
+				continue
+			}
+			si, us := inBoth(func(m measure) string {
+				return fmt.Sprintf(" Includes %s of residual stress at the seal of the %s, held for the service life.", m.stress(s.StressPa), s.Name)
+			})
+			if fs[i].MessageUS == "" {
+				fs[i].MessageUS = fs[i].Message
+			}
+			fs[i].Message += si
+			fs[i].MessageUS += us
+		}
+	}
+	return append(fs, a.thermalShockFindings()...)
 }
 
 // tempDiff writes a temperature difference.

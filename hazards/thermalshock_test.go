@@ -278,3 +278,36 @@ func TestShockAndSealTrace(t *testing.T) {
 		}
 	}
 }
+
+// FuzzShockAndSeal: any sudden change and seal reading gives an input
+// error or a finite result, never a panic or a NaN.
+func FuzzShockAndSeal(f *testing.F) {
+	f.Add(56.0, 0.0, 0.0, 1e-7, 2e-3, 0)
+	f.Add(0.0, 99.0, 5e6, 0.0, 0.0, 2)
+	f.Add(math.NaN(), -1.0, math.Inf(1), -1e-9, 0.0, 7)
+	library := testLibrary(f)
+	f.Fuzz(func(t *testing.T, down, up, stress, retard, path float64, part int) {
+		d := typicalDesign()
+		d.ThermalShock = ThermalShock{HotToColdK: down, ColdToHotK: up}
+		if part >= 0 {
+			d.SealStress = SealStress{Part: d.Vessel.Parts[part%len(d.Vessel.Parts)].Name, ResidualStressPa: stress, RetardationM: retard, PathLengthM: path}
+		}
+		a, err := Assess(d, library)
+		if err != nil {
+			if !errors.Is(err, ErrInvalidInput) {
+				t.Fatalf("error %v is not an input error", err)
+			}
+			return
+		}
+		for _, fd := range a.Findings {
+			if math.IsNaN(fd.Value) || math.IsNaN(fd.Margin) || math.IsInf(fd.Value, 0) {
+				t.Fatalf("finding %s not finite: %+v", fd.Criterion, fd)
+			}
+		}
+		for _, s := range a.Trace {
+			if math.IsNaN(s.Result.Value) || math.IsInf(s.Result.Value, 0) {
+				t.Fatalf("step %d not finite: %+v", s.Number, s)
+			}
+		}
+	})
+}
