@@ -240,7 +240,7 @@ func (a *Assessment) thermalShockFindings() []Finding {
 			msg += fmt.Sprintf(", against a short-term strength of %s: safety factor %.3g, %.2g breakages per event; it withstands about %s at the required safety factor.",
 				m.stress(ps.StrengthPa), c.SafetyFactor, c.FailureProbability, m.tempDiff(ps.AllowableDeltaK))
 			if g.RatedShockDifference.Value > 0 {
-				msg += fmt.Sprintf(" Stated rating of the glass: %s (%s).", m.tempDiff(g.RatedShockDifference.Value), g.RatedShockDifference.Source)
+				msg += fmt.Sprintf(" Stated rating for ware of this glass: %s (source in the record).", m.tempDiff(g.RatedShockDifference.Value))
 			} else {
 				msg += " No stated rating for this glass in the library."
 			}
@@ -343,8 +343,8 @@ func (a *Assessment) traceThermalShock(tr *tracer) {
 			Method:   "ratio of strength to stress",
 			Equation: "SF = S/σ  (capped at 1000)",
 			Inputs:   []Value{{Symbol: "S", Value: ps.StrengthPa, Unit: "Pa"}, {Symbol: "σ", Value: c.TotalStressPa, Unit: "Pa"}},
-			Intermediate: []Value{{Symbol: "required SF", Value: a.Shock.RequiredSafetyFactor, Source: "as the burst check"},
-				{Symbol: "ΔT withstood at the required SF", Value: ps.AllowableDeltaK, Unit: "K"}},
+			Intermediate: append([]Value{{Symbol: "required SF", Value: a.Shock.RequiredSafetyFactor, Source: "as the burst check"},
+				{Symbol: "ΔT withstood at the required SF", Value: ps.AllowableDeltaK, Unit: "K"}}, ratedShock(g)...),
 			Result: Value{Symbol: "SF_shock", Value: c.SafetyFactor},
 			Source: "definition; thermal-shock resistance ΔT = S(1 − ν)/(E·α) as in Kingery, Bowen and Uhlmann (1976), ch. 16 (from memory)"})
 		tr.add(shockStepKey("failure_probability", ps.Part), Step{Stage: StageSafety, Title: "Thermal-shock failure probability per event, " + ps.Name,
@@ -354,6 +354,15 @@ func (a *Assessment) traceThermalShock(tr *tracer) {
 				{Symbol: "m", Value: g.WeibullModulus.Value, Source: g.WeibullModulus.Source}},
 			Result: Value{Symbol: "P_f,shock", Value: c.FailureProbability}, Source: "Weibull (1951)"})
 	}
+}
+
+// ratedShock returns the glass's stated thermal-shock rating as a value
+// for the record, or nothing when the library states none.
+func ratedShock(g *Glass) []Value {
+	if g.RatedShockDifference.Value <= 0 {
+		return nil
+	}
+	return []Value{{Symbol: "stated rating (trade)", Value: g.RatedShockDifference.Value, Unit: "K", Source: g.RatedShockDifference.Source}}
 }
 
 // shockFindingDeps lists the steps behind a thermal-shock finding.
