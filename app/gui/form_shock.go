@@ -183,3 +183,23 @@ func (s *shockSection) refreshParts() {
 		s.sealPart.SetText(d.SealStress.Part)
 	}
 }
+
+// shockPresetName names a sudden-change preset for the comparison, or
+// says the value is the reviewer's own or not given.
+func shockPresetName(id string) string {
+	if id == "" {
+		return "your own value, or none"
+	}
+	if p, err := hazards.LookupShockPreset(id); err == nil {
+		return p.Name
+	}
+	return id
+}
+
+// firstNonEmpty returns s, or alt when s is blank.
+func firstNonEmpty(s, alt string) string {
+	if s == "" {
+		return alt
+	}
+	return s
+}

@@ -100,6 +100,50 @@ func TestShockScreenshot(t *testing.T) {
 		}
 		f.Close()
 	}
+	h.s.shell.showCompare()
+	h.idle()
+	f, err := os.Create(filepath.Join(dir, "shock-compare.png"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	if err := png.Encode(f, h.w.Canvas().Capture()); err != nil {
+		t.Fatal(err)
+	}
+}
+
+// The comparison of the example's revisions shows the thermal-shock
+// findings changing status and the safety factors side by side.
+func TestShockInTheComparison(t *testing.T) {
+	h := newHarness(t)
+	h.s.shell.showCompare()
+	h.idle()
+	c := h.s.cmp.cmp
+	if c == nil {
+		t.Fatal("no comparison")
+	}
+	changed := 0
+	for _, sc := range c.Statuses {
+		if hazards.IsThermalShockCriterion(sc.Criterion) && sc.Old == hazards.StatusFail && sc.New == hazards.StatusPass {
+			changed++
+		}
+	}
+	if changed != 3 {
+		t.Errorf("%d thermal-shock findings go from fail to pass; want 3 (one per part)", changed)
+	}
+	found := false
+	for _, r := range c.Results {
+		if r.Name == "Thermal-shock safety factor (weakest part)" && r.Better && strings.Contains(r.NewText, "lower bulb") {
+			found = true
+		}
+	}
+	if !found {
+		t.Errorf("no better thermal-shock safety factor in the results: %+v", c.Results)
+	}
+	status := strings.Join(labels(h.s.cmp.statusBox), " | ")
+	if !strings.Contains(status, "Thermal shock, lower bulb") {
+		t.Errorf("status changes on screen lack the thermal shock: %s", status)
+	}
 }
 
 // shotCriterion is the finding selected for the screenshots:
