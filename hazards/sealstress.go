@@ -198,6 +198,11 @@ func (a *Assessment) traceSealStress(tr *tracer) {
 	if r == nil {
 		return
 	}
+	if n := tr.by["long_term_burst"]; n > 0 {
+		// That step is the plain burst check's; the seal's effect follows.
+		tr.steps[n-1].Result.Value = r.BurstWithoutPa
+		tr.steps[n-1].Note = "Without the seal's residual stress; the step after next adds it."
+	}
 	st := Step{Stage: StageStress, Title: "Residual stress at the seal, " + r.Name,
 		Result: Value{Symbol: "σ_r", Value: r.StressPa, Unit: "Pa"}}
 	if r.FromRetardation {
