@@ -8,12 +8,10 @@ import (
 )
 
 // shockKeyRows lists the thermal-shock result of each part and the seal's
-// residual stress, or says that no sudden change was assessed.
+// residual stress. (A design without a sudden change has no row: the form
+// says "not assessed", and every key row must lead to its working.)
 func shockKeyRows(a *hazards.Assessment, u unitSystem) []keyRow {
 	var rows []keyRow
-	if !a.Shock.Assessed {
-		rows = append(rows, keyRow{label: "Thermal shock", value: "not assessed: no sudden temperature change is given"})
-	}
 	for _, ps := range a.Shock.Parts {
 		c := ps.Cases[ps.Governing]
 		n := strconv.Itoa(ps.Part + 1)
