@@ -228,9 +228,9 @@ func (a *Assessment) thermalShockFindings() []Finding {
 			if c.Direction == ShockColdToHot {
 				where = "on the inner surface (bounded by the cooled-surface value)"
 			}
-			msg := fmt.Sprintf("A %s of %s from %s%s: %s of tension %s (%s per kelvin)",
+			msg := fmt.Sprintf("A %s of %s from %s%s: %s of tension %s (%s)",
 				shockDirectionWords(c.Direction), m.tempDiff(c.DeltaK), m.temp(c.StartK), shockPresetName(preset),
-				m.stress(c.ThermalStressPa), where, m.stress(ps.StressPerKelvin))
+				m.stress(c.ThermalStressPa), where, m.stressPerDegree(ps.StressPerKelvin))
 			if c.PressureStressPa > 0 {
 				msg += fmt.Sprintf(" plus %s from the pressure", m.stress(c.PressureStressPa))
 			}
@@ -284,6 +284,15 @@ func (m measure) tempDiff(k float64) string {
 		return fmt.Sprintf("%.3g °F", k*9/5)
 	}
 	return fmt.Sprintf("%.3g K", k)
+}
+
+// stressPerDegree writes a stress per degree of temperature change, given
+// in Pa/K.
+func (m measure) stressPerDegree(paPerK float64) string {
+	if m.us {
+		return fmt.Sprintf("%.3g psi per °F", paPerK*5/9/units.PsiPa)
+	}
+	return fmt.Sprintf("%.3g MPa per kelvin", paPerK/1e6)
 }
 
 // stress writes a stress.
