@@ -11,30 +11,37 @@ import (
 // designJSON is the stable, documented JSON form of one checked design.
 // SI units, absolute pressures; the unit is in each key's name.
 type designJSON struct {
-	File                   string   `json:"file"`
-	Product                string   `json:"product"`
-	Revision               string   `json:"revision"`
-	Fingerprint            string   `json:"fingerprint"`
-	Fluid                  string   `json:"fluid"`
-	Verdict                string   `json:"verdict"`
-	Phase                  string   `json:"phase"`
-	PressureKPa            float64  `json:"pressure_kpa"`
-	LiquidFullTemperatureC *float64 `json:"liquid_full_temperature_c"`
-	UllagePercent          float64  `json:"ullage_percent"`
-	BurstSafetyFactor      float64  `json:"burst_safety_factor"`
-	FailureProbability     float64  `json:"failure_probability"`
-	ImplosionSafetyFactor  float64  `json:"implosion_safety_factor"`
-	MaxSafeTemperatureC    float64  `json:"max_safe_temperature_c"`
-	MaxSafeTemperatureNote string   `json:"max_safe_temperature_bound"`
-	MaxSafeFillMassG       float64  `json:"max_safe_fill_mass_g"`
-	MaxSafeFillNote        string   `json:"max_safe_fill_bound"`
-	StoredEnergyJ          float64  `json:"stored_energy_j"`
-	FlashFraction          float64  `json:"flash_fraction"`
-	PeakConcentrationPPM   float64  `json:"peak_concentration_ppm"`
-	STELAveragePPM         float64  `json:"stel_average_ppm"`
-	TWA8hPPM               float64  `json:"twa_8h_ppm"`
-	PercentLFL             float64  `json:"percent_lfl"`
-	Extrapolated           bool     `json:"extrapolated"`
+	File                   string            `json:"file"`
+	Product                string            `json:"product"`
+	Revision               string            `json:"revision"`
+	Fingerprint            string            `json:"fingerprint"`
+	Fluid                  string            `json:"fluid"`
+	Verdict                string            `json:"verdict"`
+	Phase                  string            `json:"phase"`
+	PressureKPa            float64           `json:"pressure_kpa"`
+	LiquidFullTemperatureC *float64          `json:"liquid_full_temperature_c"`
+	UllagePercent          float64           `json:"ullage_percent"`
+	BurstSafetyFactor      float64           `json:"burst_safety_factor"`
+	FailureProbability     float64           `json:"failure_probability"`
+	ImplosionSafetyFactor  float64           `json:"implosion_safety_factor"`
+	MaxSafeTemperatureC    float64           `json:"max_safe_temperature_c"`
+	MaxSafeTemperatureNote string            `json:"max_safe_temperature_bound"`
+	MaxSafeFillMassG       float64           `json:"max_safe_fill_mass_g"`
+	MaxSafeFillNote        string            `json:"max_safe_fill_bound"`
+	StoredEnergyJ          float64           `json:"stored_energy_j"`
+	FlashFraction          float64           `json:"flash_fraction"`
+	PeakConcentrationPPM   float64           `json:"peak_concentration_ppm"`
+	STELAveragePPM         float64           `json:"stel_average_ppm"`
+	TWA8hPPM               float64           `json:"twa_8h_ppm"`
+	PercentLFL             float64           `json:"percent_lfl"`
+	Extrapolated           bool              `json:"extrapolated"`
+	Findings               []hazards.Finding `json:"findings"`
+	Cautions               []string          `json:"cautions"`
+	// Tolerance is the sampled tolerance study, included with --samples.
+	Tolerance *tolerance.Result `json:"tolerance,omitempty"`
+	// Trace is the calculation record, included with --trace.
+	Trace []hazards.Step `json:"trace,omitempty"`
+
 	// ThermalShock lists each part's thermal-shock result (with its
 	// thermal_shock_safety_factor); null when the design gives no sudden
 	// change, and ThermalShockNote then says why.
@@ -42,13 +49,7 @@ type designJSON struct {
 	ThermalShockNote string      `json:"thermal_shock_note,omitempty"`
 	// SealResidualStressMPa is the residual stress used at the seal; null
 	// when none is given.
-	SealResidualStressMPa *float64          `json:"seal_residual_stress_mpa"`
-	Findings              []hazards.Finding `json:"findings"`
-	Cautions              []string          `json:"cautions"`
-	// Tolerance is the sampled tolerance study, included with --samples.
-	Tolerance *tolerance.Result `json:"tolerance,omitempty"`
-	// Trace is the calculation record, included with --trace.
-	Trace []hazards.Step `json:"trace,omitempty"`
+	SealResidualStressMPa *float64 `json:"seal_residual_stress_mpa"`
 }
 
 func round(x float64, digits int) float64 {
