@@ -52,6 +52,11 @@ type Assessment struct {
 	// of any part over it.
 	ExternalLoadPa        float64
 	ImplosionSafetyFactor float64
+	// Seal is the seal's residual stress and its effect on the burst
+	// resistance; nil when the design gives none (see sealstress.go).
+	Seal *SealResult
+	// Shock is the thermal-shock review (see thermalshock.go).
+	Shock ThermalShockResult
 
 	// MaxSafe are the largest temperature and fill that still meet the
 	// burst, failure-probability and ullage criteria.
@@ -169,6 +174,10 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	for _, p := range a.Parts {
 		a.ImplosionSafetyFactor = math.Min(a.ImplosionSafetyFactor, safetyFactor(p.BucklingPa, a.ExternalLoadPa))
 	}
+	if err := a.applySealStress(); err != nil {
+		return nil, err
+	}
+	a.assessThermalShock()
 
 	if err := a.findMaxSafe(sub); err != nil {
 		return nil, err

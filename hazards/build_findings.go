@@ -68,6 +68,7 @@ func (a *Assessment) findings() {
 			m.pressure(a.ExternalLoadPa), m.temp(d.ColdestK), m.pressure(a.ImplosionSafetyFactor*a.ExternalLoadPa))
 	})
 	fs = append(fs, im)
+	fs = a.withShockAndSeal(fs)
 
 	fs = append(fs, exposureFindings(f, a.release, d.Room.ExposureMinutes*60, cr)...)
 

@@ -38,6 +38,12 @@ type Design struct {
 	Room Room `json:"room"`
 	// Criteria are the review's pass marks.
 	Criteria Criteria `json:"criteria"`
+	// ThermalShock is the largest sudden temperature change the device may
+	// meet; the zero value means no thermal shock is assessed.
+	ThermalShock ThermalShock `json:"thermal_shock,omitzero"`
+	// SealStress is the residual stress measured at the seal; the zero
+	// value means none is given.
+	SealStress SealStress `json:"seal_stress,omitzero"`
 }
 
 // GlassChoice is either a catalogue glass (ID) or a custom glass.
@@ -165,6 +171,8 @@ func (d *Design) Validate() error {
 		c.err = err
 	}
 	d.Criteria.validate(c)
+	d.ThermalShock.validate(c)
+	d.SealStress.validate(c, d.Vessel.Parts)
 	return c.err
 }
 

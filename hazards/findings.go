@@ -226,7 +226,13 @@ func sortFindings(fs []Finding) {
 		CriterionIDLH: 5, CriterionCeiling: 6, CriterionSTEL: 7, CriterionTWA: 8, CriterionNoLimit: 9,
 		CriterionFlammability: 10, CriterionCorrelationUse: 11,
 	}
-	sort.SliceStable(fs, func(i, j int) bool { return order[fs[i].Criterion] < order[fs[j].Criterion] })
+	rank := func(c string) int {
+		if IsThermalShockCriterion(c) {
+			return order[CriterionImplosion] // kept after the implosion finding by the stable sort
+		}
+		return order[c]
+	}
+	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i].Criterion) < rank(fs[j].Criterion) })
 }
 
 // finiteOr replaces a non-finite number by a fallback so that no NaN or

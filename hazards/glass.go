@@ -24,6 +24,13 @@ type Glass struct {
 	ReferenceLoad           Sourced `json:"reference_load_seconds"`
 	WeibullModulus          Sourced `json:"weibull_modulus"`
 	StressCorrosionExponent Sourced `json:"stress_corrosion_exponent"`
+	// StressOpticCoefficient C (1/Pa) converts a polariscope retardation
+	// to stress, σ = δ/(C·L); optional (zero when not known).
+	StressOpticCoefficient Sourced `json:"stress_optic_coefficient_per_pa,omitzero"`
+	// RatedShockDifference is a stated thermal-shock temperature-difference
+	// rating (K) for ware of this glass, shown beside the computed shock
+	// result; optional (zero when none is stated).
+	RatedShockDifference Sourced `json:"rated_shock_difference_k,omitzero"`
 }
 
 //go:embed data/glasses.json
@@ -94,5 +101,11 @@ func (g *Glass) Validate(field string) error {
 	v.sourced(field+".reference_load_seconds", g.ReferenceLoad, 0.01, 1e9, "s")
 	v.sourced(field+".weibull_modulus", g.WeibullModulus, 1, 60, "")
 	v.sourced(field+".stress_corrosion_exponent", g.StressCorrosionExponent, 5, 200, "")
+	if g.StressOpticCoefficient != (Sourced{}) {
+		v.sourced(field+".stress_optic_coefficient_per_pa", g.StressOpticCoefficient, 1e-13, 1e-11, "1/Pa")
+	}
+	if g.RatedShockDifference != (Sourced{}) {
+		v.sourced(field+".rated_shock_difference_k", g.RatedShockDifference, 1, 2000, "K")
+	}
 	return v.err
 }

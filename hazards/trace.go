@@ -228,6 +228,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 			{Symbol: "allowable stress, " + a.Parts[a.Strength.GoverningPart].Name, Value: a.Strength.AllowableStressPa, Unit: "Pa"}},
 		Result: Value{Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"},
 		Source: "ASTM E1300 glass failure prediction model (Beason and Morgan 1984) (from memory)"})
+	a.traceSealStress(tr)
 	tr.add("burst_safety_factor", Step{Stage: StageSafety, Title: "Burst safety factor", Method: "ratio of capacity to load",
 		Equation: "SF = ΔP_bL / ΔP  (capped at 1000)",
 		Inputs:   []Value{{Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"}, {Symbol: "ΔP", Value: over, Unit: "Pa"}},
@@ -249,6 +250,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 		Method: "classical elastic buckling with knock-down", Equation: "sphere p_cr = 2E(t/r_m)²/√(3(1−ν²)); tube p_cr = E(t/r_m)³/(4(1−ν²)); SF = min(knock-down · p_cr)/ΔP_ext",
 		Inputs: buckIn, Result: Value{Symbol: "SF_implosion", Value: a.ImplosionSafetyFactor},
 		Source: "Zoelly (1915); Bresse–Bryan; Timoshenko and Gere, Theory of Elastic Stability, 2nd ed. (from memory)"})
+	a.traceThermalShock(tr)
 
 	// Root-found limits.
 	ms := a.MaxSafe
@@ -323,7 +325,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	// Findings.
 	for i := range a.Findings {
 		fd := &a.Findings[i]
-		deps := findingDeps[fd.Criterion]
+		deps := findingDepsOf(fd.Criterion)
 		refs := []Value{}
 		for _, k := range deps {
 			if n := tr.by[k]; n > 0 {
@@ -336,6 +338,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 			Result:       Value{Symbol: string(fd.Status), Value: fd.Margin, Unit: "margin"}, Source: fd.Source, Note: fd.Message})
 		fd.Steps = append([]int{n}, stepNumbers(tr, deps)...)
 	}
+	a.amendSealSteps(tr)
 	a.Trace = tr.steps
 	a.traceIndex = tr.by
 }

@@ -80,6 +80,7 @@ func (w *assessmentWriter) write() {
 	w.inputs()
 	w.vesselState()
 	w.glass()
+	w.thermalShock()
 	w.limits()
 	w.rupture()
 	w.release()

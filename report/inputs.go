@@ -68,6 +68,8 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 		[2]string{"Glass", glass},
 		[2]string{"Service life", plain(ds.ServiceLifeYears) + " years"},
 		[2]string{"Time at the hottest", plain(ds.HoursAtHottest) + " h over the life"},
+		[2]string{"Sudden temperature change", shockInputText(ds.ThermalShock, u)},
+		[2]string{"Residual stress at the seal", sealInputText(ds.SealStress, u)},
 	)
 	return pairs
 }

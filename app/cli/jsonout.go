@@ -41,6 +41,15 @@ type designJSON struct {
 	Tolerance *tolerance.Result `json:"tolerance,omitempty"`
 	// Trace is the calculation record, included with --trace.
 	Trace []hazards.Step `json:"trace,omitempty"`
+
+	// ThermalShock lists each part's thermal-shock result (with its
+	// thermal_shock_safety_factor); null when the design gives no sudden
+	// change, and ThermalShockNote then says why.
+	ThermalShock     []shockJSON `json:"thermal_shock"`
+	ThermalShockNote string      `json:"thermal_shock_note,omitempty"`
+	// SealResidualStressMPa is the residual stress used at the seal; null
+	// when none is given.
+	SealResidualStressMPa *float64 `json:"seal_residual_stress_mpa"`
 }
 
 func round(x float64, digits int) float64 {
@@ -83,6 +92,8 @@ func checkJSON(c checked) designJSON {
 		Cautions:               a.Cautions,
 		Tolerance:              c.tolerance,
 	}
+	d.ThermalShock, d.ThermalShockNote = shockResults(a)
+	d.SealResidualStressMPa = sealStressMPa(a)
 	if a.LiquidFullReached {
 		t := round(units.KelvinToCelsius(a.LiquidFullK), 6)
 		d.LiquidFullTemperatureC = &t

@@ -36,6 +36,12 @@ func inputRows(f *designForm, a, b *hazards.Design, lib *fluids.Library, u unitS
 			text("Glass", glassName)
 		case "room.volume_m3":
 			text("Room", func(d *hazards.Design) string { return roomName(d.Room.PresetID) })
+		case "thermal_shock.hot_to_cold_k":
+			text("Sudden drop from", func(d *hazards.Design) string { return shockPresetName(d.ThermalShock.HotToColdPresetID) })
+		case "thermal_shock.cold_to_hot_k":
+			text("Sudden rise from", func(d *hazards.Design) string { return shockPresetName(d.ThermalShock.ColdToHotPresetID) })
+		case "seal_stress.residual_stress_pa":
+			text("Part carrying the seal", func(d *hazards.Design) string { return firstNonEmpty(d.SealStress.Part, "none given") })
 		}
 		num(nf)
 		if nf.path == "room.exposure_minutes" {

@@ -34,6 +34,9 @@ func findingValue(f hazards.Finding, x float64) string {
 // findingLimit formats the limit a finding is held to, with "at least"
 // or "at most" so the direction is plain.
 func findingLimit(f hazards.Finding) string {
+	if hazards.IsThermalShockCriterion(f.Criterion) {
+		return "≥ " + findingValue(f, f.Limit)
+	}
 	switch f.Criterion {
 	case hazards.CriterionCorrelationUse:
 		return "—"
@@ -59,6 +62,9 @@ func findingMargin(f hazards.Finding) string {
 		if f.Value >= hazards.SafetyFactorCap {
 			return "no load"
 		}
+	}
+	if hazards.IsThermalShockCriterion(f.Criterion) && f.Value >= hazards.SafetyFactorCap {
+		return "no load"
 	}
 	if f.Criterion == hazards.CriterionFlammability && f.Limit > 0 && f.Value == 0 && f.Margin == 1 {
 		return "—"

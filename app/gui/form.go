@@ -25,6 +25,7 @@ type designForm struct {
 	fluid    *fluidSection
 	vessel   *vesselSection
 	temps    *temperatureSection
+	shock    *shockSection
 	room     *roomSection
 	criteria *criteriaSection
 
@@ -53,6 +54,7 @@ func newDesignForm(s *session) *designForm {
 		newFluidSection(f),
 		newVesselSection(f),
 		newTemperatureSection(f),
+		newShockSection(f),
 		newRoomSection(f),
 		newCriteriaSection(f),
 	}
@@ -91,7 +93,7 @@ func (f *designForm) reveal(p *problem) {
 	}
 }
 
-// scrollTo brings section i (0 product … 5 criteria) to the top.
+// scrollTo brings section i (0 product … 6 criteria) to the top.
 func (f *designForm) scrollTo(i int) {
 	if i < 0 || i >= len(f.sections) {
 		return
@@ -129,6 +131,8 @@ func (f *designForm) afterNumber(path string) {
 		f.room.typed()
 	case strings.HasPrefix(path, "vessel."):
 		f.vessel.updateVolume()
+	case strings.HasPrefix(path, "thermal_shock."):
+		f.shock.syncPresets()
 	}
 }
 
@@ -143,6 +147,7 @@ func (f *designForm) load() {
 		nf.show(d, u)
 	}
 	f.temps.syncPresets()
+	f.shock.syncPresets()
 	f.room.load()
 	f.criteria.load()
 	f.showProblems(f.s.problem)
@@ -194,6 +199,8 @@ func (f *designForm) labelOf(path string) string {
 		return "Bodies whose limits apply"
 	case path == "temperature":
 		return "Temperature"
+	case path == "seal_stress.part":
+		return "Part carrying the seal"
 	}
 	return path
 }

@@ -84,6 +84,7 @@ func keyRows(a *hazards.Assessment, u unitSystem) []keyRow {
 		rows = append(rows, row(fmt.Sprintf("Hoop stress, part %d (%s)", i+1, p.Name),
 			stressText(p.HoopStressPa, u)+", "+p.Form, fmt.Sprintf("stress_%d", i), "state_hot"))
 	}
+	rows = append(rows, shockKeyRows(a, u)...)
 	if a.Flags.Extrapolated() {
 		rows = append(rows, row("Correlations stretched", a.Flags.String(), "psat_hottest", "state_hot"))
 	}

@@ -207,8 +207,8 @@ func (s *session) showScreen(name string) {
 		s.results.tabs.SelectIndex(1)
 	case "keys":
 		s.results.tabs.SelectIndex(2)
-	case "fluid", "vessel", "temperatures", "room", "criteria":
-		s.form.scrollTo(map[string]int{"fluid": 1, "vessel": 2, "temperatures": 3, "room": 4, "criteria": 5}[name])
+	case "fluid", "vessel", "temperatures", "shock", "room", "criteria":
+		s.form.scrollTo(map[string]int{"fluid": 1, "vessel": 2, "temperatures": 3, "shock": 4, "room": 5, "criteria": 6}[name])
 	case "revisions":
 		sh.showRevisions()
 	case "compare":

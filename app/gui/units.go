@@ -46,6 +46,9 @@ const (
 	qYears                        // years
 	qPerHour                      // air changes per hour
 	qProbability                  // a probability, no unit
+	qTempDiff                     // K ↔ K / °F (a temperature difference)
+	qStress                       // Pa ↔ MPa / psi
+	qRetardation                  // m ↔ nm (polariscope retardation)
 )
 
 // unit returns the unit label of q in the system, "" for plain numbers.
@@ -84,6 +87,12 @@ func (u unitSystem) unit(q quantity) string {
 		return "years"
 	case qPerHour:
 		return "per h"
+	case qTempDiff:
+		return pick("K", "°F")
+	case qStress:
+		return pick("MPa", "psi")
+	case qRetardation:
+		return "nm"
 	}
 	return ""
 }
@@ -113,6 +122,12 @@ func (u unitSystem) scale(q quantity) float64 {
 		return pick(1, units.FootM)
 	case qAirSpeed:
 		return pick(1, units.FootPerMinuteMS)
+	case qTempDiff:
+		return pick(1, 5.0/9.0)
+	case qStress:
+		return pick(1e6, units.PsiPa)
+	case qRetardation:
+		return 1e-9
 	}
 	return 1
 }

@@ -85,6 +85,9 @@ func describe(name string, v reflect.Value) string {
 	case reflect.Struct:
 		var parts []string
 		for _, f := range jsonFields(v.Type()) {
+			if f.omitZero && v.FieldByIndex(f.index).IsZero() {
+				continue
+			}
 			unitName := f.name
 			if f.name == "value" {
 				unitName = name
@@ -119,6 +122,10 @@ const kelvin = "K"
 var inputUnits = []struct{ suffix, unit string }{
 	{"_per_hour", "per hour"},
 	{"_per_k", "1/K"},
+	{"_per_pa", "1/Pa"},
+	{"hot_to_cold_k", "K change"},
+	{"cold_to_hot_k", "K change"},
+	{"_difference_k", "K change"},
 	{"_k", kelvin},
 	{"_m_s", "m/s"},
 	{"_m3", "m³"},
@@ -166,6 +173,9 @@ func trimZeros(s string) string {
 type jsonField struct {
 	name  string
 	index []int
+	// omitZero: an optional field (tag omitzero), left out of a
+	// description while it holds its zero value.
+	omitZero bool
 }
 
 // jsonFields lists a struct's exported fields under their JSON names.
@@ -176,14 +186,14 @@ func jsonFields(t reflect.Type) []jsonField {
 		if !sf.IsExported() {
 			continue
 		}
-		name, _, _ := strings.Cut(sf.Tag.Get("json"), ",")
+		name, opts, _ := strings.Cut(sf.Tag.Get("json"), ",")
 		if name == "-" {
 			continue
 		}
 		if name == "" {
 			name = sf.Name
 		}
-		out = append(out, jsonField{name: name, index: sf.Index})
+		out = append(out, jsonField{name: name, index: sf.Index, omitZero: strings.Contains(","+opts+",", ",omitzero,")})
 	}
 	return out
 }

@@ -13,6 +13,9 @@ type reading struct {
 	value float64 // in the display unit; 0 when there is no number
 	rank  float64 // what Better/Worse compare; may be ±Inf ("not reached")
 	text  string  // for a person, with the unit
+	// unranked: nothing to compare (not assessed on this side), so no
+	// better or worse is claimed.
+	unranked bool
 }
 
 // quantity is one headline result and how to read it.
@@ -50,6 +53,8 @@ var quantities = []quantity{
 	{"Implosion safety factor", "", true, func(a *hazards.Assessment) reading {
 		return safetyFactor(a.ImplosionSafetyFactor)
 	}},
+	{"Thermal-shock safety factor (weakest part)", "", true, thermalShockReading},
+	{"Residual stress at the seal", "MPa", false, sealStressReading},
 	{"Maximum safe temperature", "°C", true, func(a *hazards.Assessment) reading {
 		c := units.KelvinToCelsius(a.MaxSafe.TemperatureK)
 		return plain(c, bounded(a.MaxSafe.TemperatureBound, fixed(c, 1)+" °C"))
@@ -112,7 +117,7 @@ func resultChanges(a, b *hazards.Assessment) []ResultChange {
 			newR = sanitise(q.read(b))
 		}
 		rc := ResultChange{Name: q.name, Unit: q.unit, Old: oldR.value, New: newR.value, OldText: oldR.text, NewText: newR.text}
-		if a != nil && b != nil && oldR.rank != newR.rank {
+		if a != nil && b != nil && !oldR.unranked && !newR.unranked && oldR.rank != newR.rank {
 			rc.Better = (newR.rank > oldR.rank) == q.higherIsBetter
 			rc.Worse = !rc.Better
 		}

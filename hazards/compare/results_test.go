@@ -23,6 +23,9 @@ func fakeAssessment(x float64) *hazards.Assessment {
 		Rupture:               hazards.Rupture{StoredEnergyJ: x},
 		Release: hazards.Release{Peak: hazards.Exposure{PPM: x}, STEL: hazards.Exposure{PPM: x},
 			TWA8h: hazards.Exposure{PPM: x}, PercentLFL: x},
+		Seal: &hazards.SealResult{Name: "bulb", StressPa: x * 1e6},
+		Shock: hazards.ThermalShockResult{Assessed: true, Parts: []hazards.PartShock{{Name: "bulb",
+			Cases: []hazards.ShockCase{{Direction: hazards.ShockHotToCold, DeltaK: 50, SafetyFactor: x}}}}},
 	}
 }
 
@@ -30,19 +33,21 @@ func fakeAssessment(x float64) *hazards.Assessment {
 // quantity's direction, stated here independently of the code's table.
 func TestResultDirections(t *testing.T) {
 	higherIsBetter := map[string]bool{
-		"Pressure at the hottest temperature":       false,
-		"Ullage at the hottest temperature":         true,
-		"Liquid-full temperature":                   true,
-		"Burst safety factor":                       true,
-		"Failure probability over the service life": false,
-		"Implosion safety factor":                   true,
-		"Maximum safe temperature":                  true,
-		"Maximum safe fill":                         true,
-		"Stored energy at rupture":                  false,
-		"Peak concentration":                        false,
-		"15-minute average (STEL)":                  false,
-		"8-hour time-weighted average (TWA)":        false,
-		"Peak as a percentage of the LFL":           false,
+		"Pressure at the hottest temperature":        false,
+		"Ullage at the hottest temperature":          true,
+		"Liquid-full temperature":                    true,
+		"Burst safety factor":                        true,
+		"Failure probability over the service life":  false,
+		"Implosion safety factor":                    true,
+		"Maximum safe temperature":                   true,
+		"Maximum safe fill":                          true,
+		"Stored energy at rupture":                   false,
+		"Peak concentration":                         false,
+		"15-minute average (STEL)":                   false,
+		"8-hour time-weighted average (TWA)":         false,
+		"Peak as a percentage of the LFL":            false,
+		"Thermal-shock safety factor (weakest part)": true,
+		"Residual stress at the seal":                false,
 	}
 	c := Compare(Side{Assessment: fakeAssessment(2)}, Side{Assessment: fakeAssessment(3)})
 	if len(c.Results) != len(higherIsBetter) {
@@ -67,16 +72,18 @@ func TestResultUnitsAndText(t *testing.T) {
 	a := fakeAssessment(2)
 	c := Compare(Side{Assessment: a}, Side{Assessment: a})
 	want := map[string][2]string{ // unit, text
-		"Pressure at the hottest temperature":       {"kPa", "2.000 kPa"},
-		"Ullage at the hottest temperature":         {"%", "2.0 %"},
-		"Liquid-full temperature":                   {"°C", "2.0 °C"},
-		"Burst safety factor":                       {"", "2.00"},
-		"Failure probability over the service life": {"", "0.0020"},
-		"Maximum safe temperature":                  {"°C", "2.0 °C"},
-		"Maximum safe fill":                         {"g", "2.00 g"},
-		"Stored energy at rupture":                  {"J", "2.00 J"},
-		"Peak concentration":                        {"ppm", "2.00 ppm"},
-		"Peak as a percentage of the LFL":           {"% LFL", "2.0 % LFL"},
+		"Pressure at the hottest temperature":        {"kPa", "2.000 kPa"},
+		"Ullage at the hottest temperature":          {"%", "2.0 %"},
+		"Liquid-full temperature":                    {"°C", "2.0 °C"},
+		"Burst safety factor":                        {"", "2.00"},
+		"Failure probability over the service life":  {"", "0.0020"},
+		"Maximum safe temperature":                   {"°C", "2.0 °C"},
+		"Maximum safe fill":                          {"g", "2.00 g"},
+		"Stored energy at rupture":                   {"J", "2.00 J"},
+		"Peak concentration":                         {"ppm", "2.00 ppm"},
+		"Peak as a percentage of the LFL":            {"% LFL", "2.0 % LFL"},
+		"Thermal-shock safety factor (weakest part)": {"", "2.00 (bulb, 50.0 K hot-to-cold)"},
+		"Residual stress at the seal":                {"MPa", "2.00 MPa (bulb)"},
 	}
 	for _, r := range c.Results {
 		if w, ok := want[r.Name]; ok && (r.Unit != w[0] || r.NewText != w[1]) {
@@ -140,5 +147,24 @@ func TestNumberFormats(t *testing.T) {
 		if tt.got != tt.want {
 			t.Errorf("case %d: %q; want %q", i, tt.got, tt.want)
 		}
+	}
+}
+
+// A side with no sudden change or no seal stress says so in words and
+// claims neither better nor worse.
+func TestShockAndSealNotAssessed(t *testing.T) {
+	given := fakeAssessment(2)
+	none := fakeAssessment(2)
+	none.Shock = hazards.ThermalShockResult{NotAssessedReason: hazards.ShockNotAssessed}
+	none.Seal = nil
+	c := Compare(Side{Assessment: none}, Side{Assessment: given})
+	for _, name := range []string{"Thermal-shock safety factor (weakest part)", "Residual stress at the seal"} {
+		r := findResult(t, c, name)
+		if r.Better || r.Worse || !r.Changed() {
+			t.Errorf("%s: %+v; want changed text, neither better nor worse", name, r)
+		}
+	}
+	if r := findResult(t, c, "Thermal-shock safety factor (weakest part)"); r.OldText != "not assessed (no sudden change given)" {
+		t.Errorf("old side reads %q", r.OldText)
 	}
 }

@@ -18,7 +18,10 @@ import (
 // part of it.
 //
 // The canonical JSON has no whitespace; object members sorted by key
-// (byte order) and every field present, a nil pointer as null; a nil list
+// (byte order) and every field present, a nil pointer as null, except
+// that a field tagged omitzero is left out while it holds its zero value
+// (so optional inputs added later leave older fingerprints unchanged);
+// a nil list
 // written as [] like an empty one; numbers in Go's shortest round-trip
 // form, strconv.FormatFloat(x, 'g', -1, 64) (e.g. 0.006, 1e-12, 101325),
 // with −0 written as 0; text as a JSON string with only ", \ and control
@@ -46,13 +49,19 @@ func writeCanonical(b *bytes.Buffer, v reflect.Value) {
 		fields := jsonFields(v.Type())
 		sort.Slice(fields, func(i, j int) bool { return fields[i].name < fields[j].name })
 		b.WriteByte('{')
-		for i, f := range fields {
+		i := 0
+		for _, f := range fields {
+			fv := v.FieldByIndex(f.index)
+			if f.omitZero && canonicalZero(fv) {
+				continue
+			}
 			if i > 0 {
 				b.WriteByte(',')
 			}
+			i++
 			writeString(b, f.name)
 			b.WriteByte(':')
-			writeCanonical(b, v.FieldByIndex(f.index))
+			writeCanonical(b, fv)
 		}
 		b.WriteByte('}')
 	case reflect.Pointer, reflect.Interface:
@@ -83,6 +92,25 @@ func writeCanonical(b *bytes.Buffer, v reflect.Value) {
 	default:
 		panic(fmt.Sprintf("designfile: no canonical form for %s", v.Type()))
 	}
+}
+
+// canonicalZero reports whether v is written the same as its type's zero
+// value: −0 counts as zero, and so does an empty list.
+func canonicalZero(v reflect.Value) bool {
+	switch v.Kind() {
+	case reflect.Struct:
+		for i := 0; i < v.NumField(); i++ {
+			if !canonicalZero(v.Field(i)) {
+				return false
+			}
+		}
+		return true
+	case reflect.Float32, reflect.Float64:
+		return v.Float() == 0
+	case reflect.Slice:
+		return v.Len() == 0
+	}
+	return v.IsZero()
 }
 
 func writeNumber(b *bytes.Buffer, x float64) {

@@ -11,7 +11,7 @@ import (
 
 // strictDecoder fills Go values from a parsed tree, refusing unknown
 // fields, missing fields and values of the wrong type. A field is
-// required unless its JSON tag says omitempty.
+// required unless its JSON tag says omitempty or omitzero.
 type strictDecoder struct {
 	data []byte
 }
@@ -132,6 +132,9 @@ type jsonField struct {
 	name     string
 	index    []int
 	optional bool
+	// omitZero: the tag says omitzero, so the field is left out of the
+	// canonical form when it holds its zero value.
+	omitZero bool
 }
 
 // jsonFields lists a struct's exported fields under their JSON names,
@@ -151,7 +154,8 @@ func jsonFields(t reflect.Type) []jsonField {
 		if name == "" {
 			name = sf.Name
 		}
-		out = append(out, jsonField{name: name, index: sf.Index, optional: strings.Contains(","+opts+",", ",omitempty,")})
+		omitZero := strings.Contains(","+opts+",", ",omitzero,")
+		out = append(out, jsonField{name: name, index: sf.Index, optional: omitZero || strings.Contains(","+opts+",", ",omitempty,"), omitZero: omitZero})
 	}
 	return out
 }

@@ -1,0 +1,205 @@
+package gui
+
+import (
+	"math"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// noShock is the preset choice for a direction that is not assessed.
+const noShock = "Not assessed"
+
+// shockSection holds the sudden temperature changes the device may meet,
+// with the named presets and their sources, and the residual stress
+// measured at the seal.
+type shockSection struct {
+	f                     *designForm
+	presets               []hazards.ShockPreset
+	hotPick, coldPick     *widget.Select
+	hotSource, coldSource *widget.Label
+	hot, cold             *numField
+	sealPart              *widget.SelectEntry
+}
+
+// newShockSection builds the "Sudden temperature changes and seal" group.
+func newShockSection(f *designForm) fyne.CanvasObject {
+	s := &shockSection{f: f}
+	f.shock = s
+	s.presets, _ = hazards.ShockPresets()
+	s.hot = f.field("thermal_shock.hot_to_cold_k", "Sudden drop, hot to cold", qTempDiff,
+		func(d *hazards.Design) float64 { return d.ThermalShock.HotToColdK },
+		func(d *hazards.Design, x float64) { d.ThermalShock.HotToColdK = x })
+	s.cold = f.field("thermal_shock.cold_to_hot_k", "Sudden rise, cold to hot", qTempDiff,
+		func(d *hazards.Design) float64 { return d.ThermalShock.ColdToHotK },
+		func(d *hazards.Design, x float64) { d.ThermalShock.ColdToHotK = x })
+	s.hotPick, s.hotSource = s.picker(hazards.ShockHotToCold, s.hot)
+	s.coldPick, s.coldSource = s.picker(hazards.ShockColdToHot, s.cold)
+
+	s.sealPart = widget.NewSelectEntry(nil)
+	s.sealPart.PlaceHolder = "none: no seal stress given"
+	s.sealPart.OnChanged = func(text string) {
+		if f.s.loading {
+			return
+		}
+		f.s.doc.Work.SealStress.Part = text
+		f.showProblems(f.s.problem)
+		f.s.edited()
+	}
+	stress := f.field("seal_stress.residual_stress_pa", "Residual stress at the seal", qStress,
+		func(d *hazards.Design) float64 { return d.SealStress.ResidualStressPa },
+		func(d *hazards.Design, x float64) { d.SealStress.ResidualStressPa = x })
+	retard := f.field("seal_stress.retardation_m", "or: retardation measured", qRetardation,
+		func(d *hazards.Design) float64 { return d.SealStress.RetardationM },
+		func(d *hazards.Design, x float64) { d.SealStress.RetardationM = x })
+	path := f.field("seal_stress.path_length_m", "through a glass path of", qLength,
+		func(d *hazards.Design) float64 { return d.SealStress.PathLengthM },
+		func(d *hazards.Design, x float64) { d.SealStress.PathLengthM = x })
+	return section("Sudden temperature changes and seal",
+		labelled("Hot to cold", s.hotPick), s.hot.object, indented(s.hotSource),
+		labelled("Cold to hot", s.coldPick), s.cold.object, indented(s.coldSource),
+		indented(hint("The largest sudden change of surface temperature the device may meet; 0 when not assessed. The suddenly cooled surface goes into tension of E·α·ΔT/(1 − ν), about 0.8 MPa per kelvin for annealed soda-lime glass and 0.26 MPa per kelvin for borosilicate 3.3.")),
+		labelled("Part carrying the seal", s.sealPart),
+		stress.object, retard.object, path.object,
+		indented(hint("Measured with a polariscope or strain viewer (ASTM C148). Give the stress, or the retardation with the thickness of glass the light crosses: the stress is retardation / (stress-optic coefficient × path). Leave all at 0 when not measured.")),
+	)
+}
+
+// picker builds a preset selector for one direction of sudden change.
+func (s *shockSection) picker(dir string, field *numField) (*widget.Select, *widget.Label) {
+	opts := []string{noShock}
+	for _, p := range s.presets {
+		if p.Direction == dir {
+			opts = append(opts, p.Name)
+		}
+	}
+	opts = append(opts, customValue)
+	source := hint("")
+	var sel *widget.Select
+	sel = widget.NewSelect(opts, func(opt string) {
+		if s.f.s.loading {
+			return
+		}
+		d := &s.f.s.doc.Work
+		switch p, ok := s.byName(opt); {
+		case ok:
+			field.set(d, p.DeltaK())
+			s.setPreset(d, dir, p.ID)
+		case opt == noShock:
+			field.set(d, 0)
+			s.setPreset(d, dir, "")
+		default:
+			s.setPreset(d, dir, "")
+		}
+		s.f.s.loading = true
+		field.show(d, s.f.s.units())
+		s.f.s.loading = false
+		s.describe(sel, source)
+		s.f.showProblems(s.f.s.problem)
+		s.f.s.edited()
+	})
+	return sel, source
+}
+
+func (s *shockSection) setPreset(d *hazards.Design, dir, id string) {
+	if dir == hazards.ShockColdToHot {
+		d.ThermalShock.ColdToHotPresetID = id
+	} else {
+		d.ThermalShock.HotToColdPresetID = id
+	}
+}
+
+func (s *shockSection) byName(name string) (hazards.ShockPreset, bool) {
+	for _, p := range s.presets {
+		if p.Name == name {
+			return p, true
+		}
+	}
+	return hazards.ShockPreset{}, false
+}
+
+// describe shows the sources and note of the selected preset.
+func (s *shockSection) describe(sel *widget.Select, source *widget.Label) {
+	p, ok := s.byName(sel.Selected)
+	switch {
+	case ok:
+		source.SetText("From: " + p.From.Source + ". To: " + p.To.Source + ". " + p.Note)
+	case sel.Selected == noShock:
+		source.SetText("Not assessed: the record says so.")
+	default:
+		source.SetText("Your own value: state its grounds in the change note.")
+	}
+}
+
+// syncPresets selects the preset matching each typed change (clearing a
+// preset the value no longer matches), "not assessed" for 0, or "your own
+// value"; and offers the parts' names for the seal.
+func (s *shockSection) syncPresets() {
+	d := &s.f.s.doc.Work
+	was := s.f.s.loading
+	s.f.s.loading = true
+	defer func() { s.f.s.loading = was }()
+	for _, x := range []struct {
+		sel    *widget.Select
+		source *widget.Label
+		dir    string
+		k      float64
+		id     *string
+	}{
+		{s.hotPick, s.hotSource, hazards.ShockHotToCold, d.ThermalShock.HotToColdK, &d.ThermalShock.HotToColdPresetID},
+		{s.coldPick, s.coldSource, hazards.ShockColdToHot, d.ThermalShock.ColdToHotK, &d.ThermalShock.ColdToHotPresetID},
+	} {
+		choice := customValue
+		if x.k == 0 {
+			choice = noShock
+		}
+		found := ""
+		for _, p := range s.presets {
+			if p.Direction == x.dir && math.Abs(p.DeltaK()-x.k) < 0.005 && (found == "" || p.ID == *x.id) {
+				choice, found = p.Name, p.ID
+			}
+		}
+		*x.id = found
+		if x.sel.Selected != choice {
+			x.sel.SetSelected(choice)
+		}
+		s.describe(x.sel, x.source)
+	}
+	s.refreshParts()
+}
+
+// refreshParts offers the names of the vessel's parts for the seal and
+// shows the part the design names.
+func (s *shockSection) refreshParts() {
+	d := &s.f.s.doc.Work
+	names := make([]string, 0, len(d.Vessel.Parts))
+	for _, p := range d.Vessel.Parts {
+		names = append(names, p.Name)
+	}
+	s.sealPart.SetOptions(names)
+	if s.sealPart.Text != d.SealStress.Part {
+		s.sealPart.SetText(d.SealStress.Part)
+	}
+}
+
+// shockPresetName names a sudden-change preset for the comparison, or
+// says the value is the reviewer's own or not given.
+func shockPresetName(id string) string {
+	if id == "" {
+		return "your own value, or none"
+	}
+	if p, err := hazards.LookupShockPreset(id); err == nil {
+		return p.Name
+	}
+	return id
+}
+
+// firstNonEmpty returns s, or alt when s is blank.
+func firstNonEmpty(s, alt string) string {
+	if s == "" {
+		return alt
+	}
+	return s
+}
