@@ -91,7 +91,7 @@ func runHelp(_ []string, stdout, _ io.Writer) int {
 }
 
 func runVersion(_ []string, stdout, _ io.Writer) int {
-	fmt.Fprintf(stdout, "%s %s (fluid data %s)\n", buildinfo.Name, buildinfo.Version, fluids.DataVersion)
+	fmt.Fprintf(stdout, "%s %s (fluid data %s)\n", buildinfo.Name, buildinfo.Describe(), fluids.DataVersion)
 	return ExitPass
 }
 
