@@ -52,7 +52,7 @@ func Run(args []string, stdout, stderr io.Writer) int {
 	}
 	c, ok := commands()[args[0]]
 	if !ok {
-		fmt.Fprintf(stderr, "ullage: unknown command %q (try: ullage help)\n", args[0])
+		fmt.Fprintln(stderr, "ullage: "+unknownCommand(args[0]))
 		return ExitUsage
 	}
 	return c.run(args[1:], stdout, stderr)
