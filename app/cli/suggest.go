@@ -14,14 +14,15 @@ const maxTypoDistance = 2
 
 // unknownCommand says that word is not a command, naming the nearest
 // command when one is close: "unknown command 'chekc'; did you mean
-// 'check'?". A word that looks like a file name also says that no such
-// file exists, since a file name would have opened the window.
+// 'check'?". A word that looks like a file name says that it is neither
+// a command nor an existing file, since a file would have opened the
+// window.
 func unknownCommand(word string) string {
 	if near := nearestCommand(word); near != "" {
 		return fmt.Sprintf("unknown command '%s'; did you mean '%s'?", word, near)
 	}
 	if strings.ContainsAny(word, `/\.`) {
-		return fmt.Sprintf("unknown command '%s', and no file of that name exists (try: ullage help)", word)
+		return fmt.Sprintf("'%s' is neither a command nor an existing file (try: ullage help)", word)
 	}
 	return fmt.Sprintf("unknown command '%s' (try: ullage help)", word)
 }

@@ -17,8 +17,8 @@ func TestUnknownCommand(t *testing.T) {
 		{"prop", "ullage: unknown command 'prop'; did you mean 'props'?\n"},
 		{"verison", "ullage: unknown command 'verison'; did you mean 'version'?\n"},
 		{"frobnicate", "ullage: unknown command 'frobnicate' (try: ullage help)\n"},
-		{"lamp.json", "ullage: unknown command 'lamp.json', and no file of that name exists (try: ullage help)\n"},
-		{"designs/lamp", "ullage: unknown command 'designs/lamp', and no file of that name exists (try: ullage help)\n"},
+		{"lamp.json", "ullage: 'lamp.json' is neither a command nor an existing file (try: ullage help)\n"},
+		{"designs/lamp", "ullage: 'designs/lamp' is neither a command nor an existing file (try: ullage help)\n"},
 	}
 	for _, tt := range tests {
 		var out, errb bytes.Buffer

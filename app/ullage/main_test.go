@@ -70,7 +70,7 @@ func TestMistypedCommand(t *testing.T) {
 	}{
 		{[]string{"chekc"}, "ullage: unknown command 'chekc'; did you mean 'check'?\n"},
 		{[]string{"chekc", example}, "ullage: unknown command 'chekc'; did you mean 'check'?\n"},
-		{[]string{"no-such-design.json"}, "ullage: unknown command 'no-such-design.json', and no file of that name exists (try: ullage help)\n"},
+		{[]string{"no-such-design.json"}, "ullage: 'no-such-design.json' is neither a command nor an existing file (try: ullage help)\n"},
 	}
 	for _, tt := range tests {
 		code, out, errb := runMain(tt.args...)
