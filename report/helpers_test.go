@@ -3,6 +3,8 @@ package report
 import (
 	"bytes"
 	"encoding/json"
+	"errors"
+	"io/fs"
 	"os"
 	"path/filepath"
 	"testing"
@@ -11,10 +13,14 @@ import (
 	"ullage/hazards"
 )
 
-// loadDesign reads a design fixture from testdata.
+// loadDesign reads a design fixture from testdata, or from the shared
+// top-level testdata (typical_design.json; see its README).
 func loadDesign(t testing.TB, name string) hazards.Design {
 	t.Helper()
 	b, err := os.ReadFile(filepath.Join("testdata", name))
+	if errors.Is(err, fs.ErrNotExist) { // a design shared with other packages
+		b, err = os.ReadFile(filepath.Join("..", "testdata", name))
+	}
 	if err != nil {
 		t.Fatal(err)
 	}

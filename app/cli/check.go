@@ -217,7 +217,7 @@ func recordMeta(f *designfile.File, r *designfile.Revision, o *options) report.M
 		ChangeNote:       r.ChangeNote,
 		Reviewer:         o.value("reviewer", ""),
 		Date:             time.Now(),
-		ToolVersion:      buildinfo.Version,
+		ToolVersion:      buildinfo.Describe(),
 		FluidDataVersion: fluids.DataVersion,
 		Fingerprint:      r.Fingerprint(),
 	}

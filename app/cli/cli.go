@@ -52,7 +52,7 @@ func Run(args []string, stdout, stderr io.Writer) int {
 	}
 	c, ok := commands()[args[0]]
 	if !ok {
-		fmt.Fprintf(stderr, "ullage: unknown command %q (try: ullage help)\n", args[0])
+		fmt.Fprintln(stderr, "ullage: "+unknownCommand(args[0]))
 		return ExitUsage
 	}
 	return c.run(args[1:], stdout, stderr)
@@ -91,7 +91,7 @@ func runHelp(_ []string, stdout, _ io.Writer) int {
 }
 
 func runVersion(_ []string, stdout, _ io.Writer) int {
-	fmt.Fprintf(stdout, "%s %s (fluid data %s)\n", buildinfo.Name, buildinfo.Version, fluids.DataVersion)
+	fmt.Fprintf(stdout, "%s %s (fluid data %s)\n", buildinfo.Name, buildinfo.Describe(), fluids.DataVersion)
 	return ExitPass
 }
 

@@ -26,7 +26,7 @@ var dataSources = []string{
 // newAboutPanel builds the About content: version, data version,
 // sources and every standard caution.
 func newAboutPanel() fyne.CanvasObject {
-	title := widget.NewLabelWithStyle(fmt.Sprintf("%s %s", buildinfo.Name, buildinfo.Version), fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	title := widget.NewLabelWithStyle(fmt.Sprintf("%s %s", buildinfo.Name, buildinfo.Describe()), fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
 	title.SizeName = theme.SizeNameHeadingText
 	intro := widget.NewLabel("Reviews sealed glass devices filled with a volatile liquid: burst, implosion, liquid-full and the release of vapour into a room, revision after revision.")
 	intro.Wrapping = fyne.TextWrapWord

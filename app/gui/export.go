@@ -31,7 +31,7 @@ func (s *session) recordMeta() report.Meta {
 	m := report.Meta{
 		Product: p.Name, PartNumber: p.PartNumber, Company: p.Company,
 		Reviewer: s.settings.Reviewer, Date: s.opts.now(),
-		ToolVersion: buildinfo.Version, FluidDataVersion: fluids.DataVersion,
+		ToolVersion: buildinfo.Describe(), FluidDataVersion: fluids.DataVersion,
 	}
 	work := designfile.Revision{Design: doc.Work}
 	m.Fingerprint = work.Fingerprint()

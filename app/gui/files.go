@@ -109,10 +109,15 @@ func (s *session) showFileProblem(title string, err error) {
 	d.Show()
 }
 
-// rememberFile puts path at the top of the recent files.
+// rememberFile puts path at the top of the recent files, as an absolute
+// path so that it opens from any working folder. Entries an older version
+// kept without their folder are dropped.
 func (s *session) rememberFile(path string) {
+	if abs, err := filepath.Abs(path); err == nil {
+		path = abs
+	}
 	p := s.app.Preferences()
-	recent := slices.DeleteFunc(p.StringList(prefRecent), func(x string) bool { return x == path })
+	recent := slices.DeleteFunc(slices.Clone(p.StringList(prefRecent)), func(x string) bool { return x == path || !filepath.IsAbs(x) })
 	recent = append([]string{path}, recent...)
 	if len(recent) > maxRecent {
 		recent = recent[:maxRecent]
@@ -122,11 +127,11 @@ func (s *session) rememberFile(path string) {
 	s.shell.rebuildMenu()
 }
 
-// recentFiles returns the recent files that still exist.
+// recentFiles returns the recent files that still exist, newest first.
 func (s *session) recentFiles() []string {
 	var out []string
 	for _, p := range s.app.Preferences().StringList(prefRecent) {
-		if _, err := os.Stat(p); err == nil {
+		if _, err := os.Stat(p); err == nil && filepath.IsAbs(p) {
 			out = append(out, p)
 		}
 	}

@@ -2,6 +2,7 @@ package gui
 
 import (
 	"fmt"
+	"log"
 	"os"
 	"sync/atomic"
 	"time"
@@ -33,6 +34,7 @@ func Run(args []string) int {
 		return 2
 	}
 	a := app.NewWithID(appID)
+	log.SetOutput(&reloadNoiseFilter{w: log.Writer()})
 	a.SetIcon(fyne.NewStaticResource("icon.png", assets.Icon()))
 	w := a.NewWindow("Ullage")
 	s, err := newSession(a, w, options{delay: typingDelay})
@@ -64,6 +66,7 @@ func Run(args []string) int {
 		if openErr != nil {
 			s.showFileProblem("The design file cannot be opened", openErr)
 		} else if ra.show == "" {
+			s.offerRecent()
 			s.offerRecovery()
 		}
 		s.startAutosave(autosavePeriod)
@@ -111,8 +114,10 @@ func parseRunArgs(args []string) (runArgs, error) {
 }
 
 // firstDocument picks what to open: the named file, else (not in smoke
-// mode) the most recent file that loads, else the bundled example. When
-// the named file fails, the example opens and the error comes back.
+// mode) the most recent file, else the bundled example. When the named
+// file fails, the example opens and the error comes back. When the most
+// recent file is gone or does not load, the example opens and s.lost says
+// why, for offerRecent to tell the reviewer.
 func (s *session) firstDocument(ra runArgs) (*document, error) {
 	if ra.file != "" {
 		doc, err := loadDocument(ra.file)
@@ -127,10 +132,12 @@ func (s *session) firstDocument(ra runArgs) (*document, error) {
 		return ex, err
 	}
 	if ra.smoke == "" {
-		for _, p := range s.recentFiles() {
-			if doc, err := loadDocument(p); err == nil {
+		if recent := s.app.Preferences().StringList(prefRecent); len(recent) > 0 {
+			doc, err := loadRecent(recent[0])
+			if err == nil {
 				return doc, nil
 			}
+			s.lost = &lostRecent{path: recent[0], err: err}
 		}
 	}
 	return exampleDocument()

@@ -68,6 +68,8 @@ type session struct {
 	shell   *shell
 
 	stopAutosave chan struct{}
+	// lost is the most recent file when it could not be opened at start.
+	lost *lostRecent
 }
 
 // newSession builds a session on a window, without content yet.

@@ -16,28 +16,12 @@ func testLibrary(t testing.TB) *fluids.Library {
 	return lib
 }
 
-// overfilledBulb is an invented evacuated 40 mm borosilicate bulb with
-// 20 g of acetone, meeting 76 °C: it goes liquid-full near 53 °C, so it
-// fails the ullage criterion (the same design as hazards' ExampleAssess).
-func overfilledBulb() hazards.Design {
-	return hazards.Design{
-		Fluid:      "acetone",
-		FillMassKg: 0.020,
-		Vessel: hazards.Vessel{Parts: []hazards.Part{
-			{Name: "bulb", Shape: hazards.ShapeSphere, OuterDiameterM: 0.040, WallThicknessM: 0.0015},
-		}},
-		SealingTemperatureK: 293.15,
-		HottestK:            349.15,
-		ColdestK:            253.15,
-		AmbientPressurePa:   101325,
-		Glass:               hazards.GlassChoice{ID: "borosilicate-3.3"},
-		ServiceLifeYears:    10,
-		HoursAtHottest:      1000,
-		Room: hazards.Room{VolumeM3: 30, AirChangesPerHour: 0.45, MixingFactor: 3,
-			NearFieldRadiusM: 1, NearFieldAirSpeed: 0.1, ExposureMinutes: 480},
-		Criteria: hazards.DefaultCriteria(),
-	}
-}
+// overfilledBulb is the shared test design
+// testdata/overfilled_acetone_bulb.json: an invented evacuated 40 mm
+// borosilicate bulb with 20 g of acetone, meeting 76 °C: it goes
+// liquid-full near 53 °C, so it fails the ullage criterion (the same
+// design as hazards' ExampleAssess).
+func overfilledBulb() hazards.Design { return sharedDesign("overfilled_acetone_bulb.json") }
 
 // side assesses a design for one side of a comparison.
 func side(t testing.TB, label string, d hazards.Design) Side {

@@ -15,32 +15,11 @@ var (
 	fixtureSingleSheet = filepath.Join("testdata", "twin_bulb_v1.json")
 )
 
-// typicalDesign has the numbers of hazards' own test fixture (an invented
-// desk ornament: two 40 mm bulbs and a 200 mm neck, 1 mm soda-lime walls,
-// 6 g of dichloromethane sealed evacuated at 20 °C), written out in
-// kelvin as they appear in the JSON fixtures. Revision A of both fixtures.
-func typicalDesign() hazards.Design {
-	return hazards.Design{
-		Fluid:               "dichloromethane",
-		FillMassKg:          0.006,
-		FillMassToleranceKg: 0.0002,
-		Vessel: hazards.Vessel{Parts: []hazards.Part{
-			{Name: "lower bulb", Shape: hazards.ShapeSphere, OuterDiameterM: 0.040, WallThicknessM: 0.001},
-			{Name: "upper bulb", Shape: hazards.ShapeSphere, OuterDiameterM: 0.040, WallThicknessM: 0.001},
-			{Name: "neck tube", Shape: hazards.ShapeTube, OuterDiameterM: 0.008, WallThicknessM: 0.001, LengthM: 0.2},
-		}},
-		SealingTemperatureK: 293.15,
-		HottestK:            349.15,
-		ColdestK:            244.15,
-		AmbientPressurePa:   101325,
-		Glass:               hazards.GlassChoice{ID: "soda-lime-annealed"},
-		ServiceLifeYears:    10,
-		HoursAtHottest:      1000,
-		Room: hazards.Room{VolumeM3: 30, AirChangesPerHour: 0.45, MixingFactor: 3, NearFieldRadiusM: 1,
-			NearFieldAirSpeed: 0.1, ExposureMinutes: 480},
-		Criteria: hazards.DefaultCriteria(),
-	}
-}
+// typicalDesign is the shared test design testdata/typical_design.json
+// (an invented desk ornament: two 40 mm bulbs and a 200 mm neck, 1 mm
+// soda-lime walls, 6 g of dichloromethane sealed evacuated at 20 °C).
+// Revision A of both fixtures.
+func typicalDesign() hazards.Design { return sharedDesign("typical_design.json") }
 
 // typicalFile is a valid two-revision file built in memory.
 func typicalFile() *File {

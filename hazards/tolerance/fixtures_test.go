@@ -2,7 +2,9 @@ package tolerance
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
+	"io/fs"
 	"math"
 	"os"
 	"path/filepath"
@@ -22,7 +24,8 @@ func testLibrary(t testing.TB) *fluids.Library {
 	return lib
 }
 
-// loadDesign reads a design fixture from testdata: ornament.json is an
+// loadDesign reads a design fixture from testdata, or from the shared
+// top-level testdata (see its README): ornament.json (shared) is an
 // invented desk ornament (two 40 mm bulbs joined by a 200 mm tube, 6 g of
 // dichloromethane) with made-up tolerances; weak_bulb.json a single bulb of
 // an invented weak glass, with no tolerances, so that a fair share of
@@ -30,6 +33,9 @@ func testLibrary(t testing.TB) *fluids.Library {
 func loadDesign(t testing.TB, name string) hazards.Design {
 	t.Helper()
 	b, err := os.ReadFile(filepath.Join("testdata", name))
+	if errors.Is(err, fs.ErrNotExist) { // a design shared with other packages
+		b, err = os.ReadFile(filepath.Join("..", "..", "testdata", name))
+	}
 	if err != nil {
 		t.Fatal(err)
 	}
