@@ -50,6 +50,10 @@ type Fluid struct {
 	NoNumericLimit           []NonNumericLimit         `json:"no_numeric_limit"`
 	PotentialCarcinogen      CarcinogenFlag            `json:"potential_carcinogen"`
 	Warnings                 []string                  `json:"warnings"`
+	// Uncertainty is optional: the stated uncertainty of the record's
+	// correlations, one entry per property. A fluid with a reference
+	// equation of state takes the equation's statements instead.
+	Uncertainty []Uncertainty `json:"uncertainty,omitempty"`
 
 	// UserSupplied is true for a fluid loaded from a person's own file
 	// rather than the built-in library. It is not part of the JSON record.
