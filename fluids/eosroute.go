@@ -238,8 +238,9 @@ func (s *Substance) EquationOfState() *EquationOfState {
 // explainEOS fills an explanation for a property taken from the
 // reference equation of state.
 func (s *Substance) explainEOS(e *Explanation, t float64, what string) {
-	f := s.ref.file
-	e.Correlation = "reference equation of state, " + f.Name
+	r := s.ref
+	f := r.file
+	e.Correlation = r.explainName
 	switch what {
 	case "saturation":
 		e.Equation = "P = ρRT(1 + δ·∂αr/∂δ) in both phases, with equal pressure and equal Gibbs energy g/RT = 1 + α° + αr + δ·∂αr/∂δ;  δ = ρ/ρr, τ = Tr/T"
@@ -247,16 +248,31 @@ func (s *Substance) explainEOS(e *Explanation, t float64, what string) {
 		e.Equation = "P = ρRT(1 + δ·∂αr/∂δ),  δ = ρ/ρr, τ = Tr/T"
 	}
 	e.Terms = []Term{{Symbol: "T", Value: t, Unit: "K"},
-		{Symbol: "Tr", Value: f.Reducing.TemperatureK, Unit: "K", Source: f.Paper.Citation()},
-		{Symbol: "ρr", Value: f.Reducing.DensityMolM3 * f.MolarMass, Unit: "kg/m³", Source: f.Paper.Citation()},
-		{Symbol: "R", Value: f.GasConstant, Unit: "J/(mol·K)", Source: f.Paper.Citation()},
-		{Symbol: "M", Value: f.MolarMass, Unit: "kg/mol", Source: f.Paper.Citation()},
+		{Symbol: "Tr", Value: f.Reducing.TemperatureK, Unit: "K", Source: r.citation},
+		{Symbol: "ρr", Value: f.Reducing.DensityMolM3 * f.MolarMass, Unit: "kg/m³", Source: r.citation},
+		{Symbol: "R", Value: f.GasConstant, Unit: "J/(mol·K)", Source: r.citation},
+		{Symbol: "M", Value: f.MolarMass, Unit: "kg/mol", Source: r.citation},
 	}
-	e.Source = f.Paper.Citation() + ". " + f.Transcription
-	e.Note = fmt.Sprintf("The equation's stated range is %.2f–%.2f K and up to %.4g MPa; %d terms in the residual Helmholtz energy.",
+	e.Source = r.source
+	e.Note = r.notes[uncertaintyFor(e.Quantity)]
+}
+
+// explainTexts prepares the fixed texts of explanations once.
+func (r *referenceEOS) explainTexts() {
+	f := r.file
+	r.citation = f.Paper.Citation()
+	r.source = r.citation + ". " + f.Transcription
+	r.explainName = "reference equation of state, " + f.Name
+	base := fmt.Sprintf("The equation's stated range is %.2f–%.2f K and up to %.4g MPa; %d terms in the residual Helmholtz energy.",
 		f.Range.TMinK, f.Range.TMaxK, f.Range.PMaxPa/1e6, len(f.Residual))
-	if u, ok := s.Uncertainty(uncertaintyFor(e.Quantity)); ok {
-		e.Note += " Stated uncertainty: " + u.Statement + " (" + u.Source + ")."
+	r.notes = map[string]string{"": base}
+	for _, u := range f.Uncertainty {
+		r.notes[u.Property] = base + " Stated uncertainty: " + u.Statement + " (" + u.Source + ")."
+	}
+	for _, p := range []string{PropertyVapourPressure, PropertyLiquidDensity, PropertyVapourDensity} {
+		if _, ok := r.notes[p]; !ok {
+			r.notes[p] = base
+		}
 	}
 }
 

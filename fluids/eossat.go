@@ -19,6 +19,10 @@ type referenceEOS struct {
 	tc, pc, rhoCMol float64 // critical point of the equation (K, Pa, mol/m³)
 	tLow            float64 // lowest temperature the saturation table covers, K
 
+	// Fixed texts of explanations, built once.
+	citation, source, explainName string
+	notes                         map[string]string
+
 	tableOnce sync.Once
 	table     *satTable
 	tableErr  error
@@ -33,6 +37,7 @@ func newReferenceEOS(e *EquationOfState, tLow float64) (*referenceEOS, error) {
 		return nil, fmt.Errorf("%s: %d distinct exponential factors, at most %d are supported", e.Fluid, len(h.groups), maxExpGroups)
 	}
 	r := &referenceEOS{file: e, h: h, m: e.MolarMass, tc: e.Critical.TemperatureK, pc: e.Critical.PressurePa, rhoCMol: e.Critical.DensityMolM3, tLow: tLow}
+	r.explainTexts()
 	if len(h.nonAn) == 0 {
 		// The saturation curve must end where this equation's own
 		// critical point is, which can differ by a few hundredths of a

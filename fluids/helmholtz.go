@@ -142,6 +142,14 @@ func (h *helmholtz) eval(delta, tau float64) residualDerivs {
 		g := &h.gauss[i]
 		dd := delta - g.eps
 		tg := tau - g.gamma
+		var ex float64
+		if !g.rational {
+			ex = -g.eta*dd*dd - g.beta*tg*tg
+			if ex < -600 {
+				// Below 1e-260: the bell is far away; nothing to add.
+				continue
+			}
+		}
 		var tt float64
 		if g.tInt {
 			tt = tp[g.ti]
@@ -150,7 +158,7 @@ func (h *helmholtz) eval(delta, tau float64) residualDerivs {
 		}
 		var f, A, dA, B, ttPart float64
 		if !g.rational {
-			f = g.n * dp[g.d] * tt * math.Exp(-g.eta*dd*dd-g.beta*tg*tg)
+			f = g.n * dp[g.d] * tt * math.Exp(ex)
 			A = float64(g.d) - 2*g.eta*delta*dd
 			dA = A*A - float64(g.d) - 2*g.eta*delta*delta
 			B = g.t - 2*g.beta*tau*tg
@@ -195,6 +203,12 @@ func (q *nonAnalyticTerm) add(r *residualDerivs, delta, tau float64) {
 	}
 	tm := tau - 1
 	d2 := dm * dm
+	// ψ carries the whole term: with C(δ−1)² + D(τ−1)² above 600 it is
+	// below 1e-260 and the term, with all its derivatives, vanishes at
+	// double precision (Δ^b and its derivatives stay below 1e10 there).
+	if q.capC*d2+q.capD*tm*tm > 600 {
+		return
+	}
 	ib := 1 / (2 * q.beta)
 	theta := -tm + q.capA*math.Pow(d2, ib)
 	Delta := theta*theta + q.capB*math.Pow(d2, q.a)
