@@ -287,3 +287,25 @@ func uncertaintyFor(quantity string) string {
 	}
 	return ""
 }
+
+// IsochoricSlope returns (∂P/∂T)_ρ in Pa/K of the single-phase fluid at
+// temperature t (K) and density rho (kg/m³): the rate at which a
+// liquid-full vessel's pressure climbs. On the equation-of-state route it
+// is explicit, ρR(1 + δ αr_δ − δτ αr_δτ); on the correlation route it is a
+// central difference of SinglePhasePressure over ±0.01 K. It fails where
+// SinglePhasePressure fails.
+func (s *Substance) IsochoricSlope(t, rho float64) (float64, error) {
+	if _, _, err := s.SinglePhasePressure(t, rho); err != nil {
+		return 0, err
+	}
+	if s.ref != nil {
+		return s.ref.h.state(t, rho/s.molarMass).dpdt, nil
+	}
+	const h = 0.01
+	a, _, err1 := s.SinglePhasePressure(t, rho)
+	b, _, err2 := s.SinglePhasePressure(t+h, rho)
+	if err1 != nil || err2 != nil {
+		return 0, fmt.Errorf("%s: isochoric slope at %.2f K, %.4g kg/m³: %w", s.fluid.Name, t, rho, ErrOutOfDomain)
+	}
+	return (b - a) / h, nil
+}
