@@ -27,6 +27,7 @@ import (
 	"encoding/json"
 	"flag"
 	"fmt"
+	"math"
 	"os"
 	"path/filepath"
 	"sort"
@@ -50,7 +51,8 @@ type paperEntry struct {
 
 // The transcription's layout, as far as this converter reads it.
 type srcFile struct {
-	EOS         []srcEOS                   `json:"EOS"`
+	EOS         []srcEOS `json:"EOS"`
+	rawEOS      json.RawMessage
 	Ancillaries map[string]json.RawMessage `json:"ANCILLARIES"`
 	States      struct {
 		Critical srcState `json:"critical"`
@@ -90,14 +92,15 @@ func main() {
 	bib := flag.String("bib", "", "the transcription's bibliography file")
 	out := flag.String("out", "fluids/eos", "output directory")
 	papers := flag.String("papers", "fluids/eos/convert/papers.json", "our list of papers")
+	fixtures := flag.String("fixtures", "fluids/testdata/eos_saturation.json", "where to write the saturation check values")
 	flag.Parse()
-	if err := run(*src, *bib, *out, *papers); err != nil {
+	if err := run(*src, *bib, *out, *papers, *fixtures); err != nil {
 		fmt.Fprintln(os.Stderr, "convert:", err)
 		os.Exit(1)
 	}
 }
 
-func run(src, bib, out, papersPath string) error {
+func run(src, bib, out, papersPath, fixturesPath string) error {
 	if src == "" || bib == "" {
 		return fmt.Errorf("-src and -bib are required")
 	}
@@ -115,11 +118,18 @@ func run(src, bib, out, papersPath string) error {
 	if err != nil {
 		return err
 	}
+	var fx fixtureFile
+	fx.About = fixtureAbout
 	for _, p := range entries {
 		e, err := convert(p, src, string(bibText))
 		if err != nil {
 			return fmt.Errorf("%s: %w", p.Fluid, err)
 		}
+		rows, err := saturationChecks(p, src, e)
+		if err != nil {
+			return fmt.Errorf("%s: %w", p.Fluid, err)
+		}
+		fx.Fluids = append(fx.Fluids, fixtureFluid{Fluid: p.Fluid, Rows: rows})
 		b, err := json.MarshalIndent(e, "", "  ")
 		if err != nil {
 			return err
@@ -129,7 +139,11 @@ func run(src, bib, out, papersPath string) error {
 			return err
 		}
 	}
-	return nil
+	b, err := json.MarshalIndent(fx, "", "  ")
+	if err != nil {
+		return err
+	}
+	return os.WriteFile(fixturesPath, append(b, '\n'), 0o644)
 }
 
 // readSource reads the transcription file named in the entry, or, when
@@ -173,6 +187,13 @@ func readSource(dir, src string) (srcFile, string, error) {
 	if err := json.Unmarshal(b, &f); err != nil {
 		return f, "", fmt.Errorf("%s: %w", label, err)
 	}
+	var rest struct {
+		EOS json.RawMessage `json:"EOS"`
+	}
+	if err := json.Unmarshal(b, &rest); err != nil {
+		return f, "", err
+	}
+	f.rawEOS = rest.EOS
 	return f, label, nil
 }
 
@@ -355,4 +376,124 @@ func checkBib(bib, key string, p fluids.Paper) error {
 		return fmt.Errorf("bibliography entry %q does not name %q", key, surname)
 	}
 	return nil
+}
+
+// The saturation check values: for every fluid, the vapour pressure and
+// the saturated-liquid density of its reference equation at temperatures
+// from max(triple point, 0 °C) to 0.95 Tc, read from outside our code:
+// the transcription publishes, for each equation, "superancillary"
+// Chebyshev expansions of the equation's own saturation curve, fitted in
+// extended precision to within about 1e-12, and a few check points solved
+// in multiple precision. The converter copies the check points and
+// evaluates the expansions (a plain Chebyshev sum, not our solver).
+const fixtureAbout = "Saturation pressure and saturated-liquid density of each reference equation of state. Rows marked 'check point' are the transcription's multiple-precision solutions of the equation (CoolProp dev/fluids/<Name>.json, EOS[...].SUPERANCILLARY.check_points); the other rows are its superancillary Chebyshev expansions of the same equation (SUPERANCILLARY.jexpansions_p, jexpansions_rhoL; I. H. Bell and U. K. Deiters, superancillary equations for multiparameter equations of state (from memory)) evaluated at the row's temperature by fluids/eos/convert. Densities converted with the equation's own molar mass."
+
+type fixtureFile struct {
+	About  string         `json:"about"`
+	Fluids []fixtureFluid `json:"fluids"`
+}
+
+type fixtureFluid struct {
+	Fluid string       `json:"fluid"`
+	Rows  []fixtureRow `json:"rows"`
+}
+
+type fixtureRow struct {
+	TK     float64 `json:"t_k"`
+	PPa    float64 `json:"p_pa"`
+	RhoL   float64 `json:"rho_liquid_kg_m3"`
+	Source string  `json:"source"`
+}
+
+type chebPiece struct {
+	Coef []float64 `json:"coef"`
+	XMin float64   `json:"xmin"`
+	XMax float64   `json:"xmax"`
+}
+
+type superancillary struct {
+	P      []chebPiece          `json:"jexpansions_p"`
+	RhoL   []chebPiece          `json:"jexpansions_rhoL"`
+	Meta   map[string]any       `json:"meta"`
+	Checks []map[string]float64 `json:"check_points"`
+}
+
+func chebAt(ps []chebPiece, x float64) (float64, bool) {
+	for _, p := range ps {
+		if x < p.XMin || x > p.XMax {
+			continue
+		}
+		u := (2*x - p.XMax - p.XMin) / (p.XMax - p.XMin)
+		// Direct sum with T_k(u) by recurrence.
+		t0, t1 := 1.0, u
+		sum := p.Coef[0]
+		for k := 1; k < len(p.Coef); k++ {
+			sum += p.Coef[k] * t1
+			t0, t1 = t1, 2*u*t1-t0
+		}
+		return sum, true
+	}
+	return 0, false
+}
+
+func saturationChecks(p paperEntry, dir string, e *fluids.EquationOfState) ([]fixtureRow, error) {
+	raw, err := os.ReadFile(filepath.Join(dir, strings.TrimPrefix(p.Source, "CAS:")))
+	if strings.HasPrefix(p.Source, "CAS:") {
+		f, _, err2 := readSource(dir, p.Source)
+		if err2 != nil {
+			return nil, err2
+		}
+		raw, err = json.Marshal(map[string]any{"EOS": f.rawEOS})
+	}
+	if err != nil {
+		return nil, err
+	}
+	var f struct {
+		EOS []struct {
+			SA superancillary `json:"SUPERANCILLARY"`
+		} `json:"EOS"`
+	}
+	if err := json.Unmarshal(raw, &f); err != nil {
+		return nil, err
+	}
+	sa := f.EOS[p.Index].SA
+	tcTrue, _ := sa.Meta["Tcrittrue / K"].(float64)
+	if tcTrue == 0 || len(sa.P) == 0 {
+		return nil, fmt.Errorf("no superancillary expansions")
+	}
+	lo := math.Max(e.TriplePointK, 273.15)
+	hi := 0.95 * tcTrue
+	m := e.MolarMass
+	var rows []fixtureRow
+	const n = 12
+	for i := 0; i <= n; i++ {
+		t := lo + (hi-lo)*float64(i)/n
+		t = math.Round(t*100) / 100
+		pp, ok1 := chebAt(sa.P, t)
+		rl, ok2 := chebAt(sa.RhoL, t)
+		if !ok1 || !ok2 {
+			return nil, fmt.Errorf("superancillary does not cover %.2f K", t)
+		}
+		rows = append(rows, fixtureRow{TK: t, PPa: sig(pp, 10), RhoL: sig(rl*m, 10), Source: "superancillary expansion of this equation, evaluated at this temperature"})
+	}
+	for _, c := range sa.Checks {
+		t := c["T / K"]
+		if t < lo || t > hi {
+			continue
+		}
+		rows = append(rows, fixtureRow{TK: t, PPa: sig(c["p(mp) / Pa"], 12), RhoL: sig(c["rho'(mp) / mol/m^3"]*m, 12), Source: "check point: multiple-precision solution of this equation"})
+	}
+	sort.Slice(rows, func(i, j int) bool { return rows[i].TK < rows[j].TK })
+	return rows, nil
+}
+
+// sig rounds x to n significant digits, so that the fixture holds no
+// digits beyond the expansions' accuracy.
+func sig(x float64, n int) float64 {
+	if x == 0 {
+		return 0
+	}
+	e := math.Floor(math.Log10(math.Abs(x)))
+	f := math.Pow(10, float64(n-1)-e)
+	return math.Round(x*f) / f
 }
