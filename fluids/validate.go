@@ -129,6 +129,14 @@ func (f *Fluid) validate(ref *referenceEOS) error {
 	v.liquidDensityCorrelation(f)
 	v.flammability(f.Flammability)
 	v.limits(f)
+	for i, u := range f.Uncertainty {
+		field := fmt.Sprintf("uncertainty[%d]", i)
+		if !knownProperty[u.Property] {
+			v.fail(field+".property", fmt.Sprintf("%q", u.Property), "must name a property: vapour_pressure, liquid_density, vapour_density, compressed_liquid_density, heat_of_vaporisation or liquid_heat_capacity")
+		}
+		v.number(field+".percent", u.Percent, 0, 100, "%")
+		v.source(field+".source", u.Source)
+	}
 	if v.err != nil {
 		return v.err
 	}
@@ -248,6 +256,9 @@ func (v *validator) flammability(fl Flammability) {
 		v.fail("flammability.ufl_volume_percent.value", fl.UFLPercent.Value, "must exceed the LFL %g %%", fl.LFLPercent.Value)
 	}
 }
+
+var knownProperty = map[string]bool{PropertyVapourPressure: true, PropertyLiquidDensity: true, PropertyVapourDensity: true,
+	PropertyCompressedLiquid: true, PropertyHeatOfVaporisation: true, PropertyLiquidHeatCapacity: true}
 
 var knownAveraging = map[string]bool{AveragingTWA: true, AveragingSTEL: true, AveragingCeiling: true, AveragingIDLH: true}
 
