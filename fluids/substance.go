@@ -173,12 +173,18 @@ func (s *Substance) SaturatedLiquidDensity(t float64) (float64, error) {
 // Saturation returns the saturated liquid and vapour state at t (K). It
 // fails for t not finite, below the freezing point or above Tc.
 func (s *Substance) Saturation(t float64) (Saturation, error) {
+	if s.ref != nil {
+		if err := s.checkTemperature(t); err != nil {
+			return Saturation{}, err
+		}
+		if t > s.tc {
+			return Saturation{}, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
+		}
+		return s.refSaturation(t), nil
+	}
 	p, fl, err := s.SaturationPressure(t)
 	if err != nil {
 		return Saturation{}, err
-	}
-	if s.ref != nil {
-		return s.refSaturation(t), nil
 	}
 	rhoL, below := s.liquid.density(t)
 	if below {
