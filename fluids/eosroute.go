@@ -114,10 +114,11 @@ func (s *Substance) refPressure(t, rho float64) float64 {
 
 func (s *Substance) refSinglePhasePressure(t, rho float64) (float64, Flags, error) {
 	if t < s.tc {
-		sat := s.refSaturation(t)
-		if rho > sat.VapourDensity*(1+boundaryTolerance) && rho < sat.LiquidDensity*(1-boundaryTolerance) {
+		rl, rv := s.ref.table.densities(t)
+		rl, rv = rl*s.molarMass, rv*s.molarMass
+		if rho > rv*(1+boundaryTolerance) && rho < rl*(1-boundaryTolerance) {
 			return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ lies between the saturated vapour (%.4g kg/m³) and liquid (%.4g kg/m³): %w",
-				s.fluid.Name, t, rho, sat.VapourDensity, sat.LiquidDensity, ErrTwoPhase)
+				s.fluid.Name, t, rho, rv, rl, ErrTwoPhase)
 		}
 	}
 	p := s.refPressure(t, rho)
@@ -134,8 +135,10 @@ func (s *Substance) refDensity(t, p, guess, lo, hi float64) (float64, error) {
 	h := s.ref.h
 	m := s.molarMass
 	rho := guess
+	var c tauCache
+	h.prepareTau(h.tr/t, &c)
 	for i := 0; i < 100; i++ {
-		st := h.state(t, rho/m)
+		st := h.stateCached(t, rho/m, &c)
 		f := st.p - p
 		if math.Abs(f) <= 1e-12*p {
 			return rho, nil

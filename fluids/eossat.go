@@ -33,6 +33,9 @@ func newReferenceEOS(e *EquationOfState, tLow float64) (*referenceEOS, error) {
 		return nil, err
 	}
 	h := e.compile()
+	if len(h.exps) > maxCachedExps || len(h.gauss) > maxCachedGauss {
+		return nil, fmt.Errorf("%s: %d power and %d Gaussian terms, at most %d and %d are supported", e.Fluid, len(h.exps), len(h.gauss), maxCachedExps, maxCachedGauss)
+	}
 	if len(h.groups) > maxExpGroups {
 		return nil, fmt.Errorf("%s: %d distinct exponential factors, at most %d are supported", e.Fluid, len(h.groups), maxExpGroups)
 	}
@@ -119,10 +122,12 @@ func (r *referenceEOS) satFrom(t, rhoL0, rhoV0 float64) (p, rhoL, rhoV, dh float
 	}
 	dC := r.rhoCMol / h.rhor
 	tau := h.tr / t
+	var tc tauCache
+	h.prepareTau(tau, &tc)
 	var eL, eV residualDerivs
 	for i := 0; i < 100; i++ {
-		eL = h.eval(dL, tau)
-		eV = h.eval(dV, tau)
+		eL = h.evalCached(dL, &tc)
+		eV = h.evalCached(dV, &tc)
 		jL, jV := dL*(1+dL*eL.D), dV*(1+dV*eV.D)
 		kL, kV := dL*eL.D+eL.A+math.Log(dL), dV*eV.D+eV.A+math.Log(dV)
 		jdL, jdV := 1+2*dL*eL.D+dL*dL*eL.DD, 1+2*dV*eV.D+dV*dV*eV.DD
@@ -155,8 +160,8 @@ func (r *referenceEOS) satFrom(t, rhoL0, rhoV0 float64) (p, rhoL, rhoV, dh float
 	if math.Abs(dL-dV) < 1e-6*dL {
 		return 0, 0, 0, 0, errNoSaturation // collapsed onto one phase
 	}
-	eL = h.eval(dL, tau)
-	eV = h.eval(dV, tau)
+	eL = h.evalCached(dL, &tc)
+	eV = h.evalCached(dV, &tc)
 	rt := h.r * t
 	rhoL, rhoV = dL*h.rhor, dV*h.rhor
 	p = rhoV * rt * (1 + dV*eV.D)
@@ -308,6 +313,22 @@ func (tb *satTable) at(t float64) (lnP, rhoL, rhoV, dh float64) {
 	rhoV = math.Exp(clenshaw(&s.c[2], u))
 	dh = clenshaw(&s.c[3], u)
 	return
+}
+
+// densities returns only ρL and ρV (mol/m³) at t: the phase test of a
+// single-phase state needs no pressure or heat of vaporisation.
+func (tb *satTable) densities(t float64) (rhoL, rhoV float64) {
+	th := 1 - t/tb.tc
+	x := math.Cbrt(th)
+	if th <= 0 || x < tb.xTop {
+		_, rhoL, rhoV, _ = tb.at(t)
+		return
+	}
+	i := int((x - tb.xTop) / tb.width)
+	i = min(max(i, 0), len(tb.segs)-1)
+	s := &tb.segs[i]
+	u := (2*x - s.lo - s.hi) / (s.hi - s.lo)
+	return clenshaw(&s.c[1], u), math.Exp(clenshaw(&s.c[2], u))
 }
 
 func clenshaw(c *[chebDegree + 1]float64, u float64) float64 {

@@ -83,24 +83,32 @@ const (
 	maxExpGroups  = 32
 )
 
-// eval returns αr and its derivatives at (δ, τ).
-func (h *helmholtz) eval(delta, tau float64) residualDerivs {
-	var dp [maxPowerTable + 1]float64 // δ^k
+// Limits of the per-temperature cache: the longest equation here (water)
+// has 51 power terms and 3 Gaussian ones.
+const (
+	maxCachedExps  = 64
+	maxCachedGauss = 16
+)
+
+// tauCache holds every factor of the terms that depends on τ alone, so
+// that a density iteration at fixed temperature pays for the
+// temperature exponentials once.
+type tauCache struct {
+	tau         float64
+	ef, eB, eBB [maxCachedExps]float64  // n τ^t exp(−g τ^m); B; B² − B + extra
+	gf, gB, gBB [maxCachedGauss]float64 // n τ^t times the τ exponential; B; τ² part
+	gx          [maxCachedGauss]float64 // the τ part of the Gaussian exponent
+}
+
+// prepareTau fills c for inverse reduced temperature tau.
+func (h *helmholtz) prepareTau(tau float64, c *tauCache) {
+	c.tau = tau
 	var tp [maxPowerTable + 1]float64 // τ^k
-	dp[0], tp[0] = 1, 1
-	for k := 1; k <= h.maxD; k++ {
-		dp[k] = dp[k-1] * delta
-	}
+	tp[0] = 1
 	for k := 1; k <= h.maxTInt; k++ {
 		tp[k] = tp[k-1] * tau
 	}
 	lnTau := math.Log(tau)
-	var ge [maxExpGroups]float64 // shared exp(−c δ^l)
-	for i, g := range h.groups {
-		ge[i] = math.Exp(-g.c * dp[g.l])
-	}
-	// Scaled sums: δ^i τ^j ∂^(i+j)αr.
-	var a, sd, sdd, st, stt, sdt float64
 	for i := range h.exps {
 		e := &h.exps[i]
 		var tt float64
@@ -113,15 +121,7 @@ func (h *helmholtz) eval(delta, tau float64) residualDerivs {
 		} else {
 			tt = math.Exp(e.t * lnTau)
 		}
-		f := e.n * dp[e.d] * tt
-		A := float64(e.d)
-		var extraD float64
-		if e.group >= 0 {
-			f *= ge[e.group]
-			dl := dp[e.l]
-			A -= e.cl * dl
-			extraD = -e.cl2 * dl
-		}
+		f := e.n * tt
 		B := e.t
 		var extraT float64
 		if e.g != 0 {
@@ -131,53 +131,104 @@ func (h *helmholtz) eval(delta, tau float64) residualDerivs {
 			B -= gm * tm
 			extraT = -gm * float64(e.m) * tm
 		}
-		a += f
-		sd += f * A
-		sdd += f * (A*A - A + extraD)
-		st += f * B
-		stt += f * (B*B - B + extraT)
-		sdt += f * A * B
+		c.ef[i], c.eB[i], c.eBB[i] = f, B, B*B-B+extraT
 	}
 	for i := range h.gauss {
 		g := &h.gauss[i]
-		dd := delta - g.eps
 		tg := tau - g.gamma
-		var ex float64
-		if !g.rational {
-			ex = -g.eta*dd*dd - g.beta*tg*tg
-			if ex < -600 {
-				// Below 1e-260: the bell is far away; nothing to add.
-				continue
-			}
-		}
 		var tt float64
 		if g.tInt {
 			tt = tp[g.ti]
 		} else {
 			tt = math.Exp(g.t * lnTau)
 		}
-		var f, A, dA, B, ttPart float64
 		if !g.rational {
-			f = g.n * dp[g.d] * tt * math.Exp(ex)
+			x := -g.beta * tg * tg
+			c.gx[i] = x
+			if x < -600 {
+				continue
+			}
+			B := g.t - 2*g.beta*tau*tg
+			c.gf[i] = g.n * tt * math.Exp(x)
+			c.gB[i] = B
+			c.gBB[i] = B*B - g.t - 2*g.beta*tau*tau
+			continue
+		}
+		den := g.beta*tg*tg + g.b
+		g1 := -2 * g.beta * tg / (den * den)                            // dg/dτ
+		g2 := -2*g.beta/(den*den) + 8*g.beta*g.beta*tg*tg/(den*den*den) // d²g/dτ²
+		B := g.t + tau*g1
+		c.gf[i] = g.n * tt * math.Exp(1/den)
+		c.gB[i] = B
+		c.gBB[i] = B*B - g.t + tau*tau*g2
+	}
+}
+
+// eval returns αr and its derivatives at (δ, τ).
+func (h *helmholtz) eval(delta, tau float64) residualDerivs {
+	var c tauCache
+	h.prepareTau(tau, &c)
+	return h.evalCached(delta, &c)
+}
+
+// evalCached returns αr and its derivatives at δ and the temperature c
+// was prepared for.
+func (h *helmholtz) evalCached(delta float64, c *tauCache) residualDerivs {
+	tau := c.tau
+	var dp [maxPowerTable + 1]float64 // δ^k
+	dp[0] = 1
+	for k := 1; k <= h.maxD; k++ {
+		dp[k] = dp[k-1] * delta
+	}
+	var ge [maxExpGroups]float64 // shared exp(−c δ^l)
+	for i, g := range h.groups {
+		ge[i] = math.Exp(-g.c * dp[g.l])
+	}
+	// Scaled sums: δ^i τ^j ∂^(i+j)αr.
+	var a, sd, sdd, st, stt, sdt float64
+	for i := range h.exps {
+		e := &h.exps[i]
+		f := c.ef[i] * dp[e.d]
+		A := float64(e.d)
+		var extraD float64
+		if e.group >= 0 {
+			f *= ge[e.group]
+			dl := dp[e.l]
+			A -= e.cl * dl
+			extraD = -e.cl2 * dl
+		}
+		B := c.eB[i]
+		a += f
+		sd += f * A
+		sdd += f * (A*A - A + extraD)
+		st += f * B
+		stt += f * c.eBB[i]
+		sdt += f * A * B
+	}
+	for i := range h.gauss {
+		g := &h.gauss[i]
+		dd := delta - g.eps
+		var f, A, dA float64
+		if !g.rational {
+			x := -g.eta*dd*dd + c.gx[i]
+			if x < -600 {
+				// Below 1e-260: the bell is far away; nothing to add.
+				continue
+			}
+			f = c.gf[i] * dp[g.d] * math.Exp(-g.eta*dd*dd)
 			A = float64(g.d) - 2*g.eta*delta*dd
 			dA = A*A - float64(g.d) - 2*g.eta*delta*delta
-			B = g.t - 2*g.beta*tau*tg
-			ttPart = B*B - g.t - 2*g.beta*tau*tau
 		} else {
-			den := g.beta*tg*tg + g.b
-			f = g.n * dp[g.d] * tt * math.Exp(g.eta*dd*dd+1/den)
+			f = c.gf[i] * dp[g.d] * math.Exp(g.eta*dd*dd)
 			A = float64(g.d) + 2*g.eta*delta*dd
 			dA = A*A - float64(g.d) + 2*g.eta*delta*delta
-			g1 := -2 * g.beta * tg / (den * den)                            // dg/dτ
-			g2 := -2*g.beta/(den*den) + 8*g.beta*g.beta*tg*tg/(den*den*den) // d²g/dτ²
-			B = g.t + tau*g1
-			ttPart = B*B - g.t + tau*tau*g2
 		}
+		B := c.gB[i]
 		a += f
 		sd += f * A
 		sdd += f * dA
 		st += f * B
-		stt += f * ttPart
+		stt += f * c.gBB[i]
 		sdt += f * A * B
 	}
 	r := residualDerivs{A: a, D: sd / delta, DD: sdd / (delta * delta), T: st / tau, TT: stt / (tau * tau), DT: sdt / (delta * tau)}
@@ -263,8 +314,15 @@ type stateAt struct {
 }
 
 func (h *helmholtz) state(t, rho float64) stateAt {
-	delta, tau := rho/h.rhor, h.tr/t
-	d := h.eval(delta, tau)
+	var c tauCache
+	h.prepareTau(h.tr/t, &c)
+	return h.stateCached(t, rho, &c)
+}
+
+// stateCached is state at the temperature c was prepared for.
+func (h *helmholtz) stateCached(t, rho float64, c *tauCache) stateAt {
+	delta, tau := rho/h.rhor, c.tau
+	d := h.evalCached(delta, c)
 	rt := h.r * t
 	return stateAt{
 		p:      rho * rt * (1 + delta*d.D),
