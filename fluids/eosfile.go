@@ -29,15 +29,21 @@ type EquationOfState struct {
 	// property is.
 	Uncertainty []Uncertainty `json:"uncertainty"`
 
-	MolarMass     float64         `json:"molar_mass_kg_mol"`
-	GasConstant   float64         `json:"gas_constant_j_mol_k"`
-	Reducing      Point           `json:"reducing"`
-	Critical      Point           `json:"critical"`
-	TriplePointK  float64         `json:"triple_point_k"`
-	Residual      []HelmholtzTerm `json:"residual"`
-	Ancillaries   Ancill          `json:"ancillaries"`
-	AncillaryNote string          `json:"ancillary_source"`
-	Notes         []string        `json:"notes,omitempty"`
+	MolarMass    float64         `json:"molar_mass_kg_mol"`
+	GasConstant  float64         `json:"gas_constant_j_mol_k"`
+	Reducing     Point           `json:"reducing"`
+	Critical     Point           `json:"critical"`
+	TriplePointK float64         `json:"triple_point_k"`
+	Residual     []HelmholtzTerm `json:"residual"`
+	// IdealHeatCapacity gives the ideal-gas heat capacity as
+	// cv0/R = Σ terms, cp0/R = 1 + cv0/R; it is only needed for the
+	// liquid heat capacity, the ideal-gas part cancelling in every other
+	// property used here. Optional.
+	IdealHeatCapacity []IdealTerm `json:"ideal_heat_capacity,omitempty"`
+	IdealSource       string      `json:"ideal_source,omitempty"`
+	Ancillaries       Ancill      `json:"ancillaries"`
+	AncillaryNote     string      `json:"ancillary_source"`
+	Notes             []string    `json:"notes,omitempty"`
 }
 
 // Paper is a publication: authors, title, journal (or publisher for a
@@ -144,6 +150,55 @@ type HelmholtzTerm struct {
 	CapD float64 `json:"cap_d,omitempty"`
 }
 
+// Ideal-gas heat capacity term kinds (contributions to cv0/R; T in K,
+// τ = Tr/T with the reducing temperature).
+const (
+	IdealConstant = "constant"  // C
+	IdealPowerT   = "power-t"   // C·T^t
+	IdealPowerTau = "power-tau" // −N·t(t−1)·τ^t (from a term N·τ^t of the ideal Helmholtz energy)
+	IdealEinstein = "einstein"  // N·(θ/T)²·e^(θ/T)/(e^(θ/T) − 1)²
+	IdealSinh     = "sinh"      // N·[(θ/T)/sinh(θ/T)]²
+	IdealCosh     = "cosh"      // N·[(θ/T)/cosh(θ/T)]²
+)
+
+// IdealTerm is one term of the ideal-gas heat capacity; see the Ideal*
+// constants.
+type IdealTerm struct {
+	Kind   string  `json:"kind"`
+	C      float64 `json:"c,omitempty"`
+	N      float64 `json:"n,omitempty"`
+	T      float64 `json:"t,omitempty"`
+	ThetaK float64 `json:"theta_k,omitempty"`
+}
+
+// cv0OverR returns cv0/R at temperature t (K) for reducing temperature tr.
+func idealCv0OverR(terms []IdealTerm, t, tr float64) float64 {
+	var s float64
+	for _, q := range terms {
+		switch q.Kind {
+		case IdealConstant:
+			s += q.C
+		case IdealPowerT:
+			s += q.C * math.Pow(t, q.T)
+		case IdealPowerTau:
+			s -= q.N * q.T * (q.T - 1) * math.Pow(tr/t, q.T)
+		case IdealEinstein:
+			x := q.ThetaK / t
+			e := math.Exp(-x)
+			s += q.N * x * x * e / ((1 - e) * (1 - e))
+		case IdealSinh:
+			x := q.ThetaK / t
+			y := x / math.Sinh(x)
+			s += q.N * y * y
+		case IdealCosh:
+			x := q.ThetaK / t
+			y := x / math.Cosh(x)
+			s += q.N * y * y
+		}
+	}
+	return s
+}
+
 // Ancill holds the ancillary equations that start the saturation solve.
 type Ancill struct {
 	VapourPressure Ancillary `json:"vapour_pressure"`
@@ -238,6 +293,25 @@ func (e *EquationOfState) validate() error {
 		}
 	}
 	v.source("ancillary_source", e.AncillaryNote)
+	for i, q := range e.IdealHeatCapacity {
+		f := fmt.Sprintf("ideal_heat_capacity[%d]", i)
+		switch q.Kind {
+		case IdealConstant, IdealPowerT, IdealPowerTau, IdealEinstein, IdealSinh, IdealCosh:
+		default:
+			v.fail(f+".kind", fmt.Sprintf("%q", q.Kind), "must be one of constant, power-t, power-tau, einstein, sinh, cosh")
+		}
+		for _, x := range []float64{q.C, q.N, q.T, q.ThetaK} {
+			if !finite(x) {
+				v.fail(f, x, "every coefficient must be a finite number")
+			}
+		}
+		if (q.Kind == IdealEinstein || q.Kind == IdealSinh || q.Kind == IdealCosh) && !(q.ThetaK > 0) {
+			v.fail(f+".theta_k", q.ThetaK, "must be a positive temperature in K")
+		}
+	}
+	if len(e.IdealHeatCapacity) > 0 {
+		v.source("ideal_source", e.IdealSource)
+	}
 	for _, u := range e.Uncertainty {
 		v.number("uncertainty."+u.Property+".percent", u.Percent, 0, 100, "%")
 		v.source("uncertainty."+u.Property+".source", u.Source)

@@ -101,9 +101,19 @@ func (s *Substance) refSaturation(t float64) Saturation {
 		LiquidDensity:      rl * m,
 		VapourDensity:      rv * m,
 		HeatOfVaporisation: dh / m,
-		LiquidHeatCapacity: s.fluid.LiquidHeatCapacity.Value / m,
+		LiquidHeatCapacity: s.liquidHeatCapacity(tb, t),
 		Flags:              s.refFlags(t, p) &^ SupercriticalState,
 	}
+}
+
+// liquidHeatCapacity is the saturated liquid's heat capacity in J/(kg·K):
+// from the equation where its file gives the ideal-gas part, else the
+// record's value.
+func (s *Substance) liquidHeatCapacity(tb *satTable, t float64) float64 {
+	if s.ref.hasIdeal {
+		return tb.liquidCp(t) / s.molarMass
+	}
+	return s.fluid.LiquidHeatCapacity.Value / s.molarMass
 }
 
 // refPressure is the explicit pressure of the equation at (t, rho in

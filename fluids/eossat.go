@@ -18,6 +18,7 @@ type referenceEOS struct {
 
 	tc, pc, rhoCMol float64 // critical point of the equation (K, Pa, mol/m³)
 	tLow            float64 // lowest temperature the saturation table covers, K
+	hasIdeal        bool    // the file gives the ideal-gas heat capacity
 
 	// Fixed texts of explanations, built once.
 	citation, source, explainName string
@@ -41,6 +42,7 @@ func newReferenceEOS(e *EquationOfState, tLow float64) (*referenceEOS, error) {
 	}
 	r := &referenceEOS{file: e, h: h, m: e.MolarMass, tc: e.Critical.TemperatureK, pc: e.Critical.PressurePa, rhoCMol: e.Critical.DensityMolM3, tLow: tLow}
 	r.explainTexts()
+	r.hasIdeal = len(e.IdealHeatCapacity) > 0
 	if len(h.nonAn) == 0 {
 		// The saturation curve must end where this equation's own
 		// critical point is, which can differ by a few hundredths of a
@@ -54,6 +56,21 @@ func newReferenceEOS(e *EquationOfState, tLow float64) (*referenceEOS, error) {
 		r.pc = h.pressure(tc, rc)
 	}
 	return r, nil
+}
+
+// liquidCp is the isobaric heat capacity (J/(mol·K)) at (t, rho mol/m³):
+//
+//	cp/R = cv0/R − τ² αr_ττ + (1 + δ αr_δ − δτ αr_δτ)² / (1 + 2δ αr_δ + δ² αr_δδ)
+//
+// with cv0/R from the ideal-gas part.
+func (r *referenceEOS) liquidCp(t, rho float64) float64 {
+	h := r.h
+	delta, tau := rho/h.rhor, h.tr/t
+	d := h.eval(delta, tau)
+	num := 1 + delta*d.D - delta*tau*d.DT
+	den := 1 + 2*delta*d.D + delta*delta*d.DD
+	cv := idealCv0OverR(r.file.IdealHeatCapacity, t, h.tr) - tau*tau*d.TT
+	return h.r * (cv + num*num/den)
 }
 
 // dpdrho is (∂P/∂ρ)_T at (t, rho mol/m³).
@@ -187,13 +204,13 @@ type satTable struct {
 	top            satPoint // values at xTop
 }
 
-type satPoint struct{ lnP, rhoL, lnRhoV, dh float64 }
+type satPoint struct{ lnP, rhoL, lnRhoV, dh, lnCp float64 }
 
 const chebDegree = 14
 
 type satSegment struct {
-	lo, hi float64 // x range
-	c      [4][chebDegree + 1]float64
+	lo, hi float64                    // x range
+	c      [5][chebDegree + 1]float64 // ln P, ρL, ln ρV, Δh, ln cp of the liquid
 }
 
 // xTopTheta is the reduced distance below Tc, 1 − T/Tc, at which the table
@@ -239,7 +256,7 @@ func (r *referenceEOS) buildTable(nSeg int, thetaTop float64) (*satTable, error)
 		}
 	}
 	nodes = append(nodes, node{x: tb.xTop, seg: -1})
-	var f = make([][4][chebDegree + 1]float64, nSeg)
+	var f = make([][5][chebDegree + 1]float64, nSeg)
 	var px [2]float64
 	var pl, pv [2]float64
 	solved := 0
@@ -260,16 +277,19 @@ func (r *referenceEOS) buildTable(nSeg int, thetaTop float64) (*satTable, error)
 		px[0], pl[0], pv[0] = px[1], pl[1], pv[1]
 		px[1], pl[1], pv[1] = nd.x, rl, rv
 		solved++
-		pt := satPoint{math.Log(p), rl, math.Log(rv), dh}
+		pt := satPoint{math.Log(p), rl, math.Log(rv), dh, 0}
+		if r.hasIdeal {
+			pt.lnCp = math.Log(r.liquidCp(t, rl))
+		}
 		if nd.seg < 0 {
 			tb.top = pt
 			continue
 		}
-		f[nd.seg][0][nd.k], f[nd.seg][1][nd.k], f[nd.seg][2][nd.k], f[nd.seg][3][nd.k] = pt.lnP, pt.rhoL, pt.lnRhoV, pt.dh
+		f[nd.seg][0][nd.k], f[nd.seg][1][nd.k], f[nd.seg][2][nd.k], f[nd.seg][3][nd.k], f[nd.seg][4][nd.k] = pt.lnP, pt.rhoL, pt.lnRhoV, pt.dh, pt.lnCp
 	}
 	for s := range tb.segs {
 		seg := &tb.segs[s]
-		for q := 0; q < 4; q++ {
+		for q := 0; q < 5; q++ {
 			for j := 0; j < n; j++ {
 				var sum float64
 				for k := 0; k < n; k++ {
@@ -313,6 +333,22 @@ func (tb *satTable) at(t float64) (lnP, rhoL, rhoV, dh float64) {
 	rhoV = math.Exp(clenshaw(&s.c[2], u))
 	dh = clenshaw(&s.c[3], u)
 	return
+}
+
+// liquidCp returns the saturated liquid's isobaric heat capacity
+// (J/(mol·K)) at t from the table; near the critical point, where it
+// diverges, the table's last value. Zero without an ideal-gas part.
+func (tb *satTable) liquidCp(t float64) float64 {
+	th := 1 - t/tb.tc
+	x := math.Cbrt(math.Max(th, 0))
+	if x < tb.xTop {
+		return math.Exp(tb.top.lnCp)
+	}
+	i := int((x - tb.xTop) / tb.width)
+	i = min(max(i, 0), len(tb.segs)-1)
+	s := &tb.segs[i]
+	u := (2*x - s.lo - s.hi) / (s.hi - s.lo)
+	return math.Exp(clenshaw(&s.c[4], u))
 }
 
 // densities returns only ρL and ρV (mol/m³) at t: the phase test of a

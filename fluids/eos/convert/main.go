@@ -73,6 +73,7 @@ type srcEOS struct {
 	GasConstant float64          `json:"gas_constant"`
 	MolarMass   float64          `json:"molar_mass"`
 	Alphar      []map[string]any `json:"alphar"`
+	Alpha0      []map[string]any `json:"alpha0"`
 	States      struct {
 		Reducing srcState `json:"reducing"`
 	} `json:"STATES"`
@@ -250,6 +251,12 @@ func convert(p paperEntry, dir, bib string) (*fluids.EquationOfState, error) {
 		}
 		e.Residual = append(e.Residual, terms...)
 	}
+	ideal, err := convertIdeal(s.Alpha0, s.States.Reducing.T, s.GasConstant)
+	if err != nil {
+		return nil, err
+	}
+	e.IdealHeatCapacity = ideal
+	e.IdealSource = fmt.Sprintf("Ideal-gas part read from the same transcription (%s, alpha0) and written as cv0/R; its constant terms of the ideal Helmholtz energy carry no heat capacity and are left out.", label)
 	for name, dst := range map[string]*fluids.Ancillary{"pS": &e.Ancillaries.VapourPressure, "rhoL": &e.Ancillaries.LiquidDensity, "rhoV": &e.Ancillaries.VapourDensity} {
 		raw, ok := f.Ancillaries[name]
 		if !ok {
@@ -496,4 +503,81 @@ func sig(x float64, n int) float64 {
 	e := math.Floor(math.Log10(math.Abs(x)))
 	f := math.Pow(10, float64(n-1)-e)
 	return math.Round(x*f) / f
+}
+
+func floats(m map[string]any, k string) []float64 {
+	var out []float64
+	switch v := m[k].(type) {
+	case []any:
+		for _, x := range v {
+			f, _ := x.(float64)
+			out = append(out, f)
+		}
+	case float64:
+		out = append(out, v)
+	}
+	return out
+}
+
+// convertIdeal turns the transcription's ideal-gas Helmholtz terms into
+// contributions to cv0/R. Helmholtz-form terms (a·ln τ, n·ln(1 − e^(−tτ)),
+// n·τ^t) give cv0/R = −τ²·∂²α°/∂τ²; heat-capacity forms give cp0/R and
+// come with a ln τ term of −1 that turns them into cv0/R.
+func convertIdeal(terms []map[string]any, tr, r float64) ([]fluids.IdealTerm, error) {
+	var out []fluids.IdealTerm
+	for _, t := range terms {
+		typ, _ := t["type"].(string)
+		scale := 1.0
+		if rr, ok := t["R"].(float64); ok && rr > 0 {
+			scale = rr / r
+		}
+		switch typ {
+		case "IdealGasHelmholtzLead", "IdealGasHelmholtzEnthalpyEntropyOffset":
+		case "IdealGasHelmholtzLogTau":
+			out = append(out, fluids.IdealTerm{Kind: fluids.IdealConstant, C: t["a"].(float64)})
+		case "IdealGasHelmholtzPlanckEinstein":
+			n, ts := floats(t, "n"), floats(t, "t")
+			for i := range n {
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealEinstein, N: n[i], ThetaK: ts[i] * tr})
+			}
+		case "IdealGasHelmholtzPower":
+			n, ts := floats(t, "n"), floats(t, "t")
+			for i := range n {
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealPowerTau, N: n[i], T: ts[i]})
+			}
+		case "IdealGasHelmholtzCP0Constant":
+			out = append(out, fluids.IdealTerm{Kind: fluids.IdealConstant, C: t["cp_over_R"].(float64) * scale})
+		case "IdealGasHelmholtzCP0PolyT":
+			c, ts := floats(t, "c"), floats(t, "t")
+			for i := range c {
+				if ts[i] == 0 {
+					out = append(out, fluids.IdealTerm{Kind: fluids.IdealConstant, C: c[i] * scale})
+					continue
+				}
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealPowerT, C: c[i] * scale, T: ts[i]})
+			}
+		case "IdealGasHelmholtzPlanckEinsteinFunctionT":
+			n, v := floats(t, "n"), floats(t, "v")
+			for i := range n {
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealEinstein, N: n[i] * scale, ThetaK: v[i]})
+			}
+		case "IdealGasHelmholtzCP0AlyLee":
+			c := floats(t, "c")
+			if len(c) != 5 {
+				return nil, fmt.Errorf("%s: want 5 coefficients", typ)
+			}
+			if c[0] != 0 {
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealConstant, C: c[0] * scale})
+			}
+			if c[1] != 0 {
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealSinh, N: c[1] * scale, ThetaK: c[2]})
+			}
+			if c[3] != 0 {
+				out = append(out, fluids.IdealTerm{Kind: fluids.IdealCosh, N: c[3] * scale, ThetaK: c[4]})
+			}
+		default:
+			return nil, fmt.Errorf("ideal-gas term %q is not supported", typ)
+		}
+	}
+	return out, nil
 }
