@@ -91,6 +91,12 @@ func describePiece(e *Explanation, p *VapourPressurePiece, s *Substance, tt Term
 		}
 		return
 	}
+	if p.Form == FormDIPPR101 {
+		e.Correlation = "DIPPR equation 101, " + rng
+		e.Equation = "ln(P/Pa) = A + B/T + C·ln(T/K) + D·T^E"
+		e.Terms = []Term{tt, {Symbol: "A", Value: p.A}, {Symbol: "B", Value: p.B, Unit: "K"}, {Symbol: "C", Value: p.C}, {Symbol: "D", Value: p.D}, {Symbol: "E", Value: p.E}}
+		return
+	}
 	e.Correlation = "Antoine equation, " + rng
 	e.Equation = "log10(P/bar) = A − B/(T/K + C)"
 	e.Terms = []Term{tt, {Symbol: "A", Value: p.A}, {Symbol: "B", Value: p.B, Unit: "K"}, {Symbol: "C", Value: p.C, Unit: "K"}}

@@ -164,9 +164,15 @@ func (v *validator) vapourPressure(f *Fluid) {
 	tc, tf := f.CriticalTemperature.Value, f.FreezingPoint.Value
 	for i, p := range f.VapourPressure {
 		field := fmt.Sprintf("vapour_pressure[%d]", i)
-		if p.Form != FormAntoine && p.Form != FormWagner {
-			v.fail(field+".form", fmt.Sprintf("%q", p.Form), "must be %q or %q", FormAntoine, FormWagner)
+		if p.Form != FormAntoine && p.Form != FormWagner && p.Form != FormDIPPR101 {
+			v.fail(field+".form", fmt.Sprintf("%q", p.Form), "must be %q, %q or %q", FormAntoine, FormWagner, FormDIPPR101)
 			return
+		}
+		if p.Form != FormDIPPR101 && p.E != 0 {
+			v.fail(field+".e", p.E, "is only used by the %q form", FormDIPPR101)
+		}
+		if p.Form == FormDIPPR101 && !(p.E >= -6 && p.E <= 6) {
+			v.fail(field+".e", p.E, "must be an exponent from -6 to 6")
 		}
 		for name, x := range map[string]float64{"a": p.A, "b": p.B, "c": p.C, "d": p.D} {
 			if !finite(x) || math.Abs(x) > 1e7 {

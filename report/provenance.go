@@ -151,6 +151,9 @@ func vapourPressureTable(f *fluids.Fluid, u unitSystem) table {
 		if p.D != 0 {
 			coef += ", D = " + sig(p.D, 6)
 		}
+		if p.E != 0 {
+			coef += ", E = " + sig(p.E, 6)
+		}
 		rows = append(rows, []cell{{text: p.Form}, {text: coef, mono: true}, {text: u.temperature(p.TMinK) + " to " + u.temperature(p.TMaxK)}, sourceCell(p.Source)})
 	}
 	return table{cols: []col{{"Form", 1, 'L'}, {"Coefficients", 2.4, 'L'}, {"Valid range", 1.4, 'L'}, {"Source", 3.7, 'L'}}, rows: rows, size: 7.5}
