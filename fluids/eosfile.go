@@ -39,11 +39,11 @@ type EquationOfState struct {
 	// cv0/R = Σ terms, cp0/R = 1 + cv0/R; it is only needed for the
 	// liquid heat capacity, the ideal-gas part cancelling in every other
 	// property used here. Optional.
-	IdealHeatCapacity []IdealTerm `json:"ideal_heat_capacity,omitempty"`
-	IdealSource       string      `json:"ideal_source,omitempty"`
-	Ancillaries       Ancill      `json:"ancillaries"`
-	AncillaryNote     string      `json:"ancillary_source"`
-	Notes             []string    `json:"notes,omitempty"`
+	IdealHeatCapacity []IdealTerm  `json:"ideal_heat_capacity,omitempty"`
+	IdealSource       string       `json:"ideal_source,omitempty"`
+	Ancillaries       AncillarySet `json:"ancillaries"`
+	AncillaryNote     string       `json:"ancillary_source"`
+	Notes             []string     `json:"notes,omitempty"`
 }
 
 // Paper is a publication: authors, title, journal (or publisher for a
@@ -199,8 +199,9 @@ func idealCv0OverR(terms []IdealTerm, t, tr float64) float64 {
 	return s
 }
 
-// Ancill holds the ancillary equations that start the saturation solve.
-type Ancill struct {
+// AncillarySet holds the ancillary equations that start the saturation
+// solve: vapour pressure and saturated liquid and vapour densities.
+type AncillarySet struct {
 	VapourPressure Ancillary `json:"vapour_pressure"`
 	LiquidDensity  Ancillary `json:"liquid_density"`
 	VapourDensity  Ancillary `json:"vapour_density"`
