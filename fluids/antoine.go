@@ -11,6 +11,10 @@ const (
 	// O'Connell, The Properties of Gases and Liquids, 5th ed. (2001),
 	// eq. 7-3.3: ln(P/Pc) = (aτ + bτ^1.5 + cτ^2.5 + dτ^5)/Tr, τ = 1 − Tr.
 	FormWagner = "wagner-2.5-5"
+	// FormDIPPR101 is DIPPR equation 101 as tabulated in Perry's Chemical
+	// Engineers' Handbook (Table 2-8): ln(P/Pa) = A + B/T + C·ln(T/K) +
+	// D·T^E.
+	FormDIPPR101 = "dippr-101-pa-k"
 )
 
 const barPa = 1e5
@@ -37,5 +41,14 @@ func wagnerLnP(a, b, c, d, tc, pc, t float64) (lnP, dlnPdT float64) {
 	lnP = math.Log(pc) + f/tr
 	// d/dT (f/tr) = (df/dtau·(−1/tc)·tr − f/tc)/tr²
 	dlnPdT = (-df*tr - f) / (tc * tr * tr)
+	return lnP, dlnPdT
+}
+
+// dippr101LnP returns ln(P/Pa) and d ln P/dT from DIPPR equation 101,
+// ln(P/Pa) = A + B/T + C ln T + D T^E.
+func dippr101LnP(a, b, c, d, e, t float64) (lnP, dlnPdT float64) {
+	te := math.Pow(t, e)
+	lnP = a + b/t + c*math.Log(t) + d*te
+	dlnPdT = -b/(t*t) + c/t + d*e*te/t
 	return lnP, dlnPdT
 }

@@ -23,7 +23,11 @@ func TestSaturationIsPhysical(t *testing.T) {
 			if sat.PressurePa <= prevP {
 				t.Errorf("%s: pressure does not rise at %.3f K (%g ≤ %g)", id, temp, sat.PressurePa, prevP)
 			}
-			if sat.LiquidDensity > prevRhoL {
+			// Water is densest near 4 °C (CRC Handbook of Chemistry and
+			// Physics, "Properties of Water in the Range 0–100 °C":
+			// maximum density at 3.98 °C); every other liquid here is
+			// densest at its freezing point.
+			if sat.LiquidDensity > prevRhoL && temp > s.tPeak {
 				t.Errorf("%s: liquid density rises with temperature at %.3f K", id, temp)
 			}
 			if sat.VapourDensity < prevRhoV {
@@ -52,12 +56,21 @@ func TestNoJumpAtHandOvers(t *testing.T) {
 	for _, s := range builtinForTest(t).All() {
 		id := s.Fluid().ID
 		var joins []float64
-		for _, p := range s.Fluid().VapourPressure {
-			joins = append(joins, p.TMinK, p.TMaxK)
-		}
-		joins = append(joins, s.blendT, taitMaxTr*s.tc)
-		if s.liquid.corr != nil {
-			joins = append(joins, s.liquid.tJoin)
+		if s.ref != nil {
+			// The saturation table's segment ends and its hand-over to
+			// the critical point.
+			tb, _ := s.ref.sat()
+			for _, seg := range tb.segs {
+				joins = append(joins, s.tc*(1-seg.lo*seg.lo*seg.lo))
+			}
+		} else {
+			for _, p := range s.Fluid().VapourPressure {
+				joins = append(joins, p.TMinK, p.TMaxK)
+			}
+			joins = append(joins, s.blendT, taitMaxTr*s.tc)
+			if s.liquid.corr != nil {
+				joins = append(joins, s.liquid.tJoin)
+			}
 		}
 		for _, tj := range joins {
 			if tj-eps < s.tMin || tj+eps > s.tc {

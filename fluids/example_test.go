@@ -42,7 +42,7 @@ func ExampleSubstance_LiquidFullTemperature() {
 	acetone, _ := lib.Lookup("acetone")
 	t, ok := acetone.LiquidFullTemperature(700) // 0.7 g of fill per mL of vessel
 	fmt.Printf("liquid-full at %.1f °C (%v)\n", units.KelvinToCelsius(t), ok)
-	// Output: liquid-full at 95.1 °C (true)
+	// Output: liquid-full at 95.4 °C (true)
 }
 
 // The public acute benchmarks for ammonia over one hour, in the shape

@@ -36,6 +36,10 @@ func (s *Substance) ExplainVapourPressure(t float64) (Explanation, error) {
 		return Explanation{}, err
 	}
 	e := Explanation{Quantity: "vapour pressure", Result: p, Unit: "Pa", Extrapolated: fl.Extrapolated()}
+	if s.ref != nil {
+		s.explainEOS(&e, t, "saturation")
+		return e, nil
+	}
 	c := s.vp
 	tt := Term{Symbol: "T", Value: t, Unit: "K"}
 	piece := -1
@@ -87,6 +91,12 @@ func describePiece(e *Explanation, p *VapourPressurePiece, s *Substance, tt Term
 		}
 		return
 	}
+	if p.Form == FormDIPPR101 {
+		e.Correlation = "DIPPR equation 101, " + rng
+		e.Equation = "ln(P/Pa) = A + B/T + C·ln(T/K) + D·T^E"
+		e.Terms = []Term{tt, {Symbol: "A", Value: p.A}, {Symbol: "B", Value: p.B, Unit: "K"}, {Symbol: "C", Value: p.C}, {Symbol: "D", Value: p.D}, {Symbol: "E", Value: p.E}}
+		return
+	}
 	e.Correlation = "Antoine equation, " + rng
 	e.Equation = "log10(P/bar) = A − B/(T/K + C)"
 	e.Terms = []Term{tt, {Symbol: "A", Value: p.A}, {Symbol: "B", Value: p.B, Unit: "K"}, {Symbol: "C", Value: p.C, Unit: "K"}}
@@ -103,6 +113,11 @@ func (s *Substance) ExplainLiquidDensity(t float64) (Explanation, error) {
 	f := s.fluid
 	c := &s.liquid
 	e := Explanation{Quantity: "saturated liquid density", Result: rho, Unit: "kg/m³"}
+	if s.ref != nil {
+		e.Extrapolated = s.refFlags(t, 0).Extrapolated()
+		s.explainEOS(&e, t, "saturation")
+		return e, nil
+	}
 	tTerm := Term{Symbol: "T", Value: t, Unit: "K"}
 	if c.corr != nil && t <= c.tJoin {
 		k := c.corr
@@ -149,6 +164,10 @@ func (s *Substance) ExplainVapourDensity(t float64) (Explanation, error) {
 	}
 	f := s.fluid
 	e := Explanation{Quantity: "saturated vapour density", Result: sat.VapourDensity, Unit: "kg/m³", Extrapolated: sat.Flags.Extrapolated()}
+	if s.ref != nil {
+		s.explainEOS(&e, t, "saturation")
+		return e, nil
+	}
 	if sat.Flags&NearCriticalVapour != 0 {
 		e.Correlation = "law of rectilinear diameters (Cailletet–Mathias)"
 		e.Equation = "ρv = 2·[d₀ + (ρc − d₀)(T − T₀)/(Tc − T₀)] − ρl"

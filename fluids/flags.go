@@ -25,12 +25,15 @@ const (
 	// LiquidDensityExtrapolated: the saturated liquid density came from a
 	// published correlation below its lower temperature limit.
 	LiquidDensityExtrapolated
+	// EquationOfStateExtrapolated: the state lies outside the reference
+	// equation of state's stated range of temperature or pressure.
+	EquationOfStateExtrapolated
 )
 
 // Extrapolated reports whether any correlation was used outside its
 // stated range.
 func (f Flags) Extrapolated() bool {
-	return f&(VapourPressureExtrapolated|CompressedLiquidExtrapolated|LiquidDensityExtrapolated) != 0
+	return f&(VapourPressureExtrapolated|CompressedLiquidExtrapolated|LiquidDensityExtrapolated|EquationOfStateExtrapolated) != 0
 }
 
 // String lists the flags in words, or "none".
@@ -50,6 +53,9 @@ func (f Flags) String() string {
 	}
 	if f&LiquidDensityExtrapolated != 0 {
 		parts = append(parts, "liquid density below its correlation's range")
+	}
+	if f&EquationOfStateExtrapolated != 0 {
+		parts = append(parts, "outside the equation of state's stated range")
 	}
 	if f&SupercriticalState != 0 {
 		parts = append(parts, "supercritical")

@@ -50,6 +50,10 @@ type Fluid struct {
 	NoNumericLimit           []NonNumericLimit         `json:"no_numeric_limit"`
 	PotentialCarcinogen      CarcinogenFlag            `json:"potential_carcinogen"`
 	Warnings                 []string                  `json:"warnings"`
+	// Uncertainty is optional: the stated uncertainty of the record's
+	// correlations, one entry per property. A fluid with a reference
+	// equation of state takes the equation's statements instead.
+	Uncertainty []Uncertainty `json:"uncertainty,omitempty"`
 
 	// UserSupplied is true for a fluid loaded from a person's own file
 	// rather than the built-in library. It is not part of the JSON record.
@@ -57,13 +61,15 @@ type Fluid struct {
 }
 
 // VapourPressurePiece is one vapour-pressure correlation valid over
-// [TMinK, TMaxK]. Form is FormAntoine or FormWagner.
+// [TMinK, TMaxK]. Form is FormAntoine, FormWagner or FormDIPPR101 (which
+// alone uses E).
 type VapourPressurePiece struct {
 	Form   string  `json:"form"`
 	A      float64 `json:"a"`
 	B      float64 `json:"b"`
 	C      float64 `json:"c"`
 	D      float64 `json:"d,omitempty"`
+	E      float64 `json:"e,omitempty"`
 	TMinK  float64 `json:"t_min_k"`
 	TMaxK  float64 `json:"t_max_k"`
 	Source string  `json:"source"`

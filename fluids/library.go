@@ -7,6 +7,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"io/fs"
 	"path"
 	"sort"
 	"sync"
@@ -14,6 +15,12 @@ import (
 
 //go:embed data/*.json
 var builtinData embed.FS
+
+// builtinEOS holds the reference equations of state, one file per fluid
+// id, fluids/eos/<id>.json.
+//
+//go:embed eos/*.json
+var builtinEOS embed.FS
 
 // DataVersion identifies the revision of the built-in fluid data. It is
 // printed on every record so that a reader knows which data produced it.
@@ -45,7 +52,7 @@ func loadBuiltin() (*Library, error) {
 		if err != nil {
 			return nil, fmt.Errorf("built-in %s: %w", e.Name(), err)
 		}
-		s, err := NewSubstance(f)
+		s, err := newBuiltinSubstance(f)
 		if err != nil {
 			return nil, fmt.Errorf("built-in %s: %w", e.Name(), err)
 		}
@@ -53,6 +60,37 @@ func loadBuiltin() (*Library, error) {
 	}
 	lib.sort()
 	return lib, nil
+}
+
+// newBuiltinSubstance pairs a built-in record with its reference equation
+// of state, eos/<id>.json, when there is one; otherwise the record's
+// correlations are used.
+func newBuiltinSubstance(f *Fluid) (*Substance, error) {
+	b, err := builtinEOS.ReadFile(path.Join("eos", f.ID+".json"))
+	if errors.Is(err, fs.ErrNotExist) {
+		return NewSubstance(f)
+	}
+	if err != nil {
+		return nil, err
+	}
+	e, err := DecodeEquationOfState(b)
+	if err != nil {
+		return nil, fmt.Errorf("equation of state %s.json: %w", f.ID, err)
+	}
+	return newEOSSubstance(f, e)
+}
+
+// DecodeEquationOfState parses an equation-of-state file strictly
+// (unknown fields and trailing data refused) and validates it.
+func DecodeEquationOfState(b []byte) (*EquationOfState, error) {
+	var e EquationOfState
+	if err := strictDecode(b, &e); err != nil {
+		return nil, err
+	}
+	if err := e.validate(); err != nil {
+		return nil, err
+	}
+	return &e, nil
 }
 
 func (l *Library) sort() {

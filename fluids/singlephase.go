@@ -68,6 +68,9 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 	if math.IsNaN(rho) || math.IsInf(rho, 0) || rho <= 0 {
 		return 0, 0, fmt.Errorf("%s: density %v kg/m³ must be a positive number: %w", s.fluid.Name, rho, ErrOutOfDomain)
 	}
+	if s.ref != nil {
+		return s.refSinglePhasePressure(t, rho)
+	}
 	var fl Flags
 	if t > s.tc {
 		fl |= SupercriticalState
@@ -176,6 +179,9 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 	if p < ps*(1-1e-12) {
 		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
 	}
+	if s.ref != nil {
+		return s.refCompressedLiquidDensity(t, math.Max(p, ps), s.refSaturation(t))
+	}
 	rhoSat := s.liquidDensity(t)
 	if t > taitMaxTr*s.tc {
 		rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
@@ -209,6 +215,9 @@ func (s *Substance) Density(t, p float64) (float64, Flags, error) {
 	}
 	if math.IsNaN(p) || math.IsInf(p, 0) || p <= 0 {
 		return 0, 0, fmt.Errorf("%s: pressure %v Pa must be a positive number: %w", s.fluid.Name, p, ErrOutOfDomain)
+	}
+	if s.ref != nil {
+		return s.refDensityAt(t, p)
 	}
 	if t <= s.tc {
 		sat, err := s.Saturation(t)
@@ -252,6 +261,9 @@ func (s *Substance) invertPressure(t, p, lo, hi float64) (float64, Flags, error)
 func (s *Substance) LiquidFullTemperature(rho float64) (float64, bool) {
 	if !(rho > s.rhoC) {
 		return s.tc, false
+	}
+	if s.ref != nil {
+		return s.refLiquidFullTemperature(rho)
 	}
 	t, _ := s.bubbleTemperature(rho)
 	return t, true

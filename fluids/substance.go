@@ -12,6 +12,13 @@ import (
 // answer property questions. It is immutable and safe for concurrent use.
 type Substance struct {
 	fluid *Fluid
+	// ref is the reference equation of state, nil on the correlation
+	// route; with it, every property below comes from the equation and
+	// the correlation fields are unused.
+	ref *referenceEOS
+	// tPeak is the temperature of the densest saturated liquid (the
+	// freezing point, except for water).
+	tPeak float64
 
 	tc, pc, rhoC, tMin, molarMass float64
 	vp                            *vapourPressureCurve
@@ -41,6 +48,7 @@ func NewSubstance(f *Fluid) (*Substance, error) {
 
 func newSubstance(f *Fluid) (*Substance, error) {
 	s := &Substance{
+		tPeak:     f.FreezingPoint.Value,
 		fluid:     f,
 		tc:        f.CriticalTemperature.Value,
 		pc:        f.CriticalPressure.Value,
@@ -70,7 +78,8 @@ func newSubstance(f *Fluid) (*Substance, error) {
 // modify it.
 func (s *Substance) Fluid() *Fluid { return s.fluid }
 
-// CriticalTemperature returns Tc in K.
+// CriticalTemperature returns Tc in K: the critical point of the
+// reference equation of state where the fluid has one, else the record's.
 func (s *Substance) CriticalTemperature() float64 { return s.tc }
 
 // CriticalPressure returns Pc in Pa as stored in the library.
@@ -87,11 +96,20 @@ func (s *Substance) MinTemperature() float64 { return s.tMin }
 func (s *Substance) MolarMass() float64 { return s.molarMass }
 
 // RackettZ returns the Rackett compressibility factor Z_RA of the
-// near-critical liquid-density form (fitted to reach the critical density).
-func (s *Substance) RackettZ() float64 { return s.liquid.near.z() }
+// near-critical liquid-density form (fitted to reach the critical density),
+// or 0 for a fluid on the equation-of-state route, which has none.
+func (s *Substance) RackettZ() float64 {
+	if s.ref != nil {
+		return 0
+	}
+	return s.liquid.near.z()
+}
 
 // liquidDensity returns the saturated liquid density in kg/m³.
 func (s *Substance) liquidDensity(t float64) float64 {
+	if s.ref != nil {
+		return s.refSaturation(t).LiquidDensity
+	}
 	d, _ := s.liquid.density(t)
 	return d
 }
@@ -129,6 +147,10 @@ func (s *Substance) SaturationPressure(t float64) (float64, Flags, error) {
 	if t > s.tc {
 		return 0, 0, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
 	}
+	if s.ref != nil {
+		sat := s.refSaturation(t)
+		return sat.PressurePa, sat.Flags, nil
+	}
 	lnP, ext := s.vp.lnP(t)
 	var fl Flags
 	if ext {
@@ -151,6 +173,15 @@ func (s *Substance) SaturatedLiquidDensity(t float64) (float64, error) {
 // Saturation returns the saturated liquid and vapour state at t (K). It
 // fails for t not finite, below the freezing point or above Tc.
 func (s *Substance) Saturation(t float64) (Saturation, error) {
+	if s.ref != nil {
+		if err := s.checkTemperature(t); err != nil {
+			return Saturation{}, err
+		}
+		if t > s.tc {
+			return Saturation{}, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
+		}
+		return s.refSaturation(t), nil
+	}
 	p, fl, err := s.SaturationPressure(t)
 	if err != nil {
 		return Saturation{}, err
@@ -202,6 +233,9 @@ func (s *Substance) SaturationTemperature(p float64) (float64, error) {
 	if p < pLo || p > pHi {
 		return 0, fmt.Errorf("%s: pressure %.4g Pa is outside the saturation curve (%.4g Pa at the freezing point to %.4g Pa at the critical point): %w",
 			s.fluid.Name, p, pLo, pHi, ErrOutOfDomain)
+	}
+	if s.ref != nil {
+		return s.refSaturationTemperature(p)
 	}
 	lnTarget := math.Log(p)
 	r, err := solve.Brent(func(t float64) float64 {

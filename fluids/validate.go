@@ -64,8 +64,16 @@ func (v *validator) source(field, s string) {
 // giving a pressure that rises monotonically from the freezing point to
 // Tc and reproduces the stated normal boiling point within 2 K; limits
 // with a known averaging and a positive value. The first problem found is
-// returned as a *FieldError wrapping ErrInvalidFluid.
-func (f *Fluid) Validate() error {
+// returned as a *FieldError wrapping ErrInvalidFluid. Validate applies
+// the rules of the correlation route, which every user fluid takes.
+func (f *Fluid) Validate() error { return f.validate(nil) }
+
+// validate checks the record; with ref, the record is paired with a
+// reference equation of state, and the correlation fields
+// (vapour_pressure, liquid_density_kg_m3, liquid_density_correlation,
+// heat_of_vaporisation_j_mol) become optional — checked only where given
+// — while the record's constants must agree with the equation's.
+func (f *Fluid) validate(ref *referenceEOS) error {
 	v := &validator{id: f.ID}
 	if f.Format != FormatFluid {
 		v.fail("format", fmt.Sprintf("%q", f.Format), "must be %q", FormatFluid)
@@ -97,25 +105,43 @@ func (f *Fluid) Validate() error {
 		v.fail("critical_pressure_pa.value", f.CriticalPressure.Value, "must exceed one atmosphere (101325 Pa) for a fluid that boils below Tc")
 	}
 	ld := f.LiquidDensity
-	v.number("liquid_density_kg_m3.value", ld.Value, 100, 3000, "kg/m³")
-	v.number("liquid_density_kg_m3.temperature_k", ld.TemperatureK, tf, tc*0.95, "K (between the freezing point and 0.95 Tc)")
-	v.source("liquid_density_kg_m3.source", ld.Source)
-	if v.err == nil && ld.Value <= f.CriticalDensity.Value*1.2 {
-		v.fail("critical_density_kg_m3.value", f.CriticalDensity.Value, "must be well below the liquid density %g kg/m³", ld.Value)
+	if ref == nil || ld != (SourcedAt{}) {
+		v.number("liquid_density_kg_m3.value", ld.Value, 100, 3000, "kg/m³")
+		v.number("liquid_density_kg_m3.temperature_k", ld.TemperatureK, tf, tc*0.95, "K (between the freezing point and 0.95 Tc)")
+		v.source("liquid_density_kg_m3.source", ld.Source)
+		if v.err == nil && ld.Value <= f.CriticalDensity.Value*1.2 {
+			v.fail("critical_density_kg_m3.value", f.CriticalDensity.Value, "must be well below the liquid density %g kg/m³", ld.Value)
+		}
 	}
 	hv := f.HeatOfVaporisation
-	v.number("heat_of_vaporisation_j_mol.value", hv.Value, 1000, 100000, "J/mol")
-	v.number("heat_of_vaporisation_j_mol.temperature_k", hv.TemperatureK, tf, tc*0.99, "K")
-	v.source("heat_of_vaporisation_j_mol.source", hv.Source)
+	if ref == nil || hv != (SourcedAt{}) {
+		v.number("heat_of_vaporisation_j_mol.value", hv.Value, 1000, 100000, "J/mol")
+		v.number("heat_of_vaporisation_j_mol.temperature_k", hv.TemperatureK, tf, tc*0.99, "K")
+		v.source("heat_of_vaporisation_j_mol.source", hv.Source)
+	}
 	cp := f.LiquidHeatCapacity
 	v.number("liquid_heat_capacity_j_mol_k.value", cp.Value, 10, 1000, "J/(mol·K)")
 	v.number("liquid_heat_capacity_j_mol_k.temperature_k", cp.TemperatureK, tf, tc, "K")
 	v.source("liquid_heat_capacity_j_mol_k.source", cp.Source)
-	v.vapourPressure(f)
+	if ref == nil || len(f.VapourPressure) > 0 {
+		v.vapourPressure(f)
+	}
 	v.liquidDensityCorrelation(f)
 	v.flammability(f.Flammability)
 	v.limits(f)
+	for i, u := range f.Uncertainty {
+		field := fmt.Sprintf("uncertainty[%d]", i)
+		if !knownProperty[u.Property] {
+			v.fail(field+".property", fmt.Sprintf("%q", u.Property), "must name a property: vapour_pressure, liquid_density, vapour_density, compressed_liquid_density, heat_of_vaporisation or liquid_heat_capacity")
+		}
+		v.number(field+".percent", u.Percent, 0, 100, "%")
+		v.source(field+".source", u.Source)
+	}
 	if v.err != nil {
+		return v.err
+	}
+	if ref != nil {
+		v.agreesWithEOS(f, ref)
 		return v.err
 	}
 	s, err := newSubstance(f)
@@ -138,9 +164,15 @@ func (v *validator) vapourPressure(f *Fluid) {
 	tc, tf := f.CriticalTemperature.Value, f.FreezingPoint.Value
 	for i, p := range f.VapourPressure {
 		field := fmt.Sprintf("vapour_pressure[%d]", i)
-		if p.Form != FormAntoine && p.Form != FormWagner {
-			v.fail(field+".form", fmt.Sprintf("%q", p.Form), "must be %q or %q", FormAntoine, FormWagner)
+		if p.Form != FormAntoine && p.Form != FormWagner && p.Form != FormDIPPR101 {
+			v.fail(field+".form", fmt.Sprintf("%q", p.Form), "must be %q, %q or %q", FormAntoine, FormWagner, FormDIPPR101)
 			return
+		}
+		if p.Form != FormDIPPR101 && p.E != 0 {
+			v.fail(field+".e", p.E, "is only used by the %q form", FormDIPPR101)
+		}
+		if p.Form == FormDIPPR101 && !(p.E >= -6 && p.E <= 6) {
+			v.fail(field+".e", p.E, "must be an exponent from -6 to 6")
 		}
 		for name, x := range map[string]float64{"a": p.A, "b": p.B, "c": p.C, "d": p.D} {
 			if !finite(x) || math.Abs(x) > 1e7 {
@@ -231,6 +263,9 @@ func (v *validator) flammability(fl Flammability) {
 	}
 }
 
+var knownProperty = map[string]bool{PropertyVapourPressure: true, PropertyLiquidDensity: true, PropertyVapourDensity: true,
+	PropertyCompressedLiquid: true, PropertyHeatOfVaporisation: true, PropertyLiquidHeatCapacity: true}
+
 var knownAveraging = map[string]bool{AveragingTWA: true, AveragingSTEL: true, AveragingCeiling: true, AveragingIDLH: true}
 
 func (v *validator) limits(f *Fluid) {
@@ -303,5 +338,41 @@ func (v *validator) consistency(f *Fluid, s *Substance) {
 	if math.Abs(tb-f.NormalBoilingPoint.Value) > 2 {
 		v.fail("normal_boiling_point_k.value", f.NormalBoilingPoint.Value,
 			"disagrees with the vapour-pressure correlation, which boils at %.2f K at 101325 Pa (2 K allowed)", tb)
+	}
+}
+
+// agreesWithEOS checks that a record and the equation of state paired
+// with it describe the same fluid: molar mass within 0.1 %, critical
+// temperature within 1 K, critical pressure within 5 %, and the equation
+// boiling within 1 K of the record's normal boiling point at 101325 Pa.
+// The tolerances allow for rounding and for the handbook values the
+// record cites; a wrong pairing misses them by far more.
+func (v *validator) agreesWithEOS(f *Fluid, ref *referenceEOS) {
+	e := ref.file
+	if math.Abs(f.MolarMass.Value/e.MolarMass-1) > 1e-3 {
+		v.fail("molar_mass_kg_mol.value", f.MolarMass.Value, "disagrees with the equation of state's %g kg/mol by more than 0.1 %%", e.MolarMass)
+	}
+	if math.Abs(f.CriticalTemperature.Value-ref.tc) > 2 {
+		v.fail("critical_temperature_k.value", f.CriticalTemperature.Value, "disagrees with the equation of state's %g K by more than 2 K", ref.tc)
+	}
+	if math.Abs(f.CriticalPressure.Value/ref.pc-1) > 0.05 {
+		v.fail("critical_pressure_pa.value", f.CriticalPressure.Value, "disagrees with the equation of state's %g Pa by more than 5 %%", ref.pc)
+	}
+	if v.err != nil {
+		return
+	}
+	s, err := newRefSubstance(f, ref)
+	if err != nil {
+		v.fail("equation of state", e.Name, "cannot be evaluated: %v", err)
+		return
+	}
+	tb, err := s.SaturationTemperature(101325)
+	if err != nil {
+		v.fail("normal_boiling_point_k.value", f.NormalBoilingPoint.Value, "the equation of state does not reach one atmosphere: %v", err)
+		return
+	}
+	if math.Abs(tb-f.NormalBoilingPoint.Value) > 1 {
+		v.fail("normal_boiling_point_k.value", f.NormalBoilingPoint.Value,
+			"disagrees with the equation of state, which boils at %.2f K at 101325 Pa (1 K allowed)", tb)
 	}
 }

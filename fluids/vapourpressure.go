@@ -54,8 +54,11 @@ func newVapourPressureCurve(pieces []VapourPressurePiece, tc, pc float64) (*vapo
 
 func (c *vapourPressureCurve) evalPiece(i int, t float64) (lnP, dlnPdT float64) {
 	p := &c.pieces[i]
-	if p.Form == FormWagner {
+	switch p.Form {
+	case FormWagner:
 		return wagnerLnP(p.A, p.B, p.C, p.D, c.tc, c.pc, t)
+	case FormDIPPR101:
+		return dippr101LnP(p.A, p.B, p.C, p.D, p.E, t)
 	}
 	return antoineLnP(p.A, p.B, p.C, t)
 }

@@ -43,8 +43,8 @@ func ExampleAssess() {
 		fmt.Printf("%-7s %s\n", f.Status, f.Criterion)
 	}
 	// Output:
-	// at 76 °C: liquid-full, 23894 kPa, ullage 0.0 %
-	// liquid-full at 52.7 °C
+	// at 76 °C: liquid-full, 22457 kPa, ullage 0.0 %
+	// liquid-full at 51.7 °C
 	// verdict: fail
 	// fail    ullage-at-hottest
 	// fail    burst-safety-factor
@@ -68,5 +68,5 @@ func ExampleAssess_overfilled() {
 	}
 	_, err := hazards.Assess(d, lib)
 	fmt.Println(err)
-	// Output: fill_mass_kg = 0.05: must be less than 0.02863 kg: that much Water, as liquid, already fills the whole 2.873e-05 m³ at the sealing temperature: the fill does not fit in the vessel
+	// Output: fill_mass_kg = 0.05: must be less than 0.02868 kg: that much Water, as liquid, already fills the whole 2.873e-05 m³ at the sealing temperature: the fill does not fit in the vessel
 }

@@ -156,6 +156,13 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 		Inputs: []Value{{Symbol: "ρ_fill", Value: a.FillDensity, Unit: "kg/m³"}, {Symbol: "Z_RA", Value: sub.RackettZ()},
 			{Symbol: "ρc", Value: sub.CriticalDensity(), Unit: "kg/m³", Source: f.CriticalDensity.Source}},
 		Source: "Rackett (1970), inverted (from memory)"}
+	if eos := sub.EquationOfState(); eos != nil {
+		lf.Method = "saturated-liquid density of the reference equation of state solved for T"
+		lf.Equation = "ρ'(T) = ρ_fill, ρ'(T) from equal pressure and Gibbs energy of liquid and vapour (" + eos.Name + "), solved for T above the densest liquid"
+		lf.Inputs = []Value{{Symbol: "ρ_fill", Value: a.FillDensity, Unit: "kg/m³"},
+			{Symbol: "ρc", Value: sub.CriticalDensity(), Unit: "kg/m³", Source: eos.Paper.Citation()}}
+		lf.Source = eos.Paper.Citation()
+	}
 	if a.LiquidFullReached {
 		lf.Result = Value{Symbol: "T_full", Value: a.LiquidFullK, Unit: "K"}
 		if rho, err := sub.SaturatedLiquidDensity(a.LiquidFullK); err == nil {

@@ -136,7 +136,7 @@ func TestAssessmentMarksExtrapolation(t *testing.T) {
 		design string
 		marked bool
 	}{
-		{"extrapolated_design.json", true}, // cyclopentane's first piece starts at 288.9 K, the design's coldest is 253.15 K
+		{"extrapolated_design.json", true}, // water's equation of state (IAPWS-95) is stated from the triple point, 273.16 K; the design's coldest is 273.15 K
 		{"typical_design.json", false},
 	}
 	for _, c := range cases {
@@ -148,7 +148,7 @@ func TestAssessmentMarksExtrapolation(t *testing.T) {
 		if got := strings.Contains(text, "‡"); got != c.marked {
 			t.Errorf("%s: mark ‡ shown = %v, want %v", c.design, got, c.marked)
 		}
-		if c.marked && !strings.Contains(text, "vapour pressure outside its correlation's range") {
+		if c.marked && !strings.Contains(text, "outside the equation of state's stated range") {
 			t.Errorf("%s: the stretched correlation is not named", c.design)
 		}
 	}

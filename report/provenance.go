@@ -22,13 +22,32 @@ func (w *assessmentWriter) provenance() {
 		a.Fluid.Name, a.Fluid.CAS, a.Fluid.ID, origin, firstNonBlank(w.m.FluidDataVersion, "not stated")))
 	d.subheading("Fluid properties")
 	d.drawTable(fluidTable(a.Fluid, w.u))
-	d.subheading("Vapour-pressure correlation")
-	d.drawTable(vapourPressureTable(a.Fluid, w.u))
-	use := "Outside the published pieces the curve is extended to the critical point by a Riedel-type hand-over, flagged as extrapolated wherever it is used."
-	if a.Flags&fluids.VapourPressureExtrapolated != 0 {
-		use = "‡ This review used the curve outside its published pieces. " + use
+	sub := fluids.BuiltinSubstanceOf(a.Fluid)
+	if eos := sub.EquationOfState(); eos != nil {
+		d.subheading("Reference equation of state")
+		d.drawTable(equationTable(eos, w.u))
+		use := "Vapour pressure, saturated densities, heat of vaporisation and every single-phase state (compressed liquid, vapour, supercritical) come from this equation; the saturation curve is solved from it by equal pressure and equal Gibbs energy in both phases."
+		if a.Flags&fluids.EquationOfStateExtrapolated != 0 {
+			use = "‡ This review used the equation outside its stated range. " + use
+		}
+		d.note(use)
+	} else {
+		d.subheading("Vapour-pressure correlation")
+		d.drawTable(vapourPressureTable(a.Fluid, w.u))
+		use := "Outside the published pieces the curve is extended to the critical point by a Riedel-type hand-over, flagged as extrapolated wherever it is used."
+		if a.Flags&fluids.VapourPressureExtrapolated != 0 {
+			use = "‡ This review used the curve outside its published pieces. " + use
+		}
+		d.note(use)
 	}
-	d.note(use)
+	var us []fluids.Uncertainty
+	if sub != nil {
+		us = sub.Uncertainties()
+	} else {
+		us = a.Fluid.Uncertainty
+	}
+	d.subheading("How good each property is")
+	d.drawTable(uncertaintyTable(us))
 	d.subheading("Exposure limits")
 	d.drawTable(limitsTable(a.Fluid, a.Design.Criteria.LimitBodies))
 	for _, n := range a.Fluid.NoNumericLimit {
@@ -67,10 +86,16 @@ func fluidTable(f *fluids.Fluid, u unitSystem) table {
 		{{text: "Acentric factor"}, {text: sig(f.AcentricFactor.Value, 4)}, {}, sourceCell(f.AcentricFactor.Source)},
 		{{text: "Normal boiling point"}, {text: u.temperature(f.NormalBoilingPoint.Value)}, {}, sourceCell(f.NormalBoilingPoint.Source)},
 		{{text: "Freezing point"}, {text: u.temperature(f.FreezingPoint.Value)}, {text: "lowest temperature accepted"}, sourceCell(f.FreezingPoint.Source)},
-		{{text: "Liquid density"}, {text: u.density(f.LiquidDensity.Value)}, {text: at(f.LiquidDensity.TemperatureK)}, sourceCell(f.LiquidDensity.Source)},
-		{{text: "Heat of vaporisation"}, {text: sig(f.HeatOfVaporisation.Value/1000, 4) + " kJ/mol"}, {text: at(f.HeatOfVaporisation.TemperatureK)}, sourceCell(f.HeatOfVaporisation.Source)},
-		{{text: "Liquid heat capacity"}, {text: sig(f.LiquidHeatCapacity.Value, 4) + " J/(mol·K)"}, {text: at(f.LiquidHeatCapacity.TemperatureK)}, sourceCell(f.LiquidHeatCapacity.Source)},
 	}
+	// A record paired with a reference equation of state may leave out
+	// the reference liquid density and heat of vaporisation.
+	if f.LiquidDensity.Value > 0 {
+		rows = append(rows, []cell{{text: "Liquid density"}, {text: u.density(f.LiquidDensity.Value)}, {text: at(f.LiquidDensity.TemperatureK)}, sourceCell(f.LiquidDensity.Source)})
+	}
+	if f.HeatOfVaporisation.Value > 0 {
+		rows = append(rows, []cell{{text: "Heat of vaporisation"}, {text: sig(f.HeatOfVaporisation.Value/1000, 4) + " kJ/mol"}, {text: at(f.HeatOfVaporisation.TemperatureK)}, sourceCell(f.HeatOfVaporisation.Source)})
+	}
+	rows = append(rows, []cell{{text: "Liquid heat capacity"}, {text: sig(f.LiquidHeatCapacity.Value, 4) + " J/(mol·K)"}, {text: at(f.LiquidHeatCapacity.TemperatureK)}, sourceCell(f.LiquidHeatCapacity.Source)})
 	fl := f.Flammability
 	flam := "no"
 	if fl.Flammable {
@@ -93,6 +118,31 @@ func fluidTable(f *fluids.Fluid, u unitSystem) table {
 	return table{cols: []col{{"Property", 1.5, 'L'}, {"Value", 1.3, 'R'}, {"Conditions", 1.1, 'L'}, {"Source", 4.6, 'L'}}, rows: rows, size: 7.5, zebra: true}
 }
 
+// equationTable describes a reference equation of state: paper, range,
+// reducing constants and where the coefficients were read.
+func equationTable(e *fluids.EquationOfState, u unitSystem) table {
+	rows := [][]cell{
+		{{text: "Equation"}, {text: e.Name}, sourceCell(e.Paper.Citation())},
+		{{text: "Stated range"}, {text: u.temperature(e.Range.TMinK) + " to " + u.temperature(e.Range.TMaxK) + ", up to " + u.pressure(e.Range.PMaxPa)}, sourceCell(e.Range.Source)},
+		{{text: "Reducing temperature"}, {text: u.temperature(e.Reducing.TemperatureK)}, sourceCell(e.Paper.Citation())},
+		{{text: "Reducing density"}, {text: u.density(e.Reducing.DensityMolM3 * e.MolarMass)}, sourceCell(e.Paper.Citation())},
+		{{text: "Terms"}, {text: fmt.Sprintf("%d in the residual Helmholtz energy", len(e.Residual))}, sourceCell(e.Transcription)},
+	}
+	return table{cols: []col{{"Item", 1.5, 'L'}, {"Value", 2.4, 'L'}, {"Source", 4.6, 'L'}}, rows: rows, size: 7.5, zebra: true}
+}
+
+// uncertaintyTable lists the stated uncertainty of each property.
+func uncertaintyTable(us []fluids.Uncertainty) table {
+	var rows [][]cell
+	for _, x := range us {
+		rows = append(rows, []cell{{text: strings.ReplaceAll(x.Property, "_", " ")}, {text: "±" + sig(x.Percent, 3) + " %"}, {text: x.Statement}, sourceCell(x.Source)})
+	}
+	if len(rows) == 0 {
+		rows = append(rows, []cell{{text: "all properties"}, {text: noValue}, {text: "no uncertainty is stated for this fluid's correlations"}, sourceCell("library")})
+	}
+	return table{cols: []col{{"Property", 1.5, 'L'}, {"Uncertainty", 0.9, 'R'}, {"Where it holds", 3.0, 'L'}, {"Source", 3.1, 'L'}}, rows: rows, size: 7.5, zebra: true}
+}
+
 // vapourPressureTable lists the published pieces with their ranges.
 func vapourPressureTable(f *fluids.Fluid, u unitSystem) table {
 	var rows [][]cell
@@ -100,6 +150,9 @@ func vapourPressureTable(f *fluids.Fluid, u unitSystem) table {
 		coef := fmt.Sprintf("A = %s, B = %s, C = %s", sig(p.A, 6), sig(p.B, 6), sig(p.C, 6))
 		if p.D != 0 {
 			coef += ", D = " + sig(p.D, 6)
+		}
+		if p.E != 0 {
+			coef += ", E = " + sig(p.E, 6)
 		}
 		rows = append(rows, []cell{{text: p.Form}, {text: coef, mono: true}, {text: u.temperature(p.TMinK) + " to " + u.temperature(p.TMaxK)}, sourceCell(p.Source)})
 	}
@@ -171,6 +224,15 @@ func validityTable(a *hazards.Assessment, u unitSystem) table {
 		{"Compressed liquid (Tait form)", "reduced temperature up to 0.95, i.e. up to " + u.temperature(0.95*tc), fluids.CompressedLiquidExtrapolated, true},
 		{"Saturated vapour near the critical point (rectilinear diameter)", "used close to the critical point, " + u.temperature(tc), fluids.NearCriticalVapour, false},
 		{"Supercritical state (anchored equation of state)", "above the critical temperature, " + u.temperature(tc), fluids.SupercriticalState, false},
+	}
+	if sub := fluids.BuiltinSubstanceOf(f); sub.EquationOfState() != nil {
+		e := sub.EquationOfState()
+		tc = sub.CriticalTemperature()
+		cs = []corr{
+			{"Reference equation of state (" + e.Name + ")", u.temperature(e.Range.TMinK) + " to " + u.temperature(e.Range.TMaxK) + ", up to " + u.pressure(e.Range.PMaxPa),
+				fluids.EquationOfStateExtrapolated, true},
+			{"Supercritical state (same equation)", "above the critical temperature, " + u.temperature(tc), fluids.SupercriticalState, false},
+		}
 	}
 	use := func(fl fluids.Flags, c corr) string {
 		switch {

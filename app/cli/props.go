@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 
+	"ullage/fluids"
 	"ullage/fluids/units"
 )
 
@@ -17,6 +18,29 @@ type propsJSON struct {
 	HeatOfVaporisationJKg float64  `json:"heat_of_vaporisation_j_kg"`
 	Extrapolated          bool     `json:"extrapolated"`
 	Notes                 []string `json:"notes"`
+	// Route names where the properties come from (the reference
+	// equation of state and its paper, or the record's correlations);
+	// each *_uncertainty is the stated uncertainty of that property, or
+	// null where none is stated.
+	Route                         string           `json:"route"`
+	PsatUncertainty               *uncertaintyJSON `json:"psat_uncertainty"`
+	LiquidDensityUncertainty      *uncertaintyJSON `json:"liquid_density_uncertainty"`
+	VapourDensityUncertainty      *uncertaintyJSON `json:"vapour_density_uncertainty"`
+	HeatOfVaporisationUncertainty *uncertaintyJSON `json:"heat_of_vaporisation_uncertainty"`
+}
+
+type uncertaintyJSON struct {
+	Percent   float64 `json:"percent"`
+	Statement string  `json:"statement"`
+	Source    string  `json:"source"`
+}
+
+func uncertaintyOf(s *fluids.Substance, property string) *uncertaintyJSON {
+	u, ok := s.Uncertainty(property)
+	if !ok {
+		return nil
+	}
+	return &uncertaintyJSON{Percent: u.Percent, Statement: u.Statement, Source: u.Source}
 }
 
 func runProps(args []string, stdout, stderr io.Writer) int {
@@ -50,6 +74,11 @@ func runProps(args []string, stdout, stderr io.Writer) int {
 		Fluid: s.Fluid().ID, TemperatureC: tc, PsatKPa: round(sat.PressurePa/1000, 6),
 		LiquidDensityKgM3: round(sat.LiquidDensity, 6), VapourDensityKgM3: round(sat.VapourDensity, 6),
 		HeatOfVaporisationJKg: round(sat.HeatOfVaporisation, 6), Extrapolated: sat.Flags.Extrapolated(), Notes: []string{},
+		Route:                         s.Route(),
+		PsatUncertainty:               uncertaintyOf(s, fluids.PropertyVapourPressure),
+		LiquidDensityUncertainty:      uncertaintyOf(s, fluids.PropertyLiquidDensity),
+		VapourDensityUncertainty:      uncertaintyOf(s, fluids.PropertyVapourDensity),
+		HeatOfVaporisationUncertainty: uncertaintyOf(s, fluids.PropertyHeatOfVaporisation),
 	}
 	if sat.Flags != 0 {
 		out.Notes = append(out.Notes, sat.Flags.String())
@@ -67,6 +96,7 @@ func runProps(args []string, stdout, stderr io.Writer) int {
 	fmt.Fprintf(stdout, "  saturated liquid      %.6g kg/m³\n", sat.LiquidDensity)
 	fmt.Fprintf(stdout, "  saturated vapour      %.6g kg/m³\n", sat.VapourDensity)
 	fmt.Fprintf(stdout, "  heat of vaporisation  %.6g kJ/kg\n", sat.HeatOfVaporisation/1000)
+	fmt.Fprintf(stdout, "  from                  %s\n", s.Route())
 	if sat.Flags != 0 {
 		fmt.Fprintf(stdout, "  note: %s\n", sat.Flags)
 	}

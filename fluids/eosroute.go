@@ -1,0 +1,324 @@
+package fluids
+
+import (
+	"fmt"
+	"math"
+
+	"ullage/fluids/solve"
+)
+
+// The equation-of-state route: a fluid with a reference equation of state
+// takes every fluid property from it — vapour pressure, saturated
+// densities and heat of vaporisation from the saturation table, and
+// single-phase states (compressed liquid, vapour, supercritical) from the
+// explicit pressure P(T, ρ). The pressure of a sealed vessel is then
+// continuous at every phase boundary because the saturated states are
+// states of the same surface.
+
+// newEOSSubstance prepares a built-in fluid whose record is paired with a
+// reference equation of state.
+func newEOSSubstance(f *Fluid, e *EquationOfState) (*Substance, error) {
+	if e.Fluid != f.ID {
+		return nil, fmt.Errorf("%w: equation of state for %q paired with fluid %q", ErrInvalidFluid, e.Fluid, f.ID)
+	}
+	tLow := f.FreezingPoint.Value
+	ref, err := newReferenceEOS(e, tLow)
+	if err != nil {
+		return nil, err
+	}
+	if err := f.validate(ref); err != nil {
+		return nil, err
+	}
+	return newRefSubstance(f, ref)
+}
+
+func newRefSubstance(f *Fluid, ref *referenceEOS) (*Substance, error) {
+	s := &Substance{
+		fluid:     f,
+		ref:       ref,
+		tc:        ref.tc,
+		pc:        ref.pc,
+		rhoC:      ref.rhoCMol * ref.m,
+		tMin:      f.FreezingPoint.Value,
+		molarMass: ref.m,
+	}
+	tb, err := ref.sat()
+	if err != nil {
+		return nil, fmt.Errorf("%w: %s: %v", ErrInvalidFluid, f.ID, err)
+	}
+	// The saturated liquid is densest at the freezing point for every
+	// fluid but water, whose maximum lies near 4 °C; above the maximum the
+	// liquid density falls steadily to the critical point.
+	s.tPeak = s.tMin
+	prev := math.Inf(-1)
+	for i := 0; i <= 400; i++ {
+		t := s.tMin + (s.tc-s.tMin)*float64(i)/400
+		_, rl, _, _ := tb.at(t)
+		if rl <= prev {
+			break
+		}
+		prev = rl
+		s.tPeak = t
+	}
+	if s.tPeak > s.tMin {
+		lo, hi := math.Max(s.tMin, s.tPeak-(s.tc-s.tMin)/400), s.tPeak+(s.tc-s.tMin)/400
+		r, err := solve.Brent(func(t float64) float64 {
+			const d = 1e-4
+			_, a, _, _ := tb.at(t - d)
+			_, b, _, _ := tb.at(t + d)
+			return b - a
+		}, lo, hi, 1e-8, 100)
+		if err == nil {
+			s.tPeak = r.X
+		}
+	}
+	return s, nil
+}
+
+// refFlags returns the flags for a state at t and pressure p (0 when not
+// known) against the equation's stated range.
+func (s *Substance) refFlags(t, p float64) Flags {
+	r := &s.ref.file.Range
+	var fl Flags
+	if t < r.TMinK || t > r.TMaxK || p > r.PMaxPa {
+		fl |= EquationOfStateExtrapolated
+	}
+	if t > s.tc {
+		fl |= SupercriticalState
+	}
+	return fl
+}
+
+// refSaturation returns the saturated state at t from the table.
+func (s *Substance) refSaturation(t float64) Saturation {
+	tb := s.ref.table
+	lnP, rl, rv, dh := tb.at(t)
+	p := math.Exp(lnP)
+	m := s.molarMass
+	return Saturation{
+		TemperatureK:       t,
+		PressurePa:         p,
+		LiquidDensity:      rl * m,
+		VapourDensity:      rv * m,
+		HeatOfVaporisation: dh / m,
+		LiquidHeatCapacity: s.liquidHeatCapacity(tb, t),
+		Flags:              s.refFlags(t, p) &^ SupercriticalState,
+	}
+}
+
+// liquidHeatCapacity is the saturated liquid's heat capacity in J/(kg·K):
+// from the equation where its file gives the ideal-gas part, else the
+// record's value.
+func (s *Substance) liquidHeatCapacity(tb *satTable, t float64) float64 {
+	if s.ref.hasIdeal {
+		return tb.liquidCp(t) / s.molarMass
+	}
+	return s.fluid.LiquidHeatCapacity.Value / s.molarMass
+}
+
+// refPressure is the explicit pressure of the equation at (t, rho in
+// kg/m³).
+func (s *Substance) refPressure(t, rho float64) float64 {
+	return s.ref.h.pressure(t, rho/s.molarMass)
+}
+
+func (s *Substance) refSinglePhasePressure(t, rho float64) (float64, Flags, error) {
+	if t < s.tc {
+		rl, rv := s.ref.table.densities(t)
+		rl, rv = rl*s.molarMass, rv*s.molarMass
+		if rho > rv*(1+boundaryTolerance) && rho < rl*(1-boundaryTolerance) {
+			return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ lies between the saturated vapour (%.4g kg/m³) and liquid (%.4g kg/m³): %w",
+				s.fluid.Name, t, rho, rv, rl, ErrTwoPhase)
+		}
+	}
+	p := s.refPressure(t, rho)
+	if !finite(p) || p <= 0 {
+		return 0, 0, fmt.Errorf("%s: density %.4g kg/m³ at %.2f K is beyond what the equation of state describes: %w", s.fluid.Name, rho, t, ErrOutOfDomain)
+	}
+	return p, s.refFlags(t, p), nil
+}
+
+// refDensity solves P(t, ρ) = p for ρ (kg/m³) between lo and hi, where
+// the pressure rises with density, by Newton's method kept inside the
+// bracket (a bisection step whenever Newton would leave it).
+func (s *Substance) refDensity(t, p, guess, lo, hi float64) (float64, error) {
+	h := s.ref.h
+	m := s.molarMass
+	rho := guess
+	var c tauCache
+	h.prepareTau(h.tr/t, &c)
+	for i := 0; i < 100; i++ {
+		st := h.stateCached(t, rho/m, &c)
+		f := st.p - p
+		if math.Abs(f) <= 1e-12*p {
+			return rho, nil
+		}
+		if f > 0 {
+			hi = math.Min(hi, rho)
+		} else {
+			lo = math.Max(lo, rho)
+		}
+		next := rho
+		if st.dpdrho > 0 {
+			next = rho - f/(st.dpdrho/m)
+		}
+		if !(next > lo && next < hi) {
+			next = 0.5 * (lo + hi)
+		}
+		if math.Abs(next-rho) <= 1e-13*rho {
+			return next, nil
+		}
+		rho = next
+	}
+	return 0, fmt.Errorf("%s: no single-phase density at %.2f K and %.4g Pa: %w", s.fluid.Name, t, p, ErrOutOfDomain)
+}
+
+// refMaxDensity bounds the density search: three times the critical
+// density beyond the densest saturated liquid (no liquid here is
+// compressed that far below 1 GPa).
+func (s *Substance) refMaxDensity() float64 {
+	sat := s.refSaturation(s.tPeak)
+	return sat.LiquidDensity + 3*s.rhoC
+}
+
+func (s *Substance) refCompressedLiquidDensity(t, p float64, sat Saturation) (float64, Flags, error) {
+	rho, err := s.refDensity(t, p, sat.LiquidDensity, sat.LiquidDensity*(1-1e-9), s.refMaxDensity())
+	if err != nil {
+		return 0, 0, err
+	}
+	return rho, s.refFlags(t, p), nil
+}
+
+func (s *Substance) refDensityAt(t, p float64) (float64, Flags, error) {
+	if t <= s.tc {
+		sat := s.refSaturation(t)
+		if p >= sat.PressurePa {
+			return s.refCompressedLiquidDensity(t, p, sat)
+		}
+		guess := math.Min(p*s.molarMass/(s.ref.h.r*t), sat.VapourDensity)
+		rho, err := s.refDensity(t, p, guess, 0, sat.VapourDensity*(1+1e-9))
+		return rho, s.refFlags(t, p), err
+	}
+	// Above Tc the isotherms rise monotonically; start from the ideal gas
+	// or, at high pressure, from the critical density upward.
+	guess := p * s.molarMass / (s.ref.h.r * t)
+	if guess > s.rhoC {
+		guess = s.rhoC
+	}
+	rho, err := s.refDensity(t, p, guess, 0, s.refMaxDensity())
+	return rho, s.refFlags(t, p), err
+}
+
+// refLiquidFullTemperature finds the temperature above the liquid-density
+// maximum at which the saturated liquid density equals rho.
+func (s *Substance) refLiquidFullTemperature(rho float64) (float64, bool) {
+	peak := s.refSaturation(s.tPeak).LiquidDensity
+	if rho >= peak {
+		return s.tMin, true
+	}
+	r, err := solve.Brent(func(t float64) float64 {
+		return s.refSaturation(t).LiquidDensity - rho
+	}, s.tPeak, s.tc, 1e-10, 200)
+	if err != nil {
+		return s.tc, true
+	}
+	return r.X, true
+}
+
+func (s *Substance) refSaturationTemperature(p float64) (float64, error) {
+	lnTarget := math.Log(p)
+	r, err := solve.Brent(func(t float64) float64 {
+		lnP, _, _, _ := s.ref.table.at(t)
+		return lnP - lnTarget
+	}, s.tMin, s.tc, 1e-10, 200)
+	if err != nil {
+		return 0, fmt.Errorf("%s: saturation temperature at %.4g Pa: %w", s.fluid.Name, p, err)
+	}
+	return r.X, nil
+}
+
+// EquationOfState returns the reference equation of state the substance
+// uses, or nil for a fluid on the correlation route (or a nil substance).
+// Callers must not
+// modify it.
+func (s *Substance) EquationOfState() *EquationOfState {
+	if s == nil || s.ref == nil {
+		return nil
+	}
+	return s.ref.file
+}
+
+// explainEOS fills an explanation for a property taken from the
+// reference equation of state.
+func (s *Substance) explainEOS(e *Explanation, t float64, what string) {
+	r := s.ref
+	f := r.file
+	e.Correlation = r.explainName
+	switch what {
+	case "saturation":
+		e.Equation = "P = ρRT(1 + δ·∂αr/∂δ) in both phases, with equal pressure and equal Gibbs energy g/RT = 1 + α° + αr + δ·∂αr/∂δ;  δ = ρ/ρr, τ = Tr/T"
+	default:
+		e.Equation = "P = ρRT(1 + δ·∂αr/∂δ),  δ = ρ/ρr, τ = Tr/T"
+	}
+	e.Terms = []Term{{Symbol: "T", Value: t, Unit: "K"},
+		{Symbol: "Tr", Value: f.Reducing.TemperatureK, Unit: "K", Source: r.citation},
+		{Symbol: "ρr", Value: f.Reducing.DensityMolM3 * f.MolarMass, Unit: "kg/m³", Source: r.citation},
+		{Symbol: "R", Value: f.GasConstant, Unit: "J/(mol·K)", Source: r.citation},
+		{Symbol: "M", Value: f.MolarMass, Unit: "kg/mol", Source: r.citation},
+	}
+	e.Source = r.source
+	e.Note = r.notes[uncertaintyFor(e.Quantity)]
+}
+
+// explainTexts prepares the fixed texts of explanations once.
+func (r *referenceEOS) explainTexts() {
+	f := r.file
+	r.citation = f.Paper.Citation()
+	r.source = r.citation + ". " + f.Transcription
+	r.explainName = "reference equation of state, " + f.Name
+	base := fmt.Sprintf("The equation's stated range is %.2f–%.2f K and up to %.4g MPa; %d terms in the residual Helmholtz energy.",
+		f.Range.TMinK, f.Range.TMaxK, f.Range.PMaxPa/1e6, len(f.Residual))
+	r.notes = map[string]string{"": base}
+	for _, u := range f.Uncertainty {
+		r.notes[u.Property] = base + " Stated uncertainty: " + u.Statement + " (" + u.Source + ")."
+	}
+	for _, p := range []string{PropertyVapourPressure, PropertyLiquidDensity, PropertyVapourDensity} {
+		if _, ok := r.notes[p]; !ok {
+			r.notes[p] = base
+		}
+	}
+}
+
+func uncertaintyFor(quantity string) string {
+	switch quantity {
+	case "vapour pressure":
+		return PropertyVapourPressure
+	case "saturated liquid density":
+		return PropertyLiquidDensity
+	case "saturated vapour density":
+		return PropertyVapourDensity
+	}
+	return ""
+}
+
+// IsochoricSlope returns (∂P/∂T)_ρ in Pa/K of the single-phase fluid at
+// temperature t (K) and density rho (kg/m³): the rate at which a
+// liquid-full vessel's pressure climbs. On the equation-of-state route it
+// is explicit, ρR(1 + δ αr_δ − δτ αr_δτ); on the correlation route it is a
+// central difference of SinglePhasePressure over ±0.01 K. It fails where
+// SinglePhasePressure fails.
+func (s *Substance) IsochoricSlope(t, rho float64) (float64, error) {
+	if _, _, err := s.SinglePhasePressure(t, rho); err != nil {
+		return 0, err
+	}
+	if s.ref != nil {
+		return s.ref.h.state(t, rho/s.molarMass).dpdt, nil
+	}
+	const h = 0.01
+	a, _, err1 := s.SinglePhasePressure(t, rho)
+	b, _, err2 := s.SinglePhasePressure(t+h, rho)
+	if err1 != nil || err2 != nil {
+		return 0, fmt.Errorf("%s: isochoric slope at %.2f K, %.4g kg/m³: %w", s.fluid.Name, t, rho, ErrOutOfDomain)
+	}
+	return (b - a) / h, nil
+}
