@@ -425,3 +425,33 @@ func (h *harness) topOverlay() fyne.CanvasObject {
 	}
 	return top
 }
+
+// TestResetLeavesNothingBehind: after a test has changed everything a
+// reviewer can change, the reset brings the shared window back to the
+// state of a new one, so tests stay independent and the window is not
+// built again for nothing.
+func TestResetLeavesNothingBehind(t *testing.T) {
+	h := newHarness(t)
+	h.typeInto("fill_mass_kg", "oops")
+	h.s.settings.Reviewer = "Someone"
+	h.s.setUnits(unitsUS)
+	h.idle()
+	button(t, h.s.form.object, "Add a tube").OnTapped()
+	h.idle()
+	h.s.working.show(workSubject{criterion: h.s.results.list.rows[0].Criterion})
+	h.s.cmp.onlyChanged.SetChecked(true)
+	h.s.tol.units.SetText("lots")
+	h.s.shell.tabs.SelectIndex(2)
+	h.s.requestClose()
+	h.idle()
+	if h.w.Canvas().Overlays().Top() == nil {
+		t.Fatal("closing with unsaved work asked nothing")
+	}
+	if !h.reset(t) {
+		t.Fatal("the reset did not bring the window back to the state of a new one")
+	}
+	if h.s.settings.Reviewer != "" || h.s.units() != unitsSI || h.s.doc.dirty() || h.s.stale() || h.s.working.open {
+		t.Errorf("after the reset: reviewer %q, units %s, dirty %v, stale %v, working open %v",
+			h.s.settings.Reviewer, h.s.units(), h.s.doc.dirty(), h.s.stale(), h.s.working.open)
+	}
+}
