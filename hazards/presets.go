@@ -91,7 +91,7 @@ var roomPresets = sync.OnceValues(func() ([]RoomPreset, error) {
 	}
 	for _, p := range doc.Presets {
 		r := p.Room(480)
-		if err := r.Validate("room_presets[" + p.ID + "]"); err != nil {
+		if err := r.validateRanges("room_presets[" + p.ID + "]"); err != nil {
 			return nil, err
 		}
 	}

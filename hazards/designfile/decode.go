@@ -1,6 +1,7 @@
 package designfile
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"reflect"
@@ -40,6 +41,10 @@ func Decode(r io.Reader, name string) (*File, error) {
 	}
 	if len(data) > MaxFileBytes {
 		return nil, tooLarge(name)
+	}
+	data, problem := stripBOM(data)
+	if problem != "" {
+		return nil, &FileError{File: name, Line: 1, Problem: problem}
 	}
 	f, ferr := decodeBytes(data)
 	if ferr != nil {
@@ -112,4 +117,29 @@ func migrateSingleSheet(s *singleSheet) *File {
 			Design:     s.Design,
 		}},
 	}
+}
+
+// utf8BOM is the UTF-8 byte-order mark some editors put first.
+var utf8BOM = []byte{0xEF, 0xBB, 0xBF}
+
+// stripBOM skips a UTF-8 byte-order mark and names a UTF-16 or UTF-32
+// encoding, which the JSON decoder cannot read; problem is "" when the
+// data can be decoded.
+func stripBOM(data []byte) (out []byte, problem string) {
+	const saveAs = "; save it as UTF-8 (most editors offer this under Save As or Encoding)"
+	switch {
+	case bytes.HasPrefix(data, utf8BOM):
+		return data[len(utf8BOM):], ""
+	case bytes.HasPrefix(data, []byte{0xFF, 0xFE, 0, 0}), bytes.HasPrefix(data, []byte{0, 0, 0xFE, 0xFF}):
+		return nil, "the file is encoded as UTF-32" + saveAs
+	case bytes.HasPrefix(data, []byte{0xFE, 0xFF}):
+		return nil, "the file is encoded as UTF-16 (big-endian)" + saveAs
+	case bytes.HasPrefix(data, []byte{0xFF, 0xFE}):
+		return nil, "the file is encoded as UTF-16 (little-endian)" + saveAs
+	case len(data) >= 4 && data[0] == 0 && data[1] != 0 && data[2] == 0:
+		return nil, "the file is encoded as UTF-16 (big-endian, no byte-order mark)" + saveAs
+	case len(data) >= 4 && data[0] != 0 && data[1] == 0 && data[3] == 0:
+		return nil, "the file is encoded as UTF-16 (little-endian, no byte-order mark)" + saveAs
+	}
+	return data, ""
 }
