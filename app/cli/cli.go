@@ -106,16 +106,28 @@ func library(o *options) (*fluids.Library, error) {
 	if path == "" {
 		return lib, nil
 	}
+	// A stat before opening: opening a named pipe would wait for ever.
+	info, err := os.Stat(path)
+	if err != nil {
+		return nil, fmt.Errorf("--fluids %s: %v", path, plainError(err))
+	}
+	if !info.Mode().IsRegular() {
+		return nil, fmt.Errorf("--fluids %s: is not an ordinary file (a folder, named pipe or device); give a fluid file", path)
+	}
 	f, err := os.Open(path)
 	if err != nil {
-		return nil, fmt.Errorf("--fluids: %w", err)
+		return nil, fmt.Errorf("--fluids %s: %v", path, plainError(err))
 	}
 	defer f.Close()
 	extra, err := fluids.LoadUserFluids(f)
 	if err != nil {
 		return nil, fmt.Errorf("--fluids %s: %w", path, err)
 	}
-	return lib.With(extra...), nil
+	out, err := lib.Extend(extra...)
+	if err != nil {
+		return nil, fmt.Errorf("--fluids %s: %w", path, err)
+	}
+	return out, nil
 }
 
 // usageError prints a usage problem and returns ExitUsage.
