@@ -144,6 +144,27 @@ func (c *canvas) setFont(f face, sizePt float64) {
 // textWidth is the width of s in the current font, in mm.
 func (c *canvas) textWidth(s string) float64 { return c.pdf.GetStringWidth(s) }
 
+// prefixWidths returns, for each k from 0 to len(r), the width in mm of
+// r[:k] in the current font, measuring each character once. The library
+// adds the widths of characters without kerning, so these agree with
+// textWidth.
+func (c *canvas) prefixWidths(r []rune) []float64 {
+	_, unit := c.pdf.GetFontSize()
+	out := make([]float64, len(r)+1)
+	sum := 0
+	cache := map[rune]int{}
+	for i, ch := range r {
+		u, ok := cache[ch]
+		if !ok {
+			u = c.pdf.GetStringSymbolWidth(string(ch))
+			cache[ch] = u
+		}
+		sum += u
+		out[i+1] = float64(sum) * unit / 1000
+	}
+	return out
+}
+
 // drawText writes s with its baseline starting at (x, y).
 func (c *canvas) drawText(x, y float64, s string) {
 	if s != "" {
