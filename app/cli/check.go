@@ -229,7 +229,9 @@ func isDir(p string) bool {
 }
 
 func reportOptions(o *options) (report.Options, error) {
-	if r := o.value("reviewer", ""); utf8.RuneCountInString(r) > designfile.MaxNameLength {
+	if r := o.value("reviewer", ""); !utf8.ValidString(r) {
+		return report.Options{}, fmt.Errorf("--reviewer: the name is not valid UTF-8 text")
+	} else if utf8.RuneCountInString(r) > designfile.MaxNameLength {
 		return report.Options{}, fmt.Errorf("--reviewer: the name is %d characters long; at most %d are accepted", utf8.RuneCountInString(r), designfile.MaxNameLength)
 	}
 	ro := report.Options{Units: o.value("units", "si"), Paper: o.value("paper", "a4")}

@@ -60,3 +60,16 @@ func TestPDFModes(t *testing.T) {
 		}
 	}
 }
+
+// TestReviewerNotUTF8: a reviewer name that is not UTF-8 is a usage error
+// naming the flag, and no record is written.
+func TestReviewerNotUTF8(t *testing.T) {
+	out := filepath.Join(t.TempDir(), "r.pdf")
+	code, _, errs := run("check", "testdata/good.json", "--reviewer", "R\xff", "--pdf", out)
+	if code != ExitUsage || !strings.Contains(errs, "--reviewer") {
+		t.Errorf("exit %d, %s", code, errs)
+	}
+	if _, err := os.Stat(out); err == nil {
+		t.Error("a record was written")
+	}
+}

@@ -52,11 +52,10 @@ func writeAtomic(path string, perm fs.FileMode, backup bool, write func(io.Write
 		return &FileError{File: path, Problem: fmt.Sprintf("cannot be written: %s is not a folder", dir)}
 	}
 	CleanTemporaries(path)
-	tmp, tmpName, err := createTemp(dir, base, perm)
+	tmp, tmpName, unlock, err := createTemp(dir, base, perm)
 	if err != nil {
 		return pathError(path, "cannot be written", err)
 	}
-	unlock := lockFile(tmp)
 	renamed := false
 	defer func() {
 		if !renamed {
@@ -94,22 +93,32 @@ func writeAtomic(path string, perm fs.FileMode, backup bool, write func(io.Write
 	return nil
 }
 
-// createTemp creates a new temporary file for base in dir with perm (less
-// the umask), named so that CleanTemporaries recognises it.
-func createTemp(dir, base string, perm fs.FileMode) (*os.File, string, error) {
+// createTemp creates and locks a new temporary file for base in dir with
+// perm (less the umask), named so that CleanTemporaries recognises it.
+func createTemp(dir, base string, perm fs.FileMode) (*os.File, string, func(), error) {
 	for range 100 {
 		var b [8]byte
 		if _, err := rand.Read(b[:]); err != nil {
-			return nil, "", err
+			return nil, "", nil, err
 		}
 		name := filepath.Join(dir, "."+base+"."+hex.EncodeToString(b[:])+tempSuffix)
 		f, err := os.OpenFile(name, os.O_RDWR|os.O_CREATE|os.O_EXCL, perm)
 		if errors.Is(err, fs.ErrExist) {
 			continue
 		}
-		return f, name, err
+		if err != nil {
+			return nil, "", nil, err
+		}
+		unlock, kept := lockFile(f, name)
+		if !kept {
+			// Another writer's cleaning removed it before the lock was
+			// taken; make another.
+			f.Close()
+			continue
+		}
+		return f, name, unlock, nil
 	}
-	return nil, "", errors.New("no free temporary file name")
+	return nil, "", nil, errors.New("no free temporary file name")
 }
 
 // CleanTemporaries removes the temporary files that WriteFile and Save
@@ -146,10 +155,18 @@ func CleanTemporaries(path string) int {
 		if !isDigits(middle) {
 			continue
 		}
-		if inUse(filepath.Join(dir, owner)) {
+		if owner != name {
+			// A staged backup: left over when its writer's temporary is
+			// gone or no longer held.
+			if inUse(filepath.Join(dir, owner)) {
+				continue
+			}
+			if os.Remove(filepath.Join(dir, name)) == nil {
+				removed++
+			}
 			continue
 		}
-		if os.Remove(filepath.Join(dir, name)) == nil {
+		if removeIfUnheld(filepath.Join(dir, name)) {
 			removed++
 		}
 	}

@@ -12,7 +12,16 @@ import (
 const staleAfter = 10 * time.Minute
 
 // lockFile does nothing where advisory locks are not available.
-func lockFile(*os.File) func() { return func() {} }
+func lockFile(*os.File, string) (func(), bool) { return func() {}, true }
+
+// removeIfUnheld removes the temporary file at path unless it may still
+// be in use.
+func removeIfUnheld(path string) bool {
+	if inUse(path) {
+		return false
+	}
+	return os.Remove(path) == nil
+}
 
 // inUse reports whether a temporary file may still be in use: without
 // locks, any file younger than staleAfter counts as in use.
