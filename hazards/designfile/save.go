@@ -7,7 +7,6 @@ import (
 	"io/fs"
 	"os"
 	"runtime"
-	"strings"
 )
 
 // BackupSuffix is appended to a file's path to name the copy of its
@@ -89,10 +88,6 @@ func save(path string, f *File, wrap func(io.Writer) io.Writer) error {
 		}
 		return nil
 	})
-	var fe *FileError
-	if errors.As(err, &fe) && fe.File == path && !strings.Contains(fe.Problem, "not saved") {
-		fe.Problem += "; not saved"
-	}
 	return err
 }
 
