@@ -16,6 +16,8 @@ import (
 	"syscall"
 	"testing"
 	"time"
+
+	"ullage/hazards/designfile"
 )
 
 // badInputsDir holds the bad inputs and their MANIFEST.
@@ -106,7 +108,7 @@ func snapshot(t *testing.T, dir string) map[string]fileState {
 }
 
 // makeSpecialFiles adds what a repository cannot hold: named pipes,
-// links and a folder named like a PDF.
+// links, a folder named like a PDF and an oversized file.
 func makeSpecialFiles(t *testing.T, dir string) {
 	t.Helper()
 	for _, p := range []string{"pipe.json", "pipe.pdf", "folder-with-pipe/x.json"} {
@@ -125,6 +127,10 @@ func makeSpecialFiles(t *testing.T, dir string) {
 		t.Fatal(err)
 	}
 	if err := os.Link(filepath.Join(dir, "good.json"), filepath.Join(dir, "hardlink-to-good.json")); err != nil {
+		t.Fatal(err)
+	}
+	big := bytes.Repeat([]byte(" "), designfile.MaxFileBytes+1)
+	if err := os.WriteFile(filepath.Join(dir, "big.json"), big, 0o644); err != nil {
 		t.Fatal(err)
 	}
 }
