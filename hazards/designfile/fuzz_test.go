@@ -56,12 +56,12 @@ func FuzzDecode(f *testing.F) {
 var valueRE = regexp.MustCompile(`:("(?:[^"\\\\]|\\\\.)*"|-?[0-9][0-9.eE+-]*|true|false|null|\\[\\])`)
 
 // FuzzDecodeValue puts a fuzzed JSON literal in place of the n-th value
-// of a valid design file (the single-design sheet, the smallest file that
-// holds every design field, a third the size of the
-// two-revision file) and decodes the result: it reaches the range checks
-// of every field with inputs of a few bytes, so the fuzzer never stalls
-// minimising kilobytes. Decode never panics, and whatever it
-// accepts re-encodes to the same fingerprints.
+// of a valid design file (the single-design sheet: the smallest file that
+// holds every design field, a third the size of the two-revision file)
+// and decodes the result. It reaches the range checks of every field with
+// inputs of a few bytes, so the fuzzer never stalls minimising kilobytes.
+// Decode never panics, and whatever it accepts re-encodes to the same
+// fingerprints.
 func FuzzDecodeValue(f *testing.F) {
 	var compact bytes.Buffer
 	if err := json.Compact(&compact, readFixture(f, fixtureSingleSheet)); err != nil {
