@@ -1,10 +1,12 @@
 package cli
 
 import (
+	"errors"
 	"math"
 
 	"ullage/fluids/units"
 	"ullage/hazards"
+	"ullage/hazards/designfile"
 	"ullage/hazards/tolerance"
 )
 
@@ -50,6 +52,39 @@ type designJSON struct {
 	// SealResidualStressMPa is the residual stress used at the seal; null
 	// when none is given.
 	SealResidualStressMPa *float64 `json:"seal_residual_stress_mpa"`
+}
+
+// failedJSONEntry is the JSON form of an input that could not be
+// assessed: {"file": ..., "verdict": "error", "error": {"field": ...,
+// "message": ...}}.
+type failedJSONEntry struct {
+	File    string    `json:"file"`
+	Verdict string    `json:"verdict"`
+	Error   errorJSON `json:"error"`
+}
+
+// errorJSON says why an input could not be assessed: the field path in
+// the file (empty when the file as a whole is at fault), its line when
+// known, and the full message.
+type errorJSON struct {
+	Field   string `json:"field"`
+	Line    int    `json:"line,omitempty"`
+	Message string `json:"message"`
+}
+
+// failedJSON describes err, the reason the input at path was not
+// assessed.
+func failedJSON(path string, err error) failedJSONEntry {
+	e := errorJSON{Message: err.Error()}
+	var fe *designfile.FileError
+	var ie *hazards.InputError
+	switch {
+	case errors.As(err, &fe):
+		e.Field, e.Line = fe.Field, fe.Line
+	case errors.As(err, &ie):
+		e.Field = "design." + ie.Field
+	}
+	return failedJSONEntry{File: path, Verdict: verdictError, Error: e}
 }
 
 func round(x float64, digits int) float64 {
