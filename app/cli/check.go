@@ -265,7 +265,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string) {
 	for _, c := range results {
 		a := c.assessment
 		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
-			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a.BurstSafetyFactor))
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a))
 	}
 }
 
@@ -309,11 +309,16 @@ func trim(s string, n int) string {
 	return string([]rune(s)[:n-1]) + "…"
 }
 
-func sfText(x float64) string {
-	if x >= hazards.SafetyFactorCap {
-		return fmt.Sprintf(">%g", float64(hazards.SafetyFactorCap))
+// sfText is the burst safety factor for the summary table: "none" when
+// nothing loads the vessel, "≥" before a capped factor.
+func sfText(a *hazards.Assessment) string {
+	switch {
+	case !a.HasBurstLoad():
+		return "none"
+	case a.BurstSafetyFactorBound == hazards.AtLeast:
+		return fmt.Sprintf("≥%g", a.BurstSafetyFactor)
 	}
-	return fmt.Sprintf("%.2f", x)
+	return fmt.Sprintf("%.2f", a.BurstSafetyFactor)
 }
 
 func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {
