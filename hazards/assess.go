@@ -320,6 +320,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 // the largest x with gap(x) ≤ 0. When gap(hi) ≤ 0 it returns hi,
 // BoundAbove; when gap(lo) > 0 it returns lo, BoundBelow.
 func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *solve.Root, error) {
+	gap = unsafeWhereUnknown(gap)
 	gLo, gHi := gap(lo), gap(hi)
 	if math.IsNaN(gLo) || math.IsNaN(gHi) {
 		return 0, "", nil, fmt.Errorf("the model cannot be evaluated at %g or %g", lo, hi)
@@ -338,6 +339,20 @@ func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *s
 		return r.X, BoundFound, &r, nil
 	}
 	return r.X, BoundFound, &r, nil
+}
+
+// unsafeWhereUnknown wraps a gap function so that where the model cannot
+// be evaluated (a NaN, as a hair from the critical point) the criterion
+// counts as failed: a limit is never placed where the state is unknown
+// (common practice: what cannot be shown safe is not safe).
+func unsafeWhereUnknown(gap func(float64) float64) func(float64) float64 {
+	return func(x float64) float64 {
+		g := gap(x)
+		if math.IsNaN(g) || math.IsInf(g, 0) {
+			return 1
+		}
+		return g
+	}
 }
 
 func (a *Assessment) rupture(sub *fluids.Substance) {
