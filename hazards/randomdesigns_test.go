@@ -156,7 +156,11 @@ func TestRandomValidDesigns(t *testing.T) {
 			r := rand.New(rand.NewPCG(20261202, uint64(w)))
 			var tl designTally
 			for tl.valid < n/workers+btoi(w < n%workers) {
+				before := tl.valid
 				tl.check(randomValidDesign(r, subs[r.IntN(len(subs))]), lib)
+				if tl.valid != before && tl.valid%50000 == 0 {
+					t.Logf("worker %d: %d valid designs so far: %d engine errors, %d non-finite, %d above the bounds", w, tl.valid, tl.engineErrors, tl.nonFinite, tl.overBound)
+				}
 			}
 			mu.Lock()
 			total.valid += tl.valid
