@@ -60,7 +60,6 @@ const (
 	CriterionNoLimit        = "exposure-no-published-limit"
 	CriterionFlammability   = "flammability"
 	CriterionCorrelationUse = "correlation-range"
-	CriterionModel          = "model-evaluation"
 )
 
 // Direction says which way a finding's limit holds.
@@ -266,7 +265,7 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 
 func sortFindings(fs []Finding) {
 	order := map[string]int{
-		CriterionModel: -1, CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionBurstWorst: 3, CriterionFailure: 4, CriterionImplosion: 5,
+		CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionBurstWorst: 3, CriterionFailure: 4, CriterionImplosion: 5,
 		CriterionIDLH: 6, CriterionCeiling: 7, CriterionSTEL: 8, CriterionTWA: 9, CriterionNoLimit: 11,
 		CriterionFlammability: 12, CriterionCorrelationUse: 13,
 	}

@@ -391,7 +391,6 @@ var findingDeps = map[string][]string{
 	CriterionUllageWorst:    {"state_worst", "state_hot"},
 	CriterionBurst:          {"burst_safety_factor", "long_term_burst", "state_hot"},
 	CriterionBurstWorst:     {"burst_safety_factor_worst", "state_worst", "state_hot"},
-	CriterionModel:          {"state_hot"},
 	CriterionFailure:        {"failure_probability", "long_term_burst"},
 	CriterionImplosion:      {"implosion_safety_factor", "state_cold"},
 	CriterionNoLimit:        {"exposure_peak"},

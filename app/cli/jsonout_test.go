@@ -36,7 +36,7 @@ func assessForJSON(t *testing.T, d hazards.Design) map[string]any {
 func jsonDesign() hazards.Design {
 	return hazards.Design{
 		Fluid: "n-hexane", FillMassKg: 0.0023,
-		Vessel: hazards.Vessel{Parts: []hazards.Part{{Name: "bulb", Shape: hazards.ShapeSphere, OuterDiameterM: 0.04, WallThicknessM: 0.0012, WallToleranceM: 0.0002}}},
+		Vessel:              hazards.Vessel{Parts: []hazards.Part{{Name: "bulb", Shape: hazards.ShapeSphere, OuterDiameterM: 0.04, WallThicknessM: 0.0012, WallToleranceM: 0.0002}}},
 		SealingTemperatureK: units.CelsiusToKelvin(20), HottestK: units.CelsiusToKelvin(40), ColdestK: units.CelsiusToKelvin(0),
 		AmbientPressurePa: 101325, Glass: hazards.GlassChoice{ID: "soda-lime-annealed"}, ServiceLifeYears: 10, HoursAtHottest: 1000,
 		Room:     hazards.Room{VolumeM3: 3, AirChangesPerHour: 0.5, MixingFactor: 1, NearFieldRadiusM: 0.5, NearFieldAirSpeed: 0.05, ExposureMinutes: 480},
