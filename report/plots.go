@@ -268,7 +268,7 @@ func (w *assessmentWriter) concentrationChart() {
 	ch := chart{
 		title:  "Figure 2. Vapour concentration after a breakage",
 		x:      axis{label: "Time after the breakage (min), log scale", min: tStart, max: tEnd, log: true},
-		y:      axis{label: "Concentration (ppm), log scale", min: ylo, max: yhi, log: true},
+		y:      axis{label: "Concentration, 1-minute average (ppm), log scale", min: ylo, max: yhi, log: true},
 		series: ss,
 		lines:  lines,
 	}
