@@ -172,7 +172,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	tr.add("state_cold", a.stateStep("Vessel at the coldest temperature", a.Cold, "coldest", tr))
 	if w := a.Worst; w != nil {
 		ws := Step{Stage: StageVessel, Title: "Worst-case unit at the hottest temperature", Method: "tolerances stacked: most fill, least internal volume",
-			Equation: "m_w = m + Δm;  V_w = V − ΔV (measured volume) or V(walls + Δt) (volume from the parts); state as for the nominal unit",
+			Equation: "m_w = m + Δm;  V_w = V − ΔV (measured volume) or V(walls + Δt) − ΔV (volume from the parts); state as for the nominal unit",
 			Inputs: []Value{{Symbol: "m_w", Value: w.FillMassKg, Unit: "kg", Source: "design fill plus its tolerance"},
 				{Symbol: "V_w", Value: w.VolumeM3, Unit: "m³", Source: "design volume less its tolerance"},
 				{Symbol: "T_hot", Value: d.HottestK, Unit: "K", Source: "design input"}},
