@@ -281,7 +281,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintln(w)
 	for _, f := range a.Findings {
-		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(string(f.Status)), f.Title, f.MessageIn(unitSystem == "us"))
+		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(strings.ReplaceAll(string(f.Status), "-", " ")), f.Title, f.MessageIn(unitSystem == "us"))
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if r := c.tolerance; r != nil {
