@@ -108,7 +108,8 @@ type Criteria struct {
 	MaxFractionOfLimit       float64 `json:"max_fraction_of_limit"`
 	MaxPercentLFL            float64 `json:"max_percent_lfl"`
 	// LimitBodies lists the bodies whose limits apply (NIOSH, OSHA, EPA,
-	// AIHA, ACGIH); empty means all, and the most protective governs.
+	// AIHA, ACGIH); empty means all. Each limit is averaged over its own
+	// period and, for each kind, the largest share of its limit governs.
 	LimitBodies []string `json:"limit_bodies"`
 }
 
@@ -131,7 +132,7 @@ var DefaultCriteriaGrounds = map[string]string{
 	"min_implosion_safety_factor": "4 on the knocked-down buckling pressure: common practice, matching the burst criterion",
 	"max_failure_probability":     "1 in 10 000 units over the service life: common practice for consumer glass articles; set it to the firm's own target",
 	"min_ullage_percent":          "5 % vapour space at the hottest temperature: mirrors the 0.95 factor on liquid density in the UN packing instruction P200 filling rule for low-pressure liquefied gases (UN Model Regulations, P200 (5)(b))",
-	"max_fraction_of_limit":       "1.0: the exposure must not exceed the governing published limit",
+	"max_fraction_of_limit":       "1.0: the exposure must not exceed the governing published limit (each limit averaged over its own period; the largest share of its limit governs)",
 	"max_percent_lfl":             "25 % of the LFL: common practice for an atmosphere kept safely below flammability (NFPA 69 uses 25 % LFL for combustible-concentration control, from memory)",
 }
 

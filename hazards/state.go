@@ -238,13 +238,15 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 	lo := hi + math.Log(1e-3)
 	for i := 0; !(residual(lo) <= 0); i++ {
 		if i > 20 {
-			return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", s.Fluid().Name, t, fluids.ErrOutOfDomain)
+			// The compressed-liquid correlation cannot squeeze the liquid
+			// into the vessel (near the critical point): no bubble left.
+			return v.withoutBubble(st, sat)
 		}
 		lo += math.Log(1e-2)
 	}
 	r, err := solve.Brent(residual, lo, hi, 1e-10, 200)
 	if err != nil {
-		return st, fmt.Errorf("%s at %.2f K: gas space: %w", s.Fluid().Name, t, err)
+		return v.withoutBubble(st, sat)
 	}
 	vg := math.Exp(r.X)
 	residual(r.X)
@@ -256,5 +258,42 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 	st.VapourDensity = sat.VapourDensity
 	st.LiquidDensity = st.LiquidMassKg / (v.volume - vg)
 	st.Flags |= flags
+	return st, nil
+}
+
+// withoutBubble is the state when the gas-bubble equation has no solution
+// the correlations can give, as a hair from the critical point with a
+// liquid-like fill: liquid-full, the residual gas squeezed to a bubble of
+// negligible volume at the liquid's pressure, P = P_liquid(T, m/V); below
+// the saturated liquid density the liquid is taken as incompressible,
+// P = P_sat + nRT/V_g. The state is flagged as stretched so that the
+// findings built on it say so.
+func (v *sealedVessel) withoutBubble(st VesselState, sat fluids.Saturation) (VesselState, error) {
+	t := st.TemperatureK
+	nrt := v.gasMoles * units.GasConstant * t
+	if v.density < sat.LiquidDensity {
+		liquidVolume := (v.mass - sat.VapourDensity*v.volume) / (sat.LiquidDensity - sat.VapourDensity)
+		vg := v.volume - liquidVolume
+		st.Phase = PhaseTwoPhase
+		st.GasPressurePa = nrt / vg
+		st.PressurePa = sat.PressurePa + st.GasPressurePa
+		st.UllagePercent = 100 * vg / v.volume
+		st.LiquidMassKg = liquidVolume * sat.LiquidDensity
+		st.VapourMassKg = v.mass - st.LiquidMassKg
+		st.LiquidDensity, st.VapourDensity = sat.LiquidDensity, sat.VapourDensity
+		st.Flags |= fluids.CompressedLiquidExtrapolated
+		return st, nil
+	}
+	p, fl, err := v.singlePhase(t, sat)
+	if err != nil {
+		return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", v.fluid.Fluid().Name, t, err)
+	}
+	st.Phase = PhaseLiquidFull
+	st.PressurePa = math.Max(p, sat.PressurePa)
+	st.GasPressurePa = 0
+	st.UllagePercent = 100 * nrt / st.PressurePa / v.volume
+	st.LiquidMassKg = v.mass
+	st.LiquidDensity = v.density
+	st.Flags |= fl | fluids.CompressedLiquidExtrapolated
 	return st, nil
 }

@@ -280,7 +280,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string) {
 		}
 		a := c.assessment
 		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
-			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a.BurstSafetyFactor))
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a))
 	}
 	if failed > 0 {
 		fmt.Fprintf(w, "\nverdict: ERROR (%d of %d designs could not be assessed)\n", failed, len(results))
@@ -318,7 +318,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintln(w)
 	for _, f := range a.Findings {
-		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(string(f.Status)), f.Title, f.MessageIn(unitSystem == "us"))
+		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(strings.ReplaceAll(string(f.Status), "-", " ")), f.Title, f.MessageIn(unitSystem == "us"))
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if r := c.tolerance; r != nil {
@@ -346,11 +346,16 @@ func trim(s string, n int) string {
 	return string([]rune(s)[:n-1]) + "…"
 }
 
-func sfText(x float64) string {
-	if x >= hazards.SafetyFactorCap {
-		return fmt.Sprintf(">%g", float64(hazards.SafetyFactorCap))
+// sfText is the burst safety factor for the summary table: "none" when
+// nothing loads the vessel, "≥" before a capped factor.
+func sfText(a *hazards.Assessment) string {
+	switch {
+	case !a.HasBurstLoad():
+		return "none"
+	case a.BurstSafetyFactorBound == hazards.AtLeast:
+		return fmt.Sprintf("≥%g", a.BurstSafetyFactor)
 	}
-	return fmt.Sprintf("%.2f", x)
+	return fmt.Sprintf("%.2f", a.BurstSafetyFactor)
 }
 
 func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {
