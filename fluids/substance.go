@@ -19,6 +19,10 @@ type Substance struct {
 	// tPeak is the temperature of the densest saturated liquid (the
 	// freezing point, except for water).
 	tPeak float64
+	// peakLiquidDensity is the saturated liquid density at tPeak and
+	// maxRefDensity the top of the equation of state's density search
+	// (refMaxDensity), kg/m³; equation-of-state route only.
+	peakLiquidDensity, maxRefDensity float64
 
 	tc, pc, rhoC, tMin, molarMass float64
 	vp                            *vapourPressureCurve
@@ -108,7 +112,8 @@ func (s *Substance) RackettZ() float64 {
 // liquidDensity returns the saturated liquid density in kg/m³.
 func (s *Substance) liquidDensity(t float64) float64 {
 	if s.ref != nil {
-		return s.refSaturation(t).LiquidDensity
+		rl, _ := s.ref.table.densities(t)
+		return rl * s.molarMass
 	}
 	d, _ := s.liquid.density(t)
 	return d
@@ -148,7 +153,7 @@ func (s *Substance) SaturationPressure(t float64) (float64, Flags, error) {
 		return 0, 0, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
 	}
 	if s.ref != nil {
-		sat := s.refSaturation(t)
+		sat := s.refSaturationNoCp(t)
 		return sat.PressurePa, sat.Flags, nil
 	}
 	lnP, ext := s.vp.lnP(t)

@@ -1,0 +1,49 @@
+package tolerance
+
+import (
+	"bytes"
+	"testing"
+
+	"ullage/assets"
+	"ullage/hazards"
+	"ullage/hazards/designfile"
+)
+
+// studyKind is one kind of design the speed benchmarks and the fast-path
+// check cover.
+type studyKind struct {
+	name   string
+	design hazards.Design
+	// spreadK is the ± spread of the hottest temperature studied.
+	spreadK float64
+}
+
+// studyKinds returns the three kinds of design:
+//
+//   - "passes": the bundled example's revision B, which keeps its vapour
+//     space and passes;
+//   - "liquid-full": the bundled example's revision A, which goes
+//     liquid-full in a hot car with residual gas in the bubble (the
+//     gas-bubble solve at every unit);
+//   - "vapour": vapour_bulb.json, 0.3 g of dichloromethane in the
+//     ornament's bulbs, all of it vapour near the hottest temperature, so
+//     that the units fall on both sides of the dew point.
+func studyKinds(t testing.TB) []studyKind {
+	t.Helper()
+	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rev := func(label string) hazards.Design {
+		r, err := f.Find(label)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return r.Design
+	}
+	return []studyKind{
+		{"passes", rev("B"), 5},
+		{"liquid-full", rev("A"), 5},
+		{"vapour", loadDesign(t, "vapour_bulb.json"), 5},
+	}
+}
