@@ -354,3 +354,43 @@ func (s *Substance) IsochoricSlope(t, rho float64) (float64, error) {
 	}
 	return (b - a) / h, nil
 }
+
+// Isotherm is a fluid's reference equation of state prepared at one
+// temperature, for solvers that evaluate many densities at that
+// temperature: the temperature factors of every term are computed once.
+// The zero value is not usable; see Substance.PrepareIsotherm.
+type Isotherm struct {
+	s *Substance
+	t float64
+	c tauCache
+}
+
+// PrepareIsotherm prepares it for temperature t (K) and reports whether
+// the fluid has a reference equation of state; on the correlation route
+// it returns false and leaves it unusable.
+func (s *Substance) PrepareIsotherm(t float64, it *Isotherm) bool {
+	if s == nil || s.ref == nil {
+		return false
+	}
+	it.s, it.t = s, t
+	s.ref.h.prepareTau(s.ref.h.tr/t, &it.c)
+	return true
+}
+
+// PressureSlope returns the equation's pressure P(T, ρ) in Pa and its
+// slope (∂P/∂ρ)_T in Pa per kg/m³ at density rho (kg/m³), without any
+// phase test: the same pressure SinglePhasePressure gives for a
+// single-phase state.
+func (it *Isotherm) PressureSlope(rho float64) (p, dpdrho float64) {
+	s := it.s
+	st := s.ref.h.stateCached(it.t, rho/s.molarMass, &it.c)
+	return st.p, st.dpdrho / s.molarMass
+}
+
+// Flags returns the flags CompressedLiquidDensity reports for a liquid
+// at pressure p (Pa) on this isotherm.
+func (it *Isotherm) Flags(p float64) Flags { return it.s.refFlags(it.t, p) }
+
+// MaxDensity returns the top of the density range CompressedLiquidDensity
+// searches, in kg/m³.
+func (it *Isotherm) MaxDensity() float64 { return it.s.maxRefDensity }
