@@ -96,6 +96,14 @@ func (s *Substance) CriticalDensity() float64 { return s.rhoC }
 // accept: the freezing (triple) point in K.
 func (s *Substance) MinTemperature() float64 { return s.tMin }
 
+// DensestLiquidTemperature returns the temperature (K) of the densest
+// saturated liquid: the freezing point for every fluid but water, whose
+// maximum lies near 4 °C. Above it the saturated liquid density falls
+// steadily to the critical density, so a vessel at a temperature t at or
+// above it has gone liquid-full (LiquidFullTemperature below t) exactly
+// when its fill density is at or above the saturated liquid density at t.
+func (s *Substance) DensestLiquidTemperature() float64 { return s.tPeak }
+
 // MolarMass returns the molar mass in kg/mol.
 func (s *Substance) MolarMass() float64 { return s.molarMass }
 

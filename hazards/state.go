@@ -81,12 +81,19 @@ func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambie
 		return nil, fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
 			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume)}, ErrOverfilled)
 	}
-	gasSpace := volume
+	v.sealGas(sat, residualPa, sealK)
+	return v, nil
+}
+
+// sealGas sets the moles of residual gas sealed in at residualPa and
+// sealK, where sat is the saturated state: the gas fills the space the
+// liquid leaves.
+func (v *sealedVessel) sealGas(sat fluids.Saturation, residualPa, sealK float64) {
+	gasSpace := v.volume
 	if v.density > sat.VapourDensity {
-		gasSpace = (sat.LiquidDensity*volume - mass) / (sat.LiquidDensity - sat.VapourDensity)
+		gasSpace = (sat.LiquidDensity*v.volume - v.mass) / (sat.LiquidDensity - sat.VapourDensity)
 	}
 	v.gasMoles = residualPa * gasSpace / (units.GasConstant * sealK)
-	return v, nil
 }
 
 // liquidFullTemperature returns the temperature at which the saturated

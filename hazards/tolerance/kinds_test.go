@@ -25,9 +25,10 @@ type studyKind struct {
 //   - "liquid-full": the bundled example's revision A, which goes
 //     liquid-full in a hot car with residual gas in the bubble (the
 //     gas-bubble solve at every unit);
-//   - "vapour": vapour_bulb.json, 0.3 g of dichloromethane in the
-//     ornament's bulbs, all of it vapour near the hottest temperature, so
-//     that the units fall on both sides of the dew point.
+//   - "vapour": vapour_bulb.json (invented), 0.27 g of acetone in the
+//     ornament's bulbs and tube, evacuated: the fill is all vapour from
+//     about the hottest temperature up (349 K), so the units fall on both
+//     sides of the dew point and most take the single-phase vapour state.
 func studyKinds(t testing.TB) []studyKind {
 	t.Helper()
 	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
