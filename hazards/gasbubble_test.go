@@ -85,3 +85,30 @@ func TestGasBubbleSolversAgree(t *testing.T) {
 		t.Errorf("only %d states compared", checked)
 	}
 }
+
+// The gas-bubble solver's evaluations per state, for the record.
+func BenchmarkGasBubbleEOS(b *testing.B) {
+	lib := testLibrary(b)
+	s, err := lib.Lookup("ethanol")
+	if err != nil {
+		b.Fatal(err)
+	}
+	for _, c := range []struct {
+		name string
+		frac float64
+	}{{"two-phase", 0.6}, {"squeezed", 0.97}} {
+		b.Run(c.name, func(b *testing.B) {
+			sat, _ := s.Saturation(263.15)
+			v, err := newSealedVessel(s, c.frac*sat.LiquidDensity*50e-6, 50e-6, 263.15, 300, 101325)
+			if err != nil {
+				b.Fatal(err)
+			}
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := v.state(349.15); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

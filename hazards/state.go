@@ -355,8 +355,18 @@ func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, n
 			if converged {
 				break
 			}
+			newton := false
 			if isFinite(f) && k > 0 {
 				next = y - f/(k*slope(vg)*vg+gas)
+				newton = next > yLo && next < yHi
+			}
+			if newton && math.Abs(next-y) <= 1e-10 {
+				// Newton converges quadratically: after a step of at most
+				// Brent's tolerance (1e-10 in ln V_g) the error left is of
+				// the order of its square.
+				y, converged = next, true
+				vg = math.Exp(y)
+				break
 			}
 			if !(next > yLo && next < yHi) {
 				if math.IsInf(yLo, -1) {
