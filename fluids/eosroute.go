@@ -161,7 +161,8 @@ func (s *Substance) refDensity(t, p, guess, lo, hi float64) (float64, error) {
 	var c tauCache
 	h.prepareTau(h.tr/t, &c)
 	for i := 0; i < 100; i++ {
-		st := h.stateCached(t, rho/m, &c)
+		var st stateAt
+		st.p, st.dpdrho = h.pressureSlopeCached(t, rho/m, &c)
 		f := st.p - p
 		if math.Abs(f) <= 1e-12*p {
 			return rho, nil
@@ -383,8 +384,8 @@ func (s *Substance) PrepareIsotherm(t float64, it *Isotherm) bool {
 // single-phase state.
 func (it *Isotherm) PressureSlope(rho float64) (p, dpdrho float64) {
 	s := it.s
-	st := s.ref.h.stateCached(it.t, rho/s.molarMass, &it.c)
-	return st.p, st.dpdrho / s.molarMass
+	p, dpdrho = s.ref.h.pressureSlopeCached(it.t, rho/s.molarMass, &it.c)
+	return p, dpdrho / s.molarMass
 }
 
 // Flags returns the flags CompressedLiquidDensity reports for a liquid
