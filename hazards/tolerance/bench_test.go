@@ -65,3 +65,19 @@ func BenchmarkEvaluateUnit(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkAssessKinds times the full assessment of each kind of study
+// design (studyKinds), the reference the fast-path check compares with.
+func BenchmarkAssessKinds(b *testing.B) {
+	lib := testLibrary(b)
+	for _, k := range studyKinds(b) {
+		b.Run(k.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := hazards.Assess(k.design, lib); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

@@ -28,7 +28,7 @@ type studyKind struct {
 //   - "vapour": vapour_bulb.json (invented), 0.27 g of acetone in the
 //     ornament's bulbs and tube, evacuated: the fill is all vapour from
 //     about the hottest temperature up (349 K), so the units fall on both
-//     sides of the dew point and most take the single-phase vapour state.
+//     sides of the dew point (about a third all vapour).
 func studyKinds(t testing.TB) []studyKind {
 	t.Helper()
 	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
