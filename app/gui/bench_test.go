@@ -12,7 +12,7 @@ import (
 // goroutine, sampling both charts, and applying the results to the
 // verdict, the findings list, the key numbers and the redrawn charts.
 func BenchmarkEditToFindings(b *testing.B) {
-	h := newHarness(b)
+	h := newHarnessIn(b, b.TempDir())
 	f := h.field("fill_mass_kg")
 	values := []string{"20", "21"}
 	// Render once so every widget has its renderer, as on screen.
@@ -32,7 +32,7 @@ func BenchmarkEditToFindings(b *testing.B) {
 // BenchmarkEvaluate times the background part alone: the assessment and
 // the sampling of both charts.
 func BenchmarkEvaluate(b *testing.B) {
-	h := newHarness(b)
+	h := newHarnessIn(b, b.TempDir())
 	d, lib := h.s.doc.Work, h.s.lib
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -46,7 +46,7 @@ func BenchmarkEvaluate(b *testing.B) {
 // BenchmarkChartRedraw times rebuilding the pressure chart's canvas
 // objects for new results.
 func BenchmarkChartRedraw(b *testing.B) {
-	h := newHarness(b)
+	h := newHarnessIn(b, b.TempDir())
 	c := newChart()
 	w := test.NewTempWindow(b, c)
 	w.Resize(w.Canvas().Size().AddWidthHeight(600, 300))
