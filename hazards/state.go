@@ -282,6 +282,11 @@ func (v *sealedVessel) withGasBubbleBrent(st VesselState, sat fluids.Saturation,
 	return st, nil
 }
 
+// newtonStopStep is the Newton step in ln V_g below which the gas-bubble
+// solver stops: its square, 1e-12, is far below the 1e-10 in ln V_g that
+// the general solver (Brent) is asked for.
+const newtonStopStep = 1e-6
+
 // withGasBubbleEOS solves the gas-bubble equation of withGasBubble on the
 // equation-of-state route, where the liquid's pressure P(T, ρ) and its
 // slope are explicit. Writing the liquid density as a function of the gas
@@ -360,10 +365,10 @@ func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, n
 				next = y - f/(k*slope(vg)*vg+gas)
 				newton = next > yLo && next < yHi
 			}
-			if newton && math.Abs(next-y) <= 1e-10 {
-				// Newton converges quadratically: after a step of at most
-				// Brent's tolerance (1e-10 in ln V_g) the error left is of
-				// the order of its square.
+			if newton && math.Abs(next-y) <= newtonStopStep {
+				// Newton converges quadratically: the error left after
+				// this step is about (F''/2F')·Δy², and F varies on a
+				// scale of order one in ln V_g, so under 1e-11.
 				y, converged = next, true
 				vg = math.Exp(y)
 				break
