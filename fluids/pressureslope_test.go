@@ -38,3 +38,26 @@ func TestPressureSlopeMatchesFullEvaluation(t *testing.T) {
 		t.Fatal("no fluid with an equation of state")
 	}
 }
+
+// SaturationNoHeatCapacity is Saturation without the heat capacity: every
+// other field the same, bit for bit, and the same errors.
+func TestSaturationNoHeatCapacity(t *testing.T) {
+	lib, err := Builtin()
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, s := range lib.All() {
+		for i := -1; i <= 21; i++ {
+			temp := s.tMin + (s.tc-s.tMin)*float64(i)/20
+			want, err1 := s.Saturation(temp)
+			got, err2 := s.SaturationNoHeatCapacity(temp)
+			if (err1 == nil) != (err2 == nil) {
+				t.Fatalf("%s at %g K: errors %v / %v", s.Fluid().ID, temp, err1, err2)
+			}
+			want.LiquidHeatCapacity = 0
+			if got != want {
+				t.Errorf("%s at %g K: %+v, want %+v", s.Fluid().ID, temp, got, want)
+			}
+		}
+	}
+}

@@ -183,6 +183,25 @@ func (s *Substance) SaturatedLiquidDensity(t float64) (float64, error) {
 	return s.liquidDensity(t), nil
 }
 
+// SaturationNoHeatCapacity is Saturation with LiquidHeatCapacity left at
+// zero, for callers that need only the pressure, the densities and the
+// flags: on the equation-of-state route the heat capacity is a table
+// series of its own.
+func (s *Substance) SaturationNoHeatCapacity(t float64) (Saturation, error) {
+	if s.ref == nil {
+		sat, err := s.Saturation(t)
+		sat.LiquidHeatCapacity = 0
+		return sat, err
+	}
+	if err := s.checkTemperature(t); err != nil {
+		return Saturation{}, err
+	}
+	if t > s.tc {
+		return Saturation{}, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
+	}
+	return s.refSaturationNoCp(t), nil
+}
+
 // Saturation returns the saturated liquid and vapour state at t (K). It
 // fails for t not finite, below the freezing point or above Tc.
 func (s *Substance) Saturation(t float64) (Saturation, error) {

@@ -117,7 +117,7 @@ func (v *sealedVessel) state(t float64) (VesselState, error) {
 		st.PressurePa += v.offsetAtCritical()
 		return st, err
 	}
-	sat, err := s.Saturation(t)
+	sat, err := s.SaturationNoHeatCapacity(t)
 	if err != nil {
 		return st, err
 	}
