@@ -339,7 +339,13 @@ func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, n
 			y = yHi
 		}
 		converged, sawAbove := false, false
-		for i := 0; i < 200; i++ {
+		if vgA > 0 && math.Abs(y-yLo) <= newtonStopStep {
+			// The start is a step from the evaluated state at V_gA,
+			// exact in the gas term and linear in the liquid's pressure:
+			// the stopping rule of the Newton steps below applies to it.
+			vg, converged = x, true
+		}
+		for i := 0; i < 200 && !converged; i++ {
 			vg = math.Exp(y)
 			p, k := iso.PressureSlope(rhoOf(vg))
 			gas := nrt / vg
