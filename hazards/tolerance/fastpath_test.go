@@ -40,6 +40,7 @@ func TestFastPathMatchesFullAssessment(t *testing.T) {
 	lib := testLibrary(t)
 	for _, k := range studyKinds(t) {
 		t.Run(k.name, func(t *testing.T) {
+			t.Parallel() // the kinds are independent; keep both cores busy
 			s, err := Settings{Samples: fastPathUnits, Seed: 11, Workers: 2, HottestSpreadK: k.spreadK}.resolved()
 			if err != nil {
 				t.Fatal(err)
