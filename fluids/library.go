@@ -146,7 +146,8 @@ var ErrFileTooLarge = errors.New("file is too large")
 // LoadUserFluids reads a person's own fluid data: either one fluid record
 // (format "ullage-fluid/1") or a collection (format
 // "ullage-user-fluids/1"). Decoding is strict: unknown fields, wrong types
-// and trailing data are refused, and every fluid must pass Validate. The
+// trailing data, a key given twice and a UTF-16 file are refused (a UTF-8
+// byte-order mark is skipped), and every fluid must pass Validate. The
 // substances returned are marked UserSupplied. Nothing is returned when
 // any fluid is bad.
 func LoadUserFluids(r io.Reader) ([]*Substance, error) {
@@ -156,6 +157,9 @@ func LoadUserFluids(r io.Reader) ([]*Substance, error) {
 	}
 	if len(b) > MaxUserFileBytes {
 		return nil, fmt.Errorf("user fluids: %w (limit %d bytes)", ErrFileTooLarge, MaxUserFileBytes)
+	}
+	if b, err = checkUserText(b); err != nil {
+		return nil, fmt.Errorf("user fluids: %w", err)
 	}
 	var head struct {
 		Format string `json:"format"`

@@ -43,6 +43,15 @@ type Assessment struct {
 	// Weibull probability of failure over the service life.
 	BurstSafetyFactor  float64
 	FailureProbability float64
+	// BurstSafetyFactorBound is AtLeast when the factor is capped at
+	// SafetyFactorCap under a real load; FailureProbabilityBound AtMost
+	// when the probability is too small to compute and a bound is given.
+	// With no burst load (HasBurstLoad false) neither number is a result.
+	BurstSafetyFactorBound  Direction
+	FailureProbabilityBound Direction
+	// WorstStrength is the weakest permitted unit's strength; nil when the
+	// design states no tolerances.
+	WorstStrength *WorstStrength
 	// RequiredSafetyFactor is the safety factor that meets both the
 	// minimum safety factor and the maximum failure probability.
 	RequiredSafetyFactor float64
@@ -110,10 +119,15 @@ const (
 type Release struct {
 	Room       Room
 	MassKg     float64
-	Peak       Exposure // highest of room peak and near-field 1-minute average
+	Peak       Exposure // highest one-minute average, room or near field
 	STEL       Exposure // 15-minute average
 	TWA8h      Exposure // 8-hour time-weighted average
 	PercentLFL float64  // of the peak; 0 when not flammable
+	// Bound is the physical ceiling every concentration is held to.
+	Bound ConcentrationBound
+	// Limits are every applicable published limit, each evaluated over
+	// its own averaging period, the governing one of each kind marked.
+	Limits []LimitResult
 	// RoomTimeConstantS is the e-folding time of the well-mixed room,
 	// k·V/Q; zero ventilation gives the cap of 1e9 s.
 	RoomTimeConstantS float64
@@ -165,9 +179,10 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	a.Parts = analyseParts(d.Vessel.Parts, &glass, over)
 	loadS := d.HoursAtHottest * 3600
 	a.Strength = glassStrength(a.Parts, &glass, loadS, d.Criteria.MinBurstSafetyFactor)
-	a.BurstSafetyFactor = safetyFactor(a.Strength.LongTermBurstPa, over)
+	a.BurstSafetyFactor, a.BurstSafetyFactorBound = boundedSafetyFactor(a.Strength.LongTermBurstPa, over)
 	m := glass.WeibullModulus.Value
-	a.FailureProbability = failureProbability(over, a.Strength.LongTermBurstPa, m)
+	a.FailureProbability, a.FailureProbabilityBound = boundedFailureProbability(over, a.Strength.LongTermBurstPa, m)
+	a.WorstStrength = a.worstStrength()
 	a.RequiredSafetyFactor = math.Max(d.Criteria.MinBurstSafetyFactor, math.Pow(-math.Log1p(-d.Criteria.MaxFailureProbability), -1/m))
 	a.ExternalLoadPa = d.AmbientPressurePa - a.Cold.PressurePa
 	a.ImplosionSafetyFactor = SafetyFactorCap
@@ -183,7 +198,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 		return nil, err
 	}
 	a.rupture(sub)
-	a.releaseModel()
+	a.releaseModel(sub)
 	a.findings()
 	a.buildTrace(sub)
 	return a, nil
@@ -206,13 +221,25 @@ func prepare(d Design, lib *fluids.Library) (*fluids.Substance, Glass, error) {
 	return sub, glass, err
 }
 
+// HasBurstLoad reports whether the vessel is above ambient pressure at the
+// hottest temperature; without a load the burst safety factor and failure
+// probability are not results.
+func (a *Assessment) HasBurstLoad() bool { return a.Hot.PressurePa > a.Design.AmbientPressurePa }
+
+// HasExternalLoad reports whether the vessel is below ambient pressure at
+// the coldest temperature; without a load the implosion safety factor is
+// not a result.
+func (a *Assessment) HasExternalLoad() bool { return a.ExternalLoadPa > 0 }
+
 // StateAt returns the vessel's state at any temperature (K) at or above
 // the fluid's freezing point, for charts and tables.
 func (a *Assessment) StateAt(t float64) (VesselState, error) { return a.vessel.state(t) }
 
 // Concentration returns the concentration in mg/m³ in a zone t seconds
-// after the breakage.
-func (a *Assessment) Concentration(z Zone, t float64) float64 { return a.release.Concentration(z, t) }
+// after the breakage as the release chart draws it: the average over the
+// minute before t, held to the physical bound. Its highest value is the
+// peak (Release.Peak).
+func (a *Assessment) Concentration(z Zone, t float64) float64 { return a.release.charted(z, t) }
 
 // AllowablePressurePa returns the absolute internal pressure at which the
 // burst safety factor equals the required one.
@@ -302,6 +329,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 // the largest x with gap(x) ≤ 0. When gap(hi) ≤ 0 it returns hi,
 // BoundAbove; when gap(lo) > 0 it returns lo, BoundBelow.
 func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *solve.Root, error) {
+	gap = unsafeWhereUnknown(gap)
 	gLo, gHi := gap(lo), gap(hi)
 	if math.IsNaN(gLo) || math.IsNaN(gHi) {
 		return 0, "", nil, fmt.Errorf("the model cannot be evaluated at %g or %g", lo, hi)
@@ -320,6 +348,20 @@ func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *s
 		return r.X, BoundFound, &r, nil
 	}
 	return r.X, BoundFound, &r, nil
+}
+
+// unsafeWhereUnknown wraps a gap function so that where the model cannot
+// be evaluated (a NaN, as a hair from the critical point) the criterion
+// counts as failed: a limit is never placed where the state is unknown
+// (common practice: what cannot be shown safe is not safe).
+func unsafeWhereUnknown(gap func(float64) float64) func(float64) float64 {
+	return func(x float64) float64 {
+		g := gap(x)
+		if math.IsNaN(g) || math.IsInf(g, 0) {
+			return 1
+		}
+		return g
+	}
 }
 
 func (a *Assessment) rupture(sub *fluids.Substance) {
@@ -352,16 +394,19 @@ func (a *Assessment) rupture(sub *fluids.Substance) {
 		f.LiquidHeatCapacity.Value/f.MolarMass.Value, hvapTb, satPa, bulk)
 }
 
-func (a *Assessment) releaseModel() {
+func (a *Assessment) releaseModel(sub *fluids.Substance) {
 	d := &a.Design
 	rel := newReleaseModel(d.FillMassKg, d.Room)
 	a.release = rel
 	mm := a.Fluid.MolarMass.Value
 	exposureS := d.Room.ExposureMinutes * 60
 	r := Release{Room: d.Room, MassKg: d.FillMassKg}
-	r.Peak = rel.exposure(0, exposureS, mm)
+	r.Bound = concentrationBound(sub, d, rel)
+	rel.capMgM3 = units.PpmToMgPerM3(r.Bound.PPM, mm)
+	r.Peak = rel.exposure(PeakAveragingS, exposureS, mm)
 	r.STEL = rel.exposure(15*60, exposureS, mm)
 	r.TWA8h = rel.exposure(8*3600, exposureS, mm)
+	r.Limits = evaluateLimits(LimitSpecs(a.Fluid, d.Criteria.LimitBodies), rel, exposureS, mm)
 	if a.Fluid.Flammability.LFLPercent != nil {
 		r.PercentLFL = r.Peak.PPM / (a.Fluid.Flammability.LFLPercent.Value * 1e4) * 100
 	}
@@ -370,4 +415,24 @@ func (a *Assessment) releaseModel() {
 		r.RoomTimeConstantS = math.Min(1/rel.roomRate, 1e9)
 	}
 	a.Release = r
+}
+
+// concentrationBound works out the physical ceiling on the concentration.
+func concentrationBound(sub *fluids.Substance, d *Design, rel *releaseModel) ConcentrationBound {
+	mm := sub.Fluid().MolarMass.Value
+	b := ConcentrationBound{RoomTemperatureK: math.Max(d.HottestK, units.CelsiusToKelvin(25)), SaturatedPPM: 1e6}
+	if b.RoomTemperatureK < sub.CriticalTemperature() {
+		if sat, err := sub.Saturation(b.RoomTemperatureK); err == nil && sat.PressurePa > 0 {
+			b.SaturatedPPM = math.Min(1e6, sat.PressurePa/d.AmbientPressurePa*1e6)
+		}
+	}
+	b.NearFieldPPM = units.MgPerM3ToPpm(rel.massMg/rel.nearVolume, mm)
+	b.PPM, b.By = 1e6, "pure vapour"
+	if b.SaturatedPPM < b.PPM {
+		b.PPM, b.By = b.SaturatedPPM, "saturated vapour"
+	}
+	if b.NearFieldPPM < b.PPM {
+		b.PPM, b.By = b.NearFieldPPM, "whole fill in the near field"
+	}
+	return b
 }

@@ -108,7 +108,8 @@ type Criteria struct {
 	MaxFractionOfLimit       float64 `json:"max_fraction_of_limit"`
 	MaxPercentLFL            float64 `json:"max_percent_lfl"`
 	// LimitBodies lists the bodies whose limits apply (NIOSH, OSHA, EPA,
-	// AIHA, ACGIH); empty means all, and the most protective governs.
+	// AIHA, ACGIH); empty means all. Each limit is averaged over its own
+	// period and, for each kind, the largest share of its limit governs.
 	LimitBodies []string `json:"limit_bodies"`
 }
 
@@ -131,20 +132,42 @@ var DefaultCriteriaGrounds = map[string]string{
 	"min_implosion_safety_factor": "4 on the knocked-down buckling pressure: common practice, matching the burst criterion",
 	"max_failure_probability":     "1 in 10 000 units over the service life: common practice for consumer glass articles; set it to the firm's own target",
 	"min_ullage_percent":          "5 % vapour space at the hottest temperature: mirrors the 0.95 factor on liquid density in the UN packing instruction P200 filling rule for low-pressure liquefied gases (UN Model Regulations, P200 (5)(b))",
-	"max_fraction_of_limit":       "1.0: the exposure must not exceed the governing published limit",
+	"max_fraction_of_limit":       "1.0: the exposure must not exceed the governing published limit (each limit averaged over its own period; the largest share of its limit governs)",
 	"max_percent_lfl":             "25 % of the LFL: common practice for an atmosphere kept safely below flammability (NFPA 69 uses 25 % LFL for combustible-concentration control, from memory)",
 }
 
+// Physical floors of the inputs: below them the models have no meaning
+// (and a value such as a denormal fill would only give NaN downstream).
+const (
+	// MinFillMassKg is the smallest fill accepted, 1 mg: the weighing
+	// resolution of a filling line is coarser than this (common practice).
+	MinFillMassKg = 1e-6
+	// MinVolumeM3 is the smallest measured internal volume accepted, 1 µL.
+	MinVolumeM3 = 1e-9
+	// MaxFluidNameLength and MaxPartNameLength bound the fluid's name and
+	// a part's name, in characters.
+	MaxFluidNameLength = 200
+	MaxPartNameLength  = 100
+)
+
 // Validate checks every input of the design and returns the first problem
 // as an *InputError naming the field, the value and what is acceptable.
-// It checks ranges only; the fluid-dependent checks (temperatures above
+// Bounds (SI): fill 1 mg to 10 kg; measured volume 0 or 1 µL to 0.1 m³;
+// outer diameter 1 mm to 2 m, wall 10 µm to 0.1 m, tube length 0.1 mm to
+// 5 m; temperatures 20 to 800 K (sealing to 600 K); residual gas 0 to
+// 200 kPa; ambient 50 to 120 kPa; service life 0.01 to 100 years; hours at
+// the hottest 0.01 h to the service life; room 0.01 to 10⁶ m³, 0 to 100
+// air changes per hour, mixing factor 1 to 20, near-field radius 1 cm to
+// 5 m, air speed 5 mm/s to 5 m/s, exposure 1 to 1440 minutes; a known room
+// preset or none. It checks ranges only; the fluid-dependent checks (temperatures above
 // the freezing point, a fill the vessel can hold) happen in Assess.
 func (d *Design) Validate() error {
 	c := &checker{}
 	if strings.TrimSpace(d.Fluid) == "" {
 		c.fail("fluid", `""`, "name a fluid from the library")
 	}
-	c.positive("fill_mass_kg", d.FillMassKg, 10, "kg")
+	c.text("fluid", d.Fluid, MaxFluidNameLength)
+	c.number("fill_mass_kg", d.FillMassKg, MinFillMassKg, 10, "kg")
 	c.number("fill_mass_tolerance_kg", d.FillMassToleranceKg, 0, d.FillMassKg, "kg (not more than the fill)")
 	d.Vessel.validate(c)
 	c.number("sealing_temperature_k", d.SealingTemperatureK, 20, 600, "K")
@@ -162,8 +185,8 @@ func (d *Design) Validate() error {
 	} else if strings.TrimSpace(d.Glass.ID) == "" {
 		c.fail("glass.id", `""`, "choose a glass from the catalogue or give a custom one")
 	}
-	c.positive("service_life_years", d.ServiceLifeYears, 100, "years")
-	c.positive("hours_at_hottest", d.HoursAtHottest, 876600, "hours")
+	c.number("service_life_years", d.ServiceLifeYears, 0.01, 100, "years")
+	c.number("hours_at_hottest", d.HoursAtHottest, 0.01, 876600, "hours")
 	if c.err == nil && d.HoursAtHottest > d.ServiceLifeYears*8766 {
 		c.fail("hours_at_hottest", d.HoursAtHottest, "cannot exceed the service life (%g h)", d.ServiceLifeYears*8766)
 	}
@@ -178,6 +201,9 @@ func (d *Design) Validate() error {
 
 func (v *Vessel) validate(c *checker) {
 	c.number("vessel.internal_volume_m3", v.InternalVolumeM3, 0, 0.1, "m³ (0 means compute from the parts)")
+	if c.err == nil && v.InternalVolumeM3 != 0 && v.InternalVolumeM3 < MinVolumeM3 {
+		c.fail("vessel.internal_volume_m3", v.InternalVolumeM3, "must be 0 (compute from the parts) or from %g to 0.1 m³", MinVolumeM3)
+	}
 	if len(v.Parts) == 0 {
 		c.fail("vessel.parts", "[]", "describe at least one sphere or tube")
 	}
@@ -186,17 +212,18 @@ func (v *Vessel) validate(c *checker) {
 	}
 	for i, p := range v.Parts {
 		f := fmt.Sprintf("vessel.parts[%d]", i)
+		c.text(f+".name", p.Name, MaxPartNameLength)
 		if p.Shape != ShapeSphere && p.Shape != ShapeTube {
 			c.fail(f+".shape", fmt.Sprintf("%q", p.Shape), "must be %q or %q", ShapeSphere, ShapeTube)
 		}
-		c.positive(f+".outer_diameter_m", p.OuterDiameterM, 2, "m")
-		c.positive(f+".wall_thickness_m", p.WallThicknessM, 0.1, "m")
+		c.number(f+".outer_diameter_m", p.OuterDiameterM, 1e-3, 2, "m")
+		c.number(f+".wall_thickness_m", p.WallThicknessM, 1e-5, 0.1, "m")
 		if c.err == nil && p.WallThicknessM >= p.OuterDiameterM/2 {
 			c.fail(f+".wall_thickness_m", p.WallThicknessM, "must be less than the outer radius (%g m)", p.OuterDiameterM/2)
 		}
 		c.number(f+".wall_tolerance_m", p.WallToleranceM, 0, p.WallThicknessM*0.5, "m (at most half the wall)")
 		if p.Shape == ShapeTube {
-			c.positive(f+".length_m", p.LengthM, 5, "m")
+			c.number(f+".length_m", p.LengthM, 1e-4, 5, "m")
 		} else {
 			c.number(f+".length_m", p.LengthM, 0, 0, "m (a sphere has no length)")
 		}
@@ -211,13 +238,26 @@ func (v *Vessel) validate(c *checker) {
 
 // Validate checks a release scenario; field prefixes error field names.
 func (r *Room) Validate(field string) error {
+	if r.PresetID != "" {
+		if _, err := LookupRoomPreset(r.PresetID); err != nil {
+			c := &checker{}
+			c.fail(field+".preset_id", fmt.Sprintf("%q", r.PresetID), "must name a room preset (%s) or be \"\" for a room of your own", roomPresetIDs())
+			return c.err
+		}
+	}
+	return r.validateRanges(field)
+}
+
+// validateRanges is Validate without the preset check, for the presets
+// themselves.
+func (r *Room) validateRanges(field string) error {
 	c := &checker{}
-	c.positive(field+".volume_m3", r.VolumeM3, 1e6, "m³")
+	c.number(field+".volume_m3", r.VolumeM3, 0.01, 1e6, "m³")
 	c.number(field+".air_changes_per_hour", r.AirChangesPerHour, 0, 100, "per hour")
 	c.number(field+".mixing_factor", r.MixingFactor, 1, 20, "(1 = perfectly mixed)")
-	c.positive(field+".near_field_radius_m", r.NearFieldRadiusM, 5, "m")
+	c.number(field+".near_field_radius_m", r.NearFieldRadiusM, 0.01, 5, "m")
 	c.number(field+".near_field_air_speed_m_s", r.NearFieldAirSpeed, 0.005, 5, "m/s")
-	c.positive(field+".exposure_minutes", r.ExposureMinutes, 1440, "minutes")
+	c.number(field+".exposure_minutes", r.ExposureMinutes, 1, 1440, "minutes")
 	if c.err == nil && NearFieldVolume(r.NearFieldRadiusM) >= r.VolumeM3/2 {
 		c.fail(field+".near_field_radius_m", r.NearFieldRadiusM, "the near-field hemisphere must be less than half the room")
 	}
@@ -236,6 +276,19 @@ func (cr *Criteria) validate(c *checker) {
 			c.fail(fmt.Sprintf("criteria.limit_bodies[%d]", i), fmt.Sprintf("%q", b), "must be one of NIOSH, OSHA, EPA, AIHA, ACGIH")
 		}
 	}
+}
+
+// roomPresetIDs lists the room presets' IDs for a message.
+func roomPresetIDs() string {
+	all, err := RoomPresets()
+	if err != nil {
+		return "none available"
+	}
+	ids := make([]string, len(all))
+	for i, p := range all {
+		ids[i] = p.ID
+	}
+	return strings.Join(ids, ", ")
 }
 
 var knownBodies = map[string]bool{"NIOSH": true, "OSHA": true, "EPA": true, "AIHA": true, "ACGIH": true}

@@ -149,28 +149,80 @@ func checkFinite(t *testing.T, a *Assessment) {
 // results, never a panic.
 func FuzzAssess(f *testing.F) {
 	d := typicalDesign()
-	f.Add(d.FillMassKg, d.Vessel.Parts[0].OuterDiameterM, d.Vessel.Parts[0].WallThicknessM, d.HottestK, d.ColdestK, d.SealingTemperatureK, d.ResidualGasPressurePa, d.Room.VolumeM3, 0)
-	f.Add(0.03, 0.04, 0.001, 400.0, 250.0, 293.0, 1000.0, 3.0, 3)
-	f.Add(math.NaN(), -1.0, 0.0, math.Inf(1), 0.0, 0.0, -5.0, 0.0, 7)
+	r, c := d.Room, d.Criteria
+	f.Add(d.FillMassKg, d.Vessel.Parts[0].OuterDiameterM, d.Vessel.Parts[0].WallThicknessM, d.HottestK, d.ColdestK, d.SealingTemperatureK, d.ResidualGasPressurePa, d.Room.VolumeM3, 0,
+		0, 1e9, r.AirChangesPerHour, r.MixingFactor, r.NearFieldRadiusM, r.NearFieldAirSpeed, r.ExposureMinutes, 0,
+		d.ServiceLifeYears, d.HoursAtHottest, c.MinBurstSafetyFactor, c.MinImplosionSafetyFactor, c.MaxFailureProbability, c.MinUllagePercent, c.MaxFractionOfLimit, c.MaxPercentLFL, uint8(0))
+	f.Add(0.03, 0.04, 0.001, 400.0, 250.0, 293.0, 1000.0, 3.0, 3,
+		2, 5e7, 4.0, 1.0, 0.5, 0.05, 15.0, 3,
+		1.0, 100.0, 2.0, 2.0, 1e-3, 0.0, 0.5, 10.0, uint8(5))
+	f.Add(math.NaN(), -1.0, 0.0, math.Inf(1), 0.0, 0.0, -5.0, 0.0, math.MinInt,
+		math.MinInt, math.Inf(-1), math.NaN(), 0.0, -1.0, 0.0, 0.0, math.MaxInt,
+		0.0, math.NaN(), 0.0, 1e300, -1.0, 100.0, 0.0, math.Inf(1), uint8(255))
+	f.Add(5e-324, 5e-324, 5e-324, 300.0, 250.0, 293.0, 0.0, 5e-324, 1,
+		1, 5e-324, 0.0, 1.0, 5e-324, 5e-324, 5e-324, 1,
+		5e-324, 5e-324, 1.0, 1.0, 1e-12, 50.0, 0.01, 1.0, uint8(31))
 	library := testLibrary(f)
 	ids := []string{}
 	for _, s := range library.All() {
 		ids = append(ids, s.Fluid().ID)
 	}
-	f.Fuzz(func(t *testing.T, fill, od, wall, hot, cold, seal, gas, room float64, fluid int) {
+	glasses, err := Glasses()
+	if err != nil {
+		f.Fatal(err)
+	}
+	presets, err := RoomPresets()
+	if err != nil {
+		f.Fatal(err)
+	}
+	bodies := []string{"NIOSH", "OSHA", "EPA", "AIHA", "ACGIH"}
+	// pick maps any int, the smallest included, to an index below n
+	// (negating math.MinInt would overflow).
+	pick := func(i, n int) int { return int(uint(i) % uint(n)) }
+	f.Fuzz(func(t *testing.T, fill, od, wall, hot, cold, seal, gas, room float64, fluid int,
+		glass int, strength, ach, mixing, nearRadius, airSpeed, exposure float64, preset int,
+		life, hours, minBurst, minImplosion, maxFailure, minUllage, maxFraction, maxLFL float64, bodyMask uint8) {
 		d := typicalDesign()
-		if fluid < 0 {
-			fluid = -fluid
-		}
-		d.Fluid = ids[fluid%len(ids)]
+		d.Fluid = ids[pick(fluid, len(ids))]
 		d.FillMassKg = fill
 		d.Vessel.Parts[0].OuterDiameterM = od
 		d.Vessel.Parts[0].WallThicknessM = wall
 		d.HottestK, d.ColdestK, d.SealingTemperatureK = hot, cold, seal
 		d.ResidualGasPressurePa = gas
 		d.Room.VolumeM3 = room
+		// The glass: a catalogue one, or a custom copy with another
+		// characteristic strength.
+		if g := pick(glass, len(glasses)+1); g < len(glasses) {
+			d.Glass = GlassChoice{ID: glasses[g].ID}
+		} else {
+			custom := glasses[0]
+			custom.ID = "fuzzed"
+			custom.CharacteristicStrength.Value = strength
+			d.Glass = GlassChoice{Custom: &custom}
+		}
+		d.Room.AirChangesPerHour, d.Room.MixingFactor = ach, mixing
+		d.Room.NearFieldRadiusM, d.Room.NearFieldAirSpeed, d.Room.ExposureMinutes = nearRadius, airSpeed, exposure
+		if p := pick(preset, len(presets)+1); p < len(presets) {
+			d.Room.PresetID = presets[p].ID
+		} else {
+			d.Room.PresetID = ""
+		}
+		d.ServiceLifeYears, d.HoursAtHottest = life, hours
+		d.Criteria = Criteria{MinBurstSafetyFactor: minBurst, MinImplosionSafetyFactor: minImplosion, MaxFailureProbability: maxFailure,
+			MinUllagePercent: minUllage, MaxFractionOfLimit: maxFraction, MaxPercentLFL: maxLFL}
+		for i, b := range bodies {
+			if bodyMask&(1<<i) != 0 {
+				d.Criteria.LimitBodies = append(d.Criteria.LimitBodies, b)
+			}
+		}
+		if bodyMask&(1<<7) != 0 {
+			d.Criteria.LimitBodies = append(d.Criteria.LimitBodies, "WHO")
+		}
 		a, err := Assess(d, library)
 		if err != nil {
+			if err.Error() == "" {
+				t.Error("empty error message")
+			}
 			return
 		}
 		checkFinite(t, a)

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"strings"
+	"unicode/utf8"
 )
 
 // ErrInvalidInput is wrapped by every error about a design's inputs.
@@ -49,6 +50,17 @@ func (c *checker) number(field string, x, lo, hi float64, unit string) {
 func (c *checker) positive(field string, x, hi float64, unit string) {
 	if !isFinite(x) || x <= 0 || x > hi {
 		c.fail(field, x, "must be greater than zero and at most %g %s", hi, unit)
+	}
+}
+
+// text requires s to be at most most characters long.
+func (c *checker) text(field, s string, most int) {
+	if n := utf8.RuneCountInString(s); n > most {
+		shown := s
+		if r := []rune(s); len(r) > 40 {
+			shown = string(r[:40]) + "…"
+		}
+		c.fail(field, fmt.Sprintf("%q", shown), "is %d characters long; at most %d are accepted", n, most)
 	}
 }
 

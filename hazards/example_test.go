@@ -51,6 +51,8 @@ func ExampleAssess() {
 	// fail    failure-probability
 	// pass    implosion-safety-factor
 	// pass    exposure-idlh
+	// not-assessed exposure-ceiling
+	// not-assessed exposure-stel
 	// caution exposure-twa
 	// pass    flammability
 }

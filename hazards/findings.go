@@ -1,6 +1,7 @@
 package hazards
 
 import (
+	"encoding/json"
 	"fmt"
 	"math"
 	"sort"
@@ -17,6 +18,10 @@ const (
 	StatusPass    Status = "pass"
 	StatusCaution Status = "caution"
 	StatusFail    Status = "fail"
+	// StatusNotAssessed: the criterion could not be applied (no published
+	// limit for the fluid); the finding says why in NotAssessed. It is no
+	// pass, but it does not change the verdict.
+	StatusNotAssessed Status = "not-assessed"
 )
 
 func (s Status) rank() int {
@@ -25,6 +30,8 @@ func (s Status) rank() int {
 		return 2
 	case StatusCaution:
 		return 1
+	case StatusNotAssessed:
+		return -1
 	}
 	return 0
 }
@@ -43,6 +50,7 @@ const (
 	CriterionUllage         = "ullage-at-hottest"
 	CriterionUllageWorst    = "ullage-worst-case-unit"
 	CriterionBurst          = "burst-safety-factor"
+	CriterionBurstWorst     = "burst-safety-factor-worst-case-unit"
 	CriterionFailure        = "failure-probability"
 	CriterionImplosion      = "implosion-safety-factor"
 	CriterionIDLH           = "exposure-idlh"
@@ -53,6 +61,41 @@ const (
 	CriterionFlammability   = "flammability"
 	CriterionCorrelationUse = "correlation-range"
 )
+
+// Direction says which way a finding's limit holds.
+type Direction string
+
+// Directions of a limit, and of a value that is a bound.
+const (
+	AtLeast Direction = "at-least"
+	AtMost  Direction = "at-most"
+)
+
+// Reason says, in words that every output prints alike, why a finding has
+// no computed value.
+type Reason string
+
+// Reasons a finding has no computed value.
+const (
+	// ReasonNoBurstLoad: the vessel is not above ambient at the hottest
+	// temperature, so nothing loads it towards bursting.
+	ReasonNoBurstLoad Reason = "no burst load"
+	// ReasonNoExternalLoad: the vessel is not below ambient at the coldest
+	// temperature, so nothing loads it towards implosion.
+	ReasonNoExternalLoad Reason = "no external load"
+	// ReasonNoPublishedLimit: no published limit of this kind for the
+	// fluid from the chosen bodies.
+	ReasonNoPublishedLimit Reason = "no published limit"
+)
+
+// Words returns the reason as every output prints it in place of a value:
+// "not assessed — no published limit", "none — no burst load".
+func (r Reason) Words() string {
+	if r == ReasonNoPublishedLimit {
+		return "not assessed — " + string(r)
+	}
+	return "none — " + string(r)
+}
 
 // Finding is the outcome of one criterion: the value found, the limit it
 // is held to, the margin (positive when on the safe side, as a fraction of
@@ -72,6 +115,33 @@ type Finding struct {
 	// Steps are the numbers of the calculation-record steps behind this
 	// finding, its own comparison step first.
 	Steps []int `json:"steps"`
+	// Direction says which way the limit holds: the value must be at
+	// least the limit, or at most.
+	Direction Direction `json:"direction"`
+	// NotApplicable, when set, says why the finding has no computed
+	// value; Value and Margin are then not results (the JSON gives null).
+	NotApplicable Reason `json:"not_applicable,omitempty"`
+	// ValueBound, when set, says the value is a bound and not a computed
+	// value: the true value is at most (or at least) Value.
+	ValueBound Direction `json:"value_bound,omitempty"`
+	// Stretched names the values behind this finding that came from a
+	// correlation used outside its published range.
+	Stretched []string `json:"stretched,omitempty"`
+}
+
+// MarshalJSON writes a finding with null value and margin when they were
+// not computed (NotApplicable set).
+func (f Finding) MarshalJSON() ([]byte, error) {
+	type plain Finding
+	out := struct {
+		plain
+		Value  *float64 `json:"value"`
+		Margin *float64 `json:"margin"`
+	}{plain: plain(f)}
+	if f.NotApplicable == "" {
+		out.Value, out.Margin = &f.Value, &f.Margin
+	}
+	return json.Marshal(out)
 }
 
 // MessageIn returns the message in US customary units when us is true,
@@ -86,7 +156,7 @@ func (f Finding) MessageIn(us bool) string {
 // atLeast returns a minimum-type finding: pass when value ≥ limit·cautionFactor,
 // caution when limit ≤ value < that, fail below the limit.
 func atLeast(id, title, unit string, value, limit, cautionFactor float64, source string) Finding {
-	f := Finding{Criterion: id, Title: title, Unit: unit, Value: value, Limit: limit, Source: source}
+	f := Finding{Criterion: id, Title: title, Unit: unit, Value: value, Limit: limit, Source: source, Direction: AtLeast}
 	f.Margin = value/limit - 1
 	switch {
 	case value < limit:
@@ -102,7 +172,7 @@ func atLeast(id, title, unit string, value, limit, cautionFactor float64, source
 // atMost returns a maximum-type finding: fail above the limit, caution
 // above limit·cautionFraction, pass otherwise.
 func atMost(id, title, unit string, value, limit, cautionFraction float64, source string) Finding {
-	f := Finding{Criterion: id, Title: title, Unit: unit, Value: value, Limit: limit, Source: source}
+	f := Finding{Criterion: id, Title: title, Unit: unit, Value: value, Limit: limit, Source: source, Direction: AtMost}
 	f.Margin = 1 - value/limit
 	switch {
 	case value > limit:
@@ -125,93 +195,66 @@ const (
 	probabilityCautionFactor = 0.1  // caution above a tenth of the allowed probability
 )
 
-// GoverningLimit returns the most protective numeric limit of the given
-// averaging (fluids.AveragingTWA, …) among the chosen bodies (all when
-// bodies is empty), and whether there is one.
-func GoverningLimit(f *fluids.Fluid, averaging string, bodies []string) (fluids.ExposureLimit, bool) {
-	var best fluids.ExposureLimit
-	found := false
-	for _, l := range f.ExposureLimits {
-		if l.Averaging != averaging || !bodyChosen(l.Body, bodies) {
-			continue
-		}
-		if !found || l.PPM < best.PPM {
-			best, found = l, true
-		}
-	}
-	return best, found
-}
-
-// GoverningLimits returns the governing limit of each averaging that has
-// one, in the order IDLH, ceiling, STEL, TWA.
-func GoverningLimits(f *fluids.Fluid, bodies []string) []fluids.ExposureLimit {
-	var out []fluids.ExposureLimit
-	for _, avg := range []string{fluids.AveragingIDLH, fluids.AveragingCeiling, fluids.AveragingSTEL, fluids.AveragingTWA} {
-		if l, ok := GoverningLimit(f, avg, bodies); ok {
-			out = append(out, l)
-		}
-	}
-	return out
-}
-
-func bodyChosen(body string, bodies []string) bool {
-	if len(bodies) == 0 {
-		return true
-	}
-	for _, b := range bodies {
-		if b == body {
-			return true
-		}
-	}
-	return false
-}
-
-// exposureFindings compares the release with every published limit.
-func exposureFindings(f *fluids.Fluid, rel *releaseModel, exposureS float64, cr Criteria) []Finding {
-	type kind struct {
-		id, averaging, title string
-	}
-	kinds := []kind{
-		{CriterionIDLH, fluids.AveragingIDLH, "Peak concentration against the IDLH"},
-		{CriterionCeiling, fluids.AveragingCeiling, "Concentration against the ceiling limit"},
-		{CriterionSTEL, fluids.AveragingSTEL, "Short-term average against the STEL"},
-		{CriterionTWA, fluids.AveragingTWA, "Time-weighted average against the TWA limit"},
+// exposureFindings gives one finding per averaging kind: the limit of that
+// kind with the largest share of its limit governs; a kind with no
+// published limit is listed as not assessed.
+func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
+	var specs []LimitSpec
+	for _, l := range r.Limits {
+		specs = append(specs, l.LimitSpec)
 	}
 	var out []Finding
-	for _, k := range kinds {
-		lim, ok := GoverningLimit(f, k.averaging, cr.LimitBodies)
-		if !ok {
+	assessed := 0
+	for _, kind := range kindsOf(specs) {
+		id, title := exposureCriterion(kind), exposureTitle(kind)
+		gov := -1
+		var names []string
+		for i, l := range r.Limits {
+			if l.Kind == kind {
+				names = append(names, fmt.Sprintf("%s %.0f %%", l.Name, 100*l.Share))
+				if l.Governs {
+					gov = i
+				}
+			}
+		}
+		if gov < 0 {
+			out = append(out, Finding{Criterion: id, Title: title, Status: StatusNotAssessed, Unit: "ppm", Direction: AtMost,
+				NotApplicable: ReasonNoPublishedLimit, Source: "none in the library for the chosen bodies",
+				Message: fmt.Sprintf("No published %s limit for %s from the chosen bodies: %s.", kind, f.Name, ReasonNoPublishedLimit.Words())})
 			continue
 		}
-		period := lim.Minutes * 60
-		if k.averaging == fluids.AveragingIDLH {
-			period = 0 // compared with the peak: IDLH is a level not to be entered at all
+		assessed++
+		lim := r.Limits[gov]
+		e := lim.Exposure
+		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
+			fmt.Sprintf("%s %g ppm: %s", lim.Name, lim.PPM, lim.Source))
+		if e.Bounded {
+			fd.ValueBound = AtMost
 		}
-		e := rel.exposure(period, exposureS, f.MolarMass.Value)
-		fd := atMost(k.id, k.title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
-			fmt.Sprintf("%s %g ppm: %s", lim.Label(), lim.PPM, lim.Source))
 		where := "the whole room, well mixed"
 		if e.Zone == NearField {
 			where = "the near field beside the breakage"
 		}
-		avg := "Peak"
-		if period > 0 {
-			avg = fmt.Sprintf("The %g-minute average", lim.Minutes)
+		avg := "The peak (highest one-minute average)"
+		if e.AveragingS > PeakAveragingS {
+			avg = fmt.Sprintf("The %g-minute average", e.AveragingS/60)
 		}
-		fd.Message = fmt.Sprintf("%s in %s: %.3g ppm against %s %s %.4g ppm (%.0f %% of the limit).",
-			avg, where, e.PPM, lim.Body, lim.Kind, lim.PPM, 100*e.PPM/lim.PPM)
+		bound := ""
+		if e.Bounded {
+			bound = fmt.Sprintf(" (held to the physical bound, %s)", r.Bound.By)
+		}
+		fd.Message = fmt.Sprintf("%s in %s: %.3g ppm%s against %s %.4g ppm (%.0f %% of the limit). Largest share of its limit governs: %s.",
+			avg, where, e.PPM, bound, lim.Name, lim.PPM, 100*lim.Share, strings.Join(names, ", "))
 		out = append(out, fd)
 	}
-	if len(out) == 0 {
+	if assessed == 0 {
 		fd := Finding{Criterion: CriterionNoLimit, Title: "Published exposure limit", Status: StatusCaution, Unit: "ppm",
-			Source: "none found in the library for the chosen bodies"}
-		e := rel.exposure(0, exposureS, f.MolarMass.Value)
-		fd.Value = e.PPM
+			Source: "none found in the library for the chosen bodies", Direction: AtMost, Value: r.Peak.PPM}
 		notes := []string{}
 		for _, n := range f.NoNumericLimit {
 			notes = append(notes, n.Body+" "+n.Kind+": "+n.Note)
 		}
-		fd.Message = fmt.Sprintf("No published numeric exposure limit applies to %s, so the release (peak %.3g ppm) cannot be judged against one; this is not a pass.", f.Name, e.PPM)
+		fd.Message = fmt.Sprintf("No published numeric exposure limit applies to %s, so the release (peak %.3g ppm) cannot be judged against one; this is not a pass.", f.Name, r.Peak.PPM)
 		if len(notes) > 0 {
 			fd.Message += " " + strings.Join(notes, " ")
 		}
@@ -222,15 +265,18 @@ func exposureFindings(f *fluids.Fluid, rel *releaseModel, exposureS float64, cr 
 
 func sortFindings(fs []Finding) {
 	order := map[string]int{
-		CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionFailure: 3, CriterionImplosion: 4,
-		CriterionIDLH: 5, CriterionCeiling: 6, CriterionSTEL: 7, CriterionTWA: 8, CriterionNoLimit: 9,
-		CriterionFlammability: 10, CriterionCorrelationUse: 11,
+		CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionBurstWorst: 3, CriterionFailure: 4, CriterionImplosion: 5,
+		CriterionIDLH: 6, CriterionCeiling: 7, CriterionSTEL: 8, CriterionTWA: 9, CriterionNoLimit: 11,
+		CriterionFlammability: 12, CriterionCorrelationUse: 13,
 	}
 	rank := func(c string) int {
 		if IsThermalShockCriterion(c) {
 			return order[CriterionImplosion] // kept after the implosion finding by the stable sort
 		}
-		return order[c]
+		if n, ok := order[c]; ok {
+			return n
+		}
+		return 10 // a further exposure kind, after the TWA
 	}
 	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i].Criterion) < rank(fs[j].Criterion) })
 }

@@ -93,10 +93,10 @@ var roomPresets = sync.OnceValues(func() ([]RoomPreset, error) {
 	for _, p := range doc.Presets {
 		field := "room_presets[" + p.ID + "]"
 		r := p.Room(480)
-		if err := r.Validate(field); err != nil {
+		if err := r.validateRanges(field); err != nil {
 			return nil, err
 		}
-		// The ranges were checked by Validate; here every value must also
+		// The ranges were checked above; here every value must also
 		// carry its source.
 		c := &checker{}
 		for _, v := range []struct {

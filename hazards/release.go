@@ -1,6 +1,7 @@
 package hazards
 
 import (
+	"fmt"
 	"math"
 
 	"ullage/fluids/units"
@@ -12,6 +13,13 @@ import (
 // so its value at the very instant of breakage is not a meaningful
 // exposure (our modelling choice, stated in every record).
 const NearFieldMinimumAverageS = 60
+
+// PeakAveragingS is the averaging time of the peak (s): the peak is the
+// highest one-minute average concentration, in the well-mixed room or the
+// near field, the shortest average the models resolve. The release chart
+// draws the same one-minute averages (Assessment.Concentration), so the
+// peak is the top of the charted curves.
+const PeakAveragingS = NearFieldMinimumAverageS
 
 // NearFieldVolume returns the volume (m³) of the near-field hemisphere of
 // radius r around a breakage on a table or floor.
@@ -56,6 +64,9 @@ type releaseModel struct {
 	lambda1, lambda2      float64 // 1/s (≤ 0)
 	nearA1, nearA2        float64 // near-field coefficients, mg/m³
 	farA                  float64 // far-field coefficient, mg/m³ (C_F = a(e^{λ1 t} − e^{λ2 t}))
+	// capMgM3 is the physical bound on any concentration (mg/m³): see
+	// ConcentrationBound. Zero means no bound has been set.
+	capMgM3 float64
 }
 
 func newReleaseModel(massKg float64, r Room) *releaseModel {
@@ -125,22 +136,28 @@ func (m *releaseModel) Average(z Zone, t float64) float64 {
 }
 
 // Exposure is the highest exposure a person could receive for one
-// averaging period, in mg/m³ and ppm, and where.
+// averaging period, in mg/m³ and ppm, and where. Bounded is true when the
+// model's value lay above the physical bound and the bound is reported
+// instead (the true value is at most the bound).
 type Exposure struct {
 	AveragingS float64
 	MgM3       float64
 	PPM        float64
 	Zone       Zone
+	Bounded    bool
 }
 
 // exposure returns the larger of the well-mixed room and near-field
-// averages over the first periodS seconds (a period of 0 means the peak),
-// for a person present exposureS seconds and averaged over periodS.
+// averages over the first periodS seconds, for a person present exposureS
+// seconds and averaged over periodS. A period at or below PeakAveragingS
+// gives the peak, the one-minute average whoever is present. The result
+// never exceeds the physical bound.
 func (m *releaseModel) exposure(periodS, exposureS, molarMass float64) Exposure {
 	room, near := 0.0, 0.0
-	if periodS <= 0 {
-		room = m.Concentration(WellMixedRoom, 0)
-		near = m.Average(NearField, NearFieldMinimumAverageS)
+	if periodS <= PeakAveragingS {
+		periodS = PeakAveragingS
+		room = m.Average(WellMixedRoom, PeakAveragingS)
+		near = m.Average(NearField, PeakAveragingS)
 	} else {
 		present := math.Min(exposureS, periodS)
 		room = m.Dose(WellMixedRoom, present) / periodS
@@ -151,6 +168,49 @@ func (m *releaseModel) exposure(periodS, exposureS, molarMass float64) Exposure 
 	if near > room {
 		e.MgM3, e.Zone = near, NearField
 	}
+	if m.capMgM3 > 0 && e.MgM3 > m.capMgM3 {
+		e.MgM3, e.Bounded = m.capMgM3, true
+	}
 	e.PPM = units.MgPerM3ToPpm(e.MgM3, molarMass)
 	return e
+}
+
+// charted returns the concentration the release chart draws (mg/m³): the
+// average over the minute before t (nothing before the breakage), held to
+// the physical bound. Its highest value, reached one minute after the
+// breakage, is the peak.
+func (m *releaseModel) charted(z Zone, t float64) float64 {
+	if !(t > 0) {
+		return 0
+	}
+	from := math.Max(t-PeakAveragingS, 0)
+	c := (m.Dose(z, t) - m.Dose(z, from)) / PeakAveragingS
+	if m.capMgM3 > 0 {
+		c = math.Min(c, m.capMgM3)
+	}
+	return math.Max(c, 0)
+}
+
+// ConcentrationBound is the physical ceiling on any vapour concentration
+// after the breakage: the smallest of the saturated-vapour concentration
+// at the room temperature (P_sat/P_ambient), all of the fill diluted in
+// the near-field volume, and 10⁶ ppm (pure vapour). A model result above
+// it is replaced by it and flagged (Exposure.Bounded).
+type ConcentrationBound struct {
+	PPM float64
+	// By names the bound that applies: "saturated vapour", "whole fill in
+	// the near field" or "pure vapour".
+	By string
+	// RoomTemperatureK is the temperature of the saturated-vapour bound:
+	// the hottest temperature of the design, but not below 25 °C, the
+	// highest saturated concentration the scenario allows (conservative);
+	// SaturatedPPM is that bound (10⁶ ppm at or above the critical point).
+	RoomTemperatureK float64
+	SaturatedPPM     float64
+	NearFieldPPM     float64
+}
+
+// exposureStepKey names the calculation step of an averaging period.
+func exposureStepKey(periodS float64) string {
+	return fmt.Sprintf("exposure_avg_%gs", periodS)
 }

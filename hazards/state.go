@@ -261,13 +261,15 @@ func (v *sealedVessel) withGasBubbleBrent(st VesselState, sat fluids.Saturation,
 	lo := hi + math.Log(1e-3)
 	for i := 0; !(residual(lo) <= 0); i++ {
 		if i > 20 {
-			return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", s.Fluid().Name, t, fluids.ErrOutOfDomain)
+			// The compressed-liquid correlation cannot squeeze the liquid
+			// into the vessel (near the critical point): no bubble left.
+			return v.withoutBubble(st, sat)
 		}
 		lo += math.Log(1e-2)
 	}
 	r, err := solve.Brent(residual, lo, hi, 1e-10, 200)
 	if err != nil {
-		return st, fmt.Errorf("%s at %.2f K: gas space: %w", s.Fluid().Name, t, err)
+		return v.withoutBubble(st, sat)
 	}
 	vg := math.Exp(r.X)
 	residual(r.X)
@@ -301,10 +303,9 @@ const newtonStopStep = 1e-6
 // inside a bracket (a bisection step whenever Newton would leave it),
 // started from the root of the quadratic that linearises P about the
 // smallest admissible gas space: one pressure evaluation per step instead
-// of a density solve.
+// of a density solve. Where the equation has no solution the equation of
+// state can give, the state is withoutBubble's, as on the general route.
 func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, nrt float64, iso *fluids.Isotherm) (VesselState, error) {
-	s := v.fluid
-	t := st.TemperatureK
 	m, vol, rv, ps := v.mass, v.volume, sat.VapourDensity, sat.PressurePa
 	rhoOf := func(vg float64) float64 { return (m - rv*vg) / (vol - vg) }
 	vgOf := func(rho float64) float64 { return (rho*vol - m) / (rho - rv) }
@@ -317,13 +318,14 @@ func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, n
 	}
 	pA, kA := iso.PressureSlope(rhoA)
 	if !isFinite(pA) || !isFinite(kA) {
-		return st, fmt.Errorf("%s at %.2f K: gas space: %w", s.Fluid().Name, t, fluids.ErrOutOfDomain)
+		return v.withoutBubble(st, sat)
 	}
 	vg := vgA
 	if vgA == 0 || pA-ps-nrt/vgA < 0 {
 		vgHi := vgOf(hi)
 		if !(vgHi > vgA) {
-			return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", s.Fluid().Name, t, fluids.ErrOutOfDomain)
+			// No solution the equation can give: as the general solver.
+			return v.withoutBubble(st, sat)
 		}
 		// Start: P ≈ pA + kA·c·(V_g − V_gA) with c = dρ/dV_g at V_gA,
 		// so a·V_g² + b·V_g − nRT = 0.
@@ -394,7 +396,8 @@ func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, n
 			y = next
 		}
 		if !converged {
-			return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", s.Fluid().Name, t, fluids.ErrOutOfDomain)
+			// No solution the equation can give: as the general solver.
+			return v.withoutBubble(st, sat)
 		}
 	}
 	st.GasPressurePa = nrt / vg
@@ -405,5 +408,42 @@ func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, n
 	st.VapourDensity = rv
 	st.LiquidDensity = st.LiquidMassKg / (vol - vg)
 	st.Flags |= iso.Flags(st.PressurePa)
+	return st, nil
+}
+
+// withoutBubble is the state when the gas-bubble equation has no solution
+// the correlations can give, as a hair from the critical point with a
+// liquid-like fill: liquid-full, the residual gas squeezed to a bubble of
+// negligible volume at the liquid's pressure, P = P_liquid(T, m/V); below
+// the saturated liquid density the liquid is taken as incompressible,
+// P = P_sat + nRT/V_g. The state is flagged as stretched so that the
+// findings built on it say so.
+func (v *sealedVessel) withoutBubble(st VesselState, sat fluids.Saturation) (VesselState, error) {
+	t := st.TemperatureK
+	nrt := v.gasMoles * units.GasConstant * t
+	if v.density < sat.LiquidDensity {
+		liquidVolume := (v.mass - sat.VapourDensity*v.volume) / (sat.LiquidDensity - sat.VapourDensity)
+		vg := v.volume - liquidVolume
+		st.Phase = PhaseTwoPhase
+		st.GasPressurePa = nrt / vg
+		st.PressurePa = sat.PressurePa + st.GasPressurePa
+		st.UllagePercent = 100 * vg / v.volume
+		st.LiquidMassKg = liquidVolume * sat.LiquidDensity
+		st.VapourMassKg = v.mass - st.LiquidMassKg
+		st.LiquidDensity, st.VapourDensity = sat.LiquidDensity, sat.VapourDensity
+		st.Flags |= fluids.CompressedLiquidExtrapolated
+		return st, nil
+	}
+	p, fl, err := v.singlePhase(t, sat)
+	if err != nil {
+		return st, fmt.Errorf("%s at %.2f K: the liquid cannot be compressed into the vessel: %w", v.fluid.Fluid().Name, t, err)
+	}
+	st.Phase = PhaseLiquidFull
+	st.PressurePa = math.Max(p, sat.PressurePa)
+	st.GasPressurePa = 0
+	st.UllagePercent = 100 * nrt / st.PressurePa / v.volume
+	st.LiquidMassKg = v.mass
+	st.LiquidDensity = v.density
+	st.Flags |= fl | fluids.CompressedLiquidExtrapolated
 	return st, nil
 }

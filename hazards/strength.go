@@ -90,6 +90,32 @@ func safetyFactor(capacity, load float64) float64 {
 	return capacity / load
 }
 
+// boundedSafetyFactor returns the safety factor and, when it is capped at
+// SafetyFactorCap, AtLeast: the true factor is at least the value. With no
+// load it returns the cap; the findings then say there is no load.
+func boundedSafetyFactor(capacity, load float64) (float64, Direction) {
+	sf := safetyFactor(capacity, load)
+	if load > 0 && sf >= SafetyFactorCap {
+		return sf, AtLeast
+	}
+	return sf, ""
+}
+
+// smallestProbability is the upper bound reported when a failure
+// probability is too small to represent: never exactly 0.
+const smallestProbability = 1e-300
+
+// boundedFailureProbability returns the failure probability and, when it
+// is too small to compute, the bound smallestProbability with AtMost. With
+// no load it returns 0; the findings then say there is no load.
+func boundedFailureProbability(overPressure, longTermBurst, m float64) (float64, Direction) {
+	p := failureProbability(overPressure, longTermBurst, m)
+	if overPressure > 0 && !(p >= smallestProbability) {
+		return smallestProbability, AtMost
+	}
+	return p, ""
+}
+
 // failureProbability returns the Weibull probability of failure for an
 // overpressure held for the service load duration.
 func failureProbability(overPressure, longTermBurst, m float64) float64 {

@@ -3,6 +3,7 @@ package hazards
 import (
 	"fmt"
 	"math"
+	"sort"
 
 	"ullage/fluids"
 	"ullage/fluids/solve"
@@ -178,7 +179,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	tr.add("state_cold", a.stateStep("Vessel at the coldest temperature", a.Cold, "coldest", tr))
 	if w := a.Worst; w != nil {
 		ws := Step{Stage: StageVessel, Title: "Worst-case unit at the hottest temperature", Method: "tolerances stacked: most fill, least internal volume",
-			Equation: "m_w = m + Δm;  V_w = V − ΔV (measured volume) or V(walls + Δt) (volume from the parts); state as for the nominal unit",
+			Equation: "m_w = m + Δm;  V_w = V − ΔV (measured volume) or V(walls + Δt) − ΔV (volume from the parts); state as for the nominal unit",
 			Inputs: []Value{{Symbol: "m_w", Value: w.FillMassKg, Unit: "kg", Source: "design fill plus its tolerance"},
 				{Symbol: "V_w", Value: w.VolumeM3, Unit: "m³", Source: "design volume less its tolerance"},
 				{Symbol: "T_hot", Value: d.HottestK, Unit: "K", Source: "design input"}},
@@ -239,12 +240,35 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	tr.add("burst_safety_factor", Step{Stage: StageSafety, Title: "Burst safety factor", Method: "ratio of capacity to load",
 		Equation: "SF = ΔP_bL / ΔP  (capped at 1000)",
 		Inputs:   []Value{{Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"}, {Symbol: "ΔP", Value: over, Unit: "Pa"}},
-		Result:   Value{Symbol: "SF", Value: a.BurstSafetyFactor}, Source: "definition"})
+		Result:   Value{Symbol: "SF", Value: a.BurstSafetyFactor}, Source: "definition", Note: noLoadNote(a.HasBurstLoad(), ReasonNoBurstLoad)})
 	tr.add("failure_probability", Step{Stage: StageSafety, Title: "Failure probability over the service life",
 		Method: "Weibull distribution", Equation: "P_f = 1 − exp[−(ΔP/ΔP_bL)^m]",
 		Inputs: []Value{{Symbol: "ΔP", Value: math.Max(over, 0), Unit: "Pa"}, {Symbol: "ΔP_bL", Value: a.Strength.LongTermBurstPa, Unit: "Pa"},
 			{Symbol: "m", Value: g.WeibullModulus.Value, Source: g.WeibullModulus.Source}},
-		Result: Value{Symbol: "P_f", Value: a.FailureProbability}, Source: "Weibull (1951)"})
+		Result: Value{Symbol: "P_f", Value: a.FailureProbability}, Source: "Weibull (1951)", Note: noLoadNote(a.HasBurstLoad(), ReasonNoBurstLoad)})
+	if ws := a.WorstStrength; ws != nil {
+		var in []Value
+		for i, p := range ws.Parts {
+			part := d.Vessel.Parts[i]
+			in = append(in, Value{Symbol: "t_min (" + p.Name + ")", Value: part.WallThicknessM - part.WallToleranceM, Unit: "m", Source: "design wall less its tolerance"},
+				Value{Symbol: "k (" + p.Name + ")", Value: p.StressPerPascal})
+		}
+		pSource := "nominal unit at the hottest temperature"
+		if ws.FromWorstUnit {
+			pSource = fmt.Sprintf("worst-case unit at the hottest temperature (step %d)", tr.by["state_worst"])
+		}
+		in = append(in, Value{Symbol: "P", Value: ws.PressurePa, Unit: "Pa", Source: pSource}, Value{Symbol: "P₀", Value: d.AmbientPressurePa, Unit: "Pa", Source: "design input"})
+		st := Step{Stage: StageSafety, Title: "Burst safety factor, weakest permitted unit", Method: "Weibull weakest-link model and static fatigue with every wall at its thinnest",
+			Equation: "t_min = t − Δt;  ΔP_bL = σ₀ (t₀/t_load)^(1/n) / [Σ (Aᵢ/A₀) kᵢ(t_min)^m]^(1/m);  SF = ΔP_bL/(P − P₀);  P_f = 1 − exp[−((P − P₀)/ΔP_bL)^m]",
+			Inputs:   in,
+			Intermediate: []Value{{Symbol: "ΔP_bL", Value: ws.Strength.LongTermBurstPa, Unit: "Pa"},
+				{Symbol: "P_f", Value: ws.FailureProbability}},
+			Result: Value{Symbol: "SF_min", Value: ws.SafetyFactor}, Source: "common practice (strength at the minimum permitted thickness); Weibull (1951); ASTM E1300 (from memory)"}
+		if ws.OverPa <= 0 {
+			st.Note = "No overpressure: " + ReasonNoBurstLoad.Words() + "; the safety factor shown is not a result."
+		}
+		tr.add("burst_safety_factor_worst", st)
+	}
 	var buckIn []Value
 	for _, p := range a.Parts {
 		buckIn = append(buckIn, Value{Symbol: "p_cr (" + p.Name + ")", Value: p.ClassicalBucklingPa, Unit: "Pa"},
@@ -309,19 +333,41 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 			{Symbol: "λ₁", Value: rel.lambda1, Unit: "1/s"}, {Symbol: "λ₂", Value: rel.lambda2, Unit: "1/s"}},
 		Result: Value{Symbol: "C_N, 1-minute average", Value: units.MgPerM3ToPpm(rel.Average(NearField, NearFieldMinimumAverageS), f.MolarMass.Value), Unit: "ppm"},
 		Source: "Nicas, Appl. Occup. Environ. Hyg. 11(8) (1996) (from memory)"})
-	for _, e := range []struct {
-		key, title string
-		x          Exposure
-	}{{"peak", "Peak exposure", a.Release.Peak}, {"stel", "15-minute average exposure", a.Release.STEL}, {"twa", "8-hour time-weighted average", a.Release.TWA8h}} {
+	bd := a.Release.Bound
+	tr.add("concentration_bound", Step{Stage: StageRelease, Title: "Physical bound on the concentration", Method: "smallest of three physical ceilings",
+		Equation: "C_max = min(P_sat(T_room)/P₀ · 10⁶ ppm, M/V_N, 10⁶ ppm)",
+		Inputs: []Value{{Symbol: "T_room", Value: bd.RoomTemperatureK, Unit: "K", Source: "hottest temperature of the design, not below 25 °C (conservative)"},
+			{Symbol: "P₀", Value: d.AmbientPressurePa, Unit: "Pa", Source: "design input"}, {Symbol: "M", Value: d.FillMassKg * 1e6, Unit: "mg"},
+			{Symbol: "V_N", Value: rel.nearVolume, Unit: "m³"}},
+		Intermediate: []Value{{Symbol: "saturated vapour", Value: bd.SaturatedPPM, Unit: "ppm"}, {Symbol: "whole fill in the near field", Value: bd.NearFieldPPM, Unit: "ppm"}},
+		Result:       Value{Symbol: "C_max", Value: bd.PPM, Unit: "ppm"}, Source: "common practice (Dalton's law: a vapour's partial pressure cannot exceed its vapour pressure)",
+		Note: "Bound by " + bd.By + "; a model value above it is replaced by it and marked as a bound."})
+	for _, e := range a.exposurePeriods() {
 		zone := "well-mixed room"
 		if e.x.Zone == NearField {
 			zone = "near field"
 		}
-		tr.add("exposure_"+e.key, Step{Stage: StageRelease, Title: e.title, Method: "larger of the room and near-field averages (" + zone + " governs)",
-			Equation:     "C̄ = (1/T_avg) ∫₀^min(T_avg, T_present) C(t) dt; near field never averaged over less than 60 s",
+		var shares []Value
+		for _, l := range a.Release.Limits {
+			if l.StepKey == exposureStepKey(e.x.AveragingS) {
+				shares = append(shares, Value{Symbol: "share of " + l.Name, Value: l.Share, Source: fmt.Sprintf("%g ppm: %s", l.PPM, l.Source)})
+			}
+		}
+		st := Step{Stage: StageRelease, Title: e.title, Method: "larger of the room and near-field averages (" + zone + " governs)",
+			Equation:     "C̄ = (1/T_avg) ∫₀^min(T_avg, T_present) C(t) dt; near field never averaged over less than 60 s; C̄ ≤ C_max",
 			Inputs:       []Value{{Symbol: "T_avg", Value: e.x.AveragingS, Unit: "s"}, {Symbol: "T_present", Value: room.ExposureMinutes * 60, Unit: "s", Source: "design input"}},
-			Intermediate: []Value{{Symbol: "C̄", Value: e.x.MgM3, Unit: "mg/m³"}},
-			Result:       Value{Symbol: "C̄", Value: e.x.PPM, Unit: "ppm"}, Source: "as the models above"})
+			Intermediate: append([]Value{{Symbol: "C̄", Value: e.x.MgM3, Unit: "mg/m³"}}, shares...),
+			Result:       Value{Symbol: "C̄", Value: e.x.PPM, Unit: "ppm"}, Source: "as the models above"}
+		if e.x.AveragingS <= PeakAveragingS {
+			st.Equation = "C_peak = max over zones of (1/60 s) ∫₀^60 s C(t) dt, the top of the charted one-minute averages; C_peak ≤ C_max"
+		}
+		if e.x.Bounded {
+			st.Note = "The model's average lay above the physical bound; the bound is reported (the true value is at most this)."
+		}
+		n := tr.add(exposureStepKey(e.x.AveragingS), st)
+		for _, alias := range e.aliases {
+			tr.by[alias] = n
+		}
 	}
 	if f.Flammability.LFLPercent != nil {
 		tr.add("percent_lfl", Step{Stage: StageRelease, Title: "Peak as a percentage of the LFL", Method: "ratio", Equation: "%LFL = C_peak / (LFL·10⁴ ppm) × 100",
@@ -332,7 +378,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	// Findings.
 	for i := range a.Findings {
 		fd := &a.Findings[i]
-		deps := findingDepsOf(fd.Criterion)
+		deps := a.findingDependencies(fd.Criterion)
 		refs := []Value{}
 		for _, k := range deps {
 			if n := tr.by[k]; n > 0 {
@@ -354,15 +400,67 @@ var findingDeps = map[string][]string{
 	CriterionUllage:         {"state_hot", "liquid_full_temperature"},
 	CriterionUllageWorst:    {"state_worst", "state_hot"},
 	CriterionBurst:          {"burst_safety_factor", "long_term_burst", "state_hot"},
+	CriterionBurstWorst:     {"burst_safety_factor_worst", "state_worst", "state_hot"},
 	CriterionFailure:        {"failure_probability", "long_term_burst"},
 	CriterionImplosion:      {"implosion_safety_factor", "state_cold"},
-	CriterionIDLH:           {"exposure_peak", "near_field_model", "room_model"},
-	CriterionCeiling:        {"exposure_peak", "near_field_model", "room_model"},
-	CriterionSTEL:           {"exposure_stel", "near_field_model", "room_model"},
-	CriterionTWA:            {"exposure_twa", "room_model", "near_field_model"},
 	CriterionNoLimit:        {"exposure_peak"},
 	CriterionFlammability:   {"percent_lfl", "exposure_peak"},
 	CriterionCorrelationUse: {"psat_hottest", "state_hot"},
+}
+
+// findingDependencies returns the keys of the steps behind a finding: for
+// an exposure finding, the step of its governing limit's averaging period.
+func (a *Assessment) findingDependencies(criterion string) []string {
+	if IsThermalShockCriterion(criterion) || criterion == CriterionBurst || criterion == CriterionFailure {
+		return findingDepsOf(criterion)
+	}
+	if deps, ok := findingDeps[criterion]; ok {
+		return deps
+	}
+	for _, l := range a.Release.Limits {
+		if l.Governs && exposureCriterion(l.Kind) == criterion {
+			return []string{l.StepKey, "concentration_bound", "near_field_model", "room_model"}
+		}
+	}
+	// A kind with no published limit: the release it could not be judged on.
+	return []string{"exposure_peak", "room_model", "near_field_model"}
+}
+
+// exposurePeriod is one averaging period of the release with its step.
+type exposurePeriod struct {
+	title   string
+	x       Exposure
+	aliases []string
+}
+
+// exposurePeriods returns one entry per averaging period the review uses,
+// shortest first: the peak, 15 minutes, 8 hours and each limit's own.
+func (a *Assessment) exposurePeriods() []exposurePeriod {
+	out := []exposurePeriod{
+		{"Peak exposure (highest one-minute average)", a.Release.Peak, []string{"exposure_peak"}},
+		{"15-minute average exposure", a.Release.STEL, []string{"exposure_stel"}},
+		{"8-hour time-weighted average", a.Release.TWA8h, []string{"exposure_twa"}},
+	}
+	for _, l := range a.Release.Limits {
+		found := false
+		for _, p := range out {
+			found = found || p.x.AveragingS == l.Exposure.AveragingS
+		}
+		if !found {
+			out = append(out, exposurePeriod{title: fmt.Sprintf("%g-minute average exposure", l.Exposure.AveragingS/60), x: l.Exposure})
+		}
+	}
+	sort.SliceStable(out, func(i, j int) bool { return out[i].x.AveragingS < out[j].x.AveragingS })
+	return out
+}
+
+// noLoadNote is the note of a step whose result is not a result for want
+// of a load.
+func noLoadNote(loaded bool, r Reason) string {
+	if loaded {
+		return ""
+	}
+	return r.Words() + ": the number above is a placeholder of the calculation, not a result."
 }
 
 func stepNumbers(tr *tracer, keys []string) []int {

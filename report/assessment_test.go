@@ -217,3 +217,17 @@ func TestAssessmentEmptyMeta(t *testing.T) {
 		}
 	}
 }
+
+// TestIsRecord: a record this package wrote is recognised; other files,
+// including a PDF that merely mentions Ullage, are not.
+func TestIsRecord(t *testing.T) {
+	pdf := render(t, loadMeta(t, "meta_a.json"), assess(t, "typical_design.json"), Options{})
+	if !IsRecord(pdf) {
+		t.Error("our own record is not recognised")
+	}
+	for _, other := range []string{"", "{\"format\": \"ullage-design/2\"}", "%PDF-1.4\n/Creator (Ullage)\n", "/Creator (\xFE\xFF\x00U\x00l\x00l\x00a\x00g\x00e)"} {
+		if IsRecord([]byte(other)) {
+			t.Errorf("%q is taken for a record", other)
+		}
+	}
+}

@@ -7,7 +7,10 @@ package report
 import (
 	"bytes"
 	"io"
+	"strings"
 	"time"
+	"unicode"
+	"unicode/utf8"
 
 	"github.com/jung-kurt/gofpdf"
 	"golang.org/x/image/font/gofont/gobold"
@@ -91,11 +94,11 @@ func newCanvas(paper string, info docInfo) *canvas {
 	p.AddUTF8FontFromBytes("sans", "B", bytes.Clone(gobold.TTF))
 	p.AddUTF8FontFromBytes("sans", "I", bytes.Clone(goitalic.TTF))
 	p.AddUTF8FontFromBytes("mono", "", bytes.Clone(gomono.TTF))
-	p.SetTitle(info.title, true)
-	p.SetAuthor(info.author, true)
-	p.SetSubject(info.subject, true)
-	p.SetCreator(info.creator, true)
-	p.SetKeywords(info.keywords, true)
+	p.SetTitle(printable(info.title), true)
+	p.SetAuthor(printable(info.author), true)
+	p.SetSubject(printable(info.subject), true)
+	p.SetCreator(printable(info.creator), true)
+	p.SetKeywords(printable(info.keywords), true)
 	if !info.fixedDate.IsZero() {
 		p.SetCreationDate(info.fixedDate)
 		p.SetModificationDate(info.fixedDate)
@@ -144,10 +147,31 @@ func (c *canvas) setFont(f face, sizePt float64) {
 // textWidth is the width of s in the current font, in mm.
 func (c *canvas) textWidth(s string) float64 { return c.pdf.GetStringWidth(s) }
 
+// prefixWidths returns, for each k from 0 to len(r), the width in mm of
+// r[:k] in the current font, measuring each character once. The library
+// adds the widths of characters without kerning, so these agree with
+// textWidth.
+func (c *canvas) prefixWidths(r []rune) []float64 {
+	_, unit := c.pdf.GetFontSize()
+	out := make([]float64, len(r)+1)
+	sum := 0
+	cache := map[rune]int{}
+	for i, ch := range r {
+		u, ok := cache[ch]
+		if !ok {
+			u = c.pdf.GetStringSymbolWidth(string(ch))
+			cache[ch] = u
+		}
+		sum += u
+		out[i+1] = float64(sum) * unit / 1000
+	}
+	return out
+}
+
 // drawText writes s with its baseline starting at (x, y).
 func (c *canvas) drawText(x, y float64, s string) {
 	if s != "" {
-		c.pdf.Text(x, y, s)
+		c.pdf.Text(x, y, printable(s))
 	}
 }
 
@@ -156,7 +180,7 @@ func (c *canvas) drawText(x, y float64, s string) {
 func (c *canvas) drawTextRotated(x, y, deg float64, s string) {
 	c.pdf.TransformBegin()
 	c.pdf.TransformRotate(deg, x, y)
-	c.pdf.Text(x, y, s)
+	c.pdf.Text(x, y, printable(s))
 	c.pdf.TransformEnd()
 }
 
@@ -230,7 +254,34 @@ func (c *canvas) unclip() {
 }
 
 // bookmark adds an outline entry at height y of the current page.
-func (c *canvas) bookmark(title string, level int, y float64) { c.pdf.Bookmark(title, level, y) }
+func (c *canvas) bookmark(title string, level int, y float64) {
+	c.pdf.Bookmark(printable(title), level, y)
+}
+
+// printable makes text safe for the PDF library, which panics on invalid
+// UTF-8 and on characters beyond the Basic Multilingual Plane: each
+// invalid byte run and each such character becomes U+FFFD, and control
+// characters (which no font draws) become spaces.
+func printable(s string) string {
+	ok := utf8.ValidString(s)
+	for i := 0; ok && i < len(s); i++ {
+		if s[i] < 0x20 || s[i] == 0x7f || s[i] >= 0xf0 {
+			ok = false
+		}
+	}
+	if ok {
+		return s
+	}
+	return strings.Map(func(r rune) rune {
+		switch {
+		case unicode.IsControl(r):
+			return ' '
+		case r > 0xffff:
+			return utf8.RuneError
+		}
+		return r
+	}, strings.ToValidUTF8(s, string(utf8.RuneError)))
+}
 
 // err returns the first error met while drawing.
 func (c *canvas) err() error { return c.pdf.Error() }

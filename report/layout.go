@@ -144,21 +144,26 @@ func (d *doc) finishPages() {
 }
 
 // fit shortens s with an ellipsis so that it fits in w mm in the current
-// font.
+// font. Each character is measured once, so the time is linear in the
+// length of s.
 func (d *doc) fit(s string, w float64) string {
 	if d.c.textWidth(s) <= w {
 		return s
 	}
 	r := []rune(s)
-	for len(r) > 0 && d.c.textWidth(string(r)+"…") > w {
-		r = r[:len(r)-1]
+	widths := d.c.prefixWidths(r)
+	room := w - d.c.textWidth("…")
+	k := len(r)
+	for k > 0 && widths[k] > room {
+		k--
 	}
-	return strings.TrimRight(string(r), " ") + "…"
+	return strings.TrimRight(string(r[:k]), " ") + "…"
 }
 
 // wrap breaks s into lines no wider than w mm in the current font, at
 // spaces where it can and inside a word only when the word alone is too
-// wide. Newlines in s start new lines.
+// wide. Newlines in s start new lines. A long word is measured once, a
+// character at a time, so the time is linear in its length.
 func (d *doc) wrap(s string, w float64) []string {
 	var out []string
 	for _, para := range strings.Split(s, "\n") {
@@ -176,20 +181,33 @@ func (d *doc) wrap(s string, w float64) []string {
 				out = append(out, line)
 				line = ""
 			}
-			for d.c.textWidth(word) > w && utf8.RuneCountInString(word) > 1 {
-				r := []rune(word)
-				k := len(r) - 1
-				for k > 1 && d.c.textWidth(string(r[:k])) > w {
-					k--
-				}
-				out = append(out, string(r[:k]))
-				word = string(r[k:])
+			if d.c.textWidth(word) > w && utf8.RuneCountInString(word) > 1 {
+				pieces := d.breakWord([]rune(word), w)
+				out = append(out, pieces[:len(pieces)-1]...)
+				word = pieces[len(pieces)-1]
 			}
 			line = word
 		}
 		out = append(out, line)
 	}
 	return out
+}
+
+// breakWord cuts a word too wide for w mm into pieces that fit, each at
+// least one character long; the last piece may be the narrowest.
+func (d *doc) breakWord(r []rune, w float64) []string {
+	widths := d.c.prefixWidths(r)
+	var pieces []string
+	start := 0
+	for start < len(r) {
+		end := start + 1
+		for end < len(r) && widths[end+1]-widths[start] <= w {
+			end++
+		}
+		pieces = append(pieces, string(r[start:end]))
+		start = end
+	}
+	return pieces
 }
 
 // baseline is the baseline of a line of text in a box of height lh whose

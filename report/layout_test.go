@@ -3,6 +3,7 @@ package report
 import (
 	"strings"
 	"testing"
+	"time"
 )
 
 func testDoc() *doc {
@@ -70,5 +71,48 @@ func TestTableRowsStayWhole(t *testing.T) {
 	}
 	if d.y > d.bottom+1.5 {
 		t.Errorf("table ran past the bottom margin: y = %.1f > %.1f", d.y, d.bottom)
+	}
+}
+
+// TestWrapLongWordIsLinear: an unbroken word of 20 000 characters wraps in
+// well under a second (each character is measured once; the earlier
+// re-measuring took time growing with the cube of the length, over a
+// minute for 4 000 characters). The limit is generous for a shared
+// machine: a linear pass takes a few milliseconds.
+func TestWrapLongWordIsLinear(t *testing.T) {
+	d := testDoc()
+	d.use(body)
+	word := strings.Repeat("W", 20000)
+	start := time.Now()
+	lines := d.wrap(word, 40)
+	fitted := d.fit(word, 40)
+	if el := time.Since(start); el > 2*time.Second {
+		t.Errorf("wrapping a 20 000-character word took %v", el)
+	}
+	if strings.Join(lines, "") != word {
+		t.Error("wrapping changed the word")
+	}
+	for _, ln := range lines {
+		if d.c.textWidth(ln) > 40+1e-9 {
+			t.Fatalf("line %.20q… is %.1f mm wide, more than 40", ln, d.c.textWidth(ln))
+		}
+	}
+	if w := d.c.textWidth(fitted); w > 40+1e-9 || !strings.HasSuffix(fitted, "…") {
+		t.Errorf("fit gave %.1f mm, %q…", w, fitted[:10])
+	}
+}
+
+// TestRecordWithLongText: a record whose every free-text field holds
+// 4 000 unbroken characters is written in seconds, not minutes.
+func TestRecordWithLongText(t *testing.T) {
+	long := strings.Repeat("X", 4000)
+	m := loadMeta(t, "meta_a.json")
+	m.Product, m.Company, m.Reviewer, m.ChangeNote, m.RevisionAuthor, m.PartNumber = long, long, long, long, long, long
+	a := assess(t, "typical_design.json")
+	a.Parts[0].Name = long
+	start := time.Now()
+	render(t, m, a, Options{})
+	if el := time.Since(start); el > 20*time.Second {
+		t.Errorf("the record took %v", el)
 	}
 }

@@ -191,6 +191,21 @@ func limitLabel(l fluids.ExposureLimit) string {
 	return fmt.Sprintf("%s %s ppm (%s)", l.Averaging, plain(l.PPM), who)
 }
 
+// governingLimits returns the library limits that govern the review, one
+// per averaging kind.
+func governingLimits(a *hazards.Assessment) []fluids.ExposureLimit {
+	var out []fluids.ExposureLimit
+	for _, r := range a.Release.Limits {
+		for _, l := range a.Fluid.ExposureLimits {
+			if r.Governs && r.Name == l.Label() && r.PPM == l.PPM && r.Kind == l.Averaging {
+				out = append(out, l)
+				break
+			}
+		}
+	}
+	return out
+}
+
 var limitStyles = map[string]lineStyle{
 	fluids.AveragingIDLH:    longDashLine,
 	fluids.AveragingCeiling: dashDotLine,
@@ -217,8 +232,13 @@ func (w *assessmentWriter) concentrationChart() {
 	var ss []series
 	for _, z := range zones {
 		pts := make([]xy, 0, curveSamples+1)
+		peakMin := hazards.PeakAveragingS / 60.0 // the curves top out here: sample it exactly
+		peakAt := int(math.Round(curveSamples * math.Log(peakMin/tStart) / math.Log(tEnd/tStart)))
 		for i := 0; i <= curveSamples; i++ {
 			t := tStart * math.Pow(tEnd/tStart, float64(i)/curveSamples)
+			if i == peakAt && i > 0 && i < curveSamples {
+				t = peakMin
+			}
 			ppm := units.MgPerM3ToPpm(concentrationAt(a, z.z, t*60), mm)
 			if finite(ppm) && ppm > 0 {
 				pts = append(pts, xy{t, ppm})
@@ -229,7 +249,7 @@ func (w *assessmentWriter) concentrationChart() {
 	}
 	var lines []refLine
 	lmin, lmax := math.Inf(1), 0.0
-	for _, l := range hazards.GoverningLimits(a.Fluid, a.Design.Criteria.LimitBodies) {
+	for _, l := range governingLimits(a) {
 		lines = append(lines, refLine{value: l.PPM, label: limitLabel(l), style: limitStyles[l.Averaging]})
 		lmin, lmax = math.Min(lmin, l.PPM), math.Max(lmax, l.PPM)
 	}
@@ -248,10 +268,10 @@ func (w *assessmentWriter) concentrationChart() {
 	ch := chart{
 		title:  "Figure 2. Vapour concentration after a breakage",
 		x:      axis{label: "Time after the breakage (min), log scale", min: tStart, max: tEnd, log: true},
-		y:      axis{label: "Concentration (ppm), log scale", min: ylo, max: yhi, log: true},
+		y:      axis{label: "Concentration, 1-minute average (ppm), log scale", min: ylo, max: yhi, log: true},
 		series: ss,
 		lines:  lines,
 	}
 	w.d.drawChart(ch, chartHeight)
-	w.d.note("Horizontal lines are the governing published limits for the chosen bodies; a limit with an averaging time applies to the average over that time, not to the instantaneous curve.")
+	w.d.note("Curves are one-minute averages (the average over the minute before each time), held to the physical bound; the peak is their highest point. Horizontal lines are the governing published limits for the chosen bodies; a limit with a longer averaging time applies to the average over that time, not to the curve.")
 }

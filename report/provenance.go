@@ -49,7 +49,7 @@ func (w *assessmentWriter) provenance() {
 	d.subheading("How good each property is")
 	d.drawTable(uncertaintyTable(us))
 	d.subheading("Exposure limits")
-	d.drawTable(limitsTable(a.Fluid, a.Design.Criteria.LimitBodies))
+	d.drawTable(limitsTable(a.Fluid, a.Release.Limits))
 	for _, n := range a.Fluid.NoNumericLimit {
 		d.note(n.Body + " " + n.Kind + ": " + n.Note)
 	}
@@ -161,10 +161,14 @@ func vapourPressureTable(f *fluids.Fluid, u unitSystem) table {
 
 // limitsTable lists every published exposure limit, marking those that
 // govern the review.
-func limitsTable(f *fluids.Fluid, bodies []string) table {
+func limitsTable(f *fluids.Fluid, limits []hazards.LimitResult) table {
 	gov := map[fluids.ExposureLimit]bool{}
-	for _, l := range hazards.GoverningLimits(f, bodies) {
-		gov[l] = true
+	for _, l := range f.ExposureLimits {
+		for _, r := range limits {
+			if r.Governs && r.Name == l.Label() && r.PPM == l.PPM && r.Kind == l.Averaging {
+				gov[l] = true
+			}
+		}
 	}
 	var rows [][]cell
 	for _, l := range f.ExposureLimits {

@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"ullage/fluids"
 	"ullage/hazards"
@@ -113,16 +114,49 @@ func (w *assessmentWriter) glass() {
 		{"Governing part", gp.Name + ": strength " + u.stress(a.Strength.GoverningStrengthPa) + ", allowable stress " + u.stress(a.Strength.AllowableStressPa)},
 		{"Overpressure at the hottest", u.pressure(over) + " over ambient"},
 		{"Allowable internal pressure", u.pressure(a.AllowablePressurePa()) + " absolute"},
-		{"Burst safety factor", sfText(a.BurstSafetyFactor) + ", required " + sig(a.RequiredSafetyFactor, 3) + " (the larger of the minimum factor and the factor that meets the failure-probability target)"},
-		{"Failure probability", sig(a.FailureProbability, 2) + " per unit over " + plain(ds.ServiceLifeYears) + " years (Weibull modulus " + plain(a.Glass.WeibullModulus.Value) + ")"},
+		{"Burst safety factor", burstText(a) + ", required " + sig(a.RequiredSafetyFactor, 3) + " (the larger of the minimum factor and the factor that meets the failure-probability target)"},
+		{"Failure probability", failureText(a) + " (Weibull modulus " + plain(a.Glass.WeibullModulus.Value) + ")"},
 		{"External load at the coldest", u.pressure(a.ExternalLoadPa) + " (outside minus inside)"},
-		{"Implosion safety factor", sfText(a.ImplosionSafetyFactor) + " on the knocked-down buckling pressure"},
+		{"Implosion safety factor", implosionText(a) + " on the knocked-down buckling pressure"},
 	}, 1)
+}
+
+// burstText is the nominal burst safety factor, and the weakest permitted
+// unit's beside it, in the words every output uses when there is no load.
+func burstText(a *hazards.Assessment) string {
+	if !a.HasBurstLoad() {
+		return hazards.ReasonNoBurstLoad.Words()
+	}
+	s := sfText(a.BurstSafetyFactor)
+	if ws := a.WorstStrength; ws != nil && ws.OverPa > 0 {
+		s += "; weakest permitted unit (walls at their thinnest, tolerances stacked) " + sfText(ws.SafetyFactor)
+	}
+	return s
+}
+
+// failureText is the failure probability, stated as a bound when it is one.
+func failureText(a *hazards.Assessment) string {
+	if !a.HasBurstLoad() {
+		return hazards.ReasonNoBurstLoad.Words()
+	}
+	s := sig(a.FailureProbability, 2)
+	if a.FailureProbabilityBound == hazards.AtMost {
+		s = "at most " + s + " (too small to compute; an upper bound)"
+	}
+	return s + " per unit over " + plain(a.Design.ServiceLifeYears) + " years"
+}
+
+// implosionText is the implosion safety factor, or the words for no load.
+func implosionText(a *hazards.Assessment) string {
+	if !a.HasExternalLoad() {
+		return hazards.ReasonNoExternalLoad.Words()
+	}
+	return sfText(a.ImplosionSafetyFactor)
 }
 
 func sfText(x float64) string {
 	if x >= hazards.SafetyFactorCap {
-		return "≥ " + sig(hazards.SafetyFactorCap, 4) + " (no load)"
+		return "≥ " + sig(hazards.SafetyFactorCap, 4)
 	}
 	return sig(x, 3)
 }
@@ -182,8 +216,8 @@ func (w *assessmentWriter) release() {
 	d, a, u := w.d, w.a, w.u
 	r := a.Release
 	d.heading("Release into the room")
-	d.lead(fmt.Sprintf("The whole fill (%s) is taken to evaporate at once into the room described in the inputs. The highest of the well-mixed room and the near field around the breakage is reported; the near field is averaged over at least its first %s, the time it takes to mix.",
-		u.mass(r.MassKg), fmt.Sprintf("%d s", hazards.NearFieldMinimumAverageS)))
+	d.lead(fmt.Sprintf("The whole fill (%s) is taken to evaporate at once into the room described in the inputs. The highest of the well-mixed room and the near field around the breakage is reported; the peak is the highest average over %s (the shortest the models resolve), and the near field is never averaged over less, the time it takes to mix.",
+		u.mass(r.MassKg), fmt.Sprintf("%d s", hazards.PeakAveragingS)))
 	row := func(name string, e hazards.Exposure) []cell {
 		return []cell{{text: name}, {text: sig(e.PPM, 3) + " ppm", bold: true}, {text: sig(e.MgM3, 3) + " mg/m³"}, {text: zoneName(e.Zone)}}
 	}
@@ -194,6 +228,8 @@ func (w *assessmentWriter) release() {
 	d.drawTable(table{cols: []col{{"Measure", 1.6, 'L'}, {"ppm", 1, 'R'}, {"mg/m³", 1.1, 'R'}, {"Where", 2, 'L'}}, rows: [][]cell{
 		row("Peak", r.Peak), row("15-minute average", r.STEL), row("8-hour time-weighted average", r.TWA8h),
 	}, zebra: true, keep: 3})
+	d.drawTable(exposureTable(a))
+	d.note(exposureTableNote(a))
 	tc := sig(r.RoomTimeConstantS/3600, 3) + " h"
 	if r.RoomTimeConstantS >= 1e9 {
 		tc = "no ventilation: the vapour stays"
@@ -201,4 +237,41 @@ func (w *assessmentWriter) release() {
 	d.keyValues([][2]string{{"Peak against the LFL", lfl}, {"Room time constant", tc + " (e-folding time of the well-mixed room)"}}, 1)
 	d.space(1)
 	w.concentrationChart()
+}
+
+// exposureTable lists every applicable limit with its own averaging
+// period, the average over it, its share and the one that governs each
+// kind; a kind with no published limit is listed as not assessed.
+func exposureTable(a *hazards.Assessment) table {
+	var rows [][]cell
+	for _, f := range a.Findings {
+		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
+			rows = append(rows, []cell{{text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: hazards.ReasonNoPublishedLimit.Words(), dim: true}, {}, {}, {}, {}, {}})
+		}
+	}
+	for _, l := range a.Release.Limits {
+		period := sig(l.Exposure.AveragingS/60, 3) + " min"
+		if l.Exposure.AveragingS <= hazards.PeakAveragingS {
+			period = "peak (1 min)"
+		}
+		avg := sig(l.Exposure.PPM, 3)
+		if l.Exposure.Bounded {
+			avg = "≤ " + avg
+		}
+		g := ""
+		if l.Governs {
+			g = "governs"
+		}
+		rows = append(rows, []cell{{text: l.Kind, bold: l.Governs}, {text: l.Name, bold: l.Governs}, {text: plain(l.PPM)}, {text: period},
+			{text: avg, bold: l.Governs}, {text: sig(100*l.Share, 3) + " %", bold: l.Governs}, {text: g, bold: true}})
+	}
+	return table{cols: []col{{"Kind", 0.8, 'L'}, {"Limit", 1.6, 'L'}, {"ppm", 0.7, 'R'}, {"Averaged over", 1, 'R'},
+		{"Average, ppm", 1, 'R'}, {"Share", 0.8, 'R'}, {"", 0.8, 'L'}}, rows: rows, size: 7.5, zebra: true, keep: 2}
+}
+
+// exposureTableNote says how the table was made.
+func exposureTableNote(a *hazards.Assessment) string {
+	b := a.Release.Bound
+	return "Each limit is averaged over its own period as its body defines it; within each kind the limit with the largest share of its limit governs. " +
+		"Every concentration is held to the physical bound, " + sig(b.PPM, 3) + " ppm (" + b.By + "); a value marked ≤ is that bound."
 }

@@ -16,6 +16,9 @@ func statusWord(s hazards.Status) string {
 	if s == "" {
 		return "NONE"
 	}
+	if s == hazards.StatusNotAssessed {
+		return "NOT ASSESSED"
+	}
 	return strings.ToUpper(string(s))
 }
 

@@ -131,6 +131,7 @@ type findingText struct{ value, limit, margin string }
 // others must stay below it.
 var atLeastCriteria = map[string]bool{
 	hazards.CriterionUllage: true, hazards.CriterionUllageWorst: true, hazards.CriterionBurst: true, hazards.CriterionImplosion: true,
+	hazards.CriterionBurstWorst: true,
 }
 
 // findingNumbers formats a finding's value, limit and margin.
@@ -145,10 +146,7 @@ func findingNumbers(f hazards.Finding, fluid *fluids.Fluid) findingText {
 			return sig(x, 2)
 		case hazards.CriterionUllage, hazards.CriterionUllageWorst:
 			return fixed(x, 1) + " %"
-		case hazards.CriterionBurst, hazards.CriterionImplosion:
-			if x >= hazards.SafetyFactorCap {
-				return "≥ " + sig(hazards.SafetyFactorCap, 4)
-			}
+		case hazards.CriterionBurst, hazards.CriterionBurstWorst, hazards.CriterionImplosion:
 			return sig(x, 3)
 		}
 		s := sig(x, 3)
@@ -175,13 +173,15 @@ func findingNumbers(f hazards.Finding, fluid *fluids.Fluid) findingText {
 		if fluid == nil || !fluid.Flammability.Flammable {
 			t.value, t.margin = "not flammable", noValue
 		}
-	case hazards.CriterionBurst, hazards.CriterionImplosion:
-		if f.Value >= hazards.SafetyFactorCap {
-			t.margin = "no load"
-		}
 	}
-	if f.Criterion == hazards.CriterionFailure && f.Value == 0 {
-		t.value, t.margin = "0 (no load)", noValue
+	switch f.ValueBound {
+	case hazards.AtLeast:
+		t.value = "≥ " + t.value
+	case hazards.AtMost:
+		t.value = "≤ " + t.value
+	}
+	if f.NotApplicable != "" {
+		t.value, t.margin = f.NotApplicable.Words(), noValue
 	}
 	return t
 }

@@ -56,6 +56,9 @@ func parseArgs(args []string, boolFlags, valueFlags []string) (*options, error) 
 				i++
 				value = args[i]
 			}
+			if value == "" {
+				return nil, fmt.Errorf("flag --%s needs a value (an empty one was given)", name)
+			}
 			o.values[name] = append(o.values[name], value)
 		default:
 			return nil, fmt.Errorf("unknown flag %s", a)
@@ -69,6 +72,15 @@ func (o *options) value(name, fallback string) string {
 		return v[len(v)-1]
 	}
 	return fallback
+}
+
+// last returns the last value of a flag and whether it was given.
+func (o *options) last(name string) (string, bool) {
+	v := o.values[name]
+	if len(v) == 0 {
+		return "", false
+	}
+	return v[len(v)-1], true
 }
 
 func (o *options) float(name string) (float64, bool, error) {

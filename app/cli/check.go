@@ -11,6 +11,7 @@ import (
 	"sort"
 	"strings"
 	"time"
+	"unicode/utf8"
 
 	"ullage/app/buildinfo"
 	"ullage/fluids"
@@ -20,17 +21,24 @@ import (
 	"ullage/report"
 )
 
-// checked is one design assessed by the check command.
+// checked is one design assessed by the check command, or the error
+// that stopped it.
 type checked struct {
 	path       string
 	file       *designfile.File
 	revision   *designfile.Revision
 	assessment *hazards.Assessment
 	tolerance  *tolerance.Result
+	// err is why the design could not be assessed; the other fields may
+	// then be nil.
+	err error
 }
 
+// checkValueFlags are the flags of check that take a value.
+var checkValueFlags = []string{"rev", "pdf", "units", "paper", "reviewer", "fluids", "samples", "seed", "hot-spread-k"}
+
 func runCheck(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs(args, []string{"json", "trace"}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids", "samples", "seed", "hot-spread-k"})
+	o, err := parseArgs(args, []string{"json", "trace", replaceFlag}, checkValueFlags)
 	if err != nil {
 		return usageError(stderr, "check", err)
 	}
@@ -44,6 +52,10 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return usageError(stderr, "check", err)
 	}
+	study, err := studySettings(o)
+	if err != nil {
+		return usageError(stderr, "check", err)
+	}
 	lib, err := library(o)
 	if err != nil {
 		return usageError(stderr, "check", err)
@@ -52,32 +64,40 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	if err != nil {
 		return usageError(stderr, "check", err)
 	}
-	study, err := studySettings(o)
-	if err != nil {
-		return usageError(stderr, "check", err)
+	pdfPath, wantPDF := o.last("pdf")
+	if wantPDF {
+		if len(paths) != 1 {
+			return usageError(stderr, "check", fmt.Errorf("--pdf writes one record: name exactly one design file (%d given)", len(paths)))
+		}
+		if err := checkOutput("--pdf", pdfPath, append(paths, o.value("fluids", "")), o.bools[replaceFlag]); err != nil {
+			return usageError(stderr, "check", err)
+		}
 	}
-	pdfPath := o.value("pdf", "")
-	if pdfPath != "" && len(paths) != 1 {
-		return usageError(stderr, "check", fmt.Errorf("--pdf writes one record: name exactly one design file (%d given)", len(paths)))
-	}
-	var results []checked
+	results := make([]checked, 0, len(paths))
 	bad := 0
 	for _, p := range paths {
-		c, err := checkOne(p, o.value("rev", ""), lib)
-		if err == nil && study != nil {
+		c := checkOne(p, o.value("rev", ""), lib)
+		if c.err == nil && study != nil {
+			var err error
 			c.tolerance, err = tolerance.Run(context.Background(), c.revision.Design, lib, *study)
 			if err != nil {
-				err = fmt.Errorf("%s: tolerance study: %w", p, err)
+				c.err = fmt.Errorf("%s: tolerance study: %w", p, err)
 			}
 		}
-		if err != nil {
-			fmt.Fprintf(stderr, "ullage check: %v\n", err)
+		if c.err == nil {
+			if where := firstNonFinite(c.assessment); where != "" {
+				c.err = fmt.Errorf("%s, revision %s: the assessment gave a number that is not finite (%s); the design cannot be assessed", p, c.revision.Label, where)
+			} else if where := firstNonFinite(c.tolerance); where != "" {
+				c.err = fmt.Errorf("%s: tolerance study: a number that is not finite (%s); the study cannot be reported", p, where)
+			}
+		}
+		if c.err != nil {
+			fmt.Fprintf(stderr, "ullage check: %v\n", c.err)
 			bad++
-			continue
 		}
 		results = append(results, c)
 	}
-	if pdfPath != "" {
+	if wantPDF {
 		if bad > 0 {
 			fmt.Fprintf(stderr, "ullage check: no record written to %s\n", pdfPath)
 			return ExitUsage
@@ -89,7 +109,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintf(stderr, "ullage check: writing the record: %v\n", err)
 			return ExitUsage
 		}
-		if err := writeFileAtomic(pdfPath, buf.Bytes()); err != nil {
+		if err := writeOutput("--pdf", pdfPath, buf.Bytes()); err != nil {
 			fmt.Fprintf(stderr, "ullage check: %v\n", err)
 			return ExitUsage
 		}
@@ -113,25 +133,30 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 	return ExitPass
 }
 
-func checkOne(path, rev string, lib *fluids.Library) (checked, error) {
+func checkOne(path, rev string, lib *fluids.Library) checked {
+	c := checked{path: path}
 	f, err := designfile.Load(path)
 	if err != nil {
-		return checked{}, err
+		c.err = err
+		return c
 	}
-	var r *designfile.Revision
+	c.file = f
 	if rev != "" {
-		r, err = f.Find(rev)
+		c.revision, err = f.Find(rev)
 	} else {
-		r, err = f.Latest()
+		c.revision, err = f.Latest()
 	}
 	if err != nil {
-		return checked{}, fmt.Errorf("%s: %w", path, err)
+		c.err = fmt.Errorf("%s: %w", path, err)
+		return c
 	}
-	a, err := hazards.Assess(r.Design, lib)
+	a, err := hazards.Assess(c.revision.Design, lib)
 	if err != nil {
-		return checked{}, fmt.Errorf("%s, revision %s: %w", path, r.Label, err)
+		c.err = fmt.Errorf("%s, revision %s: %w", path, c.revision.Label, err)
+		return c
 	}
-	return checked{path: path, file: f, revision: r, assessment: a}, nil
+	c.assessment = a
+	return c
 }
 
 // expandPaths replaces each folder by the design files (*.json) in it,
@@ -144,8 +169,10 @@ func studySettings(o *options) (*tolerance.Settings, error) {
 		return nil, err
 	}
 	if _, given := o.values["samples"]; !given {
-		if _, s := o.values["seed"]; s {
-			return nil, fmt.Errorf("--seed needs --samples")
+		for _, f := range []string{"seed", "hot-spread-k"} {
+			if _, s := o.values[f]; s {
+				return nil, fmt.Errorf("--%s belongs to the tolerance study: give --samples N as well", f)
+			}
 		}
 		return nil, nil
 	}
@@ -163,15 +190,21 @@ func studySettings(o *options) (*tolerance.Settings, error) {
 	if err != nil {
 		return nil, err
 	}
+	if !(spread >= 0 && spread <= maxHotSpreadK) {
+		return nil, fmt.Errorf("--hot-spread-k %s: give a spread from 0 to %g K", o.value("hot-spread-k", ""), float64(maxHotSpreadK))
+	}
 	return &tolerance.Settings{Samples: n, Seed: uint64(seed), HottestSpreadK: spread}, nil
 }
+
+// maxHotSpreadK is the largest --hot-spread-k the tolerance study takes.
+const maxHotSpreadK = 100
 
 func expandPaths(args []string) ([]string, error) {
 	var out []string
 	for _, a := range args {
 		st, err := os.Stat(a)
 		if err != nil {
-			return nil, err
+			return nil, fmt.Errorf("%s: %v", a, plainError(err))
 		}
 		if !st.IsDir() {
 			out = append(out, a)
@@ -196,6 +229,11 @@ func isDir(p string) bool {
 }
 
 func reportOptions(o *options) (report.Options, error) {
+	if r := o.value("reviewer", ""); !utf8.ValidString(r) {
+		return report.Options{}, fmt.Errorf("--reviewer: the name is not valid UTF-8 text")
+	} else if utf8.RuneCountInString(r) > designfile.MaxNameLength {
+		return report.Options{}, fmt.Errorf("--reviewer: the name is %d characters long; at most %d are accepted", utf8.RuneCountInString(r), designfile.MaxNameLength)
+	}
 	ro := report.Options{Units: o.value("units", "si"), Paper: o.value("paper", "a4")}
 	if ro.Units != "si" && ro.Units != "us" {
 		return ro, fmt.Errorf("--units %q: use si or us", ro.Units)
@@ -223,50 +261,49 @@ func recordMeta(f *designfile.File, r *designfile.Revision, o *options) report.M
 	}
 }
 
-// writeFileAtomic writes data to a temporary file beside path and renames
-// it into place, so a failure never leaves a partial file.
-func writeFileAtomic(path string, data []byte) error {
-	dir := filepath.Dir(path)
-	tmp, err := os.CreateTemp(dir, "."+filepath.Base(path)+".*.tmp")
-	if err != nil {
-		return err
-	}
-	name := tmp.Name()
-	ok := false
-	defer func() {
-		if !ok {
-			os.Remove(name)
-		}
-	}()
-	if _, err := tmp.Write(data); err != nil {
-		tmp.Close()
-		return err
-	}
-	if err := tmp.Sync(); err != nil {
-		tmp.Close()
-		return err
-	}
-	if err := tmp.Close(); err != nil {
-		return err
-	}
-	if err := os.Rename(name, path); err != nil {
-		return err
-	}
-	ok = true
-	return nil
-}
-
 func writeCheckText(w io.Writer, results []checked, unitSystem string) {
 	if len(results) == 1 {
+		if results[0].err != nil {
+			fmt.Fprintf(w, "%s: ERROR, not assessed: %v\n\nverdict: ERROR\n", results[0].path, results[0].err)
+			return
+		}
 		writeOneText(w, results[0], unitSystem)
 		return
 	}
 	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF")
+	failed := 0
 	for _, c := range results {
+		if c.err != nil {
+			failed++
+			fmt.Fprintf(w, "%-34s %-4s %-9s %v\n", trim(filepath.Base(c.path), 34), "-", "ERROR", c.err)
+			continue
+		}
 		a := c.assessment
 		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
-			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a.BurstSafetyFactor))
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a))
 	}
+	if failed > 0 {
+		fmt.Fprintf(w, "\nverdict: ERROR (%d of %d designs could not be assessed)\n", failed, len(results))
+		return
+	}
+	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(overallVerdict(results)))
+}
+
+// verdictError is the overall verdict when any input could not be
+// assessed.
+const verdictError = "error"
+
+// overallVerdict is the worst verdict of the results, or verdictError
+// when any could not be assessed.
+func overallVerdict(results []checked) string {
+	v := hazards.StatusPass
+	for _, c := range results {
+		if c.err != nil {
+			return verdictError
+		}
+		v = hazards.Worse(v, c.assessment.Verdict)
+	}
+	return string(v)
 }
 
 func writeOneText(w io.Writer, c checked, unitSystem string) {
@@ -281,7 +318,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintln(w)
 	for _, f := range a.Findings {
-		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(string(f.Status)), f.Title, f.MessageIn(unitSystem == "us"))
+		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(strings.ReplaceAll(string(f.Status), "-", " ")), f.Title, f.MessageIn(unitSystem == "us"))
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if r := c.tolerance; r != nil {
@@ -309,35 +346,54 @@ func trim(s string, n int) string {
 	return string([]rune(s)[:n-1]) + "…"
 }
 
-func sfText(x float64) string {
-	if x >= hazards.SafetyFactorCap {
-		return fmt.Sprintf(">%g", float64(hazards.SafetyFactorCap))
+// sfText is the burst safety factor for the summary table: "none" when
+// nothing loads the vessel, "≥" before a capped factor.
+func sfText(a *hazards.Assessment) string {
+	switch {
+	case !a.HasBurstLoad():
+		return "none"
+	case a.BurstSafetyFactorBound == hazards.AtLeast:
+		return fmt.Sprintf("≥%g", a.BurstSafetyFactor)
 	}
-	return fmt.Sprintf("%.2f", x)
+	return fmt.Sprintf("%.2f", a.BurstSafetyFactor)
 }
 
 func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {
-	enc := json.NewEncoder(w)
-	enc.SetIndent("", "  ")
-	one := func(c checked) designJSON {
+	one := func(c checked) any {
+		if c.err != nil {
+			return failedJSON(c.path, c.err)
+		}
 		d := checkJSON(c)
 		if trace {
 			d.Trace = c.assessment.Trace
 		}
 		return d
 	}
+	var out any
 	if single && len(results) == 1 {
-		return enc.Encode(one(results[0]))
+		out = one(results[0])
+	} else {
+		all := struct {
+			Verdict string `json:"verdict"`
+			Designs []any  `json:"designs"`
+		}{Verdict: overallVerdict(results), Designs: []any{}}
+		for _, c := range results {
+			all.Designs = append(all.Designs, one(c))
+		}
+		out = all
 	}
-	all := struct {
-		Verdict string       `json:"verdict"`
-		Designs []designJSON `json:"designs"`
-	}{Verdict: string(hazards.StatusPass), Designs: []designJSON{}}
-	v := hazards.StatusPass
-	for _, c := range results {
-		all.Designs = append(all.Designs, one(c))
-		v = hazards.Worse(v, c.assessment.Verdict)
+	return encodeJSON(w, out)
+}
+
+// encodeJSON encodes v indented into memory first, so that a failure
+// prints nothing rather than half a document.
+func encodeJSON(w io.Writer, v any) error {
+	var buf bytes.Buffer
+	enc := json.NewEncoder(&buf)
+	enc.SetIndent("", "  ")
+	if err := enc.Encode(v); err != nil {
+		return fmt.Errorf("the JSON output cannot be written: %w", err)
 	}
-	all.Verdict = string(v)
-	return enc.Encode(all)
+	_, err := w.Write(buf.Bytes())
+	return err
 }

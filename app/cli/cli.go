@@ -65,7 +65,10 @@ Usage:
   ullage check FILE|FOLDER... [flags]      assess the latest revision of each design
       --rev LABEL       assess this revision instead of the latest
       --json            print machine-readable results
-      --pdf OUT.pdf     write the assessment record (one design only)
+      --pdf OUT.pdf     write the assessment record (one design only); an
+                        existing file is replaced only when it is a record
+                        written by Ullage, never when it is one of the inputs
+      --replace         allow --pdf to replace a file that is not such a record
       --units si|us     units of the text and PDF output (default si)
       --paper a4|letter paper size of the PDF (default a4)
       --reviewer NAME   reviewer printed on the PDF
@@ -76,13 +79,14 @@ Usage:
       --fluids FILE     add fluids from a JSON file of your own
   ullage compare A.json B.json [flags]     compare the latest revisions of two files
   ullage compare FILE --rev X --rev Y      compare two revisions of one file
-      --json, --pdf OUT.pdf, --units, --paper, --reviewer, --fluids as above
+      --json, --pdf OUT.pdf, --replace, --units, --paper, --reviewer, --fluids as above
   ullage fluids [--json]                   list the fluid library with sources
   ullage props FLUID --temp-c T [--json]   saturation properties at T °C
   ullage version
 
 Exit status: 0 every finding passes (cautions allowed), 1 a finding fails,
-2 bad input or usage (nothing is written).
+2 bad input or usage, or any input could not be assessed (no output file is
+written; --json still lists every input, a failed one with its error).
 `
 
 func runHelp(_ []string, stdout, _ io.Writer) int {
@@ -106,16 +110,28 @@ func library(o *options) (*fluids.Library, error) {
 	if path == "" {
 		return lib, nil
 	}
+	// A stat before opening: opening a named pipe would wait for ever.
+	info, err := os.Stat(path)
+	if err != nil {
+		return nil, fmt.Errorf("--fluids %s: %v", path, plainError(err))
+	}
+	if !info.Mode().IsRegular() {
+		return nil, fmt.Errorf("--fluids %s: is not an ordinary file (a folder, named pipe or device); give a fluid file", path)
+	}
 	f, err := os.Open(path)
 	if err != nil {
-		return nil, fmt.Errorf("--fluids: %w", err)
+		return nil, fmt.Errorf("--fluids %s: %v", path, plainError(err))
 	}
 	defer f.Close()
 	extra, err := fluids.LoadUserFluids(f)
 	if err != nil {
 		return nil, fmt.Errorf("--fluids %s: %w", path, err)
 	}
-	return lib.With(extra...), nil
+	out, err := lib.Extend(extra...)
+	if err != nil {
+		return nil, fmt.Errorf("--fluids %s: %w", path, err)
+	}
+	return out, nil
 }
 
 // usageError prints a usage problem and returns ExitUsage.

@@ -2,7 +2,6 @@ package cli
 
 import (
 	"bytes"
-	"encoding/json"
 	"fmt"
 	"io"
 
@@ -12,7 +11,7 @@ import (
 )
 
 func runCompare(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs(args, []string{"json"}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids"})
+	o, err := parseArgs(args, []string{"json", replaceFlag}, []string{"rev", "pdf", "units", "paper", "reviewer", "fluids"})
 	if err != nil {
 		return usageError(stderr, "compare", err)
 	}
@@ -35,24 +34,60 @@ func runCompare(args []string, stdout, stderr io.Writer) int {
 	default:
 		return usageError(stderr, "compare", fmt.Errorf("give two files, or one file with --rev X --rev Y"))
 	}
-	a, err := checkOne(pa, la, lib)
-	if err != nil {
-		return usageError(stderr, "compare", err)
+	pdf, wantPDF := o.last("pdf")
+	if wantPDF {
+		if err := checkOutput("--pdf", pdf, []string{pa, pb, o.value("fluids", "")}, o.bools[replaceFlag]); err != nil {
+			return usageError(stderr, "compare", err)
+		}
 	}
-	b, err := checkOne(pb, lb, lib)
-	if err != nil {
-		return usageError(stderr, "compare", err)
+	a, b := checkOne(pa, la, lib), checkOne(pb, lb, lib)
+	for _, side := range []*checked{&a, &b} {
+		if side.err == nil {
+			if where := firstNonFinite(side.assessment); where != "" {
+				side.err = fmt.Errorf("%s, revision %s: the assessment gave a number that is not finite (%s); the design cannot be assessed", side.path, side.revision.Label, where)
+			}
+		}
+	}
+	if a.err != nil || b.err != nil {
+		for _, side := range []checked{a, b} {
+			if side.err != nil {
+				fmt.Fprintf(stderr, "ullage compare: %v\n", side.err)
+			}
+		}
+		if wantPDF {
+			fmt.Fprintf(stderr, "ullage compare: no record written to %s\n", pdf)
+		}
+		if o.bools["json"] {
+			side := func(c checked) any {
+				if c.err != nil {
+					return failedJSON(c.path, c.err)
+				}
+				return checkJSON(c)
+			}
+			encodeJSON(stdout, struct {
+				Verdict string `json:"verdict"`
+				A       any    `json:"a"`
+				B       any    `json:"b"`
+			}{verdictError, side(a), side(b)})
+		} else {
+			fmt.Fprintln(stdout, "verdict: ERROR (the comparison needs both revisions assessed)")
+		}
+		return ExitUsage
 	}
 	c := compare.Compare(
 		compare.Side{Label: sideLabel(a), Design: a.revision.Design, Assessment: a.assessment},
 		compare.Side{Label: sideLabel(b), Design: b.revision.Design, Assessment: b.assessment})
-	if pdf := o.value("pdf", ""); pdf != "" {
+	if where := firstNonFinite(c); where != "" {
+		fmt.Fprintf(stderr, "ullage compare: the comparison gave a number that is not finite (%s); nothing was written\n", where)
+		return ExitUsage
+	}
+	if wantPDF {
 		var buf bytes.Buffer
 		if err := report.WriteComparison(&buf, recordMeta(a.file, a.revision, o), recordMeta(b.file, b.revision, o), c, ro); err != nil {
 			fmt.Fprintf(stderr, "ullage compare: writing the record: %v\n", err)
 			return ExitUsage
 		}
-		if err := writeFileAtomic(pdf, buf.Bytes()); err != nil {
+		if err := writeOutput("--pdf", pdf, buf.Bytes()); err != nil {
 			fmt.Fprintf(stderr, "ullage compare: %v\n", err)
 			return ExitUsage
 		}
@@ -65,9 +100,7 @@ func runCompare(args []string, stdout, stderr io.Writer) int {
 			Results  []compare.ResultChange `json:"result_changes"`
 			Statuses []compare.StatusChange `json:"status_changes"`
 		}{checkJSON(a), checkJSON(b), nonNil(c.Inputs), nonNil(c.Results), nonNil(c.Statuses)}
-		enc := json.NewEncoder(stdout)
-		enc.SetIndent("", "  ")
-		if err := enc.Encode(out); err != nil {
+		if err := encodeJSON(stdout, out); err != nil {
 			return usageError(stderr, "compare", err)
 		}
 	} else {

@@ -2,13 +2,17 @@ package gui
 
 import (
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
+	"strings"
 	"time"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/dialog"
 	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards/designfile"
 )
 
 // recoveryFile is the name of the autosaved working copy in the app's
@@ -68,11 +72,12 @@ func (s *session) autosaveNow() {
 	if err := os.MkdirAll(s.dataDir(), 0o755); err != nil {
 		return
 	}
-	tmp := s.recoveryPath() + ".tmp"
-	if err := os.WriteFile(tmp, b, 0o600); err != nil {
-		return
-	}
-	os.Rename(tmp, s.recoveryPath())
+	// The design file's atomic writer: synced to disk and renamed into
+	// place, like a real save. Private to the user, like the app's storage.
+	designfile.WriteFile(s.recoveryPath(), 0o600, func(w io.Writer) error {
+		_, err := w.Write(b)
+		return err
+	})
 }
 
 // clearAutosave removes the recovery file once the work is saved or
@@ -80,16 +85,23 @@ func (s *session) autosaveNow() {
 func (s *session) clearAutosave() { os.Remove(s.recoveryPath()) }
 
 // offerRecovery asks whether to restore work autosaved before a crash;
-// it reports whether there was any to offer.
+// it reports whether there was any to offer. A recovery file that cannot
+// be restored is never deleted: it is kept aside under a name with the
+// time, the reviewer is told where, and whatever can still be read is
+// offered.
 func (s *session) offerRecovery() bool {
+	info, err := os.Stat(s.recoveryPath())
+	if err != nil || !info.Mode().IsRegular() {
+		return false
+	}
 	b, err := os.ReadFile(s.recoveryPath())
 	if err != nil {
 		return false
 	}
 	doc, when, err := restoreSnapshot(b)
 	if err != nil {
-		s.clearAutosave()
-		return false
+		s.offerDamagedRecovery(b, err)
+		return true
 	}
 	where := doc.Name
 	if doc.Path != "" {
@@ -109,4 +121,40 @@ func (s *session) offerRecovery() bool {
 	d.Resize(fyne.NewSize(560, 240))
 	d.Show()
 	return true
+}
+
+// damagedName is the name a damaged recovery file is kept under.
+func damagedName(now time.Time) string {
+	return strings.TrimSuffix(recoveryFile, ".json") + ".damaged-" + now.UTC().Format("20060102-150405") + ".json"
+}
+
+// offerDamagedRecovery keeps a recovery file that does not restore aside,
+// says so, and offers the working copy when that much can be read.
+func (s *session) offerDamagedRecovery(b []byte, cause error) {
+	kept := filepath.Join(s.dataDir(), damagedName(s.opts.now()))
+	text := fmt.Sprintf("Ullage found unsaved work from a session that was not closed properly, but the file is damaged and cannot be restored in full:\n%v\n\n", cause)
+	if err := os.Rename(s.recoveryPath(), kept); err != nil {
+		kept = s.recoveryPath()
+		text += fmt.Sprintf("It was left where it is: %s (%v).", kept, err)
+	} else {
+		text += "It was kept, unchanged, as " + kept + "."
+	}
+	partial := salvageSnapshot(b)
+	if partial != nil {
+		text += "\n\nThe working copy of the design can still be read. Open it as a new, unsaved design?"
+	}
+	msg := widget.NewLabel(text)
+	msg.Wrapping = fyne.TextWrapWord
+	var d dialog.Dialog
+	if partial != nil {
+		d = dialog.NewCustomConfirm("Unsaved work is damaged", "Open what can be read", "Not now", msg, func(ok bool) {
+			if ok {
+				s.open(partial)
+			}
+		}, s.win)
+	} else {
+		d = dialog.NewCustom("Unsaved work is damaged", "Close", msg, s.win)
+	}
+	d.Resize(fyne.NewSize(600, 280))
+	d.Show()
 }

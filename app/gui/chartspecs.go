@@ -131,12 +131,13 @@ func pressureChart(sides []ptSide, u unitSystem) chartSpec {
 	return spec
 }
 
-// releaseChart draws the concentration after a breakage against time,
+// releaseChart draws the concentration after a breakage against time (the
+// one-minute averages whose top is the reported peak),
 // on a log scale, with the exposure and flammability limits.
 func releaseChart(c concCurves, u unitSystem) chartSpec {
 	spec := chartSpec{
 		XLabel: "Time after the breakage, minutes (log scale)",
-		YLabel: "Concentration, ppm (log scale)",
+		YLabel: "Concentration, one-minute average, ppm (log scale)",
 		LogX:   true,
 		LogY:   true,
 	}

@@ -146,8 +146,13 @@ func releaseCurves(a *hazards.Assessment) concCurves {
 	// breakage, where the near field changes fastest, to the end of the
 	// stay.
 	first := math.Min(firstMinute, end/100)
+	peakMin := hazards.PeakAveragingS / 60.0 // the curves top out here: sample it exactly
+	peakAt := int(math.Round(float64(n) * math.Log(peakMin/first) / math.Log(end/first)))
 	for i := 0; i <= n; i++ {
 		m := first * math.Pow(end/first, float64(i)/float64(n))
+		if i == peakAt && i > 0 && i < n {
+			m = peakMin
+		}
 		s := m * 60
 		c.Minutes[i] = m
 		c.Room[i] = units.MgPerM3ToPpm(a.Concentration(hazards.WellMixedRoom, s), mm)

@@ -31,6 +31,9 @@ type document struct {
 	// saved is the encoded file at the last load or save; it tells
 	// whether the product or the revision list changed since.
 	saved []byte
+	// stamp is the file on disk as it was at the last load or save, to
+	// tell whether another window or program changed it since.
+	stamp designfile.Stamp
 }
 
 // newDocument wraps a loaded file, taking the newest revision as the
@@ -73,11 +76,16 @@ func newBlankDocument(criteria hazards.Criteria) (*document, error) {
 
 // loadDocument opens a design file from disk.
 func loadDocument(path string) (*document, error) {
-	f, err := designfile.Load(path)
+	f, stamp, err := designfile.LoadStamped(path)
 	if err != nil {
 		return nil, err
 	}
-	return newDocument(f, path, filepath.Base(path))
+	d, err := newDocument(f, path, filepath.Base(path))
+	if err != nil {
+		return nil, err
+	}
+	d.stamp = stamp
+	return d, nil
 }
 
 // exampleDesignForChecks returns a valid design, used to validate a part
@@ -208,4 +216,26 @@ func restoreSnapshot(b []byte) (*document, time.Time, error) {
 		d.Name = "recovered work"
 	}
 	return d, s.Saved, nil
+}
+
+// salvageSnapshot reads what it can of a recovery file that does not
+// restore whole: the working copy of the design, when it is intact, as a
+// new document with no path (so that saving it asks where, and nothing on
+// disk is replaced). It returns nil when nothing can be read.
+func salvageSnapshot(b []byte) *document {
+	var s snapshot
+	if json.Unmarshal(b, &s) != nil || s.Work.Validate() != nil {
+		return nil
+	}
+	f := &designfile.File{Format: designfile.FormatCurrent, Product: designfile.Product{Name: "Recovered work"}}
+	if s.Path != "" {
+		if g, err := designfile.Load(s.Path); err == nil {
+			f = g
+		}
+	}
+	d := &document{File: f, Name: "recovered work", Work: cloneDesign(s.Work)}
+	if r, err := f.Latest(); err == nil {
+		d.Base = r.Label
+	}
+	return d
 }

@@ -155,6 +155,22 @@ func (s *session) save(then func()) {
 		s.saveAs(then)
 		return
 	}
+	if s.doc.saved != nil && designfile.ChangedSince(s.doc.Path, s.doc.stamp) {
+		path := s.doc.Path
+		dialog.ShowConfirm("The file changed on disk",
+			fmt.Sprintf("%s was changed by another window or program since it was opened here. Replace it with this version? The version on disk is kept as %s.", path, filepath.Base(path)+designfile.BackupSuffix),
+			func(ok bool) {
+				if !ok {
+					return
+				}
+				if err := s.writeFile(path); err != nil {
+					s.showFileProblem("The design file was not saved", err)
+				} else if then != nil {
+					then()
+				}
+			}, s.win)
+		return
+	}
 	if err := s.writeFile(s.doc.Path); err != nil {
 		s.showFileProblem("The design file was not saved", err)
 		return
@@ -217,9 +233,11 @@ func (s *session) writeFile(path string) error {
 			}
 		}
 	}
-	if err := designfile.Save(path, s.doc.File); err != nil {
+	stamp, err := designfile.SaveStamped(path, s.doc.File)
+	if err != nil {
 		return err
 	}
+	s.doc.stamp = stamp
 	s.doc.Path = path
 	s.doc.Name = filepath.Base(path)
 	s.doc.markSaved()

@@ -6,8 +6,23 @@ import (
 	"ullage/hazards"
 )
 
-// findingValue formats a finding's value in its own unit.
+// findingValue formats a finding's value in its own unit: the reason in
+// words when there is no value, "≥" or "≤" before a value that is a bound.
 func findingValue(f hazards.Finding, x float64) string {
+	if f.NotApplicable != "" {
+		return f.NotApplicable.Words()
+	}
+	switch f.ValueBound {
+	case hazards.AtLeast:
+		return "≥ " + findingNumber(f, x)
+	case hazards.AtMost:
+		return "≤ " + findingNumber(f, x)
+	}
+	return findingNumber(f, x)
+}
+
+// findingNumber formats a number in a finding's unit.
+func findingNumber(f hazards.Finding, x float64) string {
 	switch {
 	case f.Criterion == hazards.CriterionCorrelationUse:
 		return "—"
@@ -23,9 +38,6 @@ func findingValue(f hazards.Finding, x float64) string {
 	case f.Unit == "ppm":
 		return sigFigures(x, 3) + " ppm"
 	case f.Unit == "":
-		if x >= hazards.SafetyFactorCap {
-			return "over " + sigFigures(hazards.SafetyFactorCap, 4)
-		}
 		return sigFigures(x, 3)
 	}
 	return sigFigures(x, 3) + " " + f.Unit
@@ -42,26 +54,30 @@ func findingLimit(f hazards.Finding) string {
 		return "—"
 	case hazards.CriterionNoLimit:
 		return "none published"
-	case hazards.CriterionUllage, hazards.CriterionUllageWorst, hazards.CriterionBurst, hazards.CriterionImplosion:
-		return "≥ " + findingValue(f, f.Limit)
 	}
 	if f.Limit == 0 {
 		return "—"
 	}
-	return "≤ " + findingValue(f, f.Limit)
+	switch f.Criterion {
+	case hazards.CriterionUllage, hazards.CriterionUllageWorst, hazards.CriterionBurst, hazards.CriterionBurstWorst, hazards.CriterionImplosion:
+		return "≥ " + findingNumber(f, f.Limit)
+	}
+	if f.Direction == hazards.AtLeast {
+		return "≥ " + findingNumber(f, f.Limit)
+	}
+	return "≤ " + findingNumber(f, f.Limit)
 }
 
 // findingMargin formats the margin: positive on the safe side.
 func findingMargin(f hazards.Finding) string {
+	if f.NotApplicable != "" {
+		return "—"
+	}
 	switch f.Criterion {
 	case hazards.CriterionCorrelationUse, hazards.CriterionNoLimit:
 		return "—"
 	case hazards.CriterionUllage, hazards.CriterionUllageWorst:
 		return signedText(f.Margin*100, 2) + " points"
-	case hazards.CriterionBurst, hazards.CriterionImplosion:
-		if f.Value >= hazards.SafetyFactorCap {
-			return "no load"
-		}
 	}
 	if hazards.IsThermalShockCriterion(f.Criterion) && f.Value >= hazards.SafetyFactorCap {
 		return "no load"

@@ -67,10 +67,10 @@ func keyRows(a *hazards.Assessment, u unitSystem) []keyRow {
 		row("Goes liquid-full at", lf, "liquid_full_temperature"),
 		row("Allowable pressure (absolute)", u.show(qPressure, a.AllowablePressurePa(), 4)+" at safety factor "+sigFigures(a.RequiredSafetyFactor, 3), "max_safe_temperature", "long_term_burst"),
 		row("Long-term burst overpressure", u.show(qPressure, a.Strength.LongTermBurstPa, 3), "long_term_burst", "short_term_burst"),
-		row("Burst safety factor", findingValue(hazards.Finding{}, a.BurstSafetyFactor), "burst_safety_factor", "long_term_burst", "state_hot"),
-		row("Failure probability over the life", sigFigures(a.FailureProbability, 2), "failure_probability", "long_term_burst"),
+		row("Burst safety factor", keyFinding(a, hazards.CriterionBurst), "burst_safety_factor", "long_term_burst", "state_hot"),
+		row("Failure probability over the life", keyFinding(a, hazards.CriterionFailure), "failure_probability", "long_term_burst"),
 		row("Pressure at the coldest (absolute)", u.show(qPressure, a.Cold.PressurePa, 4), "state_cold", "psat_coldest"),
-		row("Implosion safety factor", findingValue(hazards.Finding{}, a.ImplosionSafetyFactor), "implosion_safety_factor", "state_cold"),
+		row("Implosion safety factor", keyFinding(a, hazards.CriterionImplosion), "implosion_safety_factor", "state_cold"),
 		row("Maximum safe temperature", u.show(qTemperature, a.MaxSafe.TemperatureK, 4)+", set by "+a.MaxSafe.TemperatureLimitBy+bound(a.MaxSafe.TemperatureBound), "max_safe_temperature"),
 		row("Maximum safe fill", u.show(qMass, a.MaxSafe.FillMassKg, 4)+bound(a.MaxSafe.FillBound), "max_safe_fill"),
 		row("Stored energy at rupture", sigFigures(a.Rupture.StoredEnergyJ, 3)+" J", "stored_energy", "state_hot"),
@@ -85,6 +85,9 @@ func keyRows(a *hazards.Assessment, u unitSystem) []keyRow {
 			stressText(p.HoopStressPa, u)+", "+p.Form, fmt.Sprintf("stress_%d", i), "state_hot"))
 	}
 	rows = append(rows, shockKeyRows(a, u)...)
+	if a.WorstStrength != nil {
+		rows = append(rows, row("Burst safety factor, weakest permitted unit", keyFinding(a, hazards.CriterionBurstWorst), "burst_safety_factor_worst", "state_worst"))
+	}
 	if a.Flags.Extrapolated() {
 		rows = append(rows, row("Correlations stretched", a.Flags.String(), "psat_hottest", "state_hot"))
 	}
@@ -196,4 +199,14 @@ func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 	objs[1].Resize(fyne.NewSize(vw, size.Height))
 	objs[2].Move(fyne.NewPos(keyLabelWidth+vw, 0))
 	objs[2].Resize(fyne.NewSize(keyHintWidth, size.Height))
+}
+
+// keyFinding shows a finding's value in the words the findings table uses.
+func keyFinding(a *hazards.Assessment, criterion string) string {
+	for _, f := range a.Findings {
+		if f.Criterion == criterion {
+			return findingValue(f, f.Value)
+		}
+	}
+	return "—"
 }

@@ -180,6 +180,9 @@ func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
 	v.caption.Color = statusColour(a.Verdict)
 	alpha := uint8(55)
 	counts := fmt.Sprintf("%d of %d criteria fail, %s, %d pass", fail, len(a.Findings), plural(caution, "caution"), pass)
+	if n := len(a.Findings) - pass - caution - fail; n > 0 {
+		counts += fmt.Sprintf(", %d not assessed — no published limit", n)
+	}
 	if stale {
 		alpha = 18
 		v.caption.Text = "OUT OF DATE"

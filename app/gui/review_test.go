@@ -84,7 +84,7 @@ func TestInvalidValueKeepsLastResults(t *testing.T) {
 	}{
 		{"not a number", "hottest_k", "7O", "not a number"},
 		{"empty", "fill_mass_kg", "", "not a number"},
-		{"negative fill", "fill_mass_kg", "-5", "greater than zero"},
+		{"negative fill", "fill_mass_kg", "-5", "must be from"},
 		// 800 K is the engine's upper bound, shown here in °C.
 		{"too hot", "hottest_k", "900", "526.85 °C"},
 		{"wall thicker than the radius", "vessel.parts[0].wall_thickness_m", "30", "outer radius"},

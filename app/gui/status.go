@@ -19,6 +19,8 @@ func statusWord(s hazards.Status) string {
 		return "CAUTION"
 	case hazards.StatusFail:
 		return "FAIL"
+	case hazards.StatusNotAssessed:
+		return "NOT ASSESSED"
 	}
 	return strings.ToUpper(string(s))
 }

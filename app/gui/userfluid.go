@@ -48,6 +48,12 @@ func readUserFluids(r io.Reader) ([]*fluids.Substance, error) {
 	if err != nil {
 		return nil, err
 	}
+	// A user fluid never takes the id or name of a built-in one.
+	if lib, err := fluids.Builtin(); err == nil {
+		if _, err := lib.Extend(subs...); err != nil {
+			return nil, err
+		}
+	}
 	for _, sub := range subs {
 		f := sub.Fluid()
 		if _, err := sub.Saturation(f.NormalBoilingPoint.Value); err != nil {
@@ -118,6 +124,9 @@ func (s *session) addUserFluids(path string, subs []*fluids.Substance) {
 func (s *session) loadUserFluidsFromPrefs() {
 	p := s.app.Preferences()
 	for _, path := range p.StringList(prefUserFluids) {
+		if info, err := os.Stat(path); err != nil || !info.Mode().IsRegular() {
+			continue // a named pipe would block the start for ever
+		}
 		b, err := os.ReadFile(path)
 		if err != nil {
 			continue

@@ -83,13 +83,14 @@ func TestIdenticalDesigns(t *testing.T) {
 	}
 }
 
-// A change of fluid changes which exposure limits apply: a criterion
-// present on one side only is reported against "absent".
+// A change of fluid changes which findings apply: a fluid with no
+// published exposure limit has a finding saying so, reported against
+// "absent" on the other side.
 func TestCriterionOnOneSideOnly(t *testing.T) {
 	a := overfilledBulb()
 	a.FillMassKg = 0.012
 	b := a
-	b.Fluid = "chloroform" // not flammable: no LFL
+	b.Fluid = "1-1-1-3-3-pentafluoropropane" // not flammable (no LFL), no published exposure limit
 	b.FillMassKg = 0.015
 	c := Compare(side(t, "A", a), side(t, "B", b))
 	oldSet, newSet := map[string]bool{}, map[string]bool{}
@@ -120,7 +121,7 @@ func TestCriterionOnOneSideOnly(t *testing.T) {
 		t.Fatal("the two fluids have the same criteria; pick another pair for this test")
 	}
 	if r := findResult(t, c, "Peak as a percentage of the LFL"); r.NewText != "not flammable" {
-		t.Errorf("chloroform %% LFL shown as %q; want \"not flammable\"", r.NewText)
+		t.Errorf("HFC-245fa %% LFL shown as %q; want \"not flammable\"", r.NewText)
 	}
 }
 

@@ -1,10 +1,12 @@
 package designfile
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"reflect"
 	"strings"
+	"unicode/utf8"
 
 	"ullage/hazards"
 )
@@ -40,6 +42,10 @@ func Decode(r io.Reader, name string) (*File, error) {
 	}
 	if len(data) > MaxFileBytes {
 		return nil, tooLarge(name)
+	}
+	data, line, problem := stripBOM(data)
+	if problem != "" {
+		return nil, &FileError{File: name, Line: line, Problem: problem}
 	}
 	f, ferr := decodeBytes(data)
 	if ferr != nil {
@@ -112,4 +118,45 @@ func migrateSingleSheet(s *singleSheet) *File {
 			Design:     s.Design,
 		}},
 	}
+}
+
+// utf8BOM is the UTF-8 byte-order mark some editors put first.
+var utf8BOM = []byte{0xEF, 0xBB, 0xBF}
+
+// stripBOM skips a UTF-8 byte-order mark and names a UTF-16 or UTF-32
+// encoding, which the JSON decoder cannot read; problem is "" when the
+// data can be decoded, and line says where the problem is.
+func stripBOM(data []byte) (out []byte, line int, problem string) {
+	const saveAs = "; save it as UTF-8 (most editors offer this under Save As or Encoding)"
+	switch {
+	case bytes.HasPrefix(data, utf8BOM):
+		data = data[len(utf8BOM):]
+	case bytes.HasPrefix(data, []byte{0xFF, 0xFE, 0, 0}), bytes.HasPrefix(data, []byte{0, 0, 0xFE, 0xFF}):
+		return nil, 1, "the file is encoded as UTF-32" + saveAs
+	case bytes.HasPrefix(data, []byte{0xFE, 0xFF}):
+		return nil, 1, "the file is encoded as UTF-16 (big-endian)" + saveAs
+	case bytes.HasPrefix(data, []byte{0xFF, 0xFE}):
+		return nil, 1, "the file is encoded as UTF-16 (little-endian)" + saveAs
+	case len(data) >= 4 && data[0] == 0 && data[1] != 0 && data[2] == 0:
+		return nil, 1, "the file is encoded as UTF-16 (big-endian, no byte-order mark)" + saveAs
+	case len(data) >= 4 && data[0] != 0 && data[1] == 0 && data[3] == 0:
+		return nil, 1, "the file is encoded as UTF-16 (little-endian, no byte-order mark)" + saveAs
+	}
+	if !utf8.Valid(data) {
+		return nil, lineAt(data, int64(firstInvalidUTF8(data))+1), "the file is not valid UTF-8 text (a byte that is no character in UTF-8, perhaps from another encoding)" + saveAs
+	}
+	return data, 0, ""
+}
+
+// firstInvalidUTF8 returns the offset of the first byte that does not
+// start a valid UTF-8 sequence.
+func firstInvalidUTF8(data []byte) int {
+	for i := 0; i < len(data); {
+		r, size := utf8.DecodeRune(data[i:])
+		if r == utf8.RuneError && size <= 1 {
+			return i
+		}
+		i += size
+	}
+	return len(data)
 }

@@ -119,7 +119,7 @@ func TestDecodeMalformed(t *testing.T) {
 			field: "revisions[1].design.fill_mass_kg", at: mark{`"five grams"`, 1, 0}, text: "must be a number"},
 		{name: "negative fill", fixture: fixtureCurrent,
 			edits: []edit{{`"fill_mass_kg": 0.0055`, `"fill_mass_kg": -0.001`, 1}},
-			field: "revisions[1].design.fill_mass_kg", at: mark{`-0.001`, 1, 0}, text: "greater than zero", is: hazards.ErrInvalidInput},
+			field: "revisions[1].design.fill_mass_kg", at: mark{`-0.001`, 1, 0}, text: "must be from 1e-06 to 10 kg", is: hazards.ErrInvalidInput},
 		{name: "null for a number", fixture: fixtureCurrent,
 			edits: []edit{{`"hottest_k": 349.15`, `"hottest_k": null`, 1}},
 			field: "revisions[0].design.hottest_k", at: mark{`null`, 1, 0}, text: "must be a number"},

@@ -111,7 +111,7 @@ func TestValidate(t *testing.T) {
 		{"short form", func(f *File) { f.Revisions[0].Date = "2024-3-4" }, "revisions[0].date", "YYYY-MM-DD"},
 		{"slipped year", func(f *File) { f.Revisions[0].Date = "0224-03-04" }, "revisions[0].date", "1900"},
 		{"dates backwards", func(f *File) { f.Revisions[1].Date = "2024-03-03" }, "revisions[1].date", "oldest first"},
-		{"design out of range", func(f *File) { f.Revisions[1].Design.FillMassKg = -0.001 }, "revisions[1].design.fill_mass_kg", "greater than zero"},
+		{"design out of range", func(f *File) { f.Revisions[1].Design.FillMassKg = -0.001 }, "revisions[1].design.fill_mass_kg", "must be from 1e-06 to 10 kg"},
 		{"part shape", func(f *File) { f.Revisions[0].Design.Vessel.Parts[2].Shape = "cone" }, "revisions[0].design.vessel.parts[2].shape", "sphere"},
 	}
 	for _, tt := range tests {

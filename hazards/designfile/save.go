@@ -6,7 +6,6 @@ import (
 	"io"
 	"io/fs"
 	"os"
-	"path/filepath"
 	"runtime"
 )
 
@@ -15,7 +14,9 @@ import (
 const BackupSuffix = ".bak"
 
 // Load reads and decodes the design file at path (see Decode). A missing
-// file, a folder or a file over MaxFileBytes is refused with a
+// file, a folder, anything that is not a regular file (a named pipe, a
+// device: checked before opening, so Load never blocks) or a file over
+// MaxFileBytes is refused with a
 // *FileError naming the path; every error wraps ErrInvalidFile, and also
 // fs.ErrNotExist for a missing file and ErrTooLarge for an oversized one.
 func Load(path string) (*File, error) {
@@ -25,6 +26,10 @@ func Load(path string) (*File, error) {
 	}
 	if info.IsDir() {
 		return nil, &FileError{File: path, Problem: "is a folder, not a design file"}
+	}
+	if !info.Mode().IsRegular() {
+		// Opening a named pipe would wait for a writer for ever.
+		return nil, &FileError{File: path, Problem: "is " + describeMode(info.Mode()) + ", not a design file; give an ordinary file"}
 	}
 	if info.Size() > MaxFileBytes {
 		return nil, tooLarge(path)
@@ -54,9 +59,11 @@ func pathError(path, what string, err error) *FileError {
 // it to disk (fsync) and close it; keep the existing file, if any, as
 // "<path>.bak" (a hard link, or a copy where links are not supported,
 // replacing any older .bak); rename the temporary file over path; fsync
-// the folder. On any failure the temporary file is removed and the file
-// at path is left as it was. A new file gets permissions 0644; an
-// existing file keeps its own.
+// the folder (see WriteFile, which Save shares). On any failure the
+// temporary file is removed and the file at path is left as it was. A new
+// file gets permissions 0666 less the umask (0644 under the usual umask);
+// an existing file keeps its own. Temporaries left by a killed save of the
+// same path are removed first.
 //
 // Save does not read the file it replaces. Callers must not Save over a
 // file they failed to Load: doing so would replace content the user may
@@ -72,62 +79,16 @@ func save(path string, f *File, wrap func(io.Writer) io.Writer) error {
 	if ferr := f.validate(); ferr != nil {
 		return fmt.Errorf("not saved to %s: %w", path, ferr)
 	}
-	mode := fs.FileMode(0o644)
-	old, statErr := os.Stat(path)
-	switch {
-	case statErr == nil && !old.Mode().IsRegular():
-		return &FileError{File: path, Problem: "is not a regular file; not saved"}
-	case statErr == nil:
-		mode = old.Mode().Perm()
-	case !errors.Is(statErr, fs.ErrNotExist):
-		return pathError(path, "cannot be saved", statErr)
-	}
-	dir, base := filepath.Split(path)
-	if dir == "" {
-		dir = "."
-	}
-	tmp, err := os.CreateTemp(dir, "."+base+".*.tmp")
-	if err != nil {
-		return pathError(path, "cannot be saved", err)
-	}
-	renamed := false
-	defer func() {
-		if !renamed {
-			tmp.Close()
-			os.Remove(tmp.Name())
+	err := writeAtomic(path, 0o666, true, func(w io.Writer) error {
+		if wrap != nil {
+			w = wrap(w)
 		}
-	}()
-	var w io.Writer = tmp
-	if wrap != nil {
-		w = wrap(tmp)
-	}
-	if err = Encode(w, f); err != nil {
-		return fmt.Errorf("not saved to %s: %w", path, err)
-	}
-	if err := tmp.Chmod(mode); err != nil && runtime.GOOS != "windows" {
-		return fmt.Errorf("not saved to %s: %w", path, err)
-	}
-	if err = tmp.Sync(); err != nil {
-		return fmt.Errorf("not saved to %s: %w", path, err)
-	}
-	if err = tmp.Close(); err != nil {
-		return fmt.Errorf("not saved to %s: %w", path, err)
-	}
-	if statErr == nil {
-		if err = keepBackup(path, tmp.Name()); err != nil {
-			return fmt.Errorf("not saved to %s: keeping the previous version: %w", path, err)
+		if err := Encode(w, f); err != nil {
+			return fmt.Errorf("not saved to %s: %w", path, err)
 		}
-	}
-	if err = os.Rename(tmp.Name(), path); err != nil {
-		return fmt.Errorf("not saved to %s: %w", path, err)
-	}
-	renamed = true
-	if err := syncDir(dir); err != nil {
-		// The new file is in place; only its durability across a power
-		// cut is in doubt. Report it without undoing the save.
-		return fmt.Errorf("saved to %s, but flushing the folder failed: %w", path, err)
-	}
-	return nil
+		return nil
+	})
+	return err
 }
 
 // keepBackup makes path+BackupSuffix hold the current content of path,
@@ -144,6 +105,12 @@ func keepBackup(path, tmpBase string) error {
 	if err := os.Rename(staged, path+BackupSuffix); err != nil {
 		os.Remove(staged)
 		return err
+	}
+	// When path+BackupSuffix already was a hard link to path (another
+	// writer made it a moment ago), rename does nothing and leaves staged
+	// in place; the backup already holds path's content, so staged goes.
+	if _, err := os.Lstat(staged); err == nil {
+		os.Remove(staged)
 	}
 	return nil
 }

@@ -181,3 +181,43 @@ func TestSaveFailingHalfWay(t *testing.T) {
 		t.Error("the healthy save did not keep the original as .bak")
 	}
 }
+
+// TestSaveCleansAndHandlesHardLinkedBackup: a save removes temporaries of
+// its own naming left by a killed save (and nothing else), and keeps a
+// correct backup when FILE.bak is a hard link of FILE.
+func TestSaveCleansAndHandlesHardLinkedBackup(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "d.json")
+	f := typicalFile()
+	if err := Save(path, f); err != nil {
+		t.Fatal(err)
+	}
+	first := readFixture(t, path)
+	if err := os.Link(path, path+BackupSuffix); err != nil {
+		t.Skipf("no hard links here: %v", err)
+	}
+	for _, name := range []string{".d.json.0123456789abcdef.tmp", ".d.json.0123456789abcdef.tmp.bak", ".d.json.fedcba9876543210.tmp.bak"} {
+		if err := os.WriteFile(filepath.Join(dir, name), []byte("partial"), 0o600); err != nil {
+			t.Fatal(err)
+		}
+	}
+	keep := []string{".d.json.notes.tmp", ".other.json.0123456789abcdef.tmp", "d.json.tmp"}
+	for _, name := range keep {
+		if err := os.WriteFile(filepath.Join(dir, name), []byte("not ours"), 0o600); err != nil {
+			t.Fatal(err)
+		}
+	}
+	f.Product.Description = "second"
+	if err := Save(path, f); err != nil {
+		t.Fatal(err)
+	}
+	want := append([]string{}, keep...)
+	want = append(want, "d.json", "d.json.bak")
+	sort.Strings(want)
+	if got := listDir(t, dir); strings.Join(got, " ") != strings.Join(want, " ") {
+		t.Errorf("folder holds %v; want %v", got, want)
+	}
+	if bak := readFixture(t, path+BackupSuffix); !bytes.Equal(bak, first) {
+		t.Error(".bak does not hold the version before the save")
+	}
+}

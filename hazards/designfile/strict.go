@@ -38,8 +38,7 @@ func (d *strictDecoder) decode(n *node, v reflect.Value, path string) *FileError
 		return nil
 	case reflect.Slice:
 		if n.kind == kindNull {
-			v.SetZero()
-			return nil
+			return d.fail(n, path, "null", "must be a list in square brackets [ … ] (write [] for an empty list)", nil)
 		}
 		if n.kind != kindArray {
 			return d.fail(n, path, n.shown(), "must be a list in square brackets [ … ]", nil)

@@ -14,6 +14,34 @@ import (
 // MaxLabelLength is the longest revision label accepted, in characters.
 const MaxLabelLength = 16
 
+// Longest free text accepted in a design file, in characters. A name fits
+// on one or two lines of the record; a note or description on half a
+// page. Longer text is refused with an error wrapping ErrTextTooLong.
+const (
+	// MaxNameLength bounds the product name, the company and the
+	// revision author.
+	MaxNameLength = 200
+	// MaxPartNumberLength bounds the part number.
+	MaxPartNumberLength = 64
+	// MaxNoteLength bounds the product description and a revision's change
+	// note.
+	MaxNoteLength = 4000
+)
+
+// ErrTextTooLong is wrapped by the error for a free-text field longer
+// than its limit.
+var ErrTextTooLong = errors.New("text too long")
+
+// textTooLong returns the error for a free-text field over most
+// characters, or nil.
+func textTooLong(field, text string, most int) *FileError {
+	if n := utf8.RuneCountInString(text); n > most {
+		return &FileError{Field: field, Value: fmt.Sprintf("%q", clip(text)),
+			Problem: fmt.Sprintf("is %d characters long; at most %d are accepted", n, most), Err: ErrTextTooLong}
+	}
+	return nil
+}
+
 // dateLayout is the only accepted way to write a revision date.
 const dateLayout = "2006-01-02"
 
@@ -33,6 +61,10 @@ const earliestYear = 1900
 //   - every date is a real calendar date written YYYY-MM-DD, from 1900 on,
 //     and no revision is dated before the one listed ahead of it
 //     (revisions are listed oldest first);
+//   - the product's name and company and each revision's author are at
+//     most MaxNameLength characters, the part number at most
+//     MaxPartNumberLength, the description and each change note at most
+//     MaxNoteLength (ErrTextTooLong);
 //   - every design passes hazards.Design.Validate.
 func (f *File) Validate() error { return asError(f.validate()) }
 
@@ -43,6 +75,19 @@ func (f *File) validate() *FileError {
 	}
 	if len(f.Revisions) == 0 {
 		return &FileError{Field: "revisions", Value: "[]", Problem: "a design file holds at least one revision"}
+	}
+	for _, t := range []struct {
+		field, text string
+		most        int
+	}{
+		{"product.name", f.Product.Name, MaxNameLength},
+		{"product.part_number", f.Product.PartNumber, MaxPartNumberLength},
+		{"product.company", f.Product.Company, MaxNameLength},
+		{"product.description", f.Product.Description, MaxNoteLength},
+	} {
+		if err := textTooLong(t.field, t.text, t.most); err != nil {
+			return err
+		}
 	}
 	seen := make(map[string]int, len(f.Revisions))
 	var previous time.Time
@@ -66,6 +111,12 @@ func (f *File) validate() *FileError {
 				Problem: fmt.Sprintf("must not be before revisions[%d].date (%s): revisions are listed oldest first", i-1, previous.Format(dateLayout))}
 		}
 		previous = date
+		if err := textTooLong(at+".author", r.Author, MaxNameLength); err != nil {
+			return err
+		}
+		if err := textTooLong(at+".change_note", r.ChangeNote, MaxNoteLength); err != nil {
+			return err
+		}
 		if err := r.Design.Validate(); err != nil {
 			return designError(at+".design", err)
 		}

@@ -1,0 +1,187 @@
+package hazards
+
+import (
+	"math"
+	"strings"
+
+	"ullage/fluids"
+)
+
+// AveragingKinds are the kinds of exposure limit the review judges, in the
+// order their findings appear. Each kind gets one finding: the limit of
+// that kind with the largest share of its limit governs, and a kind with
+// no published limit for the fluid is listed as not assessed. A further
+// limit set (public acute benchmarks, other countries' occupational
+// limits) adds its kinds here and its limits through LimitSpecs.
+var AveragingKinds = []string{fluids.AveragingIDLH, fluids.AveragingCeiling, fluids.AveragingSTEL, fluids.AveragingTWA}
+
+// LimitSpec is one published exposure limit as the review applies it: the
+// body, the averaging kind, the concentration and the averaging period as
+// that body defines it.
+type LimitSpec struct {
+	// Body publishes the limit (NIOSH, OSHA, ACGIH, …); Name labels it
+	// for people ("NIOSH REL TWA"); Kind is its averaging kind, one of
+	// AveragingKinds.
+	Body string
+	Name string
+	Kind string
+	// PPM is the limit in ppm by volume; Source where it is published.
+	PPM    float64
+	Source string
+	// PeriodS is the averaging period in seconds; 0 means the highest
+	// value at any time, taken as the peak (PeakAveragingS). When
+	// ShortestPeriodS is below PeriodS the period is the time a person
+	// stays, kept between the two ("up to a 10-hour workday").
+	PeriodS         float64
+	ShortestPeriodS float64
+	// Definition says how the body defines the averaging period, with its
+	// source.
+	Definition string
+}
+
+// AveragingS returns the averaging period (s) that applies for a person
+// who stays presentS seconds: the peak period for an instantaneous limit,
+// the stay kept within [ShortestPeriodS, PeriodS] for a limit defined for
+// "up to" a period, otherwise PeriodS.
+func (l LimitSpec) AveragingS(presentS float64) float64 {
+	if l.PeriodS <= PeakAveragingS {
+		return PeakAveragingS
+	}
+	if l.ShortestPeriodS > 0 && l.ShortestPeriodS < l.PeriodS {
+		return math.Min(math.Max(presentS, l.ShortestPeriodS), l.PeriodS)
+	}
+	return l.PeriodS
+}
+
+// averagingDefinitions says how each body defines each averaging period.
+// Keys are body + " " + averaging kind; the kind alone is the fallback.
+var averagingDefinitions = map[string]struct {
+	shortestS  float64 // for limits defined for "up to" their period
+	definition string
+}{
+	"NIOSH TWA": {8 * 3600, "NIOSH: TWA concentration for up to a 10-hour workday during a 40-hour workweek (NIOSH Pocket Guide to Chemical Hazards, DHHS (NIOSH) Publication 2005-149, Introduction); averaged over the stay, kept between a conventional 8-hour day and 10 hours (our reading of \"up to\")"},
+	"OSHA TWA":  {0, "OSHA: 8-hour time-weighted average, not to be exceeded in any 8-hour work shift of a 40-hour week (29 CFR 1910.1000, from memory)"},
+	"ACGIH TWA": {0, "ACGIH: TWA concentration for a conventional 8-hour workday and a 40-hour workweek (ACGIH TLVs and BEIs, definitions, from memory)"},
+	"TWA":       {0, "time-weighted average over the period the library lists for the limit"},
+	"STEL":      {0, "15-minute TWA (or the period the body states) not to be exceeded at any time during a workday (NIOSH Pocket Guide, Introduction; 29 CFR 1910.1000)"},
+	"ceiling":   {0, "not to be exceeded at any time; where the body states a sampling period, the highest average over that period (NIOSH Pocket Guide, Introduction; 29 CFR 1910.1000(a))"},
+	"IDLH":      {0, "NIOSH IDLH: the concentration from which a person could escape within 30 minutes without escape-impairing or irreversible effects, judged on a 30-minute exposure (NIOSH Pocket Guide, Introduction; NIOSH Current Intelligence Bulletin 66, 2013) (from memory)"},
+}
+
+// LimitSpecs returns every published numeric limit of the fluid from the
+// chosen bodies (all when bodies is empty), each with its averaging period
+// as its body defines it, in library order.
+func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
+	var out []LimitSpec
+	for _, l := range f.ExposureLimits {
+		if !bodyChosen(l.Body, bodies) {
+			continue
+		}
+		def, ok := averagingDefinitions[l.Body+" "+l.Averaging]
+		if !ok {
+			def = averagingDefinitions[l.Averaging]
+		}
+		s := LimitSpec{Body: l.Body, Name: l.Label(), Kind: l.Averaging, PPM: l.PPM, Source: l.Source,
+			PeriodS: l.Minutes * 60, Definition: def.definition}
+		if def.shortestS > 0 && def.shortestS < s.PeriodS {
+			s.ShortestPeriodS = def.shortestS
+		}
+		out = append(out, s)
+	}
+	return out
+}
+
+// LimitResult is one limit evaluated over its own averaging period.
+type LimitResult struct {
+	LimitSpec
+	// Exposure is the highest average a person could receive over the
+	// limit's period (Exposure.AveragingS).
+	Exposure Exposure
+	// Share is the average over the limit (1 = at the limit).
+	Share float64
+	// Governs marks the limit of its kind with the largest share.
+	Governs bool
+	// StepKey names the calculation step of the limit's averaging period.
+	StepKey string
+}
+
+// evaluateLimits evaluates every limit over its own averaging period and
+// marks, within each kind, the one with the largest share (the first
+// listed on a tie).
+func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass float64) []LimitResult {
+	out := make([]LimitResult, len(specs))
+	for i, s := range specs {
+		e := rel.exposure(s.AveragingS(presentS), presentS, molarMass)
+		out[i] = LimitResult{LimitSpec: s, Exposure: e, Share: e.PPM / s.PPM, StepKey: exposureStepKey(e.AveragingS)}
+	}
+	for _, k := range kindsOf(specs) {
+		best := -1
+		for i := range out {
+			if out[i].Kind == k && (best < 0 || out[i].Share > out[best].Share) {
+				best = i
+			}
+		}
+		if best >= 0 {
+			out[best].Governs = true
+		}
+	}
+	return out
+}
+
+// kindsOf returns AveragingKinds followed by any other kind the limits
+// use, in order of first appearance.
+func kindsOf(specs []LimitSpec) []string {
+	kinds := append([]string(nil), AveragingKinds...)
+	for _, s := range specs {
+		found := false
+		for _, k := range kinds {
+			found = found || k == s.Kind
+		}
+		if !found {
+			kinds = append(kinds, s.Kind)
+		}
+	}
+	return kinds
+}
+
+// exposureCriterion returns the criterion identifier of an averaging kind.
+func exposureCriterion(kind string) string {
+	switch kind {
+	case fluids.AveragingIDLH:
+		return CriterionIDLH
+	case fluids.AveragingCeiling:
+		return CriterionCeiling
+	case fluids.AveragingSTEL:
+		return CriterionSTEL
+	case fluids.AveragingTWA:
+		return CriterionTWA
+	}
+	return "exposure-" + strings.ToLower(strings.ReplaceAll(kind, " ", "-"))
+}
+
+// exposureTitle returns the title of an averaging kind's finding.
+func exposureTitle(kind string) string {
+	switch kind {
+	case fluids.AveragingIDLH:
+		return "30-minute average against the IDLH"
+	case fluids.AveragingCeiling:
+		return "Highest concentration against the ceiling limit"
+	case fluids.AveragingSTEL:
+		return "Short-term average against the STEL"
+	case fluids.AveragingTWA:
+		return "Time-weighted average against the TWA limit"
+	}
+	return "Average against the " + kind + " limit"
+}
+
+func bodyChosen(body string, bodies []string) bool {
+	if len(bodies) == 0 {
+		return true
+	}
+	for _, b := range bodies {
+		if b == body {
+			return true
+		}
+	}
+	return false
+}
