@@ -72,6 +72,12 @@ func newRefSubstance(f *Fluid, ref *referenceEOS) (*Substance, error) {
 			s.tPeak = r.X
 		}
 	}
+	// The densest saturated liquid and the density search's upper bound
+	// are fixed for the fluid: computed once here rather than on every
+	// density solve and liquid-full search.
+	_, rl, _, _ := tb.at(s.tPeak)
+	s.peakLiquidDensity = rl * s.molarMass
+	s.maxRefDensity = s.peakLiquidDensity + 3*s.rhoC
 	return s, nil
 }
 
@@ -91,8 +97,16 @@ func (s *Substance) refFlags(t, p float64) Flags {
 
 // refSaturation returns the saturated state at t from the table.
 func (s *Substance) refSaturation(t float64) Saturation {
-	tb := s.ref.table
-	lnP, rl, rv, dh := tb.at(t)
+	sat := s.refSaturationNoCp(t)
+	sat.LiquidHeatCapacity = s.liquidHeatCapacity(s.ref.table, t)
+	return sat
+}
+
+// refSaturationNoCp is refSaturation without the liquid heat capacity
+// (its own table series and an exponential), for the callers that need
+// only pressures and densities.
+func (s *Substance) refSaturationNoCp(t float64) Saturation {
+	lnP, rl, rv, dh := s.ref.table.at(t)
 	p := math.Exp(lnP)
 	m := s.molarMass
 	return Saturation{
@@ -101,7 +115,6 @@ func (s *Substance) refSaturation(t float64) Saturation {
 		LiquidDensity:      rl * m,
 		VapourDensity:      rv * m,
 		HeatOfVaporisation: dh / m,
-		LiquidHeatCapacity: s.liquidHeatCapacity(tb, t),
 		Flags:              s.refFlags(t, p) &^ SupercriticalState,
 	}
 }
@@ -148,7 +161,8 @@ func (s *Substance) refDensity(t, p, guess, lo, hi float64) (float64, error) {
 	var c tauCache
 	h.prepareTau(h.tr/t, &c)
 	for i := 0; i < 100; i++ {
-		st := h.stateCached(t, rho/m, &c)
+		var st stateAt
+		st.p, st.dpdrho = h.pressureSlopeCached(t, rho/m, &c)
 		f := st.p - p
 		if math.Abs(f) <= 1e-12*p {
 			return rho, nil
@@ -176,10 +190,7 @@ func (s *Substance) refDensity(t, p, guess, lo, hi float64) (float64, error) {
 // refMaxDensity bounds the density search: three times the critical
 // density beyond the densest saturated liquid (no liquid here is
 // compressed that far below 1 GPa).
-func (s *Substance) refMaxDensity() float64 {
-	sat := s.refSaturation(s.tPeak)
-	return sat.LiquidDensity + 3*s.rhoC
-}
+func (s *Substance) refMaxDensity() float64 { return s.maxRefDensity }
 
 func (s *Substance) refCompressedLiquidDensity(t, p float64, sat Saturation) (float64, Flags, error) {
 	rho, err := s.refDensity(t, p, sat.LiquidDensity, sat.LiquidDensity*(1-1e-9), s.refMaxDensity())
@@ -189,9 +200,30 @@ func (s *Substance) refCompressedLiquidDensity(t, p float64, sat Saturation) (fl
 	return rho, s.refFlags(t, p), nil
 }
 
+// refCompressedLiquidDensityAt is CompressedLiquidDensity on the
+// equation-of-state route, with the same checks and errors, reading the
+// saturation table once.
+func (s *Substance) refCompressedLiquidDensityAt(t, p float64) (float64, Flags, error) {
+	if err := s.checkTemperature(t); err != nil {
+		return 0, 0, err
+	}
+	if t > s.tc {
+		return 0, 0, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
+	}
+	sat := s.refSaturationNoCp(t)
+	ps := sat.PressurePa
+	if math.IsNaN(p) || math.IsInf(p, 0) {
+		return 0, 0, fmt.Errorf("%s: pressure %v Pa: %w", s.fluid.Name, p, ErrNotFinite)
+	}
+	if p < ps*(1-1e-12) {
+		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
+	}
+	return s.refCompressedLiquidDensity(t, math.Max(p, ps), sat)
+}
+
 func (s *Substance) refDensityAt(t, p float64) (float64, Flags, error) {
 	if t <= s.tc {
-		sat := s.refSaturation(t)
+		sat := s.refSaturationNoCp(t)
 		if p >= sat.PressurePa {
 			return s.refCompressedLiquidDensity(t, p, sat)
 		}
@@ -212,12 +244,13 @@ func (s *Substance) refDensityAt(t, p float64) (float64, Flags, error) {
 // refLiquidFullTemperature finds the temperature above the liquid-density
 // maximum at which the saturated liquid density equals rho.
 func (s *Substance) refLiquidFullTemperature(rho float64) (float64, bool) {
-	peak := s.refSaturation(s.tPeak).LiquidDensity
-	if rho >= peak {
+	if rho >= s.peakLiquidDensity {
 		return s.tMin, true
 	}
+	m := s.molarMass
 	r, err := solve.Brent(func(t float64) float64 {
-		return s.refSaturation(t).LiquidDensity - rho
+		rl, _ := s.ref.table.densities(t)
+		return rl*m - rho
 	}, s.tPeak, s.tc, 1e-10, 200)
 	if err != nil {
 		return s.tc, true
@@ -322,3 +355,43 @@ func (s *Substance) IsochoricSlope(t, rho float64) (float64, error) {
 	}
 	return (b - a) / h, nil
 }
+
+// Isotherm is a fluid's reference equation of state prepared at one
+// temperature, for solvers that evaluate many densities at that
+// temperature: the temperature factors of every term are computed once.
+// The zero value is not usable; see Substance.PrepareIsotherm.
+type Isotherm struct {
+	s *Substance
+	t float64
+	c tauCache
+}
+
+// PrepareIsotherm prepares it for temperature t (K) and reports whether
+// the fluid has a reference equation of state; on the correlation route
+// it returns false and leaves it unusable.
+func (s *Substance) PrepareIsotherm(t float64, it *Isotherm) bool {
+	if s == nil || s.ref == nil {
+		return false
+	}
+	it.s, it.t = s, t
+	s.ref.h.prepareTau(s.ref.h.tr/t, &it.c)
+	return true
+}
+
+// PressureSlope returns the equation's pressure P(T, ρ) in Pa and its
+// slope (∂P/∂ρ)_T in Pa per kg/m³ at density rho (kg/m³), without any
+// phase test: the same pressure SinglePhasePressure gives for a
+// single-phase state.
+func (it *Isotherm) PressureSlope(rho float64) (p, dpdrho float64) {
+	s := it.s
+	p, dpdrho = s.ref.h.pressureSlopeCached(it.t, rho/s.molarMass, &it.c)
+	return p, dpdrho / s.molarMass
+}
+
+// Flags returns the flags CompressedLiquidDensity reports for a liquid
+// at pressure p (Pa) on this isotherm.
+func (it *Isotherm) Flags(p float64) Flags { return it.s.refFlags(it.t, p) }
+
+// MaxDensity returns the top of the density range CompressedLiquidDensity
+// searches, in kg/m³.
+func (it *Isotherm) MaxDensity() float64 { return it.s.maxRefDensity }

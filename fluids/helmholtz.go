@@ -299,8 +299,11 @@ func (q *nonAnalyticTerm) add(r *residualDerivs, delta, tau float64) {
 // pressure returns the pressure (Pa) at temperature t (K) and molar
 // density rho (mol/m³): P = ρRT(1 + δ αr_δ). Explicit, no iteration.
 func (h *helmholtz) pressure(t, rho float64) float64 {
-	d := h.eval(rho/h.rhor, h.tr/t)
-	return rho * h.r * t * (1 + rho/h.rhor*d.D)
+	var c tauCache
+	h.prepareTau(h.tr/t, &c)
+	delta := rho / h.rhor
+	sd, _ := h.densityDerivsCached(delta, &c)
+	return rho * h.r * t * (1 + rho/h.rhor*(sd/delta))
 }
 
 // stateAt is the thermodynamic state at (T, ρ) that the solvers need.
@@ -317,6 +320,74 @@ func (h *helmholtz) state(t, rho float64) stateAt {
 	var c tauCache
 	h.prepareTau(h.tr/t, &c)
 	return h.stateCached(t, rho, &c)
+}
+
+// densityDerivsCached returns only δ·∂αr/∂δ and δ²·∂²αr/∂δ² at δ and the
+// temperature c was prepared for: all that the pressure and its density
+// slope need. The sums are those of evalCached, term for term; an
+// equation with non-analytic terms takes evalCached itself.
+func (h *helmholtz) densityDerivsCached(delta float64, c *tauCache) (sd, sdd float64) {
+	if len(h.nonAn) > 0 {
+		d := h.evalCached(delta, c)
+		return delta * d.D, delta * delta * d.DD
+	}
+	var dp [maxPowerTable + 1]float64 // δ^k
+	dp[0] = 1
+	for k := 1; k <= h.maxD; k++ {
+		dp[k] = dp[k-1] * delta
+	}
+	var ge [maxExpGroups]float64 // shared exp(−c δ^l)
+	for i, g := range h.groups {
+		ge[i] = math.Exp(-g.c * dp[g.l])
+	}
+	for i := range h.exps {
+		e := &h.exps[i]
+		f := c.ef[i] * dp[e.d]
+		A := float64(e.d)
+		var extraD float64
+		if e.group >= 0 {
+			f *= ge[e.group]
+			dl := dp[e.l]
+			A -= e.cl * dl
+			extraD = -e.cl2 * dl
+		}
+		sd += f * A
+		sdd += f * (A*A - A + extraD)
+	}
+	for i := range h.gauss {
+		g := &h.gauss[i]
+		dd := delta - g.eps
+		var f, A, dA float64
+		if !g.rational {
+			x := -g.eta*dd*dd + c.gx[i]
+			if x < -600 {
+				continue
+			}
+			f = c.gf[i] * dp[g.d] * math.Exp(-g.eta*dd*dd)
+			A = float64(g.d) - 2*g.eta*delta*dd
+			dA = A*A - float64(g.d) - 2*g.eta*delta*delta
+		} else {
+			f = c.gf[i] * dp[g.d] * math.Exp(g.eta*dd*dd)
+			A = float64(g.d) + 2*g.eta*delta*dd
+			dA = A*A - float64(g.d) + 2*g.eta*delta*delta
+		}
+		sd += f * A
+		sdd += f * dA
+	}
+	return sd, sdd
+}
+
+// pressureSlopeCached returns the pressure (Pa) and (∂P/∂ρ)_T
+// (Pa·m³/mol) at molar density rho and the temperature c was prepared
+// for, as stateCached gives them.
+func (h *helmholtz) pressureSlopeCached(t, rho float64, c *tauCache) (p, dpdrho float64) {
+	delta := rho / h.rhor
+	sd, sdd := h.densityDerivsCached(delta, c)
+	// stateCached's δ·D and δ²·DD, with D = sd/δ and DD = sdd/δ².
+	dD := delta * (sd / delta)
+	ddDD := delta * delta * (sdd / (delta * delta))
+	rt := h.r * t
+	return rho * rt * (1 + dD), rt * (1 + 2*dD + ddDD)
 }
 
 // stateCached is state at the temperature c was prepared for.

@@ -169,6 +169,9 @@ func (s *Substance) isochoricRise(t, t0, rho, p0 float64) (float64, error) {
 // CompressedLiquidDensity returns the density (kg/m³) of the liquid at
 // temperature t ≤ Tc and pressure p at or above the saturation pressure.
 func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error) {
+	if s.ref != nil {
+		return s.refCompressedLiquidDensityAt(t, p)
+	}
 	ps, fl, err := s.SaturationPressure(t)
 	if err != nil {
 		return 0, 0, err
@@ -178,9 +181,6 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 	}
 	if p < ps*(1-1e-12) {
 		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
-	}
-	if s.ref != nil {
-		return s.refCompressedLiquidDensity(t, math.Max(p, ps), s.refSaturation(t))
 	}
 	rhoSat := s.liquidDensity(t)
 	if t > taitMaxTr*s.tc {

@@ -19,6 +19,10 @@ type Substance struct {
 	// tPeak is the temperature of the densest saturated liquid (the
 	// freezing point, except for water).
 	tPeak float64
+	// peakLiquidDensity is the saturated liquid density at tPeak and
+	// maxRefDensity the top of the equation of state's density search
+	// (refMaxDensity), kg/m³; equation-of-state route only.
+	peakLiquidDensity, maxRefDensity float64
 
 	tc, pc, rhoC, tMin, molarMass float64
 	vp                            *vapourPressureCurve
@@ -92,6 +96,14 @@ func (s *Substance) CriticalDensity() float64 { return s.rhoC }
 // accept: the freezing (triple) point in K.
 func (s *Substance) MinTemperature() float64 { return s.tMin }
 
+// DensestLiquidTemperature returns the temperature (K) of the densest
+// saturated liquid: the freezing point for every fluid but water, whose
+// maximum lies near 4 °C. Above it the saturated liquid density falls
+// steadily to the critical density, so a vessel at a temperature t at or
+// above it has gone liquid-full (LiquidFullTemperature below t) exactly
+// when its fill density is at or above the saturated liquid density at t.
+func (s *Substance) DensestLiquidTemperature() float64 { return s.tPeak }
+
 // MolarMass returns the molar mass in kg/mol.
 func (s *Substance) MolarMass() float64 { return s.molarMass }
 
@@ -108,7 +120,8 @@ func (s *Substance) RackettZ() float64 {
 // liquidDensity returns the saturated liquid density in kg/m³.
 func (s *Substance) liquidDensity(t float64) float64 {
 	if s.ref != nil {
-		return s.refSaturation(t).LiquidDensity
+		rl, _ := s.ref.table.densities(t)
+		return rl * s.molarMass
 	}
 	d, _ := s.liquid.density(t)
 	return d
@@ -148,7 +161,7 @@ func (s *Substance) SaturationPressure(t float64) (float64, Flags, error) {
 		return 0, 0, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
 	}
 	if s.ref != nil {
-		sat := s.refSaturation(t)
+		sat := s.refSaturationNoCp(t)
 		return sat.PressurePa, sat.Flags, nil
 	}
 	lnP, ext := s.vp.lnP(t)
@@ -168,6 +181,25 @@ func (s *Substance) SaturatedLiquidDensity(t float64) (float64, error) {
 		return 0, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
 	}
 	return s.liquidDensity(t), nil
+}
+
+// SaturationNoHeatCapacity is Saturation with LiquidHeatCapacity left at
+// zero, for callers that need only the pressure, the densities and the
+// flags: on the equation-of-state route the heat capacity is a table
+// series of its own.
+func (s *Substance) SaturationNoHeatCapacity(t float64) (Saturation, error) {
+	if s.ref == nil {
+		sat, err := s.Saturation(t)
+		sat.LiquidHeatCapacity = 0
+		return sat, err
+	}
+	if err := s.checkTemperature(t); err != nil {
+		return Saturation{}, err
+	}
+	if t > s.tc {
+		return Saturation{}, fmt.Errorf("%s: temperature %.2f K is above the critical temperature %.2f K: %w", s.fluid.Name, t, s.tc, ErrSupercritical)
+	}
+	return s.refSaturationNoCp(t), nil
 }
 
 // Saturation returns the saturated liquid and vapour state at t (K). It

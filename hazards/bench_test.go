@@ -16,9 +16,9 @@ func BenchmarkAssess(b *testing.B) {
 	}
 }
 
-// BenchmarkAssessWithResidualGas is the same with residual air, which
+// BenchmarkAssessResidualGas is the same with residual air, which
 // needs the gas-bubble solve at every state.
-func BenchmarkAssessWithResidualGas(b *testing.B) {
+func BenchmarkAssessResidualGas(b *testing.B) {
 	lib := testLibrary(b)
 	d := typicalDesign()
 	d.ResidualGasPressurePa = 2000

@@ -81,12 +81,19 @@ func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambie
 		return nil, fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
 			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume)}, ErrOverfilled)
 	}
-	gasSpace := volume
+	v.sealGas(sat, residualPa, sealK)
+	return v, nil
+}
+
+// sealGas sets the moles of residual gas sealed in at residualPa and
+// sealK, where sat is the saturated state: the gas fills the space the
+// liquid leaves.
+func (v *sealedVessel) sealGas(sat fluids.Saturation, residualPa, sealK float64) {
+	gasSpace := v.volume
 	if v.density > sat.VapourDensity {
-		gasSpace = (sat.LiquidDensity*volume - mass) / (sat.LiquidDensity - sat.VapourDensity)
+		gasSpace = (sat.LiquidDensity*v.volume - v.mass) / (sat.LiquidDensity - sat.VapourDensity)
 	}
 	v.gasMoles = residualPa * gasSpace / (units.GasConstant * sealK)
-	return v, nil
 }
 
 // liquidFullTemperature returns the temperature at which the saturated
@@ -110,7 +117,7 @@ func (v *sealedVessel) state(t float64) (VesselState, error) {
 		st.PressurePa += v.offsetAtCritical()
 		return st, err
 	}
-	sat, err := s.Saturation(t)
+	sat, err := s.SaturationNoHeatCapacity(t)
 	if err != nil {
 		return st, err
 	}
@@ -220,6 +227,22 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 	s := v.fluid
 	t := st.TemperatureK
 	nrt := v.gasMoles * units.GasConstant * t
+	if v.mass-sat.VapourDensity*v.volume <= 0 {
+		return st, fmt.Errorf("internal: gas bubble asked for an all-vapour state at %.2f K", t)
+	}
+	var iso fluids.Isotherm
+	if s.PrepareIsotherm(t, &iso) {
+		return v.withGasBubbleEOS(st, sat, nrt, &iso)
+	}
+	return v.withGasBubbleBrent(st, sat, nrt)
+}
+
+// withGasBubbleBrent is withGasBubble by Brent's method on ln V_g, each
+// step solving for the compressed-liquid density: the correlation route,
+// and the check on the equation-of-state route's own solver.
+func (v *sealedVessel) withGasBubbleBrent(st VesselState, sat fluids.Saturation, nrt float64) (VesselState, error) {
+	s := v.fluid
+	t := st.TemperatureK
 	var flags fluids.Flags
 	residual := func(lnVg float64) float64 {
 		vg := math.Exp(lnVg)
@@ -258,6 +281,133 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 	st.VapourDensity = sat.VapourDensity
 	st.LiquidDensity = st.LiquidMassKg / (v.volume - vg)
 	st.Flags |= flags
+	return st, nil
+}
+
+// newtonStopStep is the Newton step in ln V_g below which the gas-bubble
+// solver stops: its square, 1e-12, is far below the 1e-10 in ln V_g that
+// the general solver (Brent) is asked for.
+const newtonStopStep = 1e-6
+
+// withGasBubbleEOS solves the gas-bubble equation of withGasBubble on the
+// equation-of-state route, where the liquid's pressure P(T, ρ) and its
+// slope are explicit. Writing the liquid density as a function of the gas
+// space, ρ(V_g) = (m − ρ_v V_g)/(V − V_g), the equation is
+//
+//	F(V_g) = P(T, ρ(V_g)) − P_sat − nRT/V_g = 0,
+//
+// the same equation as withGasBubble's (whose inner step solves
+// P(T, ρ) = P_sat + nRT/V_g for ρ), with the liquid held at no less than
+// CompressedLiquidDensity's lower bound ρ_sat(1 − 10⁻⁹). F rises with V_g,
+// so the root is unique. It is found by Newton's method in ln V_g kept
+// inside a bracket (a bisection step whenever Newton would leave it),
+// started from the root of the quadratic that linearises P about the
+// smallest admissible gas space: one pressure evaluation per step instead
+// of a density solve. Where the equation has no solution the equation of
+// state can give, the state is withoutBubble's, as on the general route.
+func (v *sealedVessel) withGasBubbleEOS(st VesselState, sat fluids.Saturation, nrt float64, iso *fluids.Isotherm) (VesselState, error) {
+	m, vol, rv, ps := v.mass, v.volume, sat.VapourDensity, sat.PressurePa
+	rhoOf := func(vg float64) float64 { return (m - rv*vg) / (vol - vg) }
+	vgOf := func(rho float64) float64 { return (rho*vol - m) / (rho - rv) }
+	// dρ/dV_g = (m − ρ_v V)/(V − V_g)², positive.
+	slope := func(vg float64) float64 { d := vol - vg; return (m - rv*vol) / (d * d) }
+	lo, hi := sat.LiquidDensity*(1-1e-9), iso.MaxDensity()
+	rhoA, vgA := v.density, 0.0
+	if rhoA < lo {
+		rhoA, vgA = lo, vgOf(lo)
+	}
+	pA, kA := iso.PressureSlope(rhoA)
+	if !isFinite(pA) || !isFinite(kA) {
+		return v.withoutBubble(st, sat)
+	}
+	vg := vgA
+	if vgA == 0 || pA-ps-nrt/vgA < 0 {
+		vgHi := vgOf(hi)
+		if !(vgHi > vgA) {
+			// No solution the equation can give: as the general solver.
+			return v.withoutBubble(st, sat)
+		}
+		// Start: P ≈ pA + kA·c·(V_g − V_gA) with c = dρ/dV_g at V_gA,
+		// so a·V_g² + b·V_g − nRT = 0.
+		a := kA * slope(vgA)
+		b := pA - ps - a*vgA
+		x := 2 * nrt / (b + math.Sqrt(b*b+4*a*nrt))
+		yLo, yHi := math.Inf(-1), math.Log(vgHi)
+		if vgA > 0 {
+			yLo = math.Log(vgA)
+		}
+		y := math.Log(x)
+		if !(y > yLo && y < yHi) {
+			y = yHi
+		}
+		converged, sawAbove := false, false
+		if vgA > 0 && math.Abs(y-yLo) <= newtonStopStep {
+			// The start is a step from the evaluated state at V_gA,
+			// exact in the gas term and linear in the liquid's pressure:
+			// the stopping rule of the Newton steps below applies to it.
+			vg, converged = x, true
+		}
+		for i := 0; i < 200 && !converged; i++ {
+			vg = math.Exp(y)
+			p, k := iso.PressureSlope(rhoOf(vg))
+			gas := nrt / vg
+			f := p - ps - gas
+			next := math.NaN()
+			switch {
+			case !isFinite(f) || !(p > 0) || !(k > 0):
+				// Denser than the equation describes (or than the
+				// liquid can be compressed): the root lies below.
+				yHi, sawAbove = y, true
+			case math.Abs(f) <= 1e-12*(ps+gas):
+				converged = true
+			case f > 0:
+				yHi, sawAbove = y, true
+			default:
+				yLo = y
+			}
+			if converged {
+				break
+			}
+			newton := false
+			if isFinite(f) && k > 0 {
+				next = y - f/(k*slope(vg)*vg+gas)
+				newton = next > yLo && next < yHi
+			}
+			if newton && math.Abs(next-y) <= newtonStopStep {
+				// Newton converges quadratically: the error left after
+				// this step is about (F''/2F')·Δy², and F varies on a
+				// scale of order one in ln V_g, so under 1e-11.
+				y, converged = next, true
+				vg = math.Exp(y)
+				break
+			}
+			if !(next > yLo && next < yHi) {
+				if math.IsInf(yLo, -1) {
+					next = y - 1
+				} else {
+					next = 0.5 * (yLo + yHi)
+				}
+			}
+			if math.Abs(next-y) <= 1e-13 && sawAbove {
+				y, converged = next, true
+				vg = math.Exp(y)
+				break
+			}
+			y = next
+		}
+		if !converged {
+			// No solution the equation can give: as the general solver.
+			return v.withoutBubble(st, sat)
+		}
+	}
+	st.GasPressurePa = nrt / vg
+	st.PressurePa = ps + st.GasPressurePa
+	st.UllagePercent = 100 * vg / vol
+	st.VapourMassKg = rv * vg
+	st.LiquidMassKg = m - st.VapourMassKg
+	st.VapourDensity = rv
+	st.LiquidDensity = st.LiquidMassKg / (vol - vg)
+	st.Flags |= iso.Flags(st.PressurePa)
 	return st, nil
 }
 

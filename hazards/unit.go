@@ -25,6 +25,9 @@ type UnitModel struct {
 	// duration (Strength.DurationFactor), both the same for every unit.
 	sealLiquidDensity float64
 	durationFactor    float64
+	// sealSat is the saturated state at the sealing temperature, which
+	// fixes every unit's residual gas.
+	sealSat fluids.Saturation
 	// vessels recycles the per-unit sealed vessels, which would otherwise
 	// be a million small allocations for a million units.
 	vessels sync.Pool
@@ -95,7 +98,7 @@ func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
 		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", d.SealingTemperatureK), Want: err.Error()}
 	}
 	d.Vessel.Parts = append([]Part(nil), d.Vessel.Parts...)
-	m := &UnitModel{design: d, sub: sub, glass: glass, sealLiquidDensity: sat.LiquidDensity}
+	m := &UnitModel{design: d, sub: sub, glass: glass, sealLiquidDensity: sat.LiquidDensity, sealSat: sat}
 	m.durationFactor = glassStrength(analyseParts(d.Vessel.Parts, &glass, 0), &glass, d.HoursAtHottest*3600, 1).DurationFactor
 	m.vessels.New = func() any { return new(sealedVessel) }
 	return m, nil
@@ -117,21 +120,61 @@ const unitParts = 8
 // the freezing point), and an error wrapping ErrOverfilled when the unit's
 // fill would not fit as liquid at the sealing temperature.
 func (m *UnitModel) Evaluate(u Unit) (UnitResult, error) {
+	r, v, err := m.evaluate(u)
+	if err != nil {
+		return r, err
+	}
+	defer m.vessels.Put(v)
+	tFull, reached := v.liquidFullTemperature()
+	r.LiquidFullK = tFull
+	r.LiquidFull = reached && tFull < u.HottestK
+	return r, nil
+}
+
+// EvaluateHot is Evaluate without the search for the liquid-full
+// temperature, for studies that need only whether the unit has gone
+// liquid-full: LiquidFullK is left at zero and LiquidFull is decided from
+// the hot state (see fluids.Substance.DensestLiquidTemperature; below that
+// temperature, water only, the temperature is searched as in Evaluate).
+func (m *UnitModel) EvaluateHot(u Unit) (UnitResult, error) {
+	r, v, err := m.evaluate(u)
+	if err != nil {
+		return r, err
+	}
+	defer m.vessels.Put(v)
+	s := m.sub
+	switch t := u.HottestK; {
+	case t > s.CriticalTemperature():
+		// Liquid-full at or below Tc when the fill is denser than the
+		// critical density (fluids.Substance.LiquidFullTemperature).
+		r.LiquidFull = v.density > s.CriticalDensity()
+	case t >= s.DensestLiquidTemperature():
+		r.LiquidFull = r.Hot.Phase == PhaseLiquidFull
+	default:
+		tFull, reached := v.liquidFullTemperature()
+		r.LiquidFull = reached && tFull < t
+	}
+	return r, nil
+}
+
+// evaluate is Evaluate up to the liquid-full temperature; it returns the
+// unit's vessel, which the caller puts back in the pool.
+func (m *UnitModel) evaluate(u Unit) (UnitResult, *sealedVessel, error) {
 	var r UnitResult
 	d := &m.design
 	parts := d.Vessel.Parts
 	if u.WallThicknessM != nil && len(u.WallThicknessM) != len(parts) {
-		return r, &InputError{Field: "unit.wall_thickness_m", Value: fmt.Sprintf("%d values", len(u.WallThicknessM)),
+		return r, nil, &InputError{Field: "unit.wall_thickness_m", Value: fmt.Sprintf("%d values", len(u.WallThicknessM)),
 			Want: fmt.Sprintf("one per part (%d)", len(parts))}
 	}
 	if !isFinite(u.FillMassKg) || u.FillMassKg <= 0 {
-		return r, &InputError{Field: "unit.fill_mass_kg", Value: fmt.Sprint(u.FillMassKg), Want: "must be a positive number"}
+		return r, nil, &InputError{Field: "unit.fill_mass_kg", Value: fmt.Sprint(u.FillMassKg), Want: "must be a positive number"}
 	}
 	if !isFinite(u.VolumeM3) || u.VolumeM3 < 0 {
-		return r, &InputError{Field: "unit.volume_m3", Value: fmt.Sprint(u.VolumeM3), Want: "must be a positive number, or 0 to compute it from the parts"}
+		return r, nil, &InputError{Field: "unit.volume_m3", Value: fmt.Sprint(u.VolumeM3), Want: "must be a positive number, or 0 to compute it from the parts"}
 	}
 	if !isFinite(u.HottestK) || u.HottestK < m.sub.MinTemperature() {
-		return r, &InputError{Field: "unit.hottest_k", Value: fmt.Sprint(u.HottestK),
+		return r, nil, &InputError{Field: "unit.hottest_k", Value: fmt.Sprint(u.HottestK),
 			Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K", m.sub.Fluid().Name, m.sub.MinTemperature())}
 	}
 	var buf [unitParts]PartStress
@@ -146,7 +189,7 @@ func (m *UnitModel) Evaluate(u Unit) (UnitResult, error) {
 			p.WallThicknessM = u.WallThicknessM[i]
 		}
 		if !isFinite(p.WallThicknessM) || p.WallThicknessM <= 0 || p.WallThicknessM >= p.OuterDiameterM/2 {
-			return r, &InputError{Field: fmt.Sprintf("unit.wall_thickness_m[%d]", i), Value: fmt.Sprint(p.WallThicknessM),
+			return r, nil, &InputError{Field: fmt.Sprintf("unit.wall_thickness_m[%d]", i), Value: fmt.Sprint(p.WallThicknessM),
 				Want: fmt.Sprintf("must be greater than zero and less than the outer radius (%g m)", p.OuterDiameterM/2)}
 		}
 		k, _ := hoopStressFactor(&p)
@@ -158,29 +201,26 @@ func (m *UnitModel) Evaluate(u Unit) (UnitResult, error) {
 	if r.VolumeM3 == 0 {
 		r.VolumeM3 = partsVolume
 	}
-	// An evacuated vessel that can be sealed holds no residual gas, so the
-	// vessel is built directly, without newSealedVessel's look-up of the
-	// sealing state (the same for every unit). Residual gas, and a fill
-	// that does not fit, take newSealedVessel itself.
-	var v *sealedVessel
-	if d.ResidualGasPressurePa == 0 && u.FillMassKg/r.VolumeM3 < m.sealLiquidDensity {
-		v = m.vessels.Get().(*sealedVessel)
-		defer m.vessels.Put(v)
-		*v = sealedVessel{fluid: m.sub, mass: u.FillMassKg, volume: r.VolumeM3, density: u.FillMassKg / r.VolumeM3, ambientPa: d.AmbientPressurePa}
-	} else {
-		var err error
-		v, err = newSealedVessel(m.sub, u.FillMassKg, r.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
-		if err != nil {
-			return r, err
+	// A fill that fits is sealed from the model's saturated state at the
+	// sealing temperature (the same for every unit) into a recycled
+	// vessel; one that does not takes newSealedVessel for its error.
+	if !(u.FillMassKg/r.VolumeM3 < m.sealLiquidDensity) {
+		_, err := newSealedVessel(m.sub, u.FillMassKg, r.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
+		if err == nil {
+			err = fmt.Errorf("internal: fill density %g kg/m³ at or above the sealing liquid density %g kg/m³ but sealable", u.FillMassKg/r.VolumeM3, m.sealLiquidDensity)
 		}
+		return r, nil, err
+	}
+	v := m.vessels.Get().(*sealedVessel)
+	*v = sealedVessel{fluid: m.sub, mass: u.FillMassKg, volume: r.VolumeM3, density: u.FillMassKg / r.VolumeM3, ambientPa: d.AmbientPressurePa}
+	if d.ResidualGasPressurePa != 0 {
+		v.sealGas(m.sealSat, d.ResidualGasPressurePa, d.SealingTemperatureK)
 	}
 	var err error
 	if r.Hot, err = v.state(u.HottestK); err != nil {
-		return r, fmt.Errorf("state at %.2f K: %w", u.HottestK, err)
+		m.vessels.Put(v)
+		return r, nil, fmt.Errorf("state at %.2f K: %w", u.HottestK, err)
 	}
-	tFull, reached := v.liquidFullTemperature()
-	r.LiquidFullK = tFull
-	r.LiquidFull = reached && tFull < u.HottestK
 
 	over := r.Hot.PressurePa - d.AmbientPressurePa
 	r.LongTermBurstPa = shortTermBurst(ps, &m.glass) * m.durationFactor
@@ -188,7 +228,7 @@ func (m *UnitModel) Evaluate(u Unit) (UnitResult, error) {
 	r.EffectiveStrengthPa = r.LongTermBurstPa * r.StressPerPascal
 	r.BurstSafetyFactor = safetyFactor(r.LongTermBurstPa, over)
 	r.FailureProbability = failureProbability(over, r.LongTermBurstPa, m.glass.WeibullModulus.Value)
-	return r, nil
+	return r, v, nil
 }
 
 // shortTermBurst returns Strength.ShortTermBurstPa, the weakest-link burst

@@ -124,7 +124,7 @@ func (w *worker) count(c int, t *tally) error {
 		if err != nil {
 			return fmt.Errorf("unit %d: %w", i, err)
 		}
-		r, err := p.model.Evaluate(*u)
+		r, err := p.model.EvaluateHot(*u)
 		strength := wq * r.EffectiveStrengthPa
 		switch {
 		case errors.Is(err, hazards.ErrOverfilled):
