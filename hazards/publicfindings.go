@@ -32,9 +32,9 @@ func IsPublicCriterion(c string) bool {
 }
 
 var publicTitles = map[int]string{
-	1: "Public: average over each AEGL duration against AEGL-1 (caution line)",
-	2: "Public: average over each AEGL duration against AEGL-2 (fail line)",
-	3: "Public: peak against AEGL-3 (life-threatening)",
+	1: "Public: average over each AEGL duration against AEGL-1 / PAC-1 (caution line)",
+	2: "Public: average over each AEGL duration against AEGL-2 / PAC-2 (fail line)",
+	3: "Public: peak against AEGL-3 / PAC-3 (life-threatening)",
 }
 
 // appliesOccupational reports whether any occupational set applies.
