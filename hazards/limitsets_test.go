@@ -155,3 +155,44 @@ func TestDefaultLimitSets(t *testing.T) {
 		}
 	}
 }
+
+// An "NR" cell is said in words and never used as a number: chloroform's
+// AEGL-1 is not recommended at every duration, so tier 1 falls back to
+// the DOE PAC-1, 2.0 ppm, the DOE's own order of precedence; interim
+// values are marked (acetone's AEGLs are interim). Values as in
+// fluids/limits/us-public-acute.json.
+func TestPublicNotRecommendedAndInterim(t *testing.T) {
+	d := typicalDesign()
+	d.Fluid = "chloroform"
+	a, err := Assess(d, testLibrary(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	nr := 0
+	for _, n := range a.Release.LimitNotes {
+		if n.Reason == ReasonNotRecommended && strings.HasPrefix(n.Name, "AEGL-1 ") {
+			nr++
+		}
+	}
+	if nr != 5 {
+		t.Errorf("%d AEGL-1 cells said to be not recommended; want 5: %+v", nr, a.Release.LimitNotes)
+	}
+	for _, l := range a.Release.Limits {
+		if l.Kind == "AEGL-1" {
+			t.Errorf("NR cell %s used as a number (%g ppm)", l.Name, l.PPM)
+		}
+	}
+	if f := findingOf(t, a, CriterionPublic1); f.Limit != 2 || !strings.Contains(f.Source, "PAC-1") {
+		t.Errorf("tier 1 against %g ppm from %q; want PAC-1 2 ppm", f.Limit, f.Source)
+	}
+	if f := findingOf(t, a, CriterionPublic2); f.Limit != 64 || !strings.Contains(f.Source, "AEGL-2 60 min") {
+		t.Errorf("tier 2 against %g ppm from %q; want AEGL-2 60 min 64 ppm", f.Limit, f.Source)
+	}
+	d.Fluid = "acetone"
+	if a, err = Assess(d, testLibrary(t)); err != nil {
+		t.Fatal(err)
+	}
+	if f := findingOf(t, a, CriterionPublic2); !strings.Contains(f.Source, "(interim value)") {
+		t.Errorf("acetone tier 2 source %q does not mark the value interim", f.Source)
+	}
+}
