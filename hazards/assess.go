@@ -128,6 +128,10 @@ type Release struct {
 	// Limits are every applicable published limit, each evaluated over
 	// its own averaging period, the governing one of each kind marked.
 	Limits []LimitResult
+	// LimitSets are the limit sets applied (Criteria.AppliedLimitSets);
+	// LimitNotes say in words where a set gives no number for the fluid.
+	LimitSets  []string
+	LimitNotes []LimitNote
 	// RoomTimeConstantS is the e-folding time of the well-mixed room,
 	// k·V/Q; zero ventilation gives the cap of 1e9 s.
 	RoomTimeConstantS float64
@@ -406,7 +410,9 @@ func (a *Assessment) releaseModel(sub *fluids.Substance) {
 	r.Peak = rel.exposure(PeakAveragingS, exposureS, mm)
 	r.STEL = rel.exposure(15*60, exposureS, mm)
 	r.TWA8h = rel.exposure(8*3600, exposureS, mm)
-	r.Limits = evaluateLimits(LimitSpecs(a.Fluid, d.Criteria.LimitBodies), rel, exposureS, mm)
+	specs, notes := AppliedLimitSpecs(a.Fluid, d.Criteria)
+	r.Limits = evaluateLimits(specs, rel, exposureS, mm)
+	r.LimitSets, r.LimitNotes = d.Criteria.AppliedLimitSets(), notes
 	if a.Fluid.Flammability.LFLPercent != nil {
 		r.PercentLFL = r.Peak.PPM / (a.Fluid.Flammability.LFLPercent.Value * 1e4) * 100
 	}

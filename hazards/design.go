@@ -111,6 +111,13 @@ type Criteria struct {
 	// AIHA, ACGIH); empty means all. Each limit is averaged over its own
 	// period and, for each kind, the largest share of its limit governs.
 	LimitBodies []string `json:"limit_bodies"`
+	// LimitSets lists the sets of exposure limits that apply, by ID (see
+	// LimitSetIDs): LimitSetUSOccupational, LimitSetUSPublicAcute,
+	// LimitSetEUOccupational, LimitSetUKWEL, LimitSetDEAGW. Empty means
+	// DefaultLimitSets, the public acute benchmarks and the US
+	// occupational limits; the field is then left out of the file and of
+	// the fingerprint, so designs written before it existed are unchanged.
+	LimitSets []string `json:"limit_sets,omitzero"`
 }
 
 // DefaultCriteria returns the review criteria used when a design sets
@@ -275,6 +282,17 @@ func (cr *Criteria) validate(c *checker) {
 		if !knownBodies[b] {
 			c.fail(fmt.Sprintf("criteria.limit_bodies[%d]", i), fmt.Sprintf("%q", b), "must be one of NIOSH, OSHA, EPA, AIHA, ACGIH")
 		}
+	}
+	seen := map[string]bool{}
+	for i, id := range cr.LimitSets {
+		field := fmt.Sprintf("criteria.limit_sets[%d]", i)
+		if !knownLimitSet(id) {
+			c.fail(field, fmt.Sprintf("%q", id), "must be one of %s", strings.Join(LimitSetIDs(), ", "))
+		}
+		if seen[id] {
+			c.fail(field, fmt.Sprintf("%q", id), "is listed twice")
+		}
+		seen[id] = true
 	}
 }
 

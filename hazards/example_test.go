@@ -54,6 +54,9 @@ func ExampleAssess() {
 	// not-assessed exposure-ceiling
 	// not-assessed exposure-stel
 	// caution exposure-twa
+	// caution exposure-public-1
+	// pass    exposure-public-2
+	// pass    exposure-public-3
 	// pass    flammability
 }
 

@@ -86,12 +86,25 @@ const (
 	// ReasonNoPublishedLimit: no published limit of this kind for the
 	// fluid from the chosen bodies.
 	ReasonNoPublishedLimit Reason = "no published limit"
+	// ReasonNonePublished: the limit set publishes no value for the fluid.
+	ReasonNonePublished Reason = "none published"
+	// ReasonNotChecked: the set's published table could not be checked
+	// for the fluid, so no value is entered (not a statement that none
+	// exists).
+	ReasonNotChecked Reason = "published table not checked"
+	// ReasonNotRecommended: the AEGL table marks the value "NR", not
+	// recommended for want of data.
+	ReasonNotRecommended Reason = "not recommended (NR)"
+	// ReasonNotListed: the fluid (one of the user's own) is in no
+	// built-in table.
+	ReasonNotListed Reason = "not listed"
 )
 
 // Words returns the reason as every output prints it in place of a value:
 // "not assessed — no published limit", "none — no burst load".
 func (r Reason) Words() string {
-	if r == ReasonNoPublishedLimit {
+	switch r {
+	case ReasonNoPublishedLimit, ReasonNonePublished, ReasonNotChecked, ReasonNotRecommended, ReasonNotListed:
 		return "not assessed — " + string(r)
 	}
 	return "none — " + string(r)
@@ -127,6 +140,10 @@ type Finding struct {
 	// Stretched names the values behind this finding that came from a
 	// correlation used outside its published range.
 	Stretched []string `json:"stretched,omitempty"`
+	// Protects says, for a public acute finding, whom and for how long
+	// the governing benchmark protects ("General public, children
+	// included, 30 minutes").
+	Protects string `json:"protects,omitempty"`
 }
 
 // MarshalJSON writes a finding with null value and margin when they were
@@ -206,6 +223,9 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 	var out []Finding
 	assessed := 0
 	for _, kind := range kindsOf(specs) {
+		if IsPublicKind(kind) || !cr.appliesOccupational() {
+			continue
+		}
 		id, title := exposureCriterion(kind), exposureTitle(kind)
 		gov := -1
 		var names []string
@@ -246,6 +266,15 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		fd.Message = fmt.Sprintf("%s in %s: %.3g ppm%s against %s %.4g ppm (%.0f %% of the limit). Largest share of its limit governs: %s.",
 			avg, where, e.PPM, bound, lim.Name, lim.PPM, 100*lim.Share, strings.Join(names, ", "))
 		out = append(out, fd)
+	}
+	if cr.Applies(LimitSetUSPublicAcute) {
+		pub := publicFindings(f, r, cr)
+		for _, p := range pub {
+			if p.NotApplicable == "" {
+				assessed++
+			}
+		}
+		out = append(out, pub...)
 	}
 	if assessed == 0 {
 		fd := Finding{Criterion: CriterionNoLimit, Title: "Published exposure limit", Status: StatusCaution, Unit: "ppm",

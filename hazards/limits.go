@@ -37,6 +37,22 @@ type LimitSpec struct {
 	// Definition says how the body defines the averaging period, with its
 	// source.
 	Definition string
+	// Set is the limit set the limit belongs to (LimitSetIDs).
+	Set string
+	// WholePeriod is true for a public acute benchmark: the person is
+	// taken to stay for the whole averaging period, whatever the room's
+	// exposure time (the benchmark is defined for an exposure of that
+	// duration).
+	WholePeriod bool
+	// Standing is the value's standing as published ("final", "interim",
+	// "indicative", "in-force" …), empty for the fluid records' limits;
+	// Date the date or revision of the value.
+	Standing string
+	Date     string
+	// Protects says whom and for how long the limit protects, in plain
+	// words ("General public, children included, 30 minutes"); empty for
+	// occupational limits.
+	Protects string
 }
 
 // AveragingS returns the averaging period (s) that applies for a person
@@ -81,7 +97,7 @@ func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
 		if !ok {
 			def = averagingDefinitions[l.Averaging]
 		}
-		s := LimitSpec{Body: l.Body, Name: l.Label(), Kind: l.Averaging, PPM: l.PPM, Source: l.Source,
+		s := LimitSpec{Set: LimitSetUSOccupational, Body: l.Body, Name: l.Label(), Kind: l.Averaging, PPM: l.PPM, Source: l.Source,
 			PeriodS: l.Minutes * 60, Definition: def.definition}
 		if def.shortestS > 0 && def.shortestS < s.PeriodS {
 			s.ShortestPeriodS = def.shortestS
@@ -89,6 +105,25 @@ func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
 		out = append(out, s)
 	}
 	return out
+}
+
+// AppliedLimitSpecs returns every numeric limit of the fluid from the sets
+// the criteria apply (Criteria.AppliedLimitSets), in set order, and the
+// notes of the sets that give no number (none published, not checked,
+// not recommended). LimitBodies narrows the US occupational set only.
+func AppliedLimitSpecs(f *fluids.Fluid, cr Criteria) ([]LimitSpec, []LimitNote) {
+	var specs []LimitSpec
+	var notes []LimitNote
+	for _, set := range cr.AppliedLimitSets() {
+		if set == LimitSetUSOccupational {
+			specs = append(specs, LimitSpecs(f, cr.LimitBodies)...)
+			continue
+		}
+		s, n := tableLimits(f, set)
+		specs = append(specs, s...)
+		notes = append(notes, n...)
+	}
+	return specs, notes
 }
 
 // LimitResult is one limit evaluated over its own averaging period.
@@ -111,8 +146,12 @@ type LimitResult struct {
 func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass float64) []LimitResult {
 	out := make([]LimitResult, len(specs))
 	for i, s := range specs {
-		e := rel.exposure(s.AveragingS(presentS), presentS, molarMass)
-		out[i] = LimitResult{LimitSpec: s, Exposure: e, Share: e.PPM / s.PPM, StepKey: exposureStepKey(e.AveragingS)}
+		present, key := presentS, exposureStepKey
+		if s.WholePeriod {
+			present, key = math.Max(s.PeriodS, PeakAveragingS), publicStepKey
+		}
+		e := rel.exposure(s.AveragingS(present), present, molarMass)
+		out[i] = LimitResult{LimitSpec: s, Exposure: e, Share: e.PPM / s.PPM, StepKey: key(e.AveragingS)}
 	}
 	for _, k := range kindsOf(specs) {
 		best := -1

@@ -91,6 +91,7 @@ func TestEachLimitOverItsOwnPeriod(t *testing.T) {
 	d.FillMassToleranceKg = 0
 	d.HottestK = units.CelsiusToKelvin(30)
 	d.Room = Room{VolumeM3: 30, AirChangesPerHour: 1, MixingFactor: 1, NearFieldRadiusM: 1, NearFieldAirSpeed: 5, ExposureMinutes: 600}
+	d.Criteria.LimitSets = []string{LimitSetUSOccupational}
 	a, err := Assess(d, testLibrary(t))
 	if err != nil {
 		t.Fatal(err)

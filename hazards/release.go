@@ -214,3 +214,13 @@ type ConcentrationBound struct {
 func exposureStepKey(periodS float64) string {
 	return fmt.Sprintf("exposure_avg_%gs", periodS)
 }
+
+// publicStepKey names the calculation step of a public acute duration,
+// averaged for a person present throughout; the peak shares the peak's
+// step.
+func publicStepKey(periodS float64) string {
+	if periodS <= PeakAveragingS {
+		return exposureStepKey(PeakAveragingS)
+	}
+	return fmt.Sprintf("exposure_public_avg_%gs", periodS)
+}

@@ -369,6 +369,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 			tr.by[alias] = n
 		}
 	}
+	a.tracePublic(tr)
 	if f.Flammability.LFLPercent != nil {
 		tr.add("percent_lfl", Step{Stage: StageRelease, Title: "Peak as a percentage of the LFL", Method: "ratio", Equation: "%LFL = C_peak / (LFL·10⁴ ppm) × 100",
 			Inputs: []Value{{Symbol: "C_peak", Value: a.Release.Peak.PPM, Unit: "ppm"}, {Symbol: "LFL", Value: f.Flammability.LFLPercent.Value, Unit: "% vol", Source: f.Flammability.LFLPercent.Source}},
@@ -418,7 +419,10 @@ func (a *Assessment) findingDependencies(criterion string) []string {
 		return deps
 	}
 	for _, l := range a.Release.Limits {
-		if l.Governs && exposureCriterion(l.Kind) == criterion {
+		if l.Governs && IsPublicKind(l.Kind) && fmt.Sprintf("exposure-public-%d", publicTier(l.Kind)) == criterion {
+			return []string{l.StepKey, "concentration_bound", "near_field_model", "room_model"}
+		}
+		if l.Governs && !IsPublicKind(l.Kind) && exposureCriterion(l.Kind) == criterion {
 			return []string{l.StepKey, "concentration_bound", "near_field_model", "room_model"}
 		}
 	}
@@ -442,6 +446,9 @@ func (a *Assessment) exposurePeriods() []exposurePeriod {
 		{"8-hour time-weighted average", a.Release.TWA8h, []string{"exposure_twa"}},
 	}
 	for _, l := range a.Release.Limits {
+		if l.WholePeriod {
+			continue // public durations have steps of their own (tracePublic)
+		}
 		found := false
 		for _, p := range out {
 			found = found || p.x.AveragingS == l.Exposure.AveragingS
@@ -515,4 +522,38 @@ func (a *Assessment) stateStep(title string, st VesselState, tag string, tr *tra
 		s.Source = "Peng and Robinson (1976), anchored on the saturation curve"
 	}
 	return s
+}
+
+// tracePublic adds one step per public acute duration: the average over
+// the duration for a person present throughout, with the share of each
+// benchmark of that duration.
+func (a *Assessment) tracePublic(tr *tracer) {
+	done := map[string]bool{}
+	for _, l := range a.Release.Limits {
+		if !l.WholePeriod || done[l.StepKey] || tr.by[l.StepKey] > 0 {
+			continue
+		}
+		done[l.StepKey] = true
+		e := l.Exposure
+		zone := "well-mixed room"
+		if e.Zone == NearField {
+			zone = "near field"
+		}
+		var shares []Value
+		for _, o := range a.Release.Limits {
+			if o.StepKey == l.StepKey {
+				shares = append(shares, Value{Symbol: "share of " + o.Name, Value: o.Share, Source: fmt.Sprintf("%g ppm: %s", o.PPM, o.Source)})
+			}
+		}
+		st := Step{Stage: StageRelease, Title: fmt.Sprintf("Public: %s average, present throughout", durationWords(e.AveragingS/60)),
+			Method:       "larger of the room and near-field averages (" + zone + " governs)",
+			Equation:     "C̄ = (1/T) ∫₀^T C(t) dt; well-mixed room: C̄ = (M/V)·(τ/T)·(1 − e^(−T/τ)), τ = kV/Q; C̄ ≤ C_max",
+			Inputs:       []Value{{Symbol: "T", Value: e.AveragingS, Unit: "s", Source: "AEGL duration"}},
+			Intermediate: append([]Value{{Symbol: "C̄", Value: e.MgM3, Unit: "mg/m³"}}, shares...),
+			Result:       Value{Symbol: "C̄", Value: e.PPM, Unit: "ppm"}, Source: "as the models above"}
+		if e.Bounded {
+			st.Note = "The model's average lay above the physical bound; the bound is reported (the true value is at most this)."
+		}
+		tr.add(l.StepKey, st)
+	}
 }

@@ -90,6 +90,13 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 			}
 			return fmt.Sprintf("≤ %s of the limit (%s); ≤ %s %% LFL", plain(d.Criteria.MaxFractionOfLimit), bodies, plain(d.Criteria.MaxPercentLFL))
 		})},
+		inputSpec{"Criteria: limit sets", []string{"criteria.limit_sets"}, num(func(d *hazards.Design) string {
+			var names []string
+			for _, id := range d.Criteria.AppliedLimitSets() {
+				names = append(names, setShort(id))
+			}
+			return strings.Join(names, ", ")
+		})},
 	)
 	return specs
 }

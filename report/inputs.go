@@ -137,10 +137,25 @@ func criteriaTable(cr hazards.Criteria) table {
 		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, plain(cr.MaxFractionOfLimit)),
 		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, plain(cr.MaxPercentLFL)+" %"),
 		{{text: "Exposure limits from"}, {text: bodies}, {text: "Chosen for this review. Every limit of these bodies is averaged over its own period as its body defines it (NIOSH REL TWA up to a 10-hour day, OSHA PEL and ACGIH TLV TWA 8 hours, STEL 15 minutes or the stated period, ceiling at its stated period or the peak, IDLH 30 minutes); for each kind the limit with the largest share of its limit governs, and a kind with no published limit is listed as not assessed.", dim: true}},
+		limitSetsRow(cr),
 		{{text: "Strength checked at"}, {text: "nominal and thinnest walls"}, {text: "The burst safety factor is found for the nominal unit and for the weakest permitted unit: every wall at its thinnest, the fill and volume tolerances stacked to raise the pressure (common practice: strength at the minimum permitted thickness).", dim: true}},
 		{{text: "Peak concentration"}, {text: "highest 1-minute average"}, {text: "The highest one-minute average in the room or beside the breakage, the top of the charted curves; no concentration is taken above the saturated vapour at the room temperature, the whole fill in the near field, or pure vapour.", dim: true}},
 	}
 	return table{cols: []col{{"Criterion", 2.2, 'L'}, {"Value", 1.3, 'R'}, {"Grounds", 5, 'L'}}, rows: rows, zebra: true}
+}
+
+// limitSetsRow names the limit sets applied and whether they are the
+// default.
+func limitSetsRow(cr hazards.Criteria) []cell {
+	var names []string
+	for _, id := range cr.AppliedLimitSets() {
+		names = append(names, setShort(id))
+	}
+	grounds := "Chosen for this review."
+	if len(cr.LimitSets) == 0 {
+		grounds = "The default, as the design names none: a consumer product may break where the general public, children included, breathes the release, so the public acute benchmarks (AEGL, DOE PAC) apply beside the US occupational limits."
+	}
+	return []cell{{text: "Limit sets"}, {text: strings.Join(names, ", ")}, {text: grounds, dim: true}}
 }
 
 // withTolerance appends "± tolerance" when there is one.

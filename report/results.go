@@ -241,37 +241,79 @@ func (w *assessmentWriter) release() {
 
 // exposureTable lists every applicable limit with its own averaging
 // period, the average over it, its share and the one that governs each
-// kind; a kind with no published limit is listed as not assessed.
+// kind, occupational and public sets side by side; a kind with no
+// published limit, and a set that gives no number (none published, not
+// checked, not recommended), is listed in words.
 func exposureTable(a *hazards.Assessment) table {
 	var rows [][]cell
 	for _, f := range a.Findings {
 		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
-			rows = append(rows, []cell{{text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: hazards.ReasonNoPublishedLimit.Words(), dim: true}, {}, {}, {}, {}, {}})
+			rows = append(rows, []cell{{text: setShort(hazards.LimitSetUSOccupational)}, {text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: hazards.ReasonNoPublishedLimit.Words(), dim: true}, {}, {}, {}, {}, {}})
 		}
 	}
-	for _, l := range a.Release.Limits {
-		period := sig(l.Exposure.AveragingS/60, 3) + " min"
-		if l.Exposure.AveragingS <= hazards.PeakAveragingS {
-			period = "peak (1 min)"
+	for _, set := range a.Release.LimitSets {
+		for _, l := range a.Release.Limits {
+			if l.Set != set {
+				continue
+			}
+			period := sig(l.Exposure.AveragingS/60, 3) + " min"
+			if l.Exposure.AveragingS <= hazards.PeakAveragingS {
+				period = "peak (1 min)"
+			}
+			avg := sig(l.Exposure.PPM, 3)
+			if l.Exposure.Bounded {
+				avg = "≤ " + avg
+			}
+			g := ""
+			if l.Governs {
+				g = "governs"
+			}
+			name := l.Name
+			if l.Standing == "interim" || l.Standing == "proposed" {
+				name += " (" + l.Standing + ")"
+			}
+			rows = append(rows, []cell{{text: setShort(l.Set)}, {text: l.Kind, bold: l.Governs}, {text: name, bold: l.Governs}, {text: plain(l.PPM)}, {text: period},
+				{text: avg, bold: l.Governs}, {text: sig(100*l.Share, 3) + " %", bold: l.Governs}, {text: g, bold: true}})
 		}
-		avg := sig(l.Exposure.PPM, 3)
-		if l.Exposure.Bounded {
-			avg = "≤ " + avg
+		for _, n := range a.Release.LimitNotes {
+			if n.Set == set {
+				rows = append(rows, []cell{{text: setShort(n.Set)}, {text: n.Name}, {text: n.Reason.Words(), dim: true}, {}, {}, {}, {}, {}})
+			}
 		}
-		g := ""
-		if l.Governs {
-			g = "governs"
-		}
-		rows = append(rows, []cell{{text: l.Kind, bold: l.Governs}, {text: l.Name, bold: l.Governs}, {text: plain(l.PPM)}, {text: period},
-			{text: avg, bold: l.Governs}, {text: sig(100*l.Share, 3) + " %", bold: l.Governs}, {text: g, bold: true}})
 	}
-	return table{cols: []col{{"Kind", 0.8, 'L'}, {"Limit", 1.6, 'L'}, {"ppm", 0.7, 'R'}, {"Averaged over", 1, 'R'},
-		{"Average, ppm", 1, 'R'}, {"Share", 0.8, 'R'}, {"", 0.8, 'L'}}, rows: rows, size: 7.5, zebra: true, keep: 2}
+	return table{cols: []col{{"Set", 0.9, 'L'}, {"Kind", 0.7, 'L'}, {"Limit", 1.6, 'L'}, {"ppm", 0.6, 'R'}, {"Averaged over", 0.9, 'R'},
+		{"Average, ppm", 0.9, 'R'}, {"Share", 0.7, 'R'}, {"", 0.7, 'L'}}, rows: rows, size: 7.5, zebra: true, keep: 2}
+}
+
+// setShort names a limit set in a table cell.
+func setShort(id string) string {
+	switch id {
+	case hazards.LimitSetUSOccupational:
+		return "US work"
+	case hazards.LimitSetUSPublicAcute:
+		return "US public"
+	case hazards.LimitSetEUOccupational:
+		return "EU work"
+	case hazards.LimitSetUKWEL:
+		return "UK WEL"
+	case hazards.LimitSetDEAGW:
+		return "DE AGW"
+	}
+	return id
 }
 
 // exposureTableNote says how the table was made.
 func exposureTableNote(a *hazards.Assessment) string {
 	b := a.Release.Bound
-	return "Each limit is averaged over its own period as its body defines it; within each kind the limit with the largest share of its limit governs. " +
+	var names []string
+	for _, s := range a.Release.LimitSets {
+		names = append(names, hazards.LimitSetName(s))
+	}
+	sets := "Limit sets applied: " + strings.Join(names, "; ") + "."
+	if len(a.Design.Criteria.LimitSets) == 0 {
+		sets = "Limit sets applied (the default for a consumer product, as the design names none): " + strings.Join(names, "; ") + "."
+	}
+	return sets + " Each limit is averaged over its own period as its body defines it; within each kind the limit with the largest share of its limit governs. " +
+		"Public benchmarks (AEGL, PAC) protect the general public, children included, for a single exposure: each is averaged over its own duration for a person present throughout; AEGL-2 is the fail line, AEGL-1 the caution line, and the peak is held to AEGL-3. " +
 		"Every concentration is held to the physical bound, " + sig(b.PPM, 3) + " ppm (" + b.By + "); a value marked ≤ is that bound."
 }

@@ -50,6 +50,8 @@ type designJSON struct {
 	ConcentrationBoundPPM      float64           `json:"concentration_bound_ppm"`
 	ConcentrationBoundBy       string            `json:"concentration_bound_by"`
 	Limits                     []limitJSON       `json:"limits"`
+	LimitSets                  []string          `json:"limit_sets"`
+	LimitNotes                 []limitNoteJSON   `json:"limit_notes"`
 	Extrapolated               bool              `json:"extrapolated"`
 	Findings                   []hazards.Finding `json:"findings"`
 	Cautions                   []string          `json:"cautions"`
@@ -116,6 +118,20 @@ type limitJSON struct {
 	Governs    bool    `json:"governs"`
 	Source     string  `json:"source"`
 	Step       int     `json:"step"`
+	// Set is the limit set of the entry; Standing its standing as
+	// published (final, interim, indicative …) and Protects whom and for
+	// how long a public benchmark protects, both absent when not given.
+	Set      string `json:"set"`
+	Standing string `json:"standing,omitempty"`
+	Protects string `json:"protects,omitempty"`
+}
+
+// limitNoteJSON is a limit set's word where it gives no number.
+type limitNoteJSON struct {
+	Set       string `json:"set"`
+	Name      string `json:"name,omitempty"`
+	Reason    string `json:"reason"`
+	Statement string `json:"statement"`
 }
 
 func round(x float64, digits int) float64 {
@@ -156,6 +172,7 @@ func checkJSON(c checked) designJSON {
 		ConcentrationBoundPPM:  round(a.Release.Bound.PPM, 6),
 		ConcentrationBoundBy:   a.Release.Bound.By,
 		Limits:                 []limitJSON{},
+		LimitNotes:             []limitNoteJSON{},
 		Extrapolated:           a.Flags.Extrapolated(),
 		Cautions:               a.Cautions,
 		Tolerance:              c.tolerance,
@@ -190,7 +207,11 @@ func checkJSON(c checked) designJSON {
 		}
 		d.Limits = append(d.Limits, limitJSON{Body: l.Body, Name: l.Name, Kind: l.Kind, LimitPPM: l.PPM, Minutes: round(l.Exposure.AveragingS/60, 6),
 			AveragePPM: round(l.Exposure.PPM, 6), Bounded: l.Exposure.Bounded, Zone: zone, Share: round(l.Share, 6), Governs: l.Governs,
-			Source: l.Source, Step: a.TraceStep(l.StepKey)})
+			Source: l.Source, Step: a.TraceStep(l.StepKey), Set: l.Set, Standing: l.Standing, Protects: l.Protects})
+	}
+	d.LimitSets = append([]string{}, a.Release.LimitSets...)
+	for _, n := range a.Release.LimitNotes {
+		d.LimitNotes = append(d.LimitNotes, limitNoteJSON{Set: n.Set, Name: n.Name, Reason: string(n.Reason), Statement: n.Statement})
 	}
 	if a.LiquidFullReached {
 		t := round(units.KelvinToCelsius(a.LiquidFullK), 6)

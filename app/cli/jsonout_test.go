@@ -97,3 +97,36 @@ func TestJSONNoBurstLoad(t *testing.T) {
 		}
 	}
 }
+
+// TestJSONLimitSets: by default the US occupational and public sets
+// apply; every limit names its set, the public ones say whom they
+// protect, and a set that gives no number says so in limit_notes.
+// Toluene has final AEGLs at all five durations (AEGL-2 1400, 760, 560,
+// 310, 250 ppm, as in fluids/limits/us-public-acute.json).
+func TestJSONLimitSets(t *testing.T) {
+	d := jsonDesign()
+	d.Fluid = "toluene"
+	m := assessForJSON(t, d)
+	if sets, _ := m["limit_sets"].([]any); len(sets) != 2 || sets[0] != hazards.LimitSetUSOccupational || sets[1] != hazards.LimitSetUSPublicAcute {
+		t.Errorf("limit_sets %v; want the default", m["limit_sets"])
+	}
+	bySet := map[string]int{}
+	for _, l := range m["limits"].([]any) {
+		lm := l.(map[string]any)
+		set, _ := lm["set"].(string)
+		bySet[set]++
+		if set == hazards.LimitSetUSPublicAcute && !strings.HasPrefix(lm["protects"].(string), "General public, children included, ") {
+			t.Errorf("public limit %v does not say whom it protects", lm)
+		}
+	}
+	// 5 AEGL-1, 5 AEGL-2 and the AEGL-3 held to the peak.
+	if bySet[hazards.LimitSetUSPublicAcute] != 11 || bySet[hazards.LimitSetUSOccupational] == 0 {
+		t.Errorf("limits by set %v; want 11 public and the occupational ones", bySet)
+	}
+	d.Fluid = "n-hexane"
+	m = assessForJSON(t, d)
+	notes, _ := m["limit_notes"].([]any)
+	if len(notes) != 1 || notes[0].(map[string]any)["reason"] != string(hazards.ReasonNotChecked) {
+		t.Errorf("limit_notes %v; want the public table's word that it was not checked", notes)
+	}
+}

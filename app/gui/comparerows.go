@@ -51,6 +51,13 @@ func inputRows(f *designForm, a, b *hazards.Design, lib *fluids.Library, u unitS
 				}
 				return strings.Join(d.Criteria.LimitBodies, ", ")
 			})
+			text("Limit sets", func(d *hazards.Design) string {
+				var names []string
+				for _, id := range d.Criteria.AppliedLimitSets() {
+					names = append(names, setShortName(id))
+				}
+				return strings.Join(names, ", ")
+			})
 		}
 	}
 	return rows

@@ -13,6 +13,7 @@ import (
 type criteriaSection struct {
 	f      *designForm
 	fields []*numField
+	sets   *widget.CheckGroup
 }
 
 // criterionField describes one criterion on screen.
@@ -45,6 +46,15 @@ func newCriteriaSection(f *designForm) fyne.CanvasObject {
 		c.fields = append(c.fields, nf)
 		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cf.key])))
 	}
+	c.sets = widget.NewCheckGroup(limitSetNames(), func(sel []string) {
+		if f.s.loading {
+			return
+		}
+		f.s.doc.Work.Criteria.LimitSets = limitSetsOf(sel)
+		f.s.edited()
+	})
+	objs = append(objs, labelled("Limit sets that apply", c.sets),
+		indented(hint("Default for a consumer product (none ticked, or exactly these two): US occupational and US public acute. Each set's limits are averaged over their own periods; within each kind the largest share of its limit governs.")))
 	reset := widget.NewButtonWithIcon("Use my default criteria", theme.HistoryIcon(), c.useDefaults)
 	objs = append(objs, indented(container.NewHBox(reset)))
 	return section("Review criteria", objs...)
@@ -60,15 +70,55 @@ func criterionGetter(key string) func(*hazards.Criteria) *float64 {
 	panic("gui: unknown criterion " + key)
 }
 
-// load is a no-op: the criteria are number fields filled with the rest.
-func (c *criteriaSection) load() {}
+// load ticks the limit sets the design applies (the default ones when it
+// names none); the number fields are filled with the rest.
+func (c *criteriaSection) load() {
+	var names []string
+	for _, id := range c.f.s.doc.Work.Criteria.AppliedLimitSets() {
+		names = append(names, hazards.LimitSetName(id))
+	}
+	c.sets.SetSelected(names)
+}
+
+// limitSetNames lists the limit sets by name, in their usual order.
+func limitSetNames() []string {
+	var out []string
+	for _, id := range hazards.LimitSetIDs() {
+		out = append(out, hazards.LimitSetName(id))
+	}
+	return out
+}
+
+// limitSetsOf turns ticked names into set IDs in their usual order; the
+// default sets, or none ticked, give nil (the default, left out of the
+// file so that its fingerprint stays as it was).
+func limitSetsOf(names []string) []string {
+	var out []string
+	for _, id := range hazards.LimitSetIDs() {
+		for _, n := range names {
+			if n == hazards.LimitSetName(id) {
+				out = append(out, id)
+			}
+		}
+	}
+	if len(out) == len(hazards.DefaultLimitSets) {
+		same := true
+		for i := range out {
+			same = same && out[i] == hazards.DefaultLimitSets[i]
+		}
+		if same {
+			return nil
+		}
+	}
+	return out
+}
 
 // useDefaults replaces the criteria by the reviewer's defaults.
 func (c *criteriaSection) useDefaults() {
 	s := c.f.s
-	bodies := s.doc.Work.Criteria.LimitBodies
+	bodies, sets := s.doc.Work.Criteria.LimitBodies, s.doc.Work.Criteria.LimitSets
 	s.doc.Work.Criteria = s.settings.Criteria
-	s.doc.Work.Criteria.LimitBodies = bodies
+	s.doc.Work.Criteria.LimitBodies, s.doc.Work.Criteria.LimitSets = bodies, sets
 	s.loading = true
 	for _, nf := range c.fields {
 		nf.show(&s.doc.Work, s.units())

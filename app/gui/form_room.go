@@ -92,7 +92,7 @@ func newRoomSection(f *designForm) fyne.CanvasObject {
 		mix.object, indented(hint("1 = perfectly mixed; larger values slow the removal of vapour by ventilation.")),
 		nfr.object, nfs.object, exp.object,
 		labelled("Limits from", r.bodies),
-		indented(hint("None ticked: the limits of every body apply; each is averaged over its own period and the largest share of its limit governs.")),
+		indented(hint("US occupational limits. None ticked: the limits of every body apply; each is averaged over its own period and the largest share of its limit governs.")),
 	)
 }
 

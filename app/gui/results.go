@@ -24,6 +24,7 @@ type resultsPanel struct {
 
 	list     *findingsList
 	keys     *keyNumbers
+	expo     *exposureTable
 	pt, conc *chart
 	tabs     *container.AppTabs
 
@@ -49,11 +50,13 @@ func newResultsPanel(s *session) *resultsPanel {
 	r.list = newFindingsList()
 	r.list.us = func() bool { return s.units() == unitsUS }
 	r.keys = newKeyNumbers()
+	r.expo = newExposureTable()
 	r.pt, r.conc = newChart(), newChart()
 	r.tabs = container.NewAppTabs(
 		container.NewTabItem("Pressure against temperature", r.pt),
 		container.NewTabItem("Vapour in the room", r.conc),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
+		container.NewTabItem("Exposure limits", r.expo.object),
 	)
 	split := container.NewVSplit(r.list.object, r.tabs)
 	split.SetOffset(0.58)
@@ -94,6 +97,7 @@ func (r *resultsPanel) draw() {
 		r.verdict.clear()
 		r.list.set(nil, true)
 		r.keys.set(nil, u)
+		r.expo.set(nil)
 		r.pt.set(chartSpec{Empty: "No results yet."}, false)
 		r.conc.set(chartSpec{Empty: "No results yet."}, false)
 		return
@@ -102,6 +106,7 @@ func (r *resultsPanel) draw() {
 	r.verdict.set(a, s.revisionNote(), stale)
 	r.list.set(a.Findings, stale)
 	r.keys.set(a, u)
+	r.expo.set(a)
 	r.pt.set(pressureChart([]ptSide{{curve: o.pt}}, u), stale)
 	r.conc.set(releaseChart(o.conc, u), stale)
 }

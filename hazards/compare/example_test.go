@@ -62,6 +62,7 @@ func ExampleCompare() {
 	// burst-safety-factor: fail → pass
 	// failure-probability: fail → pass
 	// exposure-twa: caution → pass
+	// exposure-public-1: caution → pass
 	// Pressure at the hottest temperature: better
 	// Ullage at the hottest temperature: better
 	// Liquid-full temperature: better

@@ -16,7 +16,7 @@ func TestOptionalInputsAndFingerprints(t *testing.T) {
 	base := typicalDesign()
 	fp := (&Revision{Design: base}).Fingerprint()
 	if c := canonicalJSON(base); strings.Contains(c, "thermal_shock") || strings.Contains(c, "seal_stress") ||
-		strings.Contains(c, "stress_optic") {
+		strings.Contains(c, "stress_optic") || strings.Contains(c, "limit_sets") {
 		t.Errorf("zero optional inputs written into the canonical form: %s", c)
 	}
 	minusZero := base
@@ -28,6 +28,15 @@ func TestOptionalInputsAndFingerprints(t *testing.T) {
 	given.ThermalShock = hazards.ThermalShock{HotToColdK: 56, HotToColdPresetID: "hot-car-into-cold-tap-water"}
 	if (&Revision{Design: given}).Fingerprint() == fp {
 		t.Error("a sudden change does not change the fingerprint")
+	}
+	sets := base
+	sets.Criteria.LimitSets = []string{hazards.LimitSetUKWEL}
+	if (&Revision{Design: sets}).Fingerprint() == fp {
+		t.Error("a choice of limit sets does not change the fingerprint")
+	}
+	sets.Criteria.LimitSets = []string{}
+	if (&Revision{Design: sets}).Fingerprint() != fp {
+		t.Error("an empty list of limit sets (the default) changes the fingerprint")
 	}
 	seal := base
 	seal.SealStress = hazards.SealStress{Part: "lower bulb", ResidualStressPa: 4e6}
@@ -47,11 +56,12 @@ func TestOptionalInputsRoundTrip(t *testing.T) {
 	if err := Encode(&plain, f); err != nil {
 		t.Fatal(err)
 	}
-	if strings.Contains(plain.String(), "thermal_shock") || strings.Contains(plain.String(), "seal_stress") {
+	if strings.Contains(plain.String(), "thermal_shock") || strings.Contains(plain.String(), "seal_stress") || strings.Contains(plain.String(), "limit_sets") {
 		t.Error("an older file gains optional fields when written back")
 	}
 	f.Revisions[0].Design.ThermalShock = hazards.ThermalShock{ColdToHotK: 62, ColdToHotPresetID: "cold-car-to-warm-hand"}
 	f.Revisions[0].Design.SealStress = hazards.SealStress{Part: f.Revisions[0].Design.Vessel.Parts[0].Name, RetardationM: 9e-8, PathLengthM: 0.0015}
+	f.Revisions[0].Design.Criteria.LimitSets = []string{hazards.LimitSetUSPublicAcute, hazards.LimitSetDEAGW}
 	var b bytes.Buffer
 	if err := Encode(&b, f); err != nil {
 		t.Fatal(err)
@@ -62,6 +72,9 @@ func TestOptionalInputsRoundTrip(t *testing.T) {
 	back, err := Decode(bytes.NewReader(b.Bytes()), "round trip")
 	if err != nil {
 		t.Fatal(err)
+	}
+	if got := back.Revisions[0].Design.Criteria.LimitSets; len(got) != 2 || got[1] != hazards.LimitSetDEAGW {
+		t.Errorf("limit sets read back as %v", got)
 	}
 	if back.Revisions[0].Design.ThermalShock != f.Revisions[0].Design.ThermalShock ||
 		back.Revisions[0].Design.SealStress != f.Revisions[0].Design.SealStress {

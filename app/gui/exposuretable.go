@@ -1,0 +1,174 @@
+package gui
+
+import (
+	"fmt"
+	"strings"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/widget"
+
+	"ullage/hazards"
+)
+
+// exposureTable lists every applied exposure limit, occupational and
+// public side by side: its set, its averaging period, the average over
+// it, its share and which one governs its kind; where a set gives no
+// number (none published, not checked, not recommended) it says so in
+// words.
+type exposureTable struct {
+	body   *fyne.Container
+	sets   *widget.Label
+	words  *widget.Label
+	object fyne.CanvasObject
+}
+
+var exposureColumns = []string{"Set", "Limit", "ppm", "Period", "Average", "Share", ""}
+
+// exposureWidths are the columns' widths (points): the panel is about
+// 640 points wide; "Period" is the averaging period and "Average" the
+// average over it, in ppm.
+var exposureWidths = []float32{88, 160, 68, 110, 76, 76, 86}
+
+// columnsLayout places objects side by side in columns of fixed widths.
+type columnsLayout []float32
+
+func (c columnsLayout) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var w, h float32
+	for i, o := range objs {
+		if i < len(c) {
+			w += c[i]
+		}
+		h = max(h, o.MinSize().Height)
+	}
+	return fyne.NewSize(w, h)
+}
+
+func (c columnsLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	x := float32(0)
+	for i, o := range objs {
+		if i >= len(c) {
+			o.Hide()
+			continue
+		}
+		o.Move(fyne.NewPos(x, 0))
+		o.Resize(fyne.NewSize(c[i], size.Height))
+		x += c[i]
+	}
+}
+
+func newExposureTable() *exposureTable {
+	t := &exposureTable{body: container.NewVBox()}
+	// Lines are broken by hand: a wrapping label above a scroller asks
+	// for the height of one word a line before it knows its width.
+	t.sets = widget.NewLabel("")
+	t.words = widget.NewLabel("")
+	t.object = container.NewScroll(container.NewVBox(t.sets, t.body, t.words))
+	return t
+}
+
+// row makes one line of the table.
+func exposureRow(cells []string, bold bool) fyne.CanvasObject {
+	row := container.New(columnsLayout(exposureWidths))
+	for _, c := range cells {
+		l := widget.NewLabel(c)
+		l.Truncation = fyne.TextTruncateEllipsis
+		l.TextStyle = fyne.TextStyle{Bold: bold}
+		row.Add(l)
+	}
+	return row
+}
+
+// exposureRows returns the table's rows, each a cell per column, and
+// whether the row's limit governs its kind.
+func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
+	add := func(g bool, cells ...string) {
+		rows = append(rows, cells)
+		governs = append(governs, g)
+	}
+	for _, f := range a.Findings {
+		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
+			add(false, setShortName(hazards.LimitSetUSOccupational), strings.TrimPrefix(f.Criterion, "exposure-")+": "+f.NotApplicable.Words(), "", "", "", "", "")
+		}
+	}
+	for _, set := range a.Release.LimitSets {
+		for _, l := range a.Release.Limits {
+			if l.Set != set {
+				continue
+			}
+			period := sigFigures(l.Exposure.AveragingS/60, 3) + " min"
+			if l.Exposure.AveragingS <= hazards.PeakAveragingS {
+				period = "peak (1 min)"
+			}
+			avg := sigFigures(l.Exposure.PPM, 3)
+			if l.Exposure.Bounded {
+				avg = "≤ " + avg
+			}
+			name := l.Name
+			if l.Standing == "interim" || l.Standing == "proposed" {
+				name += " (" + l.Standing + ")"
+			}
+			g := ""
+			if l.Governs {
+				g = "governs"
+			}
+			add(l.Governs, setShortName(l.Set), name, sigFigures(l.PPM, 4), period, avg, fmt.Sprintf("%s %%", sigFigures(100*l.Share, 3)), g)
+		}
+		for _, n := range a.Release.LimitNotes {
+			if n.Set == set {
+				label := n.Reason.Words()
+				if n.Name != "" {
+					label = n.Name + ": " + label
+				}
+				add(false, setShortName(n.Set), label, "", "", "", "", "")
+			}
+		}
+	}
+	return rows, governs
+}
+
+// set fills the table from an assessment (nil empties it). Rows that
+// carry no number (a kind with no published limit, a set that publishes
+// none, an NR cell) are said in words below the table.
+func (t *exposureTable) set(a *hazards.Assessment) {
+	t.body.RemoveAll()
+	if a == nil {
+		t.sets.SetText("No results yet.")
+		t.words.SetText("")
+		return
+	}
+	var names []string
+	for _, s := range a.Release.LimitSets {
+		names = append(names, hazards.LimitSetName(s))
+	}
+	t.sets.SetText("Limit sets applied: " + strings.Join(names, ";\n    ") + ".\nEach limit is averaged over its own period; within each kind\nthe largest share of its limit governs (bold).")
+	t.body.Add(exposureRow(exposureColumns, true))
+	rows, governs := exposureRows(a)
+	var words []string
+	for i, r := range rows {
+		if r[2] == "" {
+			words = append(words, r[0]+" — "+r[1])
+			continue
+		}
+		t.body.Add(exposureRow(r, governs[i]))
+	}
+	t.words.SetText(strings.Join(words, "\n"))
+	t.body.Refresh()
+}
+
+// setShortName names a limit set in a table cell.
+func setShortName(id string) string {
+	switch id {
+	case hazards.LimitSetUSOccupational:
+		return "US work"
+	case hazards.LimitSetUSPublicAcute:
+		return "US public"
+	case hazards.LimitSetEUOccupational:
+		return "EU work"
+	case hazards.LimitSetUKWEL:
+		return "UK WEL"
+	case hazards.LimitSetDEAGW:
+		return "DE AGW"
+	}
+	return id
+}

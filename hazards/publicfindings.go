@@ -1,0 +1,131 @@
+package hazards
+
+import (
+	"fmt"
+
+	"ullage/fluids"
+)
+
+// Criteria of the public acute findings, one per tier.
+const (
+	// CriterionPublic1: the averages over each AEGL duration against
+	// AEGL-1 (or PAC-1), the caution line: above it, caution, never fail.
+	CriterionPublic1 = "exposure-public-1"
+	// CriterionPublic2: the averages over each AEGL duration against
+	// AEGL-2 (or PAC-2), the fail line.
+	CriterionPublic2 = "exposure-public-2"
+	// CriterionPublic3: the peak against AEGL-3 (or PAC-3), the fail line.
+	CriterionPublic3 = "exposure-public-3"
+	// CriterionPublicNone: the fluid has no public acute benchmark; the
+	// finding says why (none published, not checked, not listed) and is
+	// not assessed, never a pass.
+	CriterionPublicNone = "exposure-public-none"
+)
+
+// IsPublicCriterion reports whether a criterion is a public acute finding.
+func IsPublicCriterion(c string) bool {
+	switch c {
+	case CriterionPublic1, CriterionPublic2, CriterionPublic3, CriterionPublicNone:
+		return true
+	}
+	return false
+}
+
+var publicTitles = map[int]string{
+	1: "Public: average over each AEGL duration against AEGL-1 / PAC-1 (caution line)",
+	2: "Public: average over each AEGL duration against AEGL-2 / PAC-2 (fail line)",
+	3: "Public: peak against AEGL-3 / PAC-3 (life-threatening)",
+}
+
+// appliesOccupational reports whether any occupational set applies.
+func (cr Criteria) appliesOccupational() bool {
+	for _, s := range []string{LimitSetUSOccupational, LimitSetEUOccupational, LimitSetUKWEL, LimitSetDEAGW} {
+		if cr.Applies(s) {
+			return true
+		}
+	}
+	return false
+}
+
+// publicFindings gives the public acute findings: for tiers 1 and 2 the
+// limit with the largest share over the AEGL durations governs (tier 2
+// fails above max_fraction_of_limit of its limit; tier 1 gives a caution
+// above its limit and never fails); tier 3 holds the peak to the AEGL-3
+// or PAC-3. A tier with no value says why in words; a fluid with none at
+// all gets one not-assessed finding.
+func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
+	any := false
+	for _, l := range r.Limits {
+		any = any || l.Set == LimitSetUSPublicAcute
+	}
+	if !any {
+		reason, src := ReasonNonePublished, "US public acute benchmarks (AEGL, DOE PAC): none published for "+f.Name
+		for _, n := range r.LimitNotes {
+			if n.Set == LimitSetUSPublicAcute && n.Name == "" {
+				reason, src = n.Reason, n.Statement
+			}
+		}
+		return []Finding{{Criterion: CriterionPublicNone, Title: "Public acute benchmarks (AEGL, PAC)", Status: StatusNotAssessed,
+			Unit: "ppm", Direction: AtMost, NotApplicable: reason, Source: src, Protects: publicPopulation + ", 10 minutes to 8 hours",
+			Message: fmt.Sprintf("%s: %s.", f.Name, reason.Words())}}
+	}
+	var out []Finding
+	for _, tier := range publicTiers {
+		id := fmt.Sprintf("exposure-public-%d", tier)
+		gov := -1
+		for i, l := range r.Limits {
+			if l.Set == LimitSetUSPublicAcute && publicTier(l.Kind) == tier && l.Governs {
+				gov = i
+			}
+		}
+		if gov < 0 {
+			reason, src := ReasonNonePublished, fmt.Sprintf("no AEGL-%d or PAC-%d value for %s", tier, tier, f.Name)
+			for _, n := range r.LimitNotes {
+				if n.Set == LimitSetUSPublicAcute && n.Reason == ReasonNotRecommended && publicTier(kindOfLabel(n.Name)) == tier {
+					reason, src = ReasonNotRecommended, n.Statement
+				}
+			}
+			out = append(out, Finding{Criterion: id, Title: publicTitles[tier], Status: StatusNotAssessed, Unit: "ppm", Direction: AtMost,
+				NotApplicable: reason, Source: src, Protects: publicPopulation, Message: reason.Words() + "."})
+			continue
+		}
+		lim := r.Limits[gov]
+		e := lim.Exposure
+		limit := lim.PPM
+		if tier != 1 {
+			limit *= cr.MaxFractionOfLimit
+		}
+		standing := lim.Standing
+		if standing == string(fluids.StatusInterim) || standing == string(fluids.StatusProposed) {
+			standing += " value"
+		} else {
+			standing = ""
+		}
+		src := fmt.Sprintf("%s %g ppm: %s", lim.Name, lim.PPM, lim.Source)
+		if standing != "" {
+			src = fmt.Sprintf("%s %g ppm (%s): %s", lim.Name, lim.PPM, standing, lim.Source)
+		}
+		fd := atMost(id, publicTitles[tier], "ppm", e.PPM, limit, 1, src)
+		if tier == 1 && fd.Status == StatusFail {
+			fd.Status = StatusCaution
+		}
+		if e.Bounded {
+			fd.ValueBound = AtMost
+		}
+		fd.Protects = lim.Protects
+		fd.Message = fmt.Sprintf("%s: %.3g ppm against %s %.4g ppm.", lim.Protects, e.PPM, lim.Name, lim.PPM)
+		out = append(out, fd)
+	}
+	return out
+}
+
+// kindOfLabel returns the kind of an acute entry's label ("AEGL-1 10
+// min" → "AEGL-1").
+func kindOfLabel(label string) string {
+	for i := range label {
+		if label[i] == ' ' {
+			return label[:i]
+		}
+	}
+	return label
+}
