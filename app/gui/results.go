@@ -169,7 +169,30 @@ func (v *verdictBanner) clear() {
 	v.note.SetText("")
 }
 
+// noVerdict is the banner while the inputs are not acceptable: no
+// verdict at all, not the last one dimmed, until they are fixed.
+func (v *verdictBanner) noVerdict(note string) {
+	v.icon.SetResource(theme.NewWarningThemedResource(theme.WarningIcon()))
+	v.caption.Text = noVerdictCaption
+	v.caption.Color = statusColour("")
+	v.caption.Refresh()
+	v.word.Text = "NONE"
+	v.word.Color = statusColour("")
+	v.word.Refresh()
+	v.bg.FillColor = tint(statusColour(""), 0)
+	v.bg.Refresh()
+	v.counts.SetText("No current verdict: an input is not acceptable. Fix the marked field; the findings below are for the last acceptable inputs.")
+	v.note.SetText(note)
+}
+
+// noVerdictCaption heads the banner while there is no current verdict.
+const noVerdictCaption = "NO CURRENT VERDICT"
+
 func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
+	if stale {
+		v.noVerdict(note)
+		return
+	}
 	pass, caution, fail := countStatuses(a.Findings)
 	v.icon.SetResource(statusIcon(a.Verdict))
 	v.word.Text = statusWord(a.Verdict)

@@ -108,6 +108,9 @@ func TestInvalidValueKeepsLastResults(t *testing.T) {
 			if !h.s.results.pt.faded {
 				t.Error("chart not faded while out of date")
 			}
+			if v := h.s.results.verdict; v.caption.Text != noVerdictCaption || v.word.Text == statusWord(before.Verdict) {
+				t.Errorf("banner %q %q while an input is not acceptable, want no current verdict", v.caption.Text, v.word.Text)
+			}
 			// Correcting the field clears the mark and the results are current again.
 			h.typeInto(tc.path, entryText(h.s.units().fromSI(f.q, f.get(&before.Design))))
 			if f.msgRow.Visible() || h.s.stale() {

@@ -28,11 +28,17 @@ type shell struct {
 
 // Keyboard shortcuts of the main commands.
 var (
+	shortcutNew    = &desktop.CustomShortcut{KeyName: fyne.KeyN, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutQuit   = &desktop.CustomShortcut{KeyName: fyne.KeyQ, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutOpen   = &desktop.CustomShortcut{KeyName: fyne.KeyO, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutSave   = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutSaveAs = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
 	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
 )
+
+// defaultWindowSize is the window's size when it opens: smaller than a
+// 1280×800 screen, so that it fits with a title bar and a panel.
+var defaultWindowSize = fyne.NewSize(1200, 720)
 
 // Unit choices on the tool bar.
 const (
@@ -90,6 +96,8 @@ func buildWindow(s *session) *shell {
 		sc desktop.CustomShortcut
 		do func()
 	}{
+		{*shortcutNew, s.newDesign},
+		{*shortcutQuit, s.requestClose},
 		{*shortcutOpen, s.openDialog},
 		{*shortcutSave, func() { s.save(nil) }},
 		{*shortcutSaveAs, func() { s.saveAs(nil) }},
@@ -154,15 +162,8 @@ func (sh *shell) rebuildMenu() {
 			}
 		})
 	})
-	newDesign := fyne.NewMenuItem("New design", func() {
-		s.confirmLeave("start a new design", func() {
-			if doc, err := newBlankDocument(s.settings.Criteria); err == nil {
-				s.open(doc)
-				s.shell.showReview()
-			}
-		})
-	})
-	quit := fyne.NewMenuItem("Quit", func() { s.requestClose() })
+	newDesign := item("New design", shortcutNew, s.newDesign)
+	quit := item("Quit", shortcutQuit, s.requestClose)
 	quit.IsQuit = true
 	file := fyne.NewMenu("File",
 		newDesign,
@@ -213,6 +214,17 @@ func (sh *shell) hideWorking() {
 	wp.object.Hide()
 	sh.form.Show()
 	wp.refresh()
+}
+
+// newDesign starts a new, blank design, asking first when work would be
+// lost.
+func (s *session) newDesign() {
+	s.confirmLeave("start a new design", func() {
+		if doc, err := newBlankDocument(s.settings.Criteria); err == nil {
+			s.open(doc)
+			s.shell.showReview()
+		}
+	})
 }
 
 // requestClose asks before closing when work would be lost.
