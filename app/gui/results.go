@@ -26,6 +26,9 @@ type resultsPanel struct {
 	keys     *keyNumbers
 	pt, conc *chart
 	tabs     *container.AppTabs
+	// area holds the findings and, below them, the charts; laid out
+	// again when the number of findings changes.
+	area *fyne.Container
 
 	object fyne.CanvasObject
 }
@@ -55,8 +58,11 @@ func newResultsPanel(s *session) *resultsPanel {
 		container.NewTabItem("Vapour in the room", r.conc),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 	)
-	split := container.NewVSplit(r.list.object, r.tabs)
-	split.SetOffset(0.58)
+	// Every finding is shown without scrolling; the charts take what
+	// height is left.
+	findings := container.NewThemeOverride(r.list.object, compactTheme{})
+	split := container.New(findingsFirst{want: r.list.wantedHeight}, findings, r.tabs)
+	r.area = split
 	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)
 	return r
 }
@@ -93,6 +99,7 @@ func (r *resultsPanel) draw() {
 	if a == nil {
 		r.verdict.clear()
 		r.list.set(nil, true)
+		r.area.Refresh()
 		r.keys.set(nil, u)
 		r.pt.set(chartSpec{Empty: "No results yet."}, false)
 		r.conc.set(chartSpec{Empty: "No results yet."}, false)
@@ -100,7 +107,11 @@ func (r *resultsPanel) draw() {
 	}
 	stale := s.problem != nil
 	r.verdict.set(a, s.revisionNote(), stale)
-	r.list.set(a.Findings, stale)
+	n := len(r.list.rows)
+	r.list.set(orderFindings(a.Findings), stale)
+	if len(r.list.rows) != n {
+		r.area.Refresh()
+	}
 	r.keys.set(a, u)
 	r.pt.set(pressureChart([]ptSide{{curve: o.pt}}, u), stale)
 	r.conc.set(releaseChart(o.conc, u), stale)
@@ -172,7 +183,7 @@ func (v *verdictBanner) clear() {
 // noVerdict is the banner while the inputs are not acceptable: no
 // verdict at all, not the last one dimmed, until they are fixed.
 func (v *verdictBanner) noVerdict(note string) {
-	v.icon.SetResource(theme.NewWarningThemedResource(theme.WarningIcon()))
+	v.icon.SetResource(theme.WarningIcon())
 	v.caption.Text = noVerdictCaption
 	v.caption.Color = statusColour("")
 	v.caption.Refresh()

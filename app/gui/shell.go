@@ -57,6 +57,13 @@ func buildWindow(s *session) *shell {
 	cmp := newComparePanel(s)
 	study := newTolerancePanel(s)
 	results.list.onPick = func(f hazards.Finding) { working.show(workSubject{criterion: f.Criterion}) }
+	// Selecting a finding keeps the design form in place; its working
+	// opens with "Show the working", and follows the selection once open.
+	results.list.onSelect = func(f hazards.Finding) {
+		if working.open {
+			working.show(workSubject{criterion: f.Criterion})
+		}
+	}
 	results.keys.onPick = func(r keyRow) { working.show(workSubject{keyLabel: r.label}) }
 
 	sh.form = form.object
