@@ -26,7 +26,7 @@ func commands() map[string]command {
 		"check":   {"assess design files (a folder checks every design in it)", runCheck},
 		"compare": {"compare two revisions, of one file or of two files", runCompare},
 		"fluids":  {"list the fluid library with its sources", runFluids},
-		"props":   {"saturation properties of a fluid at a temperature", runProps},
+		"fluid-state":   {"saturation properties of a fluid at a temperature", runFluidState},
 		"version": {"print the version", runVersion},
 		"help":    {"show this help", runHelp},
 	}
@@ -81,7 +81,7 @@ Usage:
   ullage compare FILE --rev X --rev Y      compare two revisions of one file
       --json, --pdf OUT.pdf, --replace, --units, --paper, --reviewer, --fluids as above
   ullage fluids [--json]                   list the fluid library with sources
-  ullage props FLUID --temp-c T [--json]   saturation properties at T °C
+  ullage fluid-state FLUID --temp-c T [--json]   saturation state at T °C
   ullage version
 
 Exit status: 0 every finding passes (cautions allowed), 1 a finding fails,
