@@ -125,9 +125,14 @@ func TestUnitsSwitchConvertsEveryField(t *testing.T) {
 	fill := h.field("fill_mass_kg")
 	h.s.setUnits(unitsUS)
 	h.idle()
-	// 21.0 g = 0.7407 oz (avoirdupois ounce 28.349523125 g, NIST Handbook 44 appendix C).
-	if got := fill.entry.Text; !strings.HasPrefix(got, "0.7407") || fill.unit.Text != "oz" {
-		t.Errorf("fill in US units = %q %s, want 0.7407… oz", got, fill.unit.Text)
+	// 21.0 g = 0.740753 oz (avoirdupois ounce 28.349523125 g, NIST
+	// Handbook 44 appendix C), shown to four significant figures.
+	if got := fill.entry.Text; got != "0.7408" || fill.unit.Text != "oz" {
+		t.Errorf("fill in US units = %q %s, want 0.7408 oz", got, fill.unit.Text)
+	}
+	// 1.6 mm = 0.0629921 in, shown as 0.06299 in.
+	if got := h.field("vessel.parts[0].wall_thickness_m").entry.Text; got != "0.06299" {
+		t.Errorf("wall thickness in US units = %q in, want 0.06299", got)
 	}
 	hot := h.field("hottest_k")
 	// 76 °C = 168.8 °F.
