@@ -15,11 +15,11 @@ import (
 
 // fluidSection chooses the working liquid and its fill.
 type fluidSection struct {
-	f       *designForm
-	choose  *widget.Select
+	f      *designForm
+	choose *widget.Select
 	// find picks the fluid as the reviewer types a name, a synonym or a
 	// CAS number.
-	find *widget.Entry
+	find    *widget.Entry
 	ids     map[string]string // option text → fluid ID
 	info    *widget.Label
 	problem *widget.Label
