@@ -96,8 +96,18 @@ func (s *session) exportAssessmentDialog() {
 		dialog.ShowError(errNoResults, s.win)
 		return
 	}
-	name := suggestedName(s.doc.File.Product.Name, "-rev-"+labelPart(s.doc.Base)+"-assessment", ".pdf")
-	s.exportDialog(name, s.writeAssessmentPDF)
+	s.exportDialog(s.assessmentPDFName(), s.writeAssessmentPDF)
+}
+
+// assessmentPDFName is the suggested file name of the assessment
+// record: it names the revision only when the working copy is that
+// revision unchanged.
+func (s *session) assessmentPDFName() string {
+	part := "-working-copy-assessment"
+	if s.doc.Base != "" && !s.doc.workChanged() {
+		part = "-rev-" + labelPart(s.doc.Base) + "-assessment"
+	}
+	return suggestedName(s.doc.File.Product.Name, part, ".pdf")
 }
 
 // exportComparisonDialog asks where to write the comparison record.
