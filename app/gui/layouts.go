@@ -148,3 +148,29 @@ func (f findingsFirst) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 	objs[1].Move(fyne.NewPos(0, top+gap))
 	objs[1].Resize(fyne.NewSize(size.Width, rest))
 }
+
+// narrowable lays out one object over the whole space but reports a
+// minimum width of at most w, so that a row of tabs whose labels are
+// wider than w does not hold the window wide; the tab labels then run
+// past the right edge instead.
+type narrowable struct{ w float32 }
+
+// MinSize is the object's minimum, at most w wide.
+func (n narrowable) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var s fyne.Size
+	for _, o := range objs {
+		m := o.MinSize()
+		s = s.Max(m)
+	}
+	s.Width = min(s.Width, n.w)
+	return s
+}
+
+// Layout gives every object the whole space, and at least its own
+// minimum width.
+func (n narrowable) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(fyne.NewSize(max(size.Width, o.MinSize().Width), size.Height))
+	}
+}

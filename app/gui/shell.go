@@ -71,7 +71,7 @@ func buildWindow(s *session) *shell {
 	split.SetOffset(0.44)
 	sh.review = container.NewTabItemWithIcon("Design review", theme.DocumentCreateIcon(), split)
 	sh.revs = container.NewTabItemWithIcon("Revisions", theme.ListIcon(), revs.object)
-	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), cmp.object)
+	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), container.New(narrowable{1000}, cmp.object))
 	sh.study = container.NewTabItemWithIcon("Tolerance study", theme.GridIcon(), study.object)
 	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare, sh.study)
 
