@@ -58,6 +58,13 @@ func TestFailsAndCautionsComeFirst(t *testing.T) {
 // when ULLAGE_SHOTS names a folder.
 func TestEveryFindingVisibleAt1280x800(t *testing.T) {
 	h := newHarness(t)
+	if os.Getenv("ULLAGE_SHOTS") != "" {
+		// Screenshots in the program's own look.
+		set := testApp().Settings()
+		was := set.Theme()
+		set.SetTheme(newLook(lookLight))
+		defer set.SetTheme(was)
+	}
 	for _, size := range []fyne.Size{{Width: 1280, Height: 800}, {Width: 1920, Height: 1080}} {
 		h.w.Resize(size)
 		h.idle()

@@ -44,6 +44,7 @@ func Run(args []string) int {
 		fmt.Fprintf(os.Stderr, "ullage: %v\n", err)
 		return 1
 	}
+	s.applyLook()
 	sh := buildWindow(s)
 	w.SetContent(sh.object)
 	w.Resize(defaultWindowSize)
