@@ -73,6 +73,14 @@ func TestEveryFindingVisibleAt1280x800(t *testing.T) {
 	h.w.Resize(fyne.NewSize(1280, 800))
 	h.typeInto("hottest_k", "7O")
 	h.checkAllRowsVisible(t, fyne.NewSize(1280, 800), "-input-error")
+	if os.Getenv("ULLAGE_SHOTS") != "" {
+		// The new design, like every state with an input that is not
+		// acceptable, is not captured (see checkAllRowsVisible).
+		h.typeInto("hottest_k", "76")
+		h.s.shell.showCompare()
+		h.idle()
+		h.shot(t, "compare-1280x800")
+	}
 }
 
 // checkAllRowsVisible asserts that the findings list has room for all
@@ -89,12 +97,21 @@ func (h *harness) checkAllRowsVisible(t *testing.T, size fyne.Size, tag string) 
 	if got := fl.list.Size().Height; got+0.5 < need {
 		t.Errorf("at %.0f×%.0f%s the findings list is %.0f high, %d rows need %.0f", size.Width, size.Height, tag, got, n, need)
 	}
-	// The software painter of the test driver fails on the faded chart
-	// of the out-of-date state, so that state is not captured.
-	if dir := os.Getenv("ULLAGE_SHOTS"); dir != "" && tag == "" {
+	// The test driver's software painter fails on the out-of-date
+	// state (a nil image in its drawImage), so that state is not
+	// captured.
+	if tag == "" {
+		h.shot(t, "review-"+sizeName(size))
+	}
+}
+
+// shot saves a capture of the window as NAME.png in the folder
+// ULLAGE_SHOTS names; nothing when it is not set.
+func (h *harness) shot(t *testing.T, name string) {
+	t.Helper()
+	if dir := os.Getenv("ULLAGE_SHOTS"); dir != "" {
 		img := h.w.Canvas().Capture()
-		name := filepath.Join(dir, "review-"+sizeName(size)+tag+".png")
-		f, err := os.Create(name)
+		f, err := os.Create(filepath.Join(dir, name+".png"))
 		if err != nil {
 			t.Fatal(err)
 		}

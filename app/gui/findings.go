@@ -38,7 +38,7 @@ type findingsList struct {
 // margin (fractions of the width left after the status column).
 var findingColumns = columns{fractions: []float32{0, 0.44, 0.18, 0.20, 0.18}}
 
-const statusColumnWidth = 104
+const statusColumnWidth = 132
 
 func newFindingsList() *findingsList {
 	fl := &findingsList{selected: -1}
