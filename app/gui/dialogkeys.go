@@ -70,6 +70,12 @@ func (s *session) showInfo(title, message string) {
 	s.showKeyed(d, d.Hide, d.Hide)
 }
 
+// showError is dialog.ShowError that Enter and Escape close.
+func (s *session) showError(err error) {
+	d := dialog.NewError(err, s.win)
+	s.showKeyed(d, d.Hide, d.Hide)
+}
+
 // showConfirm is dialog.ShowConfirm that Enter confirms and Escape
 // cancels.
 func (s *session) showConfirm(title, message string, answer func(bool)) {

@@ -7,8 +7,6 @@ import (
 	"io"
 	"strings"
 
-	"fyne.io/fyne/v2/dialog"
-
 	"ullage/app/buildinfo"
 	"ullage/fluids"
 	"ullage/hazards/designfile"
@@ -93,7 +91,7 @@ func (s *session) writeComparisonPDF(w io.Writer) error {
 // exportAssessmentDialog asks where to write the assessment record.
 func (s *session) exportAssessmentDialog() {
 	if s.last.assessment == nil || s.stale() {
-		dialog.ShowError(errNoResults, s.win)
+		s.showError(errNoResults)
 		return
 	}
 	s.exportDialog(s.assessmentPDFName(), s.writeAssessmentPDF)
@@ -113,7 +111,7 @@ func (s *session) assessmentPDFName() string {
 // exportComparisonDialog asks where to write the comparison record.
 func (s *session) exportComparisonDialog() {
 	if _, ok := s.cmp.current(); !ok {
-		dialog.ShowError(errors.New("both sides of the comparison must be assessed before it can be exported"), s.win)
+		s.showError(errors.New("both sides of the comparison must be assessed before it can be exported"))
 		return
 	}
 	la, lb := s.cmp.sideLabels()

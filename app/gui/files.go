@@ -51,7 +51,7 @@ func (s *session) openDialog() {
 	s.confirmLeave("open another file", func() {
 		d := dialog.NewFileOpen(func(r fyne.URIReadCloser, err error) {
 			if err != nil {
-				dialog.ShowError(err, s.win)
+				s.showError(err)
 				return
 			}
 			if r == nil {

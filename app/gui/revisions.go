@@ -241,7 +241,7 @@ func (r *revisionsPanel) openRevision(label string) {
 	s := r.s
 	rev, err := s.doc.File.Find(label)
 	if err != nil {
-		dialog.ShowError(err, s.win)
+		s.showError(err)
 		return
 	}
 	load := func() {
@@ -254,13 +254,13 @@ func (r *revisionsPanel) openRevision(label string) {
 		load()
 		return
 	}
-	dialog.ShowConfirm("Discard the changes?",
+	s.showConfirm("Discard the changes?",
 		fmt.Sprintf("The working copy has changes not kept as a revision.\nOpening revision %s replaces them.", label),
 		func(ok bool) {
 			if ok {
 				load()
 			}
-		}, s.win)
+		})
 }
 
 // askNewRevision asks for a label and change note and keeps the working
