@@ -49,7 +49,7 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 	}
 	specs = append(specs,
 		inputSpec{"Sealing temperature", []string{"sealing_temperature_k"}, num(func(d *hazards.Design) string { return u.temperature(d.SealingTemperatureK) })},
-		inputSpec{"Residual gas at sealing", []string{"residual_gas_pressure_pa"}, num(func(d *hazards.Design) string {
+		inputSpec{LabelResidualGas, []string{"residual_gas_pressure_pa"}, num(func(d *hazards.Design) string {
 			if d.ResidualGasPressurePa == 0 {
 				return "none"
 			}
@@ -57,7 +57,7 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 		})},
 		inputSpec{"Hottest temperature", []string{"hottest_k"}, num(func(d *hazards.Design) string { return u.temperature(d.HottestK) })},
 		inputSpec{"Coldest temperature", []string{"coldest_k"}, num(func(d *hazards.Design) string { return u.temperature(d.ColdestK) })},
-		inputSpec{"Ambient pressure", []string{"ambient_pressure_pa"}, num(func(d *hazards.Design) string { return u.pressure(d.AmbientPressurePa) })},
+		inputSpec{LabelAmbientPressure, []string{"ambient_pressure_pa"}, num(func(d *hazards.Design) string { return u.pressure(d.AmbientPressurePa) })},
 		inputSpec{"Glass", []string{"glass"}, func(d *hazards.Design, a *hazards.Assessment) string {
 			if d.Glass.Custom != nil {
 				return "custom: " + d.Glass.Custom.Name
@@ -77,7 +77,7 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 		inputSpec{"Mixing factor", []string{"room.mixing_factor"}, num(func(d *hazards.Design) string { return plain(d.Room.MixingFactor) })},
 		inputSpec{"Near-field radius", []string{"room.near_field_radius_m"}, num(func(d *hazards.Design) string { return u.roomLength(d.Room.NearFieldRadiusM) })},
 		inputSpec{"Near-field air speed", []string{"room.near_field_air_speed_m_s"}, num(func(d *hazards.Design) string { return u.speed(d.Room.NearFieldAirSpeed) })},
-		inputSpec{"Time in the room", []string{"room.exposure_minutes"}, num(func(d *hazards.Design) string { return plain(d.Room.ExposureMinutes) + " min" })},
+		inputSpec{LabelExposureTime, []string{"room.exposure_minutes"}, num(func(d *hazards.Design) string { return plain(d.Room.ExposureMinutes) + " min" })},
 		inputSpec{"Criteria: burst, implosion safety factors", []string{"criteria.min_burst_safety_factor", "criteria.min_implosion_safety_factor"}, num(func(d *hazards.Design) string {
 			return "≥ " + plain(d.Criteria.MinBurstSafetyFactor) + ", ≥ " + plain(d.Criteria.MinImplosionSafetyFactor)
 		})},

@@ -61,10 +61,10 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 	}
 	pairs = append(pairs,
 		[2]string{"Sealing temperature", u.temperature(ds.SealingTemperatureK)},
-		[2]string{"Residual gas at sealing", gas},
+		[2]string{LabelResidualGas, gas},
 		[2]string{"Hottest temperature", u.temperature(ds.HottestK)},
 		[2]string{"Coldest temperature", u.temperature(ds.ColdestK)},
-		[2]string{"Ambient pressure", u.pressure(ds.AmbientPressurePa)},
+		[2]string{LabelAmbientPressure, u.pressure(ds.AmbientPressurePa)},
 		[2]string{"Glass", glass},
 		[2]string{"Service life", plain(ds.ServiceLifeYears) + " years"},
 		[2]string{"Time at the hottest", plain(ds.HoursAtHottest) + " h over the life"},
@@ -110,7 +110,7 @@ func roomPairs(r hazards.Room, u unitSystem) [][2]string {
 		{"Mixing factor", plain(r.MixingFactor) + " (1 = perfectly mixed)"},
 		{"Near-field radius", u.roomLength(r.NearFieldRadiusM)},
 		{"Near-field air speed", u.speed(r.NearFieldAirSpeed)},
-		{"Time in the room", plain(r.ExposureMinutes) + " min after the breakage"},
+		{LabelExposureTime, plain(r.ExposureMinutes) + " min after the breakage"},
 		{"Near-field volume", u.roomVolume(hazards.NearFieldVolume(r.NearFieldRadiusM))},
 	}
 }

@@ -8,6 +8,7 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"slices"
 	"sort"
 	"strings"
 	"time"
@@ -113,6 +114,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintf(stderr, "ullage check: %v\n", err)
 			return ExitUsage
 		}
+		fmt.Fprintf(stderr, "ullage check: record written to %s\n", absOrAsTyped(pdfPath))
 	}
 	if o.bools["json"] {
 		if err := writeCheckJSON(stdout, results, len(paths) == 1 && !isDir(o.positional[0]), o.bools["trace"]); err != nil {
@@ -120,7 +122,8 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 			return ExitUsage
 		}
 	} else {
-		writeCheckText(stdout, results, ro.Units)
+		// A folder gets the table even when it holds one design.
+		writeCheckText(stdout, results, ro.Units, len(paths) > 1 || isDir(o.positional[0]))
 	}
 	if bad > 0 {
 		return ExitUsage
@@ -261,8 +264,8 @@ func recordMeta(f *designfile.File, r *designfile.Revision, o *options) report.M
 	}
 }
 
-func writeCheckText(w io.Writer, results []checked, unitSystem string) {
-	if len(results) == 1 {
+func writeCheckText(w io.Writer, results []checked, unitSystem string, table bool) {
+	if len(results) == 1 && !table {
 		if results[0].err != nil {
 			fmt.Fprintf(w, "%s: ERROR, not assessed: %v\n\nverdict: ERROR\n", results[0].path, results[0].err)
 			return
@@ -270,7 +273,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string) {
 		writeOneText(w, results[0], unitSystem)
 		return
 	}
-	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF")
+	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s  %s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF", "failing criteria")
 	failed := 0
 	for _, c := range results {
 		if c.err != nil {
@@ -279,14 +282,43 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string) {
 			continue
 		}
 		a := c.assessment
-		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
-			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a))
+		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a), failingCriteria(a))
 	}
 	if failed > 0 {
 		fmt.Fprintf(w, "\nverdict: ERROR (%d of %d designs could not be assessed)\n", failed, len(results))
 		return
 	}
-	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(overallVerdict(results)))
+	fails := 0
+	for _, c := range results {
+		if c.assessment.Verdict == hazards.StatusFail {
+			fails++
+		}
+	}
+	fmt.Fprintf(w, "\nverdict: %s (overall, %d of %d designs fail)\n", strings.ToUpper(overallVerdict(results)), fails, len(results))
+}
+
+// failingCriteria names the criteria a design fails, "none" when it
+// fails none.
+func failingCriteria(a *hazards.Assessment) string {
+	var names []string
+	for _, f := range a.Findings {
+		if f.Status == hazards.StatusFail && !slices.Contains(names, f.Criterion) {
+			names = append(names, f.Criterion)
+		}
+	}
+	if len(names) == 0 {
+		return "none"
+	}
+	return strings.Join(names, ", ")
+}
+
+// absOrAsTyped is path made absolute, or as typed when that fails.
+func absOrAsTyped(path string) string {
+	if abs, err := filepath.Abs(path); err == nil {
+		return abs
+	}
+	return path
 }
 
 // verdictError is the overall verdict when any input could not be

@@ -23,12 +23,12 @@ type command struct {
 
 func commands() map[string]command {
 	return map[string]command{
-		"check":   {"assess design files (a folder checks every design in it)", runCheck},
-		"compare": {"compare two revisions, of one file or of two files", runCompare},
-		"fluids":  {"list the fluid library with its sources", runFluids},
-		"props":   {"saturation properties of a fluid at a temperature", runProps},
-		"version": {"print the version", runVersion},
-		"help":    {"show this help", runHelp},
+		"check":       {"assess design files (a folder checks every design in it)", runCheck},
+		"compare":     {"compare two revisions, of one file or of two files", runCompare},
+		"fluids":      {"list the fluid library with its sources", runFluids},
+		"fluid-state": {"saturation properties of a fluid at a temperature", runFluidState},
+		"version":     {"print the version", runVersion},
+		"help":        {"show this help", runHelp},
 	}
 }
 
@@ -81,7 +81,7 @@ Usage:
   ullage compare FILE --rev X --rev Y      compare two revisions of one file
       --json, --pdf OUT.pdf, --replace, --units, --paper, --reviewer, --fluids as above
   ullage fluids [--json]                   list the fluid library with sources
-  ullage props FLUID --temp-c T [--json]   saturation properties at T °C
+  ullage fluid-state FLUID --temp-c T      saturation state at T °C [--json]
   ullage version
 
 Exit status: 0 every finding passes (cautions allowed), 1 a finding fails,

@@ -35,10 +35,10 @@ func TestExitStatuses(t *testing.T) {
 		{"bad units", []string{"check", "--units", "cubits", "testdata/good.json"}, ExitUsage, "", "cubits"},
 		{"unknown command", []string{"frobnicate"}, ExitUsage, "", "frobnicate"},
 		{"fluids", []string{"fluids"}, ExitPass, "Dichloromethane", ""},
-		{"props", []string{"props", "ethanol", "--temp-c", "25"}, ExitPass, "vapour pressure", ""},
-		{"props below freezing", []string{"props", "water", "--temp-c", "-40"}, ExitUsage, "", "freezing point"},
-		{"props NaN", []string{"props", "water", "--temp-c", "NaN"}, ExitUsage, "", "finite"},
-		{"props unknown fluid", []string{"props", "unobtainium", "--temp-c", "20"}, ExitUsage, "", "unobtainium"},
+		{"fluid-state", []string{"fluid-state", "ethanol", "--temp-c", "25"}, ExitPass, "vapour pressure", ""},
+		{"fluid-state below freezing", []string{"fluid-state", "water", "--temp-c", "-40"}, ExitUsage, "", "freezing point"},
+		{"fluid-state NaN", []string{"fluid-state", "water", "--temp-c", "NaN"}, ExitUsage, "", "finite"},
+		{"fluid-state unknown fluid", []string{"fluid-state", "unobtainium", "--temp-c", "20"}, ExitUsage, "", "unobtainium"},
 		{"compare revisions", []string{"compare", "testdata/good.json", "--rev", "A", "--rev", "B"}, ExitPass, "fail → pass", ""},
 		{"compare needs two", []string{"compare", "testdata/good.json"}, ExitUsage, "", "two files"},
 		{"help", []string{"help"}, ExitPass, "Usage", ""},
@@ -98,7 +98,7 @@ func TestCheckJSONKeys(t *testing.T) {
 }
 
 func TestPropsJSON(t *testing.T) {
-	code, out, _ := run("props", "water", "--temp-c", "100", "--json")
+	code, out, _ := run("fluid-state", "water", "--temp-c", "100", "--json")
 	if code != ExitPass {
 		t.Fatalf("exit %d", code)
 	}

@@ -2,6 +2,7 @@ package cli
 
 import (
 	"bytes"
+	"strings"
 	"testing"
 )
 
@@ -14,7 +15,7 @@ func TestUnknownCommand(t *testing.T) {
 		{"Check", "ullage: unknown command 'Check'; did you mean 'check'?\n"},
 		{"compre", "ullage: unknown command 'compre'; did you mean 'compare'?\n"},
 		{"fluid", "ullage: unknown command 'fluid'; did you mean 'fluids'?\n"},
-		{"prop", "ullage: unknown command 'prop'; did you mean 'props'?\n"},
+		{"fluidstate", "ullage: unknown command 'fluidstate'; did you mean 'fluid-state'?\n"},
 		{"verison", "ullage: unknown command 'verison'; did you mean 'version'?\n"},
 		{"frobnicate", "ullage: unknown command 'frobnicate' (try: ullage help)\n"},
 		{"lamp.json", "ullage: 'lamp.json' is neither a command nor an existing file (try: ullage help)\n"},
@@ -39,7 +40,7 @@ func TestEditDistance(t *testing.T) {
 		{"check", "check", 0},
 		{"chekc", "check", 1}, // one swap
 		{"chk", "check", 2},   // two insertions
-		{"", "props", 5},
+		{"", "state", 5},
 		{"help", "", 4},
 		{"compare", "compre", 1},
 	}
@@ -63,5 +64,15 @@ func TestCommandsAreFarApart(t *testing.T) {
 				t.Errorf("commands %q and %q are %d edits apart: a typo of one could suggest the other", a, b, d)
 			}
 		}
+	}
+}
+
+// TestOldPropertyCommandIsGone: the saturation-state command has one
+// name, fluid-state; the name it had before is not a command.
+func TestOldPropertyCommandIsGone(t *testing.T) {
+	var out, errb bytes.Buffer
+	code := Run([]string{"props", "ethanol", "--temp-c", "20"}, &out, &errb)
+	if code != ExitUsage || !strings.Contains(errb.String(), "unknown command 'props'") || out.Len() != 0 {
+		t.Errorf("Run(props …) = %d, stdout %q, stderr %q; want an unknown command", code, out.String(), errb.String())
 	}
 }

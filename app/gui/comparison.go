@@ -102,6 +102,9 @@ func (c *comparePanel) refresh() {
 	if _, ok := c.options[keepB]; !ok || keepB == "" {
 		keepB = opts[max(len(opts)-2, 0)]
 	}
+	if keepA == keepB && len(opts) > 1 {
+		keepA, keepB = opts[len(opts)-2], opts[len(opts)-1]
+	}
 	c.pickA.SetSelected(keepA)
 	c.pickB.SetSelected(keepB)
 	c.s.loading = wasLoading
@@ -149,6 +152,10 @@ func (c *comparePanel) compute() {
 	da, la, okA := c.side(c.pickA.Selected)
 	db, lb, okB := c.side(c.pickB.Selected)
 	if !okA || !okB {
+		return
+	}
+	if msg := c.pairProblem(); msg != "" {
+		c.refusePair(msg)
 		return
 	}
 	c.gen++

@@ -34,6 +34,11 @@ type document struct {
 	// stamp is the file on disk as it was at the last load or save, to
 	// tell whether another window or program changed it since.
 	stamp designfile.Stamp
+	// fresh is set on a new design until the form has marked its
+	// required fields; unset holds the JSON paths of the required fields
+	// of a new design that have not been typed yet, shown empty.
+	fresh bool
+	unset map[string]bool
 }
 
 // newDocument wraps a loaded file, taking the newest revision as the
@@ -70,8 +75,8 @@ func newBlankDocument(criteria hazards.Criteria) (*document, error) {
 	work := cloneDesign(ex.Work)
 	work.Criteria = criteria
 	work.Criteria.LimitBodies = nil
-	f := &designfile.File{Format: designfile.FormatCurrent, Product: designfile.Product{Name: "New product"}}
-	return &document{File: f, Name: "new design", Work: work}, nil
+	f := &designfile.File{Format: designfile.FormatCurrent}
+	return &document{File: f, Name: "new design", Work: work, fresh: true}, nil
 }
 
 // loadDocument opens a design file from disk.

@@ -7,18 +7,11 @@ import (
 	"io"
 	"strings"
 
-	"fyne.io/fyne/v2"
-	"fyne.io/fyne/v2/dialog"
-	"fyne.io/fyne/v2/storage"
-
 	"ullage/app/buildinfo"
 	"ullage/fluids"
 	"ullage/hazards/designfile"
 	"ullage/report"
 )
-
-// pdfFilter limits the export chooser to PDF files.
-var pdfFilter = storage.NewExtensionFileFilter([]string{".pdf"})
 
 // errNoResults: there are no current results to export.
 var errNoResults = errors.New("there are no current results to export: fix the marked inputs first")
@@ -98,17 +91,27 @@ func (s *session) writeComparisonPDF(w io.Writer) error {
 // exportAssessmentDialog asks where to write the assessment record.
 func (s *session) exportAssessmentDialog() {
 	if s.last.assessment == nil || s.stale() {
-		dialog.ShowError(errNoResults, s.win)
+		s.showError(errNoResults)
 		return
 	}
-	name := suggestedName(s.doc.File.Product.Name, "-rev-"+labelPart(s.doc.Base)+"-assessment", ".pdf")
-	s.exportDialog(name, s.writeAssessmentPDF)
+	s.exportDialog(s.assessmentPDFName(), s.writeAssessmentPDF)
+}
+
+// assessmentPDFName is the suggested file name of the assessment
+// record: it names the revision only when the working copy is that
+// revision unchanged.
+func (s *session) assessmentPDFName() string {
+	part := "-working-copy-assessment"
+	if s.doc.Base != "" && !s.doc.workChanged() {
+		part = "-rev-" + labelPart(s.doc.Base) + "-assessment"
+	}
+	return suggestedName(s.doc.File.Product.Name, part, ".pdf")
 }
 
 // exportComparisonDialog asks where to write the comparison record.
 func (s *session) exportComparisonDialog() {
 	if _, ok := s.cmp.current(); !ok {
-		dialog.ShowError(errors.New("both sides of the comparison must be assessed before it can be exported"), s.win)
+		s.showError(errors.New("both sides of the comparison must be assessed before it can be exported"))
 		return
 	}
 	la, lb := s.cmp.sideLabels()
@@ -124,30 +127,23 @@ func labelPart(l string) string {
 	return strings.ToLower(l)
 }
 
-// exportDialog shows a save chooser and writes a record through write.
+// exportDialog asks where to write a record and writes it there with the
+// atomic writer; the design file it is made from is never a target, and
+// a file that is not one of Ullage's records is replaced only after the
+// reviewer confirms.
 func (s *session) exportDialog(name string, write func(io.Writer) error) {
-	d := dialog.NewFileSave(func(w fyne.URIWriteCloser, err error) {
-		if err != nil {
-			dialog.ShowError(err, s.win)
-			return
+	s.askWhere("Export the PDF record", "Export", targetRecord, name, []string{s.docPath()}, func(path string) error {
+		var buf bytes.Buffer
+		if err := write(&buf); err != nil {
+			return err
 		}
-		if w == nil {
-			return
+		if err := designfile.WriteFile(path, 0o666, func(w io.Writer) error {
+			_, err := w.Write(buf.Bytes())
+			return err
+		}); err != nil {
+			return err
 		}
-		werr := write(w)
-		cerr := w.Close()
-		if werr == nil {
-			werr = cerr
-		}
-		if werr != nil {
-			dialog.ShowError(werr, s.win)
-			return
-		}
-		dialog.ShowInformation("Record written", "The PDF record was written to\n"+w.URI().Path(), s.win)
-	}, s.win)
-	d.SetFilter(pdfFilter)
-	d.SetFileName(name)
-	s.startIn(d)
-	d.Resize(fyne.NewSize(900, 600))
-	d.Show()
+		s.showInfo("Record written", "The PDF record was written to\n"+path)
+		return nil
+	})
 }

@@ -40,7 +40,7 @@ func (s *session) confirmLeave(what string, next func()) {
 	msg := widget.NewLabel(fmt.Sprintf("%s has changes that are not saved.\nSave them before you %s?", s.doc.Name, what))
 	dlg = dialog.NewCustomWithoutButtons("Unsaved changes", msg, s.win)
 	dlg.SetButtons([]fyne.CanvasObject{stay, discard, save})
-	dlg.Show()
+	s.showKeyed(dlg, save.OnTapped, dlg.Hide)
 }
 
 // designFilter limits file choosers to design files.
@@ -51,7 +51,7 @@ func (s *session) openDialog() {
 	s.confirmLeave("open another file", func() {
 		d := dialog.NewFileOpen(func(r fyne.URIReadCloser, err error) {
 			if err != nil {
-				dialog.ShowError(err, s.win)
+				s.showError(err)
 				return
 			}
 			if r == nil {
@@ -106,7 +106,7 @@ func (s *session) showFileProblem(title string, err error) {
 	content := container.NewVBox(msg, hint(hintText))
 	d := dialog.NewCustom(title, "Close", content, s.win)
 	d.Resize(fyne.NewSize(620, 240))
-	d.Show()
+	s.showKeyed(d, d.Hide, d.Hide)
 }
 
 // rememberFile puts path at the top of the recent files, as an absolute
@@ -143,8 +143,8 @@ func (s *session) recentFiles() []string {
 // kept as a new revision. then runs after a successful save.
 func (s *session) save(then func()) {
 	if s.stale() {
-		dialog.ShowInformation("Fix the inputs first",
-			"The form holds an input that is not acceptable; fix the marked field, then save.", s.win)
+		s.showInfo("Fix the inputs first",
+			"The form holds an input that is not acceptable; fix the marked field, then save.")
 		return
 	}
 	if s.doc.workChanged() {
@@ -157,7 +157,7 @@ func (s *session) save(then func()) {
 	}
 	if s.doc.saved != nil && designfile.ChangedSince(s.doc.Path, s.doc.stamp) {
 		path := s.doc.Path
-		dialog.ShowConfirm("The file changed on disk",
+		s.showConfirm("The file changed on disk",
 			fmt.Sprintf("%s was changed by another window or program since it was opened here. Replace it with this version? The version on disk is kept as %s.", path, filepath.Base(path)+designfile.BackupSuffix),
 			func(ok bool) {
 				if !ok {
@@ -168,7 +168,7 @@ func (s *session) save(then func()) {
 				} else if then != nil {
 					then()
 				}
-			}, s.win)
+			})
 		return
 	}
 	if err := s.writeFile(s.doc.Path); err != nil {
@@ -183,42 +183,25 @@ func (s *session) save(then func()) {
 // saveAs asks for a new path and writes the file there.
 func (s *session) saveAs(then func()) {
 	if s.stale() {
-		dialog.ShowInformation("Fix the inputs first",
-			"The form holds an input that is not acceptable; fix the marked field, then save.", s.win)
+		s.showInfo("Fix the inputs first",
+			"The form holds an input that is not acceptable; fix the marked field, then save.")
 		return
 	}
 	if s.doc.workChanged() {
 		s.revs.askNewRevision(func() { s.saveAs(then) })
 		return
 	}
-	d := dialog.NewFileSave(func(w fyne.URIWriteCloser, err error) {
-		if err != nil {
-			dialog.ShowError(err, s.win)
-			return
-		}
-		if w == nil {
-			return
-		}
-		path := w.URI().Path()
-		// The chooser has created an empty file; Save replaces it whole.
-		w.Close()
-		if !strings.HasSuffix(strings.ToLower(path), ".json") {
-			os.Remove(path)
-			path += ".json"
-		}
+	// The toolkit's save chooser would empty an existing file before
+	// the atomic save could keep it; askWhere opens nothing itself.
+	s.askWhere("Save the design file as", "Save", targetDesign, suggestedName(s.doc.File.Product.Name, "", ".json"), nil, func(path string) error {
 		if err := s.writeFile(path); err != nil {
-			s.showFileProblem("The design file was not saved", err)
-			return
+			return err
 		}
 		if then != nil {
 			then()
 		}
-	}, s.win)
-	d.SetFilter(designFilter)
-	d.SetFileName(suggestedName(s.doc.File.Product.Name, "", ".json"))
-	s.startIn(d)
-	d.Resize(fyne.NewSize(900, 600))
-	d.Show()
+		return nil
+	})
 }
 
 // writeFile saves the document to path with the design file's atomic

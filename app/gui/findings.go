@@ -15,6 +15,9 @@ type findingsList struct {
 	rows     []hazards.Finding
 	stale    bool
 	selected int
+	// onSelect, when set, runs instead of onPick when the reviewer
+	// selects a row, so that the design form can stay in place.
+	onSelect func(hazards.Finding)
 	// quiet is true while the list selects a row itself, so that only the
 	// reviewer's own choice opens the working.
 	quiet bool
@@ -35,7 +38,7 @@ type findingsList struct {
 // margin (fractions of the width left after the status column).
 var findingColumns = columns{fractions: []float32{0, 0.44, 0.18, 0.20, 0.18}}
 
-const statusColumnWidth = 104
+const statusColumnWidth = 132
 
 func newFindingsList() *findingsList {
 	fl := &findingsList{selected: -1}
@@ -74,7 +77,7 @@ func newFindingsList() *findingsList {
 		fl.selected = id
 		fl.describe()
 		if !fl.quiet {
-			fl.pick()
+			fl.chosen()
 		}
 	}
 	head := []fyne.CanvasObject{container.New(fixedWidth{statusColumnWidth}, bold("Status"))}
@@ -158,6 +161,18 @@ func (fl *findingsList) selectCriterion(c string) {
 			fl.quiet = false
 		}
 	}
+}
+
+// chosen runs when the reviewer selects a row: onSelect when set,
+// otherwise the row's working opens.
+func (fl *findingsList) chosen() {
+	if fl.onSelect != nil {
+		if fl.selected >= 0 && fl.selected < len(fl.rows) {
+			fl.onSelect(fl.rows[fl.selected])
+		}
+		return
+	}
+	fl.pick()
 }
 
 // pick opens the working of the selected finding.

@@ -1,6 +1,7 @@
 package gui
 
 import (
+	"fmt"
 	"strings"
 
 	"fyne.io/fyne/v2"
@@ -116,6 +117,7 @@ func (f *designForm) edited(nf *numField) {
 	}
 	ok := nf.read(&f.s.doc.Work, f.s.units())
 	if ok {
+		delete(f.s.doc.unset, nf.path)
 		f.afterNumber(nf.path)
 	}
 	f.showProblems(f.s.problem)
@@ -150,7 +152,52 @@ func (f *designForm) load() {
 	f.shock.syncPresets()
 	f.room.load()
 	f.criteria.load()
+	if doc := f.s.doc; doc.fresh {
+		doc.fresh = false
+		doc.unset = map[string]bool{}
+		for _, nf := range f.all() {
+			if requiredOnNew(nf.path) {
+				doc.unset[nf.path] = true
+			}
+		}
+	}
+	f.applyUnset()
 	f.showProblems(f.s.problem)
+}
+
+// requiredOnNew reports whether the field at path starts empty on a new
+// design: the fill, the hottest and coldest temperatures and every
+// dimension of the vessel, which no default can stand for. The room, the
+// shocks and the criteria start from the reviewer's usual values.
+func requiredOnNew(path string) bool {
+	switch path {
+	case "fill_mass_kg", "hottest_k", "coldest_k":
+		return true
+	}
+	return strings.HasPrefix(path, "vessel.parts[")
+}
+
+// applyUnset empties the required fields of a new design not typed yet
+// and marks each as required, which holds the assessment back.
+func (f *designForm) applyUnset() {
+	unset := f.s.doc.unset
+	if len(unset) == 0 {
+		return
+	}
+	was := f.s.loading
+	f.s.loading = true
+	for _, nf := range f.all() {
+		if !unset[nf.path] {
+			continue
+		}
+		nf.entry.SetText("")
+		unit := nf.unit.Text
+		if unit != "" {
+			unit = " in " + unit
+		}
+		nf.parseProblem = fmt.Sprintf("%s is needed for a new design: type a number%s", nf.label, unit)
+	}
+	f.s.loading = was
 }
 
 // updateHeader refreshes the line saying which revision is being edited.

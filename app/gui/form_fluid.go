@@ -2,7 +2,6 @@ package gui
 
 import (
 	"fmt"
-	"sort"
 	"strings"
 
 	"fyne.io/fyne/v2"
@@ -16,8 +15,11 @@ import (
 
 // fluidSection chooses the working liquid and its fill.
 type fluidSection struct {
-	f       *designForm
-	choose  *widget.Select
+	f      *designForm
+	choose *widget.Select
+	// find picks the fluid as the reviewer types a name, a synonym or a
+	// CAS number.
+	find    *widget.Entry
 	ids     map[string]string // option text → fluid ID
 	info    *widget.Label
 	problem *widget.Label
@@ -45,6 +47,18 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 	fs.problem.Importance = widget.DangerImportance
 	fs.problem.Wrapping = fyne.TextWrapWord
 	fs.problem.Hide()
+	fs.find = widget.NewEntry()
+	fs.find.SetPlaceHolder("Find: name, synonym or CAS (R-134a, methylene chloride …)")
+	fs.find.OnChanged = func(text string) {
+		if f.s.loading {
+			return
+		}
+		if sub := findFluid(f.s.lib, text); sub != nil {
+			if o := fluidOption(sub.Fluid()); fs.choose.Selected != o {
+				fs.choose.SetSelected(o)
+			}
+		}
+	}
 	add := widget.NewButtonWithIcon("Add a fluid from a file…", theme.ContentAddIcon(), f.s.askUserFluid)
 	mass := f.field("fill_mass_kg", "Fill", qMass,
 		func(d *hazards.Design) float64 { return d.FillMassKg },
@@ -54,6 +68,7 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 		func(d *hazards.Design, x float64) { d.FillMassToleranceKg = x })
 	return section("Fluid and fill",
 		labelled("Fluid", container.NewBorder(nil, nil, nil, add, fs.choose)),
+		labelled("", fs.find),
 		indented(fs.problem),
 		indented(fs.info),
 		mass.object, tol.object,
@@ -78,7 +93,7 @@ func (fs *fluidSection) load() {
 		fs.ids[o] = sub.Fluid().ID
 		opts = append(opts, o)
 	}
-	sort.Strings(opts)
+	sortFluidOptions(opts)
 	fs.choose.Options = opts
 	if sub, err := lib.Lookup(fs.f.s.doc.Work.Fluid); err == nil {
 		fs.choose.SetSelected(fluidOption(sub.Fluid()))

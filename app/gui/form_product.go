@@ -18,14 +18,16 @@ type productSection struct {
 	name, partNo, company, descr *widget.Entry
 	header                       *widget.Label
 	changed                      *widget.Label
+
+	// descrBox is the widget of descr on the form: Tab leaves it.
+	descrBox *noTabEntry
 }
 
 // newProductSection builds the "Product and revision" group.
 func newProductSection(f *designForm) fyne.CanvasObject {
 	p := &productSection{f: f}
 	f.product = p
-	entry := func(set func(string)) *widget.Entry {
-		e := widget.NewEntry()
+	entryOf := func(e *widget.Entry, set func(string)) *widget.Entry {
 		e.OnChanged = func(t string) {
 			if f.s.loading {
 				return
@@ -35,11 +37,13 @@ func newProductSection(f *designForm) fyne.CanvasObject {
 		}
 		return e
 	}
+	entry := func(set func(string)) *widget.Entry { return entryOf(widget.NewEntry(), set) }
 	prod := func() *designfile.Product { return &f.s.doc.File.Product }
 	p.name = entry(func(t string) { prod().Name = t })
 	p.partNo = entry(func(t string) { prod().PartNumber = t })
 	p.company = entry(func(t string) { prod().Company = t })
-	p.descr = entry(func(t string) { prod().Description = t })
+	p.descrBox = newNoTabEntry()
+	p.descr = entryOf(&p.descrBox.Entry, func(t string) { prod().Description = t })
 	p.descr.MultiLine = true
 	p.descr.Wrapping = fyne.TextWrapWord
 	p.descr.SetMinRowsVisible(2)
@@ -52,7 +56,7 @@ func newProductSection(f *designForm) fyne.CanvasObject {
 		labelled("Product", p.name),
 		labelled("Part number", p.partNo),
 		labelled("Company", p.company),
-		labelled("Description", p.descr),
+		labelled("Description", p.descrBox),
 		indented(p.header),
 		indented(container.NewBorder(nil, nil, nil, keep, p.changed)),
 	)

@@ -8,6 +8,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report"
 )
 
 // customRoom is the preset choice for a room described by the reviewer.
@@ -68,7 +69,7 @@ func newRoomSection(f *designForm) fyne.CanvasObject {
 	mix := rf("room.mixing_factor", "Mixing factor", qNumber, func(r *hazards.Room) float64 { return r.MixingFactor }, func(r *hazards.Room, x float64) { r.MixingFactor = x })
 	nfr := rf("room.near_field_radius_m", "Near-field radius", qRoomLength, func(r *hazards.Room) float64 { return r.NearFieldRadiusM }, func(r *hazards.Room, x float64) { r.NearFieldRadiusM = x })
 	nfs := rf("room.near_field_air_speed_m_s", "Air speed near the breakage", qAirSpeed, func(r *hazards.Room) float64 { return r.NearFieldAirSpeed }, func(r *hazards.Room, x float64) { r.NearFieldAirSpeed = x })
-	exp := rf("room.exposure_minutes", "Time a person stays", qMinutes, func(r *hazards.Room) float64 { return r.ExposureMinutes }, func(r *hazards.Room, x float64) { r.ExposureMinutes = x })
+	exp := rf("room.exposure_minutes", report.LabelExposureTime, qMinutes, func(r *hazards.Room) float64 { return r.ExposureMinutes }, func(r *hazards.Room, x float64) { r.ExposureMinutes = x })
 	r.bodies = widget.NewCheckGroup(limitBodies, func(sel []string) {
 		if f.s.loading {
 			return

@@ -7,6 +7,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report"
 )
 
 // customValue is the preset choice for a value typed by the reviewer.
@@ -38,10 +39,10 @@ func newTemperatureSection(f *designForm) fyne.CanvasObject {
 	seal := f.field("sealing_temperature_k", "Sealing temperature", qTemperature,
 		func(d *hazards.Design) float64 { return d.SealingTemperatureK },
 		func(d *hazards.Design, x float64) { d.SealingTemperatureK = x })
-	gas := f.field("residual_gas_pressure_pa", "Residual air when sealed", qPressure,
+	gas := f.field("residual_gas_pressure_pa", report.LabelResidualGas, qPressure,
 		func(d *hazards.Design) float64 { return d.ResidualGasPressurePa },
 		func(d *hazards.Design, x float64) { d.ResidualGasPressurePa = x })
-	amb := f.field("ambient_pressure_pa", "Outside pressure", qPressure,
+	amb := f.field("ambient_pressure_pa", report.LabelAmbientPressure, qPressure,
 		func(d *hazards.Design) float64 { return d.AmbientPressurePa },
 		func(d *hazards.Design, x float64) { d.AmbientPressurePa = x })
 	life := f.field("service_life_years", "Service life", qYears,

@@ -196,6 +196,7 @@ func (v *vesselSection) rebuildParts() {
 		}
 		blocks = append(blocks, v.partBlock(i, d, u))
 	}
+	f.applyUnset()
 	f.s.loading = wasLoading
 	v.parts.Objects = blocks
 	v.parts.Refresh()

@@ -176,6 +176,10 @@ func (h *harness) reset(t testing.TB) bool {
 	for top := c.Overlays().Top(); top != nil; top = c.Overlays().Top() {
 		c.Overlays().Remove(top)
 	}
+	if len(s.dialogs) > 0 {
+		s.dialogs = nil
+		c.SetOnTypedKey(s.windowKeys)
+	}
 	c.Unfocus()
 	h.w.Resize(fyne.NewSize(1280, 800))
 
@@ -409,8 +413,13 @@ func button(t testing.TB, o fyne.CanvasObject, text string) *widget.Button {
 func entries(o fyne.CanvasObject) []*widget.Entry {
 	var out []*widget.Entry
 	walk(o, func(o fyne.CanvasObject) {
-		if e, ok := o.(*widget.Entry); ok {
+		switch e := o.(type) {
+		case *widget.Entry:
 			out = append(out, e)
+		case *dialogEntry:
+			out = append(out, &e.Entry)
+		case *noTabEntry:
+			out = append(out, &e.Entry)
 		}
 	})
 	return out

@@ -2,6 +2,7 @@ package gui
 
 import (
 	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/theme"
 )
 
 // fixedWidth lays out its objects stacked, at least w wide: it keeps the
@@ -97,4 +98,79 @@ func (l labelColumn) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 	objs[0].Resize(fyne.NewSize(l.w, size.Height))
 	objs[1].Move(fyne.NewPos(l.w, 0))
 	objs[1].Resize(fyne.NewSize(tw, size.Height))
+}
+
+// findingsFirst lays out two objects one above the other: the first as
+// tall as want says it needs (all the findings rows), the second, the
+// charts, in the height left over. When the space is too small for both,
+// the second gives way down to minChartHeight, then the first.
+type findingsFirst struct{ want func() float32 }
+
+// minChartHeight is the least height the charts keep while the findings
+// need more; below minUsefulChartHeight the charts are hidden.
+const (
+	minChartHeight       = 0
+	minUsefulChartHeight = 160
+)
+
+// MinSize is the wider object's width and both minimum heights.
+func (f findingsFirst) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var s fyne.Size
+	for _, o := range objs {
+		m := o.MinSize()
+		s.Width = max(s.Width, m.Width)
+	}
+	if len(objs) > 0 {
+		s.Height = objs[0].MinSize().Height + minChartHeight
+	}
+	return s
+}
+
+// Layout gives the first object its wanted height and the second the
+// rest.
+func (f findingsFirst) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	if len(objs) < 2 {
+		return
+	}
+	top := min(f.want(), size.Height-minChartHeight)
+	top = max(top, objs[0].MinSize().Height)
+	top = min(top, size.Height)
+	objs[0].Move(fyne.NewPos(0, 0))
+	objs[0].Resize(fyne.NewSize(size.Width, top))
+	gap := theme.Padding()
+	rest := size.Height - top - gap
+	if rest < minUsefulChartHeight {
+		// Too little room to read a chart: it gives way entirely.
+		objs[1].Hide()
+		return
+	}
+	objs[1].Show()
+	objs[1].Move(fyne.NewPos(0, top+gap))
+	objs[1].Resize(fyne.NewSize(size.Width, rest))
+}
+
+// narrowable lays out one object over the whole space but reports a
+// minimum width of at most w, so that a row of tabs whose labels are
+// wider than w does not hold the window wide; the tab labels then run
+// past the right edge instead.
+type narrowable struct{ w float32 }
+
+// MinSize is the object's minimum, at most w wide.
+func (n narrowable) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var s fyne.Size
+	for _, o := range objs {
+		m := o.MinSize()
+		s = s.Max(m)
+	}
+	s.Width = min(s.Width, n.w)
+	return s
+}
+
+// Layout gives every object the whole space, and at least its own
+// minimum width.
+func (n narrowable) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(fyne.NewSize(max(size.Width, o.MinSize().Width), size.Height))
+	}
 }

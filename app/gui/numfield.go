@@ -2,6 +2,7 @@ package gui
 
 import (
 	"fmt"
+	"strconv"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
@@ -68,7 +69,15 @@ func newNumField(path, label string, q quantity, get func(*hazards.Design) float
 // show fills the entry from the design in the given units.
 func (f *numField) show(d *hazards.Design, u unitSystem) {
 	f.unit.SetText(u.unit(f.q))
-	f.entry.SetText(entryText(u.fromSI(f.q, f.get(d))))
+	x := u.fromSI(f.q, f.get(d))
+	if u == unitsUS {
+		// A converted value carries the conversion's digits ("0.0629921
+		// in"): show four significant figures, which keep any value
+		// typed in US units to four figures.
+		f.entry.SetText(roundedEntryText(x, usFigures))
+	} else {
+		f.entry.SetText(entryText(x))
+	}
 	f.parseProblem = ""
 }
 
@@ -101,4 +110,17 @@ func (f *numField) setProblem(msg string) {
 		f.msg.SetText(msg)
 	}
 	f.msgRow.Show()
+}
+
+// usFigures is how many significant figures a field shows in US units.
+const usFigures = 4
+
+// roundedEntryText writes x for an entry to n significant figures, in
+// plain notation without trailing zeros.
+func roundedEntryText(x float64, n int) string {
+	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', n, 64), 64)
+	if err != nil || x == 0 {
+		return entryText(x)
+	}
+	return entryText(r)
 }

@@ -19,6 +19,8 @@ const (
 	unitsUSText     = "US customary (°F, oz, in, in³, psi, ft³)"
 	paperA4Text     = "A4"
 	paperLetterText = "US Letter"
+	lookLightText   = "Light, like the printed record"
+	lookDarkText    = "Dark"
 )
 
 // preferencesPanel is the content of the preferences dialog over a copy
@@ -27,6 +29,7 @@ type preferencesPanel struct {
 	s        *session
 	units    *widget.RadioGroup
 	paper    *widget.RadioGroup
+	look     *widget.RadioGroup
 	reviewer *widget.Entry
 	criteria map[string]*widget.Entry
 	problem  *widget.Label
@@ -49,12 +52,20 @@ func newPreferencesPanel(s *session) *preferencesPanel {
 	if s.settings.Paper == report.PaperLetter {
 		p.paper.SetSelected(paperLetterText)
 	}
+	p.look = widget.NewRadioGroup([]string{lookLightText, lookDarkText}, nil)
+	p.look.Horizontal = true
+	p.look.Required = true
+	p.look.SetSelected(lookLightText)
+	if s.settings.Look == lookDark {
+		p.look.SetSelected(lookDarkText)
+	}
 	p.reviewer = widget.NewEntry()
 	p.reviewer.SetText(s.settings.Reviewer)
 	p.reviewer.SetPlaceHolder("your name, as printed on records")
 	items := []fyne.CanvasObject{
 		labelled("Units", p.units),
 		labelled("Paper for records", p.paper),
+		labelled("Look of the window", p.look),
 		labelled("Reviewer", p.reviewer),
 		sectionHeading("Default review criteria for new designs"),
 	}
@@ -93,6 +104,10 @@ func (p *preferencesPanel) read() (settings, error) {
 	if p.paper.Selected == paperLetterText {
 		st.Paper = report.PaperLetter
 	}
+	st.Look = lookLight
+	if p.look.Selected == lookDarkText {
+		st.Look = lookDark
+	}
 	st.Reviewer = p.reviewer.Text
 	c := st.Criteria
 	for _, cf := range criterionFields {
@@ -126,6 +141,7 @@ func (s *session) showPreferences() {
 		s.settings = st
 		s.settings.save(s.app.Preferences())
 		s.setUnits(units)
+		s.applyLook()
 		dlg.Hide()
 	})
 	ok.Importance = widget.HighImportance
@@ -133,5 +149,10 @@ func (s *session) showPreferences() {
 	dlg = dialog.NewCustomWithoutButtons("Preferences", p.object, s.win)
 	dlg.SetButtons([]fyne.CanvasObject{cancel, ok})
 	dlg.Resize(fyne.NewSize(760, 640))
-	dlg.Show()
+	s.showKeyed(dlg, ok.OnTapped, dlg.Hide)
+}
+
+// applyLook sets the window's look from the settings.
+func (s *session) applyLook() {
+	s.app.Settings().SetTheme(newLook(s.settings.Look))
 }

@@ -27,6 +27,9 @@ type resultsPanel struct {
 	expo     *exposureTable
 	pt, conc *chart
 	tabs     *container.AppTabs
+	// area holds the findings and, below them, the charts; laid out
+	// again when the number of findings changes.
+	area *fyne.Container
 
 	object fyne.CanvasObject
 }
@@ -58,8 +61,11 @@ func newResultsPanel(s *session) *resultsPanel {
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 		container.NewTabItem("Exposure limits", r.expo.object),
 	)
-	split := container.NewVSplit(r.list.object, r.tabs)
-	split.SetOffset(0.58)
+	// Every finding is shown without scrolling; the charts take what
+	// height is left.
+	findings := container.NewThemeOverride(r.list.object, compactTheme{})
+	split := container.New(findingsFirst{want: r.list.wantedHeight}, findings, container.New(narrowable{360}, r.tabs))
+	r.area = split
 	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)
 	return r
 }
@@ -96,6 +102,7 @@ func (r *resultsPanel) draw() {
 	if a == nil {
 		r.verdict.clear()
 		r.list.set(nil, true)
+		r.area.Refresh()
 		r.keys.set(nil, u)
 		r.expo.set(nil)
 		r.pt.set(chartSpec{Empty: "No results yet."}, false)
@@ -104,7 +111,11 @@ func (r *resultsPanel) draw() {
 	}
 	stale := s.problem != nil
 	r.verdict.set(a, s.revisionNote(), stale)
-	r.list.set(a.Findings, stale)
+	n := len(r.list.rows)
+	r.list.set(orderFindings(a.Findings), stale)
+	if len(r.list.rows) != n {
+		r.area.Refresh()
+	}
 	r.keys.set(a, u)
 	r.expo.set(a)
 	r.pt.set(pressureChart([]ptSide{{curve: o.pt}}, u), stale)
@@ -174,7 +185,30 @@ func (v *verdictBanner) clear() {
 	v.note.SetText("")
 }
 
+// noVerdict is the banner while the inputs are not acceptable: no
+// verdict at all, not the last one dimmed, until they are fixed.
+func (v *verdictBanner) noVerdict(note string) {
+	v.icon.SetResource(theme.WarningIcon())
+	v.caption.Text = noVerdictCaption
+	v.caption.Color = statusColour("")
+	v.caption.Refresh()
+	v.word.Text = "NONE"
+	v.word.Color = statusColour("")
+	v.word.Refresh()
+	v.bg.FillColor = tint(statusColour(""), 0)
+	v.bg.Refresh()
+	v.counts.SetText("No current verdict: an input is not acceptable. Fix the marked field; the findings below are for the last acceptable inputs.")
+	v.note.SetText(note)
+}
+
+// noVerdictCaption heads the banner while there is no current verdict.
+const noVerdictCaption = "NO CURRENT VERDICT"
+
 func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
+	if stale {
+		v.noVerdict(note)
+		return
+	}
 	pass, caution, fail := countStatuses(a.Findings)
 	v.icon.SetResource(statusIcon(a.Verdict))
 	v.word.Text = statusWord(a.Verdict)

@@ -108,6 +108,9 @@ func TestInvalidValueKeepsLastResults(t *testing.T) {
 			if !h.s.results.pt.faded {
 				t.Error("chart not faded while out of date")
 			}
+			if v := h.s.results.verdict; v.caption.Text != noVerdictCaption || v.word.Text == statusWord(before.Verdict) {
+				t.Errorf("banner %q %q while an input is not acceptable, want no current verdict", v.caption.Text, v.word.Text)
+			}
 			// Correcting the field clears the mark and the results are current again.
 			h.typeInto(tc.path, entryText(h.s.units().fromSI(f.q, f.get(&before.Design))))
 			if f.msgRow.Visible() || h.s.stale() {
@@ -122,9 +125,14 @@ func TestUnitsSwitchConvertsEveryField(t *testing.T) {
 	fill := h.field("fill_mass_kg")
 	h.s.setUnits(unitsUS)
 	h.idle()
-	// 21.0 g = 0.7407 oz (avoirdupois ounce 28.349523125 g, NIST Handbook 44 appendix C).
-	if got := fill.entry.Text; !strings.HasPrefix(got, "0.7407") || fill.unit.Text != "oz" {
-		t.Errorf("fill in US units = %q %s, want 0.7407… oz", got, fill.unit.Text)
+	// 21.0 g = 0.740753 oz (avoirdupois ounce 28.349523125 g, NIST
+	// Handbook 44 appendix C), shown to four significant figures.
+	if got := fill.entry.Text; got != "0.7408" || fill.unit.Text != "oz" {
+		t.Errorf("fill in US units = %q %s, want 0.7408 oz", got, fill.unit.Text)
+	}
+	// 1.6 mm = 0.0629921 in, shown as 0.06299 in.
+	if got := h.field("vessel.parts[0].wall_thickness_m").entry.Text; got != "0.06299" {
+		t.Errorf("wall thickness in US units = %q in, want 0.06299", got)
 	}
 	hot := h.field("hottest_k")
 	// 76 °C = 168.8 °F.

@@ -241,7 +241,7 @@ func (r *revisionsPanel) openRevision(label string) {
 	s := r.s
 	rev, err := s.doc.File.Find(label)
 	if err != nil {
-		dialog.ShowError(err, s.win)
+		s.showError(err)
 		return
 	}
 	load := func() {
@@ -254,13 +254,13 @@ func (r *revisionsPanel) openRevision(label string) {
 		load()
 		return
 	}
-	dialog.ShowConfirm("Discard the changes?",
+	s.showConfirm("Discard the changes?",
 		fmt.Sprintf("The working copy has changes not kept as a revision.\nOpening revision %s replaces them.", label),
 		func(ok bool) {
 			if ok {
 				load()
 			}
-		}, s.win)
+		})
 }
 
 // askNewRevision asks for a label and change note and keeps the working
@@ -268,16 +268,17 @@ func (r *revisionsPanel) openRevision(label string) {
 func (r *revisionsPanel) askNewRevision(then func()) {
 	s := r.s
 	if s.stale() {
-		dialog.ShowInformation("Fix the inputs first",
-			"The form holds an input that is not acceptable. Fix the marked field before keeping a revision.", s.win)
+		s.showInfo("Fix the inputs first",
+			"The form holds an input that is not acceptable. Fix the marked field before keeping a revision.")
 		return
 	}
-	label := widget.NewEntry()
+	label := newDialogEntry()
 	label.SetText(s.doc.File.NextLabel())
-	author := widget.NewEntry()
+	author := newDialogEntry()
 	author.SetText(s.settings.Reviewer)
 	author.SetPlaceHolder("who made this revision")
-	note := widget.NewMultiLineEntry()
+	note := newDialogEntry()
+	note.MultiLine = true
 	note.Wrapping = fyne.TextWrapWord
 	note.SetPlaceHolder("what changed and why")
 	note.SetMinRowsVisible(3)
@@ -292,6 +293,10 @@ func (r *revisionsPanel) askNewRevision(then func()) {
 		}
 		if strings.TrimSpace(note.Text) == "" {
 			problem.SetText("Write a change note: the record must say what changed.")
+			return
+		}
+		if strings.TrimSpace(author.Text) == "" {
+			problem.SetText("Write the author's name: the record must say who made the revision (the reviewer's name in Preferences fills it in).")
 			return
 		}
 		rev := s.doc.newRevision(strings.TrimSpace(label.Text), strings.TrimSpace(author.Text), strings.TrimSpace(note.Text), s.opts.now())
@@ -317,7 +322,10 @@ func (r *revisionsPanel) askNewRevision(then func()) {
 	dlg = dialog.NewCustomWithoutButtons("Keep as a new revision", content, s.win)
 	dlg.SetButtons([]fyne.CanvasObject{cancel, keep})
 	dlg.Resize(fyne.NewSize(560, 360))
-	dlg.Show()
+	label.onEscape, author.onEscape, note.onEscape = dlg.Hide, dlg.Hide, dlg.Hide
+	label.OnSubmitted = func(string) { keep.OnTapped() }
+	author.OnSubmitted = func(string) { keep.OnTapped() }
+	s.showKeyed(dlg, keep.OnTapped, dlg.Hide)
 	s.win.Canvas().Focus(note)
 }
 

@@ -229,8 +229,9 @@ func TestNewDesignUsesDefaultCriteria(t *testing.T) {
 	if got := h.field("criteria.min_burst_safety_factor").entry.Text; got != "6" {
 		t.Errorf("new design's burst criterion %q, want the reviewer's default 6", got)
 	}
+	h.fillRequired()
 	if h.s.last.assessment == nil || !h.s.doc.dirty() {
-		t.Error("a new design is not assessed or not counted as unsaved")
+		t.Error("a new design is not assessed once its required fields are typed, or not counted as unsaved")
 	}
 	if len(h.s.revs.rows) != 1 || h.s.revs.rows[0] != nil {
 		t.Errorf("revision list %v, want only the working copy", revLabels(h.s.revs.rows))

@@ -1,7 +1,9 @@
 package gui
 
 import (
+	"bytes"
 	"fmt"
+	"io"
 	"log"
 	"os"
 	"sync/atomic"
@@ -10,10 +12,10 @@ import (
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/app"
 	"fyne.io/fyne/v2/dialog"
-	"fyne.io/fyne/v2/storage"
 
 	"ullage/assets"
 	"ullage/hazards"
+	"ullage/hazards/designfile"
 )
 
 // appID is the application's identity, as in FyneApp.toml.
@@ -34,7 +36,7 @@ func Run(args []string) int {
 		return 2
 	}
 	a := app.NewWithID(appID)
-	log.SetOutput(&reloadNoiseFilter{w: log.Writer()})
+	log.SetOutput(&favouritesNoiseFilter{w: &reloadNoiseFilter{w: log.Writer()}})
 	a.SetIcon(fyne.NewStaticResource("icon.png", assets.Icon()))
 	w := a.NewWindow("Ullage")
 	s, err := newSession(a, w, options{delay: typingDelay})
@@ -42,9 +44,10 @@ func Run(args []string) int {
 		fmt.Fprintf(os.Stderr, "ullage: %v\n", err)
 		return 1
 	}
+	s.applyLook()
 	sh := buildWindow(s)
 	w.SetContent(sh.object)
-	w.Resize(fyne.NewSize(1280, 800))
+	w.Resize(defaultWindowSize)
 	w.SetCloseIntercept(s.requestClose)
 
 	doc, openErr := s.firstDocument(ra)
@@ -192,15 +195,14 @@ func (s *session) smoke(out string, status *atomic.Int32) {
 // exportTo writes the assessment record to a path through the same
 // writer the Export command uses.
 func (s *session) exportTo(path string) error {
-	w, err := storage.Writer(storage.NewFileURI(path))
-	if err != nil {
+	var buf bytes.Buffer
+	if err := s.writeAssessmentPDF(&buf); err != nil {
 		return err
 	}
-	werr := s.writeAssessmentPDF(w)
-	if cerr := w.Close(); werr == nil {
-		werr = cerr
-	}
-	return werr
+	return designfile.WriteFile(path, 0o666, func(w io.Writer) error {
+		_, err := w.Write(buf.Bytes())
+		return err
+	})
 }
 
 // showScreen opens one screen or state, for screenshots of the program.

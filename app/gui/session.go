@@ -67,6 +67,13 @@ type session struct {
 	cmp     *comparePanel
 	shell   *shell
 
+	// dialogs are the open dialogs that Enter and Escape answer, newest
+	// last; windowKeys is the window's key handler while they are open.
+	dialogs    []*dialogKeys
+	windowKeys func(*fyne.KeyEvent)
+	// lastWhere is the newest where-to-write dialog, for tests.
+	lastWhere *whereDialog
+
 	stopAutosave chan struct{}
 	// lost is the most recent file when it could not be opened at start.
 	lost *lostRecent

@@ -12,6 +12,8 @@ type settings struct {
 	Units    unitSystem
 	Paper    string
 	Reviewer string
+	// Look is the window's look, lookLight or lookDark.
+	Look string
 	// Criteria are the pass marks a new design starts with.
 	Criteria hazards.Criteria
 }
@@ -39,7 +41,11 @@ func loadSettings(p fyne.Preferences) settings {
 		Units:    parseUnitSystem(p.StringWithFallback(prefUnits, string(unitsSI))),
 		Paper:    p.StringWithFallback(prefPaper, report.PaperA4),
 		Reviewer: p.String(prefReviewer),
+		Look:     p.StringWithFallback(prefLook, lookLight),
 		Criteria: hazards.DefaultCriteria(),
+	}
+	if s.Look != lookDark {
+		s.Look = lookLight
 	}
 	if s.Paper != report.PaperA4 && s.Paper != report.PaperLetter {
 		s.Paper = report.PaperA4
@@ -61,6 +67,7 @@ func (s settings) save(p fyne.Preferences) {
 	p.SetString(prefUnits, string(s.Units))
 	p.SetString(prefPaper, s.Paper)
 	p.SetString(prefReviewer, s.Reviewer)
+	p.SetString(prefLook, s.Look)
 	c := s.Criteria
 	for _, cp := range criterionPrefs {
 		p.SetFloat(prefCriteriaPrefix+cp.key, *cp.get(&c))

@@ -28,11 +28,17 @@ type shell struct {
 
 // Keyboard shortcuts of the main commands.
 var (
+	shortcutNew    = &desktop.CustomShortcut{KeyName: fyne.KeyN, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutQuit   = &desktop.CustomShortcut{KeyName: fyne.KeyQ, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutOpen   = &desktop.CustomShortcut{KeyName: fyne.KeyO, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutSave   = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutSaveAs = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
 	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
 )
+
+// defaultWindowSize is the window's size when it opens: smaller than a
+// 1280×800 screen, so that it fits with a title bar and a panel.
+var defaultWindowSize = fyne.NewSize(1200, 720)
 
 // Unit choices on the tool bar.
 const (
@@ -51,6 +57,13 @@ func buildWindow(s *session) *shell {
 	cmp := newComparePanel(s)
 	study := newTolerancePanel(s)
 	results.list.onPick = func(f hazards.Finding) { working.show(workSubject{criterion: f.Criterion}) }
+	// Selecting a finding keeps the design form in place; its working
+	// opens with "Show the working", and follows the selection once open.
+	results.list.onSelect = func(f hazards.Finding) {
+		if working.open {
+			working.show(workSubject{criterion: f.Criterion})
+		}
+	}
 	results.keys.onPick = func(r keyRow) { working.show(workSubject{keyLabel: r.label}) }
 
 	sh.form = form.object
@@ -58,7 +71,7 @@ func buildWindow(s *session) *shell {
 	split.SetOffset(0.44)
 	sh.review = container.NewTabItemWithIcon("Design review", theme.DocumentCreateIcon(), split)
 	sh.revs = container.NewTabItemWithIcon("Revisions", theme.ListIcon(), revs.object)
-	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), cmp.object)
+	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), container.New(narrowable{1000}, cmp.object))
 	sh.study = container.NewTabItemWithIcon("Tolerance study", theme.GridIcon(), study.object)
 	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare, sh.study)
 
@@ -90,6 +103,8 @@ func buildWindow(s *session) *shell {
 		sc desktop.CustomShortcut
 		do func()
 	}{
+		{*shortcutNew, s.newDesign},
+		{*shortcutQuit, s.requestClose},
 		{*shortcutOpen, s.openDialog},
 		{*shortcutSave, func() { s.save(nil) }},
 		{*shortcutSaveAs, func() { s.saveAs(nil) }},
@@ -154,15 +169,8 @@ func (sh *shell) rebuildMenu() {
 			}
 		})
 	})
-	newDesign := fyne.NewMenuItem("New design", func() {
-		s.confirmLeave("start a new design", func() {
-			if doc, err := newBlankDocument(s.settings.Criteria); err == nil {
-				s.open(doc)
-				s.shell.showReview()
-			}
-		})
-	})
-	quit := fyne.NewMenuItem("Quit", func() { s.requestClose() })
+	newDesign := item("New design", shortcutNew, s.newDesign)
+	quit := item("Quit", shortcutQuit, s.requestClose)
 	quit.IsQuit = true
 	file := fyne.NewMenu("File",
 		newDesign,
@@ -213,6 +221,17 @@ func (sh *shell) hideWorking() {
 	wp.object.Hide()
 	sh.form.Show()
 	wp.refresh()
+}
+
+// newDesign starts a new, blank design, asking first when work would be
+// lost.
+func (s *session) newDesign() {
+	s.confirmLeave("start a new design", func() {
+		if doc, err := newBlankDocument(s.settings.Criteria); err == nil {
+			s.open(doc)
+			s.shell.showReview()
+		}
+	})
 }
 
 // requestClose asks before closing when work would be lost.

@@ -36,7 +36,7 @@ func (h *harness) findingIndex(criterion string) int {
 	return -1
 }
 
-func TestSelectingAFindingShowsItsWorking(t *testing.T) {
+func TestSelectingAFindingKeepsTheFormAndShowsItsWorkingOnRequest(t *testing.T) {
 	tests := []struct {
 		criterion string
 		// key names the step that produced the finding's value.
@@ -64,6 +64,11 @@ func TestSelectingAFindingShowsItsWorking(t *testing.T) {
 				fl.list.Select((i + 1) % len(fl.rows))
 			}
 			fl.list.Select(i)
+			h.idle()
+			if wp.open || !h.s.shell.form.Visible() {
+				t.Fatal("selecting a finding replaced the design form")
+			}
+			button(t, h.s.results.object, "Show the working").OnTapped()
 			h.idle()
 			if !wp.open || !wp.object.Visible() || h.s.shell.form.Visible() {
 				t.Fatal("the working is not shown in the form's place")

@@ -9,7 +9,7 @@ import (
 	"ullage/fluids/units"
 )
 
-type propsJSON struct {
+type fluidStateJSON struct {
 	Fluid                 string   `json:"fluid"`
 	TemperatureC          float64  `json:"temperature_c"`
 	PsatKPa               float64  `json:"psat_kpa"`
@@ -43,34 +43,34 @@ func uncertaintyOf(s *fluids.Substance, property string) *uncertaintyJSON {
 	return &uncertaintyJSON{Percent: u.Percent, Statement: u.Statement, Source: u.Source}
 }
 
-func runProps(args []string, stdout, stderr io.Writer) int {
+func runFluidState(args []string, stdout, stderr io.Writer) int {
 	o, err := parseArgs(args, []string{"json"}, []string{"temp-c", "fluids"})
 	if err != nil {
-		return usageError(stderr, "props", err)
+		return usageError(stderr, "fluid-state", err)
 	}
 	if len(o.positional) != 1 {
-		return usageError(stderr, "props", fmt.Errorf("name one fluid (try: ullage fluids)"))
+		return usageError(stderr, "fluid-state", fmt.Errorf("name one fluid (try: ullage fluids)"))
 	}
 	tc, ok, err := o.float("temp-c")
 	if err != nil {
-		return usageError(stderr, "props", err)
+		return usageError(stderr, "fluid-state", err)
 	}
 	if !ok {
-		return usageError(stderr, "props", fmt.Errorf("give the temperature with --temp-c"))
+		return usageError(stderr, "fluid-state", fmt.Errorf("give the temperature with --temp-c"))
 	}
 	lib, err := library(o)
 	if err != nil {
-		return usageError(stderr, "props", err)
+		return usageError(stderr, "fluid-state", err)
 	}
 	s, err := lib.Lookup(o.positional[0])
 	if err != nil {
-		return usageError(stderr, "props", err)
+		return usageError(stderr, "fluid-state", err)
 	}
 	sat, err := s.Saturation(units.CelsiusToKelvin(tc))
 	if err != nil {
-		return usageError(stderr, "props", err)
+		return usageError(stderr, "fluid-state", err)
 	}
-	out := propsJSON{
+	out := fluidStateJSON{
 		Fluid: s.Fluid().ID, TemperatureC: tc, PsatKPa: round(sat.PressurePa/1000, 6),
 		LiquidDensityKgM3: round(sat.LiquidDensity, 6), VapourDensityKgM3: round(sat.VapourDensity, 6),
 		HeatOfVaporisationJKg: round(sat.HeatOfVaporisation, 6), Extrapolated: sat.Flags.Extrapolated(), Notes: []string{},
@@ -87,7 +87,7 @@ func runProps(args []string, stdout, stderr io.Writer) int {
 		enc := json.NewEncoder(stdout)
 		enc.SetIndent("", "  ")
 		if err := enc.Encode(out); err != nil {
-			return usageError(stderr, "props", err)
+			return usageError(stderr, "fluid-state", err)
 		}
 		return ExitPass
 	}

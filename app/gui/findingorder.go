@@ -1,0 +1,47 @@
+package gui
+
+import (
+	"slices"
+
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+
+	"ullage/hazards"
+)
+
+// statusRank orders findings for the screen: fails first, then
+// cautions, then findings with no published limit, then passes.
+func statusRank(s hazards.Status) int {
+	switch s {
+	case hazards.StatusFail:
+		return 0
+	case hazards.StatusCaution:
+		return 1
+	case hazards.StatusPass:
+		return 3
+	}
+	return 2
+}
+
+// orderFindings returns the findings with fails and cautions first, in
+// the engine's order within each status; fs is not changed.
+func orderFindings(fs []hazards.Finding) []hazards.Finding {
+	out := slices.Clone(fs)
+	slices.SortStableFunc(out, func(a, b hazards.Finding) int { return statusRank(a.Status) - statusRank(b.Status) })
+	return out
+}
+
+// wantedHeight is the height the findings table needs to show every row
+// without scrolling in the compact theme it is drawn in: its heading and
+// detail, and each row with the list's separator space.
+func (fl *findingsList) wantedHeight() float32 {
+	row := fl.rowHeight()
+	n := float32(max(len(fl.rows), 1))
+	pad := compactTheme{}.Size(theme.SizeNamePadding)
+	return fl.object.MinSize().Height - fl.list.MinSize().Height + n*(row+pad)
+}
+
+// rowHeight is the height of one findings row in the compact theme.
+func (fl *findingsList) rowHeight() float32 {
+	return container.NewThemeOverride(fl.list.CreateItem(), compactTheme{}).MinSize().Height
+}
