@@ -26,20 +26,20 @@ type Quantity int
 
 // Quantities shown to people, with their SI and US units.
 const (
-	Plain           Quantity = iota // dimensionless (safety factor)
-	Temperature                     // K → °C / °F
-	TempDifference                  // K → K / °F
-	Pressure                        // Pa → kPa / psi
-	Stress                          // Pa → MPa / psi
-	Mass                            // kg → g / oz
-	VesselVolume                    // m³ → mL / in³
-	Length                          // m → mm / in
-	RoomVolume                      // m³ → m³ / ft³
-	RoomLength                      // m → m / ft
-	Speed                           // m/s → m/s / ft/min
-	Percent                         // %
-	Concentration                   // ppm
-	PercentLFL                      // % of the lower flammable limit
+	Plain          Quantity = iota // dimensionless (safety factor)
+	Temperature                    // K → °C / °F
+	TempDifference                 // K → K / °F
+	Pressure                       // Pa → kPa / psi
+	Stress                         // Pa → MPa / psi
+	Mass                           // kg → g / oz
+	VesselVolume                   // m³ → mL / in³
+	Length                         // m → mm / in
+	RoomVolume                     // m³ → m³ / ft³
+	RoomLength                     // m → m / ft
+	Speed                          // m/s → m/s / ft/min
+	Percent                        // %
+	Concentration                  // ppm
+	PercentLFL                     // % of the lower flammable limit
 )
 
 // Unit returns the unit label of q in the system, "" for plain numbers.
