@@ -108,7 +108,7 @@ func (a *Assessment) findings() {
 		fs = append(fs, fl)
 	} else {
 		fs = append(fs, Finding{Criterion: CriterionFlammability, Title: "Flammability", Status: StatusPass, Unit: "% LFL",
-			Limit: cr.MaxPercentLFL, Margin: 1, Source: "library: not flammable",
+			Limit: cr.MaxPercentLFL, Direction: AtMost, NotApplicable: ReasonNotFlammable, Source: "library: not flammable",
 			Message: fmt.Sprintf("%s is not flammable. %s", f.Name, f.Flammability.Note)})
 	}
 

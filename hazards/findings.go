@@ -86,6 +86,9 @@ const (
 	// ReasonNoPublishedLimit: no published limit of this kind for the
 	// fluid from the chosen bodies.
 	ReasonNoPublishedLimit Reason = "no published limit"
+	// ReasonNotFlammable: the fluid is not flammable, so no concentration
+	// is held against a flammable limit.
+	ReasonNotFlammable Reason = "not flammable"
 )
 
 // Words returns the reason as every output prints it in place of a value:

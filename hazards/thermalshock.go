@@ -219,6 +219,9 @@ func (a *Assessment) thermalShockFindings() []Finding {
 		c := ps.Cases[ps.Governing]
 		f := atLeast(ThermalShockCriterion(ps.Part), "Thermal shock, "+ps.Name, "", c.SafetyFactor, a.Shock.RequiredSafetyFactor,
 			safetyFactorCautionBand, src)
+		if c.SafetyFactor >= SafetyFactorCap {
+			f.ValueBound = AtLeast
+		}
 		preset := d.ThermalShock.HotToColdPresetID
 		if c.Direction == ShockColdToHot {
 			preset = d.ThermalShock.ColdToHotPresetID
