@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // keyNumbers lists the numbers behind the findings: the vessel at the
@@ -205,7 +206,7 @@ func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 func keyFinding(a *hazards.Assessment, criterion string) string {
 	for _, f := range a.Findings {
 		if f.Criterion == criterion {
-			return findingValue(f, f.Value)
+			return display.FindingValue(f)
 		}
 	}
 	return "—"

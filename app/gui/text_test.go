@@ -5,7 +5,6 @@ import (
 	"strings"
 	"testing"
 
-	"ullage/hazards"
 )
 
 func TestHumaniseShowsLimitsInScreenUnits(t *testing.T) {
@@ -16,12 +15,12 @@ func TestHumaniseShowsLimitsInScreenUnits(t *testing.T) {
 		want string
 	}{
 		// Messages from hazards.Design.Validate.
-		{"must be from 20 to 800 K", qTemperature, unitsSI, "must be from -253.15 to 526.85 °C"},
-		{"must be from 20 to 800 K", qTemperature, unitsUS, "must be from -423.67 to 980.33 °F"},
+		{"must be from 20 to 800 K", qTemperature, unitsSI, "must be from −253.15 to 526.85 °C"},
+		{"must be from 20 to 800 K", qTemperature, unitsUS, "must be from −423.67 to 980.33 °F"},
 		{"must be greater than zero and at most 10 kg", qMass, unitsSI, "must be greater than zero and at most 10000 g"},
 		{"must be less than the outer radius (0.02 m)", qLength, unitsSI, "must be less than the outer radius (20 mm)"},
 		{"must not be above hottest_k (349.15 K)", qTemperature, unitsSI, "must not be above the hottest temperature (76 °C)"},
-		{"must be at or above the freezing point of Ethanol, 159.05 K (-114.1 °C)", qTemperature, unitsSI, "must be at or above the freezing point of Ethanol, -114.1 °C"},
+		{"must be at or above the freezing point of Ethanol, 159.05 K (-114.1 °C)", qTemperature, unitsSI, "must be at or above the freezing point of Ethanol, −114.1 °C"},
 		{"must be from 1 to 20 (1 = perfectly mixed)", qNumber, unitsSI, "must be from 1 to 20 (1 = perfectly mixed)"},
 		{"must be from 0 to 0.1 m³ (0 means compute from the parts)", qVesselVolume, unitsSI, "must be from 0 to 100000 mL (0 means compute from the parts)"},
 	}
@@ -136,25 +135,3 @@ func TestUserFluidIsCheckedBeforeUse(t *testing.T) {
 	}
 }
 
-func TestFindingTexts(t *testing.T) {
-	tests := []struct {
-		f                    hazards.Finding
-		value, limit, margin string
-	}{
-		{hazards.Finding{Criterion: hazards.CriterionUllage, Unit: "%", Value: 23.1, Limit: 5, Margin: 0.181}, "23.1 %", "≥ 5 %", "+18 points"},
-		{hazards.Finding{Criterion: hazards.CriterionUllage, Unit: "%", Value: 8.8e-7, Limit: 5, Margin: -0.05}, "0 %", "≥ 5 %", "−5 points"},
-		{hazards.Finding{Criterion: hazards.CriterionBurst, Value: 1.21, Limit: 4, Margin: -0.6975}, "1.21", "≥ 4", "−70 %"},
-		{hazards.Finding{Criterion: hazards.CriterionBurst, Limit: 4, NotApplicable: hazards.ReasonNoBurstLoad}, "none — no burst load", "≥ 4", "—"},
-		{hazards.Finding{Criterion: hazards.CriterionBurst, Value: 1000, Limit: 4, Margin: 249, ValueBound: hazards.AtLeast}, "≥ 1000", "≥ 4", "250 × limit"},
-		{hazards.Finding{Criterion: hazards.CriterionSTEL, Status: hazards.StatusNotAssessed, Unit: "ppm", NotApplicable: hazards.ReasonNoPublishedLimit}, "not assessed — no published limit", "—", "—"},
-		{hazards.Finding{Criterion: hazards.CriterionFailure, Value: 0.23, Limit: 1e-4, Margin: -2299}, "0.23", "≤ 1 × 10⁻⁴", "2300 × limit"},
-		{hazards.Finding{Criterion: hazards.CriterionIDLH, Unit: "ppm", Value: 882, Limit: 3300, Margin: 0.733}, "882 ppm", "≤ 3300 ppm", "+73 %"},
-		{hazards.Finding{Criterion: hazards.CriterionCorrelationUse}, "—", "—", "—"},
-	}
-	for _, tc := range tests {
-		v, l, m := findingValue(tc.f, tc.f.Value), findingLimit(tc.f), findingMargin(tc.f)
-		if v != tc.value || l != tc.limit || m != tc.margin {
-			t.Errorf("%s: %q %q %q, want %q %q %q", tc.f.Criterion, v, l, m, tc.value, tc.limit, tc.margin)
-		}
-	}
-}
