@@ -4,7 +4,6 @@ import (
 	"os"
 	"strings"
 	"testing"
-
 )
 
 func TestHumaniseShowsLimitsInScreenUnits(t *testing.T) {
@@ -134,4 +133,3 @@ func TestUserFluidIsCheckedBeforeUse(t *testing.T) {
 		t.Errorf("fluid summary does not say the data are the reviewer's: %q", h.s.form.fluid.info.Text)
 	}
 }
-
