@@ -7,6 +7,7 @@ import (
 
 	"ullage/fluids/units"
 	"ullage/hazards"
+	"ullage/report/display"
 	"ullage/hazards/compare"
 )
 
@@ -165,8 +166,7 @@ func (w *comparisonWriter) findings() {
 		if f == nil {
 			return cell{text: "not reviewed", italic: true, dim: true}, cell{}
 		}
-		n := findingNumbers(*f, s.Assessment.Fluid)
-		return cell{status: f.Status}, cell{text: n.value}
+		return cell{status: f.Status}, cell{text: display.FindingValue(*f)}
 	}
 	var rows [][]cell
 	for _, id := range order {

@@ -2,6 +2,7 @@ package report
 
 import (
 	"ullage/fluids/units"
+	"ullage/report/display"
 )
 
 // Conversion factors for US customary display, derived from the exact
@@ -18,6 +19,14 @@ const (
 type unitSystem struct{ us bool }
 
 func newUnitSystem(name string) unitSystem { return unitSystem{us: name == UnitsUS} }
+
+// system returns the display package's name for the unit system.
+func (u unitSystem) system() display.System {
+	if u.us {
+		return display.US
+	}
+	return display.SI
+}
 
 // quantity is one displayed kind of value: its unit and converter.
 type quantity struct {

@@ -237,3 +237,6 @@ func Margin(value, limit float64, dir, bound hazards.Direction) string {
 	}
 	return "missed by " + q + p + " %"
 }
+
+// MarginNote explains the margin column wherever findings are tabled.
+const MarginNote = "Margin says whether the value meets its limit and by how much, as a share of the limit (\"met with 18 % to spare\", \"missed by 23 %\"), or as a factor from ten times on (\"met 250-fold\", \"missed 2300-fold\"); \"at least\" or \"at most\" marks a value that is itself a bound."
