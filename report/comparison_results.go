@@ -7,8 +7,8 @@ import (
 
 	"ullage/fluids/units"
 	"ullage/hazards"
-	"ullage/report/display"
 	"ullage/hazards/compare"
+	"ullage/report/display"
 )
 
 // hasNumber reports whether a result text carries a number (and not
