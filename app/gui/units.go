@@ -52,6 +52,14 @@ const (
 	qRetardation                  // m ↔ nm (polariscope retardation)
 )
 
+// display returns the display package's name for the unit system.
+func (u unitSystem) display() display.System {
+	if u == unitsUS {
+		return display.US
+	}
+	return display.SI
+}
+
 // unit returns the unit label of q in the system, "" for plain numbers.
 func (u unitSystem) unit(q quantity) string {
 	us := u == unitsUS

@@ -2,6 +2,10 @@ package display
 
 import "ullage/fluids/units"
 
+// footPoundJ is the foot pound-force in joules: 0.3048 m × 0.45359237 kg
+// × 9.80665 m/s² (all three exact by definition, NIST SP 811 appendix B).
+const footPoundJ = units.FootM * units.PoundKg * 9.80665
+
 // System is a set of units results are shown in.
 type System string
 
@@ -40,6 +44,7 @@ const (
 	Percent                        // %
 	Concentration                  // ppm
 	PercentLFL                     // % of the lower flammable limit
+	Energy                         // J → J / ft·lbf
 )
 
 // Unit returns the unit label of q in the system, "" for plain numbers.
@@ -79,6 +84,8 @@ func labels(q Quantity) (si, us string) {
 		return "ppm", "ppm"
 	case PercentLFL:
 		return "% LFL", "% LFL"
+	case Energy:
+		return "J", "ft·lbf"
 	}
 	return "", ""
 }
@@ -132,6 +139,10 @@ func (s System) FromSI(q Quantity, x float64) float64 {
 	case Speed:
 		if us {
 			return x / units.FootPerMinuteMS
+		}
+	case Energy:
+		if us {
+			return x / footPoundJ
 		}
 	}
 	return x
