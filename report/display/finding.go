@@ -240,3 +240,15 @@ func Margin(value, limit float64, dir, bound hazards.Direction) string {
 
 // MarginNote explains the margin column wherever findings are tabled.
 const MarginNote = "Margin says whether the value meets its limit and by how much, as a share of the limit (\"met with 18 % to spare\", \"missed by 23 %\"), or as a factor from ten times on (\"met 250-fold\", \"missed 2300-fold\"); \"at least\" or \"at most\" marks a value that is itself a bound."
+
+// ValueOf returns the value of an assessment's finding for a criterion as
+// FindingValue words it, or NoValue when the assessment has no such
+// finding.
+func ValueOf(a *hazards.Assessment, criterion string) string {
+	for _, f := range a.Findings {
+		if f.Criterion == criterion {
+			return FindingValue(f)
+		}
+	}
+	return NoValue
+}
