@@ -204,10 +204,5 @@ func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 
 // keyFinding shows a finding's value in the words the findings table uses.
 func keyFinding(a *hazards.Assessment, criterion string) string {
-	for _, f := range a.Findings {
-		if f.Criterion == criterion {
-			return display.FindingValue(f)
-		}
-	}
-	return "—"
+	return display.ValueOf(a, criterion)
 }
