@@ -18,7 +18,7 @@ func (w *assessmentWriter) findings() {
 		if steps := stepList(f.Steps); steps != "" {
 			source += ".  " + steps + "."
 		}
-		d.findingBlock(f.Status, v.Title, v.Numbers(), f.MessageIn(w.u.us), source)
+		d.findingBlock(f.Status, v.Title, v.Numbers(), v.Text(), source)
 	}
 }
 

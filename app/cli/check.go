@@ -322,7 +322,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintln(w)
 	for _, v := range display.Findings(a, sys) {
-		fmt.Fprintf(w, "  %-8s %s\n           %s\n           %s\n", v.Status, v.Title, v.Numbers(), v.Finding.MessageIn(sys == display.US))
+		fmt.Fprintf(w, "  %-8s %s\n           %s\n           %s\n", v.Status, v.Title, v.Numbers(), v.Text())
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if r := c.tolerance; r != nil {

@@ -189,7 +189,7 @@ func (fl *findingsList) describe() {
 	fl.working.Enable()
 	fl.detail.Segments = []widget.RichTextSegment{
 		&widget.TextSegment{Text: statusWord(f.Status) + " — " + f.Title + ". ", Style: widget.RichTextStyle{Inline: true, TextStyle: fyne.TextStyle{Bold: true}}},
-		&widget.TextSegment{Text: f.MessageIn(fl.us != nil && fl.us()), Style: widget.RichTextStyleParagraph},
+		&widget.TextSegment{Text: display.Finding(f, fl.system()).Text(), Style: widget.RichTextStyleParagraph},
 		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
 	}
 	if len(f.Steps) > 0 {

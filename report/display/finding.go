@@ -22,9 +22,22 @@ type FindingView struct {
 	Value, Limit, Margin string
 	// Source is where the limit comes from.
 	Source string
+	// Detail words the facts behind the finding in the system's units.
+	Detail string
 	// Stretched names the values behind the finding that came from a
 	// correlation used outside its range, in one sentence, or "".
 	Stretched string
+}
+
+// Text returns the detail and the stretched-range note together.
+func (v FindingView) Text() string {
+	if v.Stretched == "" {
+		return v.Detail
+	}
+	if v.Detail == "" {
+		return v.Stretched
+	}
+	return v.Detail + " " + v.Stretched
 }
 
 // Numbers returns the value, limit and margin on one line, as the PDF and
@@ -47,9 +60,9 @@ func Findings(a *hazards.Assessment, s System) []FindingView {
 // and probabilities), so s changes only the words around them.
 func Finding(f hazards.Finding, s System) FindingView {
 	v := FindingView{Finding: f, Status: StatusWord(f.Status), Title: f.Title, Source: f.Source,
-		Value: FindingValue(f), Limit: FindingLimit(f), Margin: FindingMargin(f)}
+		Value: FindingValue(f), Limit: FindingLimit(f), Margin: FindingMargin(f), Detail: Detail(f, s)}
 	if len(f.Stretched) > 0 {
-		v.Stretched = "Computed outside a correlation's published range: " + strings.Join(f.Stretched, "; ") + "."
+		v.Stretched = "Computed outside a correlation's published range (treat as an estimate; not a clean pass): " + strings.Join(f.Stretched, "; ") + "."
 	}
 	return v
 }
@@ -251,4 +264,69 @@ func ValueOf(a *hazards.Assessment, criterion string) string {
 		}
 	}
 	return NoValue
+}
+
+// factQuantity returns the quantity a fact is shown in.
+func factQuantity(k hazards.FactKind) Quantity {
+	switch k {
+	case hazards.FactTemperature:
+		return Temperature
+	case hazards.FactTempDifference:
+		return TempDifference
+	case hazards.FactPressure:
+		return Pressure
+	case hazards.FactStress:
+		return Stress
+	case hazards.FactMass:
+		return Mass
+	case hazards.FactVolume:
+		return VesselVolume
+	case hazards.FactPercent:
+		return Percent
+	case hazards.FactConcentration:
+		return Concentration
+	}
+	return Plain
+}
+
+// FactText words one fact in the system's units: "hottest temperature:
+// 76.0 °C", "glass: soda-lime-silica glass", "liquid-full temperature:
+// not reached".
+func FactText(f hazards.Fact, s System) string {
+	if f.Text != "" {
+		return f.Name + ": " + f.Text
+	}
+	var v string
+	switch f.Kind {
+	case hazards.FactStressPerKelvin:
+		if s == US {
+			v = Number(f.Value*5/9/psiPa, ValueFigures) + " psi per °F"
+		} else {
+			v = Number(f.Value/1e6, ValueFigures) + " MPa per K"
+		}
+	case hazards.FactMinutes:
+		v = Number(f.Value, ValueFigures) + " min"
+	case hazards.FactHours:
+		v = Number(f.Value, ValueFigures) + " h"
+	case hazards.FactYears:
+		v = Number(f.Value, ValueFigures) + " years"
+	default:
+		v = s.Format(factQuantity(f.Kind), f.Value)
+	}
+	if b := BoundWords(f.Bound); b != "" {
+		v = b + " " + v
+	}
+	return f.Name + ": " + v
+}
+
+// Detail words the facts behind a finding, in order, in one line.
+func Detail(f hazards.Finding, s System) string {
+	parts := make([]string, 0, len(f.Facts))
+	for _, x := range f.Facts {
+		parts = append(parts, FactText(x, s))
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return strings.Join(parts, "; ") + "."
 }

@@ -50,3 +50,20 @@ func TestFindingWords(t *testing.T) {
 		}
 	}
 }
+
+// 349.15 K is 76.0 °C and 168.8 °F; 312 kPa is 45.3 psi (NIST SP 811
+// appendix B).
+func TestDetail(t *testing.T) {
+	f := hazards.Finding{Facts: []hazards.Fact{
+		{Name: "hottest temperature", Kind: hazards.FactTemperature, Value: 349.15},
+		{Name: "pressure inside", Kind: hazards.FactPressure, Value: 312e3},
+		{Name: "liquid-full temperature", Kind: hazards.FactTemperature, Text: "not reached"},
+		{Name: "glass", Kind: hazards.FactName, Text: "borosilicate"},
+	}}
+	if got, want := Detail(f, SI), "hottest temperature: 76.0 °C; pressure inside: 312 kPa; liquid-full temperature: not reached; glass: borosilicate."; got != want {
+		t.Errorf("SI %q, want %q", got, want)
+	}
+	if got, want := Detail(f, US), "hottest temperature: 168.8 °F; pressure inside: 45.3 psi; liquid-full temperature: not reached; glass: borosilicate."; got != want {
+		t.Errorf("US %q, want %q", got, want)
+	}
+}

@@ -6,6 +6,10 @@ import "ullage/fluids/units"
 // × 9.80665 m/s² (all three exact by definition, NIST SP 811 appendix B).
 const footPoundJ = units.FootM * units.PoundKg * 9.80665
 
+// psiPa is the pound-force per square inch in pascals (NIST SP 811
+// appendix B, from exact definitions).
+const psiPa = units.PsiPa
+
 // System is a set of units results are shown in.
 type System string
 
