@@ -66,8 +66,8 @@ func sameWordsDesigns(t *testing.T) (path string, labels []string) {
 
 // TestEveryOutputWordsFindingsAlike renders every finding of each design,
 // in SI and US units, through the window's findings table, the PDF record
-// and the command line's text, and checks that the value, limit and
-// margin read the same in all three.
+// and the command line's text, and checks that the value, limit, margin
+// and the facts behind each read the same in all three.
 func TestEveryOutputWordsFindingsAlike(t *testing.T) {
 	pdftotext, err := exec.LookPath("pdftotext")
 	if err != nil {
@@ -99,7 +99,7 @@ func TestEveryOutputWordsFindingsAlike(t *testing.T) {
 			sys   display.System
 		}{{report.UnitsSI, display.SI}, {report.UnitsUS, display.US}} {
 			name := label + "/" + c.units
-			window := windowRows(t, a, c.sys == display.US)
+			window, details := windowRows(t, a, c.sys == display.US)
 			pdf := pdfWords(t, pdftotext, a, c.units)
 			text := cliWords(t, path, label, c.units)
 			if len(window) != len(a.Findings) {
@@ -120,6 +120,11 @@ func TestEveryOutputWordsFindingsAlike(t *testing.T) {
 				if !strings.Contains(text, line) {
 					t.Errorf("%s %s: the command line lacks %q", name, fd.Criterion, line)
 				}
+				// The facts behind the finding, in the chosen units.
+				detail := squash(want.Text())
+				if !strings.Contains(squash(details[i]), detail) || !strings.Contains(pdf, detail) || !strings.Contains(text, detail) {
+					t.Errorf("%s %s: the detail %q is not the same in the window (%q), the PDF and the command line", name, fd.Criterion, detail, details[i])
+				}
 			}
 		}
 	}
@@ -134,8 +139,8 @@ func TestEveryOutputWordsFindingsAlike(t *testing.T) {
 
 // windowRows fills the window's findings table with an assessment's
 // findings and reads each row's value, limit and margin back from its
-// labels.
-func windowRows(t *testing.T, a *hazards.Assessment, us bool) [][3]string {
+// labels, and each finding's detail as shown when it is selected.
+func windowRows(t *testing.T, a *hazards.Assessment, us bool) ([][3]string, []string) {
 	t.Helper()
 	fl := newFindingsList()
 	fl.us = func() bool { return us }
@@ -143,13 +148,18 @@ func windowRows(t *testing.T, a *hazards.Assessment, us bool) [][3]string {
 	w.Resize(fyne.NewSize(1000, 700))
 	fl.set(a.Findings, false)
 	var rows [][3]string
+	var details []string
 	for id := 0; id < fl.list.Length(); id++ {
 		o := fl.list.CreateItem()
 		fl.list.UpdateItem(id, o)
 		cells := o.(*fyne.Container).Objects
 		rows = append(rows, [3]string{cells[2].(*widget.Label).Text, cells[3].(*widget.Label).Text, cells[4].(*widget.Label).Text})
+		fl.quiet = true
+		fl.list.Select(id)
+		fl.quiet = false
+		details = append(details, fl.detailText())
 	}
-	return rows
+	return rows, details
 }
 
 // pdfWords writes the assessment record and returns its text with white
