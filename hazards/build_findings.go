@@ -1,10 +1,7 @@
 package hazards
 
 import (
-	"fmt"
-
 	"ullage/fluids"
-	"ullage/fluids/units"
 )
 
 func (a *Assessment) findings() {
@@ -161,8 +158,8 @@ type stateUse struct {
 
 // findingStates returns the vessel states behind a finding.
 func (a *Assessment) findingStates(criterion string) []stateUse {
-	hot := stateUse{fmt.Sprintf("at the hottest temperature, %.1f °C", units.KelvinToCelsius(a.Design.HottestK)), &a.Hot}
-	cold := stateUse{fmt.Sprintf("at the coldest temperature, %.1f °C", units.KelvinToCelsius(a.Design.ColdestK)), &a.Cold}
+	hot := stateUse{"at the hottest temperature", &a.Hot}
+	cold := stateUse{"at the coldest temperature", &a.Cold}
 	var worst []stateUse
 	if a.Worst != nil && a.Worst.Sealable {
 		worst = []stateUse{{"worst-case unit at the hottest temperature", &a.Worst.Hot}}
