@@ -49,6 +49,9 @@ const (
 	Concentration                  // ppm
 	PercentLFL                     // % of the lower flammable limit
 	Energy                         // J → J / ft·lbf
+	Area                           // m² → cm² / in² (a glass surface)
+	Surface                        // m² → m² / ft² (a room surface)
+	Density                        // kg/m³ → kg/m³ / lb/ft³
 )
 
 // Unit returns the unit label of q in the system, "" for plain numbers.
@@ -90,6 +93,12 @@ func labels(q Quantity) (si, us string) {
 		return "% LFL", "% LFL"
 	case Energy:
 		return "J", "ft·lbf"
+	case Area:
+		return "cm²", "in²"
+	case Surface:
+		return "m²", "ft²"
+	case Density:
+		return "kg/m³", "lb/ft³"
 	}
 	return "", ""
 }
@@ -147,6 +156,19 @@ func (s System) FromSI(q Quantity, x float64) float64 {
 	case Energy:
 		if us {
 			return x / footPoundJ
+		}
+	case Area:
+		if us {
+			return x / (units.InchM * units.InchM)
+		}
+		return x / 1e-4
+	case Surface:
+		if us {
+			return x / (units.FootM * units.FootM)
+		}
+	case Density:
+		if us {
+			return x / (units.PoundKg / units.CubicFootM3)
 		}
 	}
 	return x
