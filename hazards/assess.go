@@ -152,7 +152,8 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	}{{"coldest_k", d.ColdestK}, {"sealing_temperature_k", d.SealingTemperatureK}, {"hottest_k", d.HottestK}} {
 		if tf.t < sub.MinTemperature() {
 			return nil, &InputError{Field: tf.field, Value: fmt.Sprintf("%g", tf.t),
-				Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K (%.1f °C)", sub.Fluid().Name, sub.MinTemperature(), units.KelvinToCelsius(sub.MinTemperature()))}
+				Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K (%.1f °C)", sub.Fluid().Name, sub.MinTemperature(), units.KelvinToCelsius(sub.MinTemperature())),
+				Rule: RuleAtLeast, Min: sub.MinTemperature(), Unit: "K", Subject: "the freezing point of " + sub.Fluid().Name}
 		}
 	}
 	a.VolumeM3 = d.Vessel.Volume()

@@ -1,11 +1,7 @@
 package hazards
 
 import (
-	"fmt"
-	"strings"
-
 	"ullage/fluids"
-	"ullage/fluids/units"
 )
 
 func (a *Assessment) findings() {
@@ -24,18 +20,7 @@ func (a *Assessment) findings() {
 	if a.Hot.Phase == PhaseLiquidFull {
 		u.Status = StatusFail
 	}
-	u.Message, u.MessageUS = inBoth(func(m measure) string {
-		switch {
-		case a.Hot.Phase == PhaseLiquidFull:
-			return fmt.Sprintf("The vessel goes liquid-full at %s, below the hottest temperature %s; past that point the pressure climbs by about a megapascal per kelvin (some 80 psi per °F) and the glass will break.",
-				m.temp(a.LiquidFullK), m.temp(d.HottestK))
-		case a.LiquidFullReached:
-			return fmt.Sprintf("%.1f %% of the volume is vapour space at %s; the vessel would go liquid-full at %s.",
-				a.Hot.UllagePercent, m.temp(d.HottestK), m.temp(a.LiquidFullK))
-		default:
-			return fmt.Sprintf("%.1f %% of the volume is vapour space at %s; the fill is too small for the vessel ever to go liquid-full.", a.Hot.UllagePercent, m.temp(d.HottestK))
-		}
-	})
+	u.Facts = append([]Fact{fact("hottest temperature", FactTemperature, d.HottestK)}, liquidFullFact(a.LiquidFullReached || a.Hot.Phase == PhaseLiquidFull, a.LiquidFullK))
 	fs = append(fs, u)
 	if w := a.Worst; w != nil {
 		fs = append(fs, worstCaseFinding(a, w))
@@ -46,13 +31,12 @@ func (a *Assessment) findings() {
 		safetyFactorCautionBand, DefaultCriteriaGrounds["min_burst_safety_factor"])
 	b.ValueBound = a.BurstSafetyFactorBound
 	over := a.Hot.PressurePa - d.AmbientPressurePa
-	b.Message, b.MessageUS = inBoth(func(m measure) string {
-		if over <= 0 {
-			return fmt.Sprintf("The vessel is not over-pressurised at %s (%s inside, %s outside): %s.", m.temp(d.HottestK), m.pressure(a.Hot.PressurePa), m.pressure(d.AmbientPressurePa), ReasonNoBurstLoad.Words())
-		}
-		return fmt.Sprintf("%s over ambient at %s against a long-term burst overpressure of %s (%s, %s).",
-			m.pressure(over), m.temp(d.HottestK), m.pressure(a.Strength.LongTermBurstPa), a.Glass.Name, a.Parts[a.Strength.GoverningPart].Name)
-	})
+	b.Facts = []Fact{fact("hottest temperature", FactTemperature, d.HottestK), fact("pressure inside", FactPressure, a.Hot.PressurePa),
+		fact("ambient pressure", FactPressure, d.AmbientPressurePa)}
+	if over > 0 {
+		b.Facts = append(b.Facts, fact("overpressure", FactPressure, over), fact("long-term burst overpressure", FactPressure, a.Strength.LongTermBurstPa),
+			named("glass", a.Glass.Name), named("governing part", a.Parts[a.Strength.GoverningPart].Name))
+	}
 	if over <= 0 {
 		b.Status, b.NotApplicable, b.Value, b.Margin = StatusPass, ReasonNoBurstLoad, 0, 0
 	}
@@ -64,28 +48,19 @@ func (a *Assessment) findings() {
 	p := atMost(CriterionFailure, "Failure probability over the service life", "", a.FailureProbability, cr.MaxFailureProbability, probabilityCautionFactor,
 		DefaultCriteriaGrounds["max_failure_probability"])
 	p.ValueBound = a.FailureProbabilityBound
-	switch {
-	case over <= 0:
+	p.Facts = []Fact{fact("hours at the hottest temperature", FactHours, d.HoursAtHottest), fact("service life", FactYears, d.ServiceLifeYears)}
+	if over <= 0 {
 		p.Status, p.NotApplicable, p.Value, p.Margin = StatusPass, ReasonNoBurstLoad, 0, 0
-		p.Message = fmt.Sprintf("No overpressure at the hottest temperature: %s, so no failure probability is computed.", ReasonNoBurstLoad.Words())
-	case p.ValueBound == AtMost:
-		p.Message = fmt.Sprintf("Weibull probability that a unit breaks with the hottest-temperature pressure held for %.0f h over %.3g years: at most %.2g (too small to compute; an upper bound).",
-			d.HoursAtHottest, d.ServiceLifeYears, a.FailureProbability)
-	default:
-		p.Message = fmt.Sprintf("Weibull probability that a unit breaks with the hottest-temperature pressure held for %.0f h over %.3g years: %.2g.",
-			d.HoursAtHottest, d.ServiceLifeYears, a.FailureProbability)
 	}
 	fs = append(fs, p)
 
 	im := atLeast(CriterionImplosion, "Implosion safety factor at the coldest temperature", "", a.ImplosionSafetyFactor, cr.MinImplosionSafetyFactor,
 		safetyFactorCautionBand, DefaultCriteriaGrounds["min_implosion_safety_factor"])
-	im.Message, im.MessageUS = inBoth(func(m measure) string {
-		if a.ExternalLoadPa <= 0 {
-			return fmt.Sprintf("The vessel is not under external pressure at %s: %s.", m.temp(d.ColdestK), ReasonNoExternalLoad.Words())
-		}
-		return fmt.Sprintf("%s of external pressure at %s against a knocked-down buckling pressure of %s.",
-			m.pressure(a.ExternalLoadPa), m.temp(d.ColdestK), m.pressure(a.ImplosionSafetyFactor*a.ExternalLoadPa))
-	})
+	im.Facts = []Fact{fact("coldest temperature", FactTemperature, d.ColdestK)}
+	if a.ExternalLoadPa > 0 {
+		im.Facts = append(im.Facts, fact("external pressure", FactPressure, a.ExternalLoadPa),
+			fact("knocked-down buckling pressure", FactPressure, a.ImplosionSafetyFactor*a.ExternalLoadPa))
+	}
 	switch {
 	case a.ExternalLoadPa <= 0:
 		im.Status, im.NotApplicable, im.Value, im.Margin = StatusPass, ReasonNoExternalLoad, 0, 0
@@ -100,23 +75,24 @@ func (a *Assessment) findings() {
 	if f.Flammability.Flammable && f.Flammability.LFLPercent != nil {
 		fl := atMost(CriterionFlammability, "Peak concentration as a percentage of the LFL", "% LFL", a.Release.PercentLFL, cr.MaxPercentLFL, lflCautionFraction,
 			f.Flammability.LFLPercent.Source)
-		fl.Message = fmt.Sprintf("Peak (highest one-minute average) %.3g ppm against an LFL of %.3g %% by volume (%.0f ppm).", a.Release.Peak.PPM, f.Flammability.LFLPercent.Value, f.Flammability.LFLPercent.Value*1e4)
+		fl.Facts = []Fact{fact("peak concentration (highest one-minute average)", FactConcentration, a.Release.Peak.PPM),
+			fact("lower flammable limit, % by volume", FactPercent, f.Flammability.LFLPercent.Value)}
 		if a.Release.Peak.Bounded {
 			fl.ValueBound = AtMost
-			fl.Message += fmt.Sprintf(" The model's value lay above the physical bound (%s) and is held to it.", a.Release.Bound.By)
+			fl.Facts[0].Bound = AtMost
+			fl.Facts = append(fl.Facts, named("held to the physical bound", a.Release.Bound.By))
 		}
 		fs = append(fs, fl)
 	} else {
 		fs = append(fs, Finding{Criterion: CriterionFlammability, Title: "Flammability", Status: StatusPass, Unit: "% LFL",
-			Limit: cr.MaxPercentLFL, Margin: 1, Source: "library: not flammable",
-			Message: fmt.Sprintf("%s is not flammable. %s", f.Name, f.Flammability.Note)})
+			Limit: cr.MaxPercentLFL, Direction: AtMost, NotApplicable: ReasonNotFlammable, Source: "library: not flammable",
+			Facts: []Fact{named("fluid", f.Name), named("note", f.Flammability.Note)}})
 	}
 
 	if a.Flags.Extrapolated() {
 		all := a.stretchedValues(nil)
 		fs = append(fs, Finding{Criterion: CriterionCorrelationUse, Title: "Correlations used outside their range", Status: StatusCaution,
-			Source: "library validity ranges", Stretched: all,
-			Message: "Part of this review was computed outside a correlation's published range (" + strings.Join(all, "; ") + "); the findings that used these values are marked; treat them as estimates and confirm by test."})
+			Source: "library validity ranges", Stretched: all})
 		for i := range fs {
 			st := a.stretchedValues(a.findingStates(fs[i].Criterion))
 			if len(st) == 0 || fs[i].Criterion == CriterionCorrelationUse {
@@ -125,16 +101,10 @@ func (a *Assessment) findings() {
 			fs[i].Stretched = st
 			if fs[i].Status == StatusPass && fs[i].NotApplicable == "" {
 				fs[i].Status = StatusCaution
-				note := " Computed with a value outside a correlation's range (" + strings.Join(st, "; ") + "): not a clean pass."
-				fs[i].Message += note
-				fs[i].MessageUS += note
 			}
 		}
 	}
 	for i := range fs {
-		if fs[i].MessageUS == "" {
-			fs[i].MessageUS = fs[i].Message
-		}
 		fs[i].Value = finiteOr(fs[i].Value, 0)
 		fs[i].Margin = finiteOr(fs[i].Margin, 0)
 	}
@@ -145,43 +115,6 @@ func (a *Assessment) findings() {
 		a.Verdict = Worse(a.Verdict, x.Status)
 	}
 	a.Cautions = append(append([]string(nil), StandardCautions...), fluidCautions(f)...)
-}
-
-// measure writes temperatures and pressures in one unit system, for the
-// words of a finding.
-type measure struct{ us bool }
-
-func (m measure) temp(k float64) string {
-	if m.us {
-		return fmt.Sprintf("%.1f °F", units.KelvinToFahrenheit(k))
-	}
-	return fmt.Sprintf("%.1f °C", units.KelvinToCelsius(k))
-}
-
-func (m measure) mass(kg float64) string {
-	if m.us {
-		return fmt.Sprintf("%.4g oz", kg/units.OunceKg)
-	}
-	return fmt.Sprintf("%.4g g", kg*1000)
-}
-
-func (m measure) volume(m3 float64) string {
-	if m.us {
-		return fmt.Sprintf("%.4g in³", m3/units.CubicInchM3)
-	}
-	return fmt.Sprintf("%.4g mL", m3*1e6)
-}
-
-func (m measure) pressure(pa float64) string {
-	if m.us {
-		return fmt.Sprintf("%.4g psi", pa/units.PsiPa)
-	}
-	return fmt.Sprintf("%.4g kPa", pa/1000)
-}
-
-// inBoth writes a message in SI and in US customary units.
-func inBoth(say func(measure) string) (si, us string) {
-	return say(measure{}), say(measure{us: true})
 }
 
 // worstCaseFinding judges the worst-case unit's ullage by the same rule as
@@ -198,20 +131,23 @@ func worstCaseFinding(a *Assessment, w *WorstCase) Finding {
 	if !w.Sealable || w.Hot.Phase == PhaseLiquidFull {
 		f.Status = StatusFail
 	}
-	f.Message, f.MessageUS = inBoth(func(m measure) string {
-		unit := fmt.Sprintf("A unit with %s of fill in %s (the tolerances stacked)", m.mass(w.FillMassKg), m.volume(w.VolumeM3))
-		switch {
-		case !w.Sealable:
-			return unit + " cannot even be sealed: the fill, as liquid, does not fit at the sealing temperature."
-		case w.Hot.Phase == PhaseLiquidFull:
-			return fmt.Sprintf("%s goes liquid-full at %s, below the hottest temperature %s.", unit, m.temp(w.LiquidFullK), m.temp(d.HottestK))
-		case w.LiquidFullReached:
-			return fmt.Sprintf("%s keeps %.1f %% vapour space at %s and would go liquid-full at %s.", unit, w.Hot.UllagePercent, m.temp(d.HottestK), m.temp(w.LiquidFullK))
-		default:
-			return fmt.Sprintf("%s keeps %.1f %% vapour space at %s and never goes liquid-full.", unit, w.Hot.UllagePercent, m.temp(d.HottestK))
-		}
-	})
+	f.Facts = []Fact{fact("fill of the worst-case unit", FactMass, w.FillMassKg), fact("internal volume of the worst-case unit", FactVolume, w.VolumeM3),
+		fact("hottest temperature", FactTemperature, d.HottestK)}
+	if !w.Sealable {
+		f.Facts = append(f.Facts, named("sealing", "not possible: the fill, as liquid, does not fit at the sealing temperature"))
+	} else {
+		f.Facts = append(f.Facts, liquidFullFact(w.LiquidFullReached || w.Hot.Phase == PhaseLiquidFull, w.LiquidFullK))
+	}
 	return f
+}
+
+// liquidFullFact gives the liquid-full temperature, or says it is not
+// reached.
+func liquidFullFact(reached bool, k float64) Fact {
+	if !reached {
+		return Fact{Name: "liquid-full temperature", Kind: FactTemperature, Text: "not reached"}
+	}
+	return fact("liquid-full temperature", FactTemperature, k)
 }
 
 // stateUse names a vessel state a finding's calculation used.
@@ -222,8 +158,8 @@ type stateUse struct {
 
 // findingStates returns the vessel states behind a finding.
 func (a *Assessment) findingStates(criterion string) []stateUse {
-	hot := stateUse{fmt.Sprintf("at the hottest temperature, %.1f °C", units.KelvinToCelsius(a.Design.HottestK)), &a.Hot}
-	cold := stateUse{fmt.Sprintf("at the coldest temperature, %.1f °C", units.KelvinToCelsius(a.Design.ColdestK)), &a.Cold}
+	hot := stateUse{"at the hottest temperature", &a.Hot}
+	cold := stateUse{"at the coldest temperature", &a.Cold}
 	var worst []stateUse
 	if a.Worst != nil && a.Worst.Sealable {
 		worst = []stateUse{{"worst-case unit at the hottest temperature", &a.Worst.Hot}}
@@ -274,16 +210,12 @@ func worstStrengthFinding(a *Assessment, ws *WorstStrength) Finding {
 	} else if a.Worst != nil && !a.Worst.Sealable {
 		whose = "the nominal unit's pressure (the worst-case fill cannot be sealed; see the worst-case ullage)"
 	}
-	f.Message, f.MessageUS = inBoth(func(m measure) string {
-		if ws.OverPa <= 0 {
-			return fmt.Sprintf("With the walls at their thinnest the vessel is still not over-pressurised at %s: %s.", m.temp(d.HottestK), ReasonNoBurstLoad.Words())
-		}
-		pf := fmt.Sprintf("%.2g", ws.FailureProbability)
-		if ws.FailureProbabilityBound == AtMost {
-			pf = "at most " + pf
-		}
-		return fmt.Sprintf("Walls at their thinnest, %s over ambient at %s (%s) against a long-term burst overpressure of %s; failure probability over the life %s.",
-			m.pressure(ws.OverPa), m.temp(d.HottestK), whose, m.pressure(ws.Strength.LongTermBurstPa), pf)
-	})
+	f.Facts = []Fact{fact("hottest temperature", FactTemperature, d.HottestK), named("pressure used", whose)}
+	if ws.OverPa > 0 {
+		pf := fact("failure probability over the life", FactProbability, ws.FailureProbability)
+		pf.Bound = ws.FailureProbabilityBound
+		f.Facts = append(f.Facts, fact("overpressure, walls at their thinnest", FactPressure, ws.OverPa),
+			fact("long-term burst overpressure, walls at their thinnest", FactPressure, ws.Strength.LongTermBurstPa), pf)
+	}
 	return f
 }

@@ -182,7 +182,9 @@ func (d *Design) Validate() error {
 	c.number("hottest_k", d.HottestK, 20, 800, "K")
 	c.number("coldest_k", d.ColdestK, 20, 800, "K")
 	if c.err == nil && d.ColdestK > d.HottestK {
+		first := c.err
 		c.fail("coldest_k", d.ColdestK, "must not be above hottest_k (%g K)", d.HottestK)
+		c.rule(first, RuleAtMost, 0, d.HottestK, "K", "the hottest temperature")
 	}
 	c.number("ambient_pressure_pa", d.AmbientPressurePa, 5e4, 1.2e5, "Pa")
 	if d.Glass.Custom != nil {
@@ -195,7 +197,9 @@ func (d *Design) Validate() error {
 	c.number("service_life_years", d.ServiceLifeYears, 0.01, 100, "years")
 	c.number("hours_at_hottest", d.HoursAtHottest, 0.01, 876600, "hours")
 	if c.err == nil && d.HoursAtHottest > d.ServiceLifeYears*8766 {
+		first := c.err
 		c.fail("hours_at_hottest", d.HoursAtHottest, "cannot exceed the service life (%g h)", d.ServiceLifeYears*8766)
+		c.rule(first, RuleAtMost, 0, d.ServiceLifeYears*8766, "h", "the service life")
 	}
 	if err := d.Room.Validate("room"); err != nil && c.err == nil {
 		c.err = err
@@ -226,7 +230,9 @@ func (v *Vessel) validate(c *checker) {
 		c.number(f+".outer_diameter_m", p.OuterDiameterM, 1e-3, 2, "m")
 		c.number(f+".wall_thickness_m", p.WallThicknessM, 1e-5, 0.1, "m")
 		if c.err == nil && p.WallThicknessM >= p.OuterDiameterM/2 {
+			first := c.err
 			c.fail(f+".wall_thickness_m", p.WallThicknessM, "must be less than the outer radius (%g m)", p.OuterDiameterM/2)
+			c.rule(first, RuleBelow, 0, p.OuterDiameterM/2, "m", "the outer radius")
 		}
 		c.number(f+".wall_tolerance_m", p.WallToleranceM, 0, p.WallThicknessM*0.5, "m (at most half the wall)")
 		if p.Shape == ShapeTube {

@@ -13,11 +13,43 @@ var ErrInvalidInput = errors.New("invalid input")
 
 // InputError names the input field that is wrong, the value found and what
 // is acceptable. It wraps ErrInvalidInput.
+//
+// Besides the sentence in Want (SI units, for the command line and logs),
+// an error about a number carries its rule as data, so that each output
+// can word it in its own units: Rule, the bounds Min and Max in the SI
+// unit Unit, and Subject, what a bound that is a property rather than a
+// fixed number belongs to ("the freezing point of ethanol").
 type InputError struct {
 	Field string
 	Value string
 	Want  string
+	// Rule is the kind of bound the value broke; RuleOther when Want alone
+	// says what is acceptable.
+	Rule Rule
+	// Min and Max are the bounds the rule names, in Unit (an SI unit: K,
+	// kg, Pa, m, m³, m/s, h, or "" for a plain number).
+	Min, Max float64
+	Unit     string
+	// Subject names what the bound is, when it is a property of the
+	// design or the fluid; "" for a fixed bound.
+	Subject string
+	// Note is a remark that follows the bound ("(0 means compute from
+	// the parts)"), or "".
+	Note string
 }
+
+// Rule is the kind of bound an input must keep to.
+type Rule string
+
+// Rules of an InputError.
+const (
+	RuleOther    Rule = ""         // Want says what is acceptable
+	RuleRange    Rule = "range"    // Min ≤ value ≤ Max
+	RulePositive Rule = "positive" // 0 < value ≤ Max
+	RuleAtLeast  Rule = "at-least" // value ≥ Min (Subject names Min)
+	RuleBelow    Rule = "below"    // value < Max (Subject names Max)
+	RuleAtMost   Rule = "at-most"  // value ≤ Max (Subject names Max)
+)
 
 func (e *InputError) Error() string {
 	return fmt.Sprintf("%s = %s: %s", e.Field, e.Value, e.Want)
@@ -39,6 +71,8 @@ func isFinite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
 // number requires lo ≤ x ≤ hi and x finite.
 func (c *checker) number(field string, x, lo, hi float64, unit string) {
+	first := c.err
+	defer c.rule(first, RuleRange, lo, hi, unit, "")
 	if !isFinite(x) {
 		c.fail(field, x, "must be a finite number (%g to %g %s)", lo, hi, unit)
 	} else if x < lo || x > hi {
@@ -46,8 +80,39 @@ func (c *checker) number(field string, x, lo, hi float64, unit string) {
 	}
 }
 
+// rule records the rule of the error just found by the check that
+// found it (first is the error before that check).
+func (c *checker) rule(first error, r Rule, lo, hi float64, unit, subject string) {
+	if first != nil || c.err == nil {
+		return
+	}
+	if ie, ok := c.err.(*InputError); ok {
+		ie.Rule, ie.Min, ie.Max, ie.Subject = r, lo, hi, subject
+		ie.Unit, ie.Note = splitUnit(unit)
+	}
+}
+
+// siUnits are the units a bound may carry.
+var siUnits = map[string]bool{"K": true, "kg": true, "Pa": true, "m": true, "m³": true, "m/s": true, "h": true, "s": true,
+	"years": true, "%": true, "nm": true, "ppm": true, "min": true, "hours": true, "minutes": true, "per hour": true, "% of LFL": true}
+
+// splitUnit parts the unit words of a check ("m³ (0 means compute from
+// the parts)") into the unit and the remark after it.
+func splitUnit(words string) (unit, note string) {
+	if siUnits[words] {
+		return words, ""
+	}
+	u, rest, _ := strings.Cut(words, " ")
+	if siUnits[u] {
+		return u, rest
+	}
+	return "", words
+}
+
 // positive requires 0 < x ≤ hi.
 func (c *checker) positive(field string, x, hi float64, unit string) {
+	first := c.err
+	defer c.rule(first, RulePositive, 0, hi, unit, "")
 	if !isFinite(x) || x <= 0 || x > hi {
 		c.fail(field, x, "must be greater than zero and at most %g %s", hi, unit)
 	}

@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"math"
 	"sort"
-	"strings"
 
 	"ullage/fluids"
 )
@@ -98,21 +97,25 @@ const (
 	// ReasonNotListed: the fluid (one of the user's own) is in no
 	// built-in table.
 	ReasonNotListed Reason = "not listed"
+	// ReasonNotFlammable: the fluid is not flammable, so no concentration
+	// is held against a flammable limit.
+	ReasonNotFlammable Reason = "not flammable"
 )
 
-// Words returns the reason as every output prints it in place of a value:
-// "not assessed — no published limit", "none — no burst load".
-func (r Reason) Words() string {
+// NotAssessed reports whether the reason means the criterion was not
+// assessed (no value to judge by), rather than that no load applies.
+func (r Reason) NotAssessed() bool {
 	switch r {
 	case ReasonNoPublishedLimit, ReasonNonePublished, ReasonNotChecked, ReasonNotRecommended, ReasonNotListed:
-		return "not assessed — " + string(r)
+		return true
 	}
-	return "none — " + string(r)
+	return false
 }
 
 // Finding is the outcome of one criterion: the value found, the limit it
 // is held to, the margin (positive when on the safe side, as a fraction of
-// the limit), the source of the limit and a message in plain words.
+// the limit), the source of the limit and the facts behind it, all typed;
+// the words are the display layer's.
 type Finding struct {
 	Criterion string  `json:"criterion"`
 	Title     string  `json:"title"`
@@ -122,9 +125,9 @@ type Finding struct {
 	Unit      string  `json:"unit"`
 	Margin    float64 `json:"margin"`
 	Source    string  `json:"source"`
-	Message   string  `json:"message"`
-	// MessageUS is the same message with US customary units.
-	MessageUS string `json:"message_us"`
+	// Facts are the values behind the finding (temperatures, pressures,
+	// the glass ...), typed, for the detail each output words.
+	Facts []Fact `json:"facts"`
 	// Steps are the numbers of the calculation-record steps behind this
 	// finding, its own comparison step first.
 	Steps []int `json:"steps"`
@@ -159,15 +162,6 @@ func (f Finding) MarshalJSON() ([]byte, error) {
 		out.Value, out.Margin = &f.Value, &f.Margin
 	}
 	return json.Marshal(out)
-}
-
-// MessageIn returns the message in US customary units when us is true,
-// otherwise in SI.
-func (f Finding) MessageIn(us bool) string {
-	if us && f.MessageUS != "" {
-		return f.MessageUS
-	}
-	return f.Message
 }
 
 // atLeast returns a minimum-type finding: pass when value ≥ limit·cautionFactor,
@@ -240,7 +234,7 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if gov < 0 {
 			out = append(out, Finding{Criterion: id, Title: title, Status: StatusNotAssessed, Unit: "ppm", Direction: AtMost,
 				NotApplicable: ReasonNoPublishedLimit, Source: "none in the library for the chosen bodies",
-				Message: fmt.Sprintf("No published %s limit for %s from the chosen bodies: %s.", kind, f.Name, ReasonNoPublishedLimit.Words())})
+				Facts: []Fact{named("kind of limit", kind), named("fluid", f.Name)}})
 			continue
 		}
 		assessed++
@@ -255,16 +249,19 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if e.Zone == NearField {
 			where = "the near field beside the breakage"
 		}
-		avg := "The peak (highest one-minute average)"
-		if e.AveragingS > PeakAveragingS {
-			avg = fmt.Sprintf("The %g-minute average", e.AveragingS/60)
+		avg := fact("averaging period", FactMinutes, e.AveragingS/60)
+		if e.AveragingS <= PeakAveragingS {
+			avg = named("averaging period", "the peak (highest one-minute average)")
 		}
-		bound := ""
+		fd.Facts = []Fact{avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share)}
+		for _, l := range r.Limits {
+			if l.Kind == kind && l.Name != lim.Name {
+				fd.Facts = append(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
+			}
+		}
 		if e.Bounded {
-			bound = fmt.Sprintf(" (held to the physical bound, %s)", r.Bound.By)
+			fd.Facts = append(fd.Facts, named("held to the physical bound", r.Bound.By))
 		}
-		fd.Message = fmt.Sprintf("%s in %s: %.3g ppm%s against %s %.4g ppm (%.0f %% of the limit). Largest share of its limit governs: %s.",
-			avg, where, e.PPM, bound, lim.Name, lim.PPM, 100*lim.Share, strings.Join(names, ", "))
 		out = append(out, fd)
 	}
 	if cr.Applies(LimitSetUSPublicAcute) {
@@ -279,13 +276,9 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 	if assessed == 0 {
 		fd := Finding{Criterion: CriterionNoLimit, Title: "Published exposure limit", Status: StatusCaution, Unit: "ppm",
 			Source: "none found in the library for the chosen bodies", Direction: AtMost, Value: r.Peak.PPM}
-		notes := []string{}
+		fd.Facts = []Fact{named("fluid", f.Name), fact("peak concentration", FactConcentration, r.Peak.PPM)}
 		for _, n := range f.NoNumericLimit {
-			notes = append(notes, n.Body+" "+n.Kind+": "+n.Note)
-		}
-		fd.Message = fmt.Sprintf("No published numeric exposure limit applies to %s, so the release (peak %.3g ppm) cannot be judged against one; this is not a pass.", f.Name, r.Peak.PPM)
-		if len(notes) > 0 {
-			fd.Message += " " + strings.Join(notes, " ")
+			fd.Facts = append(fd.Facts, named(n.Body+" "+n.Kind, n.Note))
 		}
 		out = append(out, fd)
 	}

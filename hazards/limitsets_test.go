@@ -106,7 +106,7 @@ func TestPublicNonePublished(t *testing.T) {
 			t.Fatal(err)
 		}
 		f := findingOf(t, a, CriterionPublicNone)
-		if f.Status != StatusNotAssessed || f.NotApplicable != c.reason || !strings.HasPrefix(f.NotApplicable.Words(), "not assessed") {
+		if f.Status != StatusNotAssessed || f.NotApplicable != c.reason || !f.NotApplicable.NotAssessed() {
 			t.Errorf("%s: %s, %q; want not assessed, %q", c.fluid, f.Status, f.NotApplicable, c.reason)
 		}
 		for _, l := range a.Release.Limits {

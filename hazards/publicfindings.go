@@ -67,7 +67,7 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		}
 		return []Finding{{Criterion: CriterionPublicNone, Title: "Public acute benchmarks (AEGL, PAC)", Status: StatusNotAssessed,
 			Unit: "ppm", Direction: AtMost, NotApplicable: reason, Source: src, Protects: publicPopulation + ", 10 minutes to 8 hours",
-			Message: fmt.Sprintf("%s: %s.", f.Name, reason.Words())}}
+			Facts: []Fact{named("fluid", f.Name)}}}
 	}
 	var out []Finding
 	for _, tier := range publicTiers {
@@ -86,7 +86,7 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 				}
 			}
 			out = append(out, Finding{Criterion: id, Title: publicTitles[tier], Status: StatusNotAssessed, Unit: "ppm", Direction: AtMost,
-				NotApplicable: reason, Source: src, Protects: publicPopulation, Message: reason.Words() + "."})
+				NotApplicable: reason, Source: src, Protects: publicPopulation})
 			continue
 		}
 		lim := r.Limits[gov]
@@ -113,7 +113,11 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 			fd.ValueBound = AtMost
 		}
 		fd.Protects = lim.Protects
-		fd.Message = fmt.Sprintf("%s: %.3g ppm against %s %.4g ppm.", lim.Protects, e.PPM, lim.Name, lim.PPM)
+		measured := "average"
+		if tier == 3 {
+			measured = "peak (highest one-minute average)"
+		}
+		fd.Facts = []Fact{named("benchmark", lim.Name), fact(measured, FactConcentration, e.PPM), fact("benchmark value", FactConcentration, lim.PPM)}
 		out = append(out, fd)
 	}
 	return out

@@ -70,7 +70,8 @@ func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambie
 	v := &sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa}
 	if sealK > s.CriticalTemperature() {
 		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
-			Want: fmt.Sprintf("must be below the critical temperature of %s (%.2f K) so that the fill can be sealed as a liquid", s.Fluid().Name, s.CriticalTemperature())}
+			Want: fmt.Sprintf("must be below the critical temperature of %s (%.2f K) so that the fill can be sealed as a liquid", s.Fluid().Name, s.CriticalTemperature()),
+			Rule: RuleBelow, Max: s.CriticalTemperature(), Unit: "K", Subject: "the critical temperature of " + s.Fluid().Name}
 	}
 	sat, err := s.Saturation(sealK)
 	if err != nil {
@@ -79,7 +80,8 @@ func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambie
 	if v.density >= sat.LiquidDensity {
 		maxFill := sat.LiquidDensity * volume
 		return nil, fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
-			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume)}, ErrOverfilled)
+			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume),
+			Rule: RuleBelow, Max: maxFill, Unit: "kg", Subject: "the mass of " + s.Fluid().Name + " that, as liquid, fills the whole vessel at the sealing temperature"}, ErrOverfilled)
 	}
 	v.sealGas(sat, residualPa, sealK)
 	return v, nil
@@ -108,7 +110,8 @@ func (v *sealedVessel) state(t float64) (VesselState, error) {
 	s := v.fluid
 	if t < s.MinTemperature() || !isFinite(t) {
 		return VesselState{}, &InputError{Field: "temperature", Value: fmt.Sprintf("%g K", t),
-			Want: fmt.Sprintf("must be at or above the freezing point of %s (%.2f K, %.2f °C)", s.Fluid().Name, s.MinTemperature(), units.KelvinToCelsius(s.MinTemperature()))}
+			Want: fmt.Sprintf("must be at or above the freezing point of %s (%.2f K, %.2f °C)", s.Fluid().Name, s.MinTemperature(), units.KelvinToCelsius(s.MinTemperature())),
+			Rule: RuleAtLeast, Min: s.MinTemperature(), Unit: "K", Subject: "the freezing point of " + s.Fluid().Name}
 	}
 	st := VesselState{TemperatureK: t}
 	gasP := func(space float64) float64 { return v.gasMoles * units.GasConstant * t / space }

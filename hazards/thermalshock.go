@@ -5,8 +5,6 @@ import (
 	"math"
 	"strconv"
 	"strings"
-
-	"ullage/fluids/units"
 )
 
 // ThermalShock is the largest sudden temperature change the device may
@@ -219,37 +217,37 @@ func (a *Assessment) thermalShockFindings() []Finding {
 		c := ps.Cases[ps.Governing]
 		f := atLeast(ThermalShockCriterion(ps.Part), "Thermal shock, "+ps.Name, "", c.SafetyFactor, a.Shock.RequiredSafetyFactor,
 			safetyFactorCautionBand, src)
+		if c.SafetyFactor >= SafetyFactorCap {
+			f.ValueBound = AtLeast
+		}
 		preset := d.ThermalShock.HotToColdPresetID
 		if c.Direction == ShockColdToHot {
 			preset = d.ThermalShock.ColdToHotPresetID
 		}
-		f.Message, f.MessageUS = inBoth(func(m measure) string {
-			where := "on the cooled outer surface"
-			if c.Direction == ShockColdToHot {
-				where = "on the inner surface (bounded by the cooled-surface value)"
-			}
-			msg := fmt.Sprintf("A %s of %s from %s%s: %s of tension %s (%s)",
-				shockDirectionWords(c.Direction), m.tempDiff(c.DeltaK), m.temp(c.StartK), shockPresetName(preset),
-				m.stress(c.ThermalStressPa), where, m.stressPerDegree(ps.StressPerKelvin))
-			if c.PressureStressPa > 0 {
-				msg += fmt.Sprintf(" plus %s from the pressure", m.stress(c.PressureStressPa))
-			}
-			if c.ResidualStressPa > 0 {
-				msg += fmt.Sprintf(" plus %s residual at the seal", m.stress(c.ResidualStressPa))
-			}
-			msg += fmt.Sprintf(", against a short-term strength of %s: safety factor %.3g, %.2g breakages per event; it withstands about %s at the required safety factor.",
-				m.stress(ps.StrengthPa), c.SafetyFactor, c.FailureProbability, m.tempDiff(ps.AllowableDeltaK))
-			if g.RatedShockDifference.Value > 0 {
-				msg += fmt.Sprintf(" Stated rating for ware of this glass: %s (source in the record).", m.tempDiff(g.RatedShockDifference.Value))
-			} else {
-				msg += " No stated rating for this glass in the library."
-			}
-			return msg
-		})
+		where := "the cooled outer surface"
+		if c.Direction == ShockColdToHot {
+			where = "the inner surface (bounded by the cooled-surface value)"
+		}
+		f.Facts = []Fact{named("direction", c.Direction+shockPresetName(preset)), fact("sudden change", FactTempDifference, c.DeltaK),
+			fact("starting temperature", FactTemperature, c.StartK), named("tension on", where),
+			fact("thermal stress", FactStress, c.ThermalStressPa), fact("stress per degree", FactStressPerKelvin, ps.StressPerKelvin)}
+		if c.PressureStressPa > 0 {
+			f.Facts = append(f.Facts, fact("stress from the pressure", FactStress, c.PressureStressPa))
+		}
+		if c.ResidualStressPa > 0 {
+			f.Facts = append(f.Facts, fact("residual stress at the seal", FactStress, c.ResidualStressPa))
+		}
+		f.Facts = append(f.Facts, fact("short-term strength", FactStress, ps.StrengthPa),
+			fact("breakages per event", FactProbability, c.FailureProbability),
+			fact("change withstood at the required safety factor", FactTempDifference, ps.AllowableDeltaK))
+		if g.RatedShockDifference.Value > 0 {
+			f.Facts = append(f.Facts, fact("stated rating for ware of this glass", FactTempDifference, g.RatedShockDifference.Value))
+		} else {
+			f.Facts = append(f.Facts, named("stated rating for ware of this glass", "none in the library"))
+		}
 		if a.Flags.Extrapolated() && f.Status == StatusPass {
 			f.Status = StatusCaution
-			f.Message += " Computed outside a correlation's range: not a clean pass."
-			f.MessageUS += " Computed outside a correlation's range: not a clean pass."
+			f.Stretched = a.stretchedValues(nil)
 		}
 		out = append(out, f)
 	}
@@ -265,42 +263,10 @@ func (a *Assessment) withShockAndSeal(fs []Finding) []Finding {
 			if fs[i].Criterion != CriterionBurst && fs[i].Criterion != CriterionFailure {
 				continue
 			}
-			si, us := inBoth(func(m measure) string {
-				return fmt.Sprintf(" Includes %s of residual stress at the seal of the %s, held for the service life.", m.stress(s.StressPa), s.Name)
-			})
-			if fs[i].MessageUS == "" {
-				fs[i].MessageUS = fs[i].Message
-			}
-			fs[i].Message += si
-			fs[i].MessageUS += us
+			fs[i].Facts = append(fs[i].Facts, fact("residual stress at the seal, held for the service life", FactStress, s.StressPa), named("seal", s.Name))
 		}
 	}
 	return append(fs, a.thermalShockFindings()...)
-}
-
-// tempDiff writes a temperature difference.
-func (m measure) tempDiff(k float64) string {
-	if m.us {
-		return fmt.Sprintf("%.3g °F", k*9/5)
-	}
-	return fmt.Sprintf("%.3g K", k)
-}
-
-// stressPerDegree writes a stress per degree of temperature change, given
-// in Pa/K.
-func (m measure) stressPerDegree(paPerK float64) string {
-	if m.us {
-		return fmt.Sprintf("%.3g psi per °F", paPerK*5/9/units.PsiPa)
-	}
-	return fmt.Sprintf("%.3g MPa per kelvin", paPerK/1e6)
-}
-
-// stress writes a stress.
-func (m measure) stress(pa float64) string {
-	if m.us {
-		return fmt.Sprintf("%.3g psi", pa/units.PsiPa)
-	}
-	return fmt.Sprintf("%.3g MPa", pa/1e6)
 }
 
 // traceThermalShock adds the thermal-shock steps: per part, the stress,

@@ -3,7 +3,6 @@ package hazards
 import (
 	"errors"
 	"math"
-	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -143,8 +142,12 @@ func TestThermalShockFinding(t *testing.T) {
 		if f.Value != c.SafetyFactor || f.Limit != a.RequiredSafetyFactor || len(f.Steps) < 3 {
 			t.Errorf("finding %+v", f)
 		}
-		if !strings.Contains(f.Message, "per kelvin") || !strings.Contains(f.MessageUS, "psi") {
-			t.Errorf("messages: %q / %q", f.Message, f.MessageUS)
+		perK := false
+		for _, x := range f.Facts {
+			perK = perK || (x.Kind == FactStressPerKelvin && x.Value == ps.StressPerKelvin)
+		}
+		if !perK {
+			t.Errorf("facts %+v; want the stress per kelvin", f.Facts)
 		}
 	}
 }

@@ -265,7 +265,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 				{Symbol: "P_f", Value: ws.FailureProbability}},
 			Result: Value{Symbol: "SF_min", Value: ws.SafetyFactor}, Source: "common practice (strength at the minimum permitted thickness); Weibull (1951); ASTM E1300 (from memory)"}
 		if ws.OverPa <= 0 {
-			st.Note = "No overpressure: " + ReasonNoBurstLoad.Words() + "; the safety factor shown is not a result."
+			st.Note = "No overpressure: " + recordWords(ReasonNoBurstLoad) + "; the safety factor shown is not a result."
 		}
 		tr.add("burst_safety_factor_worst", st)
 	}
@@ -388,8 +388,8 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 		}
 		n := tr.add("finding_"+fd.Criterion, Step{Stage: StageFindings, Title: fd.Title, Method: "comparison with the criterion",
 			Equation: "status from value against limit (caution band as documented)", Inputs: refs,
-			Intermediate: []Value{{Symbol: "value", Value: fd.Value, Unit: fd.Unit}, {Symbol: "limit", Value: fd.Limit, Unit: fd.Unit, Source: fd.Source}},
-			Result:       Value{Symbol: string(fd.Status), Value: fd.Margin, Unit: "margin"}, Source: fd.Source, Note: fd.Message})
+			Intermediate: append([]Value{{Symbol: "value", Value: fd.Value, Unit: fd.Unit}, {Symbol: "limit", Value: fd.Limit, Unit: fd.Unit, Source: fd.Source}}, factValues(fd.Facts)...),
+			Result:       Value{Symbol: string(fd.Status), Value: fd.Margin, Unit: "margin"}, Source: fd.Source})
 		fd.Steps = append([]int{n}, stepNumbers(tr, deps)...)
 	}
 	a.amendSealSteps(tr)
@@ -467,7 +467,7 @@ func noLoadNote(loaded bool, r Reason) string {
 	if loaded {
 		return ""
 	}
-	return r.Words() + ": the number above is a placeholder of the calculation, not a result."
+	return recordWords(r) + ": the number above is a placeholder of the calculation, not a result."
 }
 
 func stepNumbers(tr *tracer, keys []string) []int {
@@ -556,4 +556,24 @@ func (a *Assessment) tracePublic(tr *tracer) {
 		}
 		tr.add(l.StepKey, st)
 	}
+}
+
+// factValues lists a finding's numeric facts as values of its step.
+func factValues(fs []Fact) []Value {
+	var out []Value
+	for _, f := range fs {
+		if f.Kind == FactName || f.Text != "" {
+			continue
+		}
+		out = append(out, Value{Symbol: f.Name, Value: f.Value, Unit: f.Kind.unitOf()})
+	}
+	return out
+}
+
+// recordWords is how the calculation record names a reason in its notes.
+func recordWords(r Reason) string {
+	if r.NotAssessed() {
+		return "not assessed — " + string(r)
+	}
+	return "none — " + string(r)
 }

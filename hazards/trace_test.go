@@ -124,23 +124,3 @@ func TestHandCheckSteps(t *testing.T) {
 		t.Errorf("step %d (%s): by hand %.8g Pa, traced %.8g Pa", s.Number, s.Method, hand, s.Result.Value)
 	}
 }
-
-// TestMessagesInBothUnitSystems: every finding reads in SI and in US
-// customary units, with no unit of the other system.
-func TestMessagesInBothUnitSystems(t *testing.T) {
-	for _, d := range demoDesigns() {
-		a, err := Assess(d, testLibrary(t))
-		if err != nil {
-			t.Fatal(err)
-		}
-		for _, f := range a.Findings {
-			si, us := f.MessageIn(false), f.MessageIn(true)
-			if strings.Contains(si, "°F") || strings.Contains(si, "psi") {
-				t.Errorf("%s: SI message has US units: %s", f.Criterion, si)
-			}
-			if strings.Contains(us, "°C") || strings.Contains(us, "kPa") {
-				t.Errorf("%s: US message has SI units: %s", f.Criterion, us)
-			}
-		}
-	}
-}

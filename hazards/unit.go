@@ -86,7 +86,8 @@ func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
 	}
 	if d.SealingTemperatureK < sub.MinTemperature() {
 		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", d.SealingTemperatureK),
-			Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K", sub.Fluid().Name, sub.MinTemperature())}
+			Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K", sub.Fluid().Name, sub.MinTemperature()),
+			Rule: RuleAtLeast, Min: sub.MinTemperature(), Unit: "K", Subject: "the freezing point of " + sub.Fluid().Name}
 	}
 	// The nominal vessel checks the sealing temperature against the
 	// critical point, with newSealedVessel's own errors.
@@ -175,7 +176,8 @@ func (m *UnitModel) evaluate(u Unit) (UnitResult, *sealedVessel, error) {
 	}
 	if !isFinite(u.HottestK) || u.HottestK < m.sub.MinTemperature() {
 		return r, nil, &InputError{Field: "unit.hottest_k", Value: fmt.Sprint(u.HottestK),
-			Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K", m.sub.Fluid().Name, m.sub.MinTemperature())}
+			Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K", m.sub.Fluid().Name, m.sub.MinTemperature()),
+			Rule: RuleAtLeast, Min: m.sub.MinTemperature(), Unit: "K", Subject: "the freezing point of " + m.sub.Fluid().Name}
 	}
 	var buf [unitParts]PartStress
 	ps := buf[:0]

@@ -45,10 +45,10 @@ func TestWorstCaseUnit(t *testing.T) {
 		}
 	}
 	if nominal.Status == StatusFail {
-		t.Errorf("nominal unit fails: %s", nominal.Message)
+		t.Errorf("nominal unit fails: %+v", nominal.Facts)
 	}
 	if worst.Status != StatusFail || a.Worst.Hot.Phase != PhaseLiquidFull {
-		t.Errorf("worst-case unit: %s (%s), want fail, liquid-full: %s", worst.Status, a.Worst.Hot.Phase, worst.Message)
+		t.Errorf("worst-case unit: %s (%s), want fail, liquid-full: %+v", worst.Status, a.Worst.Hot.Phase, worst.Facts)
 	}
 	// No tolerances: no worst-case finding.
 	d.FillMassToleranceKg, d.Vessel.VolumeToleranceM3 = 0, 0

@@ -10,6 +10,7 @@ import (
 	"gonum.org/v1/gonum/floats/scalar"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // Paper sizes in points: A4 is 210 × 297 mm (ISO 216), Letter 8.5 × 11 in
@@ -80,7 +81,7 @@ func TestAssessmentReadsBack(t *testing.T) {
 				"Fingerprint " + m.Fingerprint[:20],
 			}, c.want...)
 			for _, f := range a.Findings {
-				want = append(want, f.Title, squash(f.Message))
+				want = append(want, f.Title, squash(display.Finding(f, newUnitSystem(c.o.Units).system()).Text()))
 			}
 			for _, s := range want {
 				if !strings.Contains(text, squash(s)) {

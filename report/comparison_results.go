@@ -1,104 +1,10 @@
 package report
 
 import (
-	"math"
-	"strconv"
-	"strings"
-
-	"ullage/fluids/units"
 	"ullage/hazards"
 	"ullage/hazards/compare"
+	"ullage/report/display"
 )
-
-// hasNumber reports whether a result text carries a number (and not
-// "not reached", "not assessed" and the like).
-func hasNumber(text string) bool {
-	return !strings.HasPrefix(text, "not ") && strings.ContainsAny(text, "0123456789")
-}
-
-// resultFormat converts a result from the unit the comparison uses to the
-// report's units; ok is false for units that need no conversion.
-func (u unitSystem) resultFormat(unit string) (format func(float64) string, ok bool) {
-	switch unit {
-	case "kPa":
-		return func(v float64) string { return u.pressure(v * 1000) }, true
-	case "°C":
-		return func(v float64) string { return u.temperature(units.CelsiusToKelvin(v)) }, true
-	case "g":
-		return func(v float64) string { return u.mass(v / 1000) }, true
-	case "J":
-		return func(v float64) string { return u.energy(v) }, true
-	}
-	return nil, false
-}
-
-// resultText is one side of a result in the report's units.
-func (u unitSystem) resultText(unit string, v float64, text string) string {
-	format, ok := u.resultFormat(unit)
-	if !u.us || !ok || !hasNumber(text) {
-		return prettyExponent(text)
-	}
-	prefix := ""
-	for _, p := range []string{"above ", "below "} {
-		if strings.HasPrefix(text, p) {
-			prefix = p
-		}
-	}
-	return prefix + format(v)
-}
-
-// prettyExponent rewrites numbers in e notation (1.4e-11) as powers of
-// ten (1.4×10⁻¹¹), as the rest of the record prints them.
-func prettyExponent(text string) string {
-	fields := strings.Fields(text)
-	for i, f := range fields {
-		if !strings.ContainsAny(f, "eE") {
-			continue
-		}
-		if x, err := strconv.ParseFloat(f, 64); err == nil && finite(x) {
-			mant, _, _ := strings.Cut(strings.ToLower(f), "e")
-			n := len(strings.TrimLeft(strings.ReplaceAll(strings.TrimLeft(mant, "-+"), ".", ""), "0"))
-			fields[i] = power(x, max(n, 1))
-		}
-	}
-	return strings.Join(fields, " ")
-}
-
-// resultDelta is the change from A to B in the report's units.
-func (u unitSystem) resultDelta(r compare.ResultChange) string {
-	if !hasNumber(r.OldText) || !hasNumber(r.NewText) || strings.HasPrefix(r.OldText, "≥") || strings.HasPrefix(r.NewText, "≥") {
-		if r.OldText == r.NewText {
-			return "no change"
-		}
-		return noValue
-	}
-	d := r.New - r.Old
-	if d == 0 {
-		return "no change"
-	}
-	switch r.Unit {
-	case "kPa":
-		return signed(d, u.pressure(d*1000))
-	case "°C":
-		s := u.temperatureDifference(math.Abs(d))
-		if d < 0 {
-			return "−" + s
-		}
-		return "+" + s
-	case "g":
-		return signed(d, u.mass(d/1000))
-	case "J":
-		return signed(d, u.energy(d))
-	case "%", "% LFL":
-		return signed(d, fixed(d, 1)) + " pts"
-	case "ppm":
-		return signed(d, sig(d, 3)) + " ppm"
-	}
-	if r.Old > 0 && r.New > 0 && (r.New/r.Old > 10 || r.Old/r.New > 10) {
-		return "×" + sig(r.New/r.Old, 2)
-	}
-	return signed(d, sig(d, 3))
-}
 
 // results prints the headline results of both sides with their change.
 func (w *comparisonWriter) results() {
@@ -120,8 +26,8 @@ func (w *comparisonWriter) results() {
 		if r.Changed() {
 			name = changedMark + " " + r.Name
 		}
-		rows = append(rows, []cell{{text: name, bold: r.Changed()}, {text: u.resultText(r.Unit, r.Old, r.OldText)},
-			{text: u.resultText(r.Unit, r.New, r.NewText)}, {text: u.resultDelta(r)}, verdict})
+		rows = append(rows, []cell{{text: name, bold: r.Changed()}, {text: display.ResultValue(r, r.Old, u.system())},
+			{text: display.ResultValue(r, r.New, u.system())}, {text: display.ResultDelta(r, u.system())}, verdict})
 	}
 	d.drawTable(table{cols: []col{{"Result", 2.5, 'L'}, {w.la, 1.35, 'R'}, {w.lb, 1.35, 'R'}, {"Change", 1.3, 'R'}, {"Better or worse", 1.1, 'L'}},
 		rows: rows, zebra: true})
@@ -165,8 +71,7 @@ func (w *comparisonWriter) findings() {
 		if f == nil {
 			return cell{text: "not reviewed", italic: true, dim: true}, cell{}
 		}
-		n := findingNumbers(*f, s.Assessment.Fluid)
-		return cell{status: f.Status}, cell{text: n.value}
+		return cell{status: f.Status}, cell{text: display.FindingValue(*f)}
 	}
 	var rows [][]cell
 	for _, id := range order {

@@ -4,6 +4,7 @@ import (
 	"strings"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // findings prints every finding with its numbers, message and the source
@@ -11,13 +12,13 @@ import (
 func (w *assessmentWriter) findings() {
 	d := w.d
 	d.heading("Findings")
-	for _, f := range w.a.Findings {
-		n := findingNumbers(f, w.a.Fluid)
-		source := "Source of the limit: " + f.Source
+	for _, v := range display.Findings(w.a, w.u.system()) {
+		f := v.Finding
+		source := "Source of the limit: " + v.Source
 		if steps := stepList(f.Steps); steps != "" {
 			source += ".  " + steps + "."
 		}
-		d.findingBlock(f.Status, f.Title, "Value "+n.value+"   ·   Limit "+n.limit+"   ·   Margin "+n.margin, f.MessageIn(w.u.us), source)
+		d.findingBlock(f.Status, v.Title, v.Numbers(), v.Text(), source)
 	}
 }
 

@@ -7,6 +7,7 @@ import (
 
 	"ullage/fluids"
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // extrapolatedMark follows a value computed outside a correlation's
@@ -122,43 +123,28 @@ func (w *assessmentWriter) glass() {
 }
 
 // burstText is the nominal burst safety factor, and the weakest permitted
-// unit's beside it, in the words every output uses when there is no load.
+// unit's beside it, as the findings word them.
 func burstText(a *hazards.Assessment) string {
-	if !a.HasBurstLoad() {
-		return hazards.ReasonNoBurstLoad.Words()
-	}
-	s := sfText(a.BurstSafetyFactor)
+	s := display.ValueOf(a, hazards.CriterionBurst)
 	if ws := a.WorstStrength; ws != nil && ws.OverPa > 0 {
-		s += "; weakest permitted unit (walls at their thinnest, tolerances stacked) " + sfText(ws.SafetyFactor)
+		s += "; weakest permitted unit (walls at their thinnest, tolerances stacked) " + display.ValueOf(a, hazards.CriterionBurstWorst)
 	}
 	return s
 }
 
-// failureText is the failure probability, stated as a bound when it is one.
+// failureText is the failure probability as the findings word it, over
+// the service life.
 func failureText(a *hazards.Assessment) string {
+	s := display.ValueOf(a, hazards.CriterionFailure)
 	if !a.HasBurstLoad() {
-		return hazards.ReasonNoBurstLoad.Words()
-	}
-	s := sig(a.FailureProbability, 2)
-	if a.FailureProbabilityBound == hazards.AtMost {
-		s = "at most " + s + " (too small to compute; an upper bound)"
+		return s
 	}
 	return s + " per unit over " + plain(a.Design.ServiceLifeYears) + " years"
 }
 
-// implosionText is the implosion safety factor, or the words for no load.
+// implosionText is the implosion safety factor as the findings word it.
 func implosionText(a *hazards.Assessment) string {
-	if !a.HasExternalLoad() {
-		return hazards.ReasonNoExternalLoad.Words()
-	}
-	return sfText(a.ImplosionSafetyFactor)
-}
-
-func sfText(x float64) string {
-	if x >= hazards.SafetyFactorCap {
-		return "≥ " + sig(hazards.SafetyFactorCap, 4)
-	}
-	return sig(x, 3)
+	return display.ValueOf(a, hazards.CriterionImplosion)
 }
 
 // limits prints the maximum safe temperature and fill.
@@ -248,7 +234,7 @@ func exposureTable(a *hazards.Assessment) table {
 	var rows [][]cell
 	for _, f := range a.Findings {
 		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
-			rows = append(rows, []cell{{text: setShort(hazards.LimitSetUSOccupational)}, {text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: hazards.ReasonNoPublishedLimit.Words(), dim: true}, {}, {}, {}, {}, {}})
+			rows = append(rows, []cell{{text: setShort(hazards.LimitSetUSOccupational)}, {text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: display.ReasonWords(hazards.ReasonNoPublishedLimit), dim: true}, {}, {}, {}, {}, {}})
 		}
 	}
 	for _, set := range a.Release.LimitSets {
@@ -277,7 +263,7 @@ func exposureTable(a *hazards.Assessment) table {
 		}
 		for _, n := range a.Release.LimitNotes {
 			if n.Set == set {
-				rows = append(rows, []cell{{text: setShort(n.Set)}, {text: n.Name}, {text: n.Reason.Words(), dim: true}, {}, {}, {}, {}, {}})
+				rows = append(rows, []cell{{text: setShort(n.Set)}, {text: n.Name}, {text: display.ReasonWords(n.Reason), dim: true}, {}, {}, {}, {}, {}})
 			}
 		}
 	}

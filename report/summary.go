@@ -4,8 +4,8 @@ import (
 	"fmt"
 	"strings"
 
-	"ullage/fluids"
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // titleBlock prints the record's identity on the first page.
@@ -63,14 +63,14 @@ func (w *assessmentWriter) summary() {
 	d.subheading("Summary of findings")
 	rows := make([][]cell, 0, len(a.Findings))
 	for _, f := range a.Findings {
-		v := findingNumbers(f, a.Fluid)
-		rows = append(rows, []cell{{status: f.Status}, {text: f.Title}, {text: v.value}, {text: v.limit}, {text: v.margin}})
+		v := display.Finding(f, w.u.system())
+		rows = append(rows, []cell{{status: f.Status}, {text: v.Title}, {text: v.Value}, {text: v.Limit}, {text: v.Margin}})
 	}
 	d.drawTable(table{cols: []col{
-		{"Status", 1.25, 'L'}, {"Criterion", 3.6, 'L'}, {"Value", 1.35, 'R'}, {"Limit", 1.35, 'R'}, {"Margin", 1.1, 'R'},
+		{"Status", 1.25, 'L'}, {"Criterion", 2.9, 'L'}, {"Value", 1.35, 'R'}, {"Limit", 1.35, 'R'}, {"Margin", 1.8, 'R'},
 	}, rows: rows, size: 8.5, keep: len(rows)})
 	d.statusLegend()
-	d.note("Margin is how far the value lies on the safe side of the limit, as a share of the limit (percentage points for ullage); a negative margin means the limit is exceeded.")
+	d.note(display.MarginNote)
 }
 
 // verdictBox draws the boxed overall verdict: a large status mark, the
@@ -122,66 +122,4 @@ func boxWeight(s hazards.Status) float64 {
 func (d *doc) textWidthIn(st style, s string) float64 {
 	d.use(st)
 	return d.c.textWidth(s)
-}
-
-// findingText is a finding's value, limit and margin as printed.
-type findingText struct{ value, limit, margin string }
-
-// atLeastCriteria are the criteria whose value must reach the limit; the
-// others must stay below it.
-var atLeastCriteria = map[string]bool{
-	hazards.CriterionUllage: true, hazards.CriterionUllageWorst: true, hazards.CriterionBurst: true, hazards.CriterionImplosion: true,
-	hazards.CriterionBurstWorst: true,
-}
-
-// findingNumbers formats a finding's value, limit and margin.
-func findingNumbers(f hazards.Finding, fluid *fluids.Fluid) findingText {
-	rel := "≤ "
-	if atLeastCriteria[f.Criterion] {
-		rel = "≥ "
-	}
-	num := func(x float64) string {
-		switch f.Criterion {
-		case hazards.CriterionFailure:
-			return sig(x, 2)
-		case hazards.CriterionUllage, hazards.CriterionUllageWorst:
-			return fixed(x, 1) + " %"
-		case hazards.CriterionBurst, hazards.CriterionBurstWorst, hazards.CriterionImplosion:
-			return sig(x, 3)
-		}
-		s := sig(x, 3)
-		if f.Unit != "" {
-			s += " " + f.Unit
-		}
-		return s
-	}
-	lim := plain(f.Limit)
-	if f.Criterion == hazards.CriterionUllage || f.Criterion == hazards.CriterionUllageWorst {
-		lim += " %"
-	} else if f.Unit != "" {
-		lim += " " + f.Unit
-	}
-	t := findingText{value: num(f.Value), limit: rel + lim, margin: margin(f.Margin, atLeastCriteria[f.Criterion])}
-	switch f.Criterion {
-	case hazards.CriterionUllage, hazards.CriterionUllageWorst:
-		t.margin = signed(f.Margin, fixed(f.Margin*100, 1)) + " pts"
-	case hazards.CriterionCorrelationUse:
-		t = findingText{value: "extrapolated", limit: "within range", margin: noValue}
-	case hazards.CriterionNoLimit:
-		t.limit, t.margin = "none published", noValue
-	case hazards.CriterionFlammability:
-		if fluid == nil || !fluid.Flammability.Flammable {
-			t.value, t.margin = "not flammable", noValue
-		}
-	}
-	switch f.ValueBound {
-	case hazards.AtLeast:
-		t.value = "≥ " + t.value
-	case hazards.AtMost:
-		t.value = "≤ " + t.value
-	}
-	if f.NotApplicable != "" {
-		t.value, t.margin = f.NotApplicable.Words(), noValue
-	}
-	return t
 }

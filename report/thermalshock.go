@@ -6,6 +6,7 @@ import (
 	"unicode/utf8"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // thermalShock prints the thermal-shock review of each part and the seal's
@@ -26,7 +27,7 @@ func (w *assessmentWriter) thermalShock() {
 				{text: ps.Name}, {text: c.Direction + ", " + u.temperatureDifference(c.DeltaK)},
 				{text: u.stress(ps.StressPerKelvin) + " per K"}, {text: u.stress(c.ThermalStressPa)},
 				{text: u.stress(c.PressureStressPa + c.ResidualStressPa)}, {text: u.stress(ps.StrengthPa)},
-				{text: sfText(c.SafetyFactor), bold: true}, {text: sig(c.FailureProbability, 2)},
+				{text: display.ValueOf(a, hazards.ThermalShockCriterion(ps.Part)), bold: true}, {text: sig(c.FailureProbability, 2)},
 				{text: u.temperatureDifference(ps.AllowableDeltaK)},
 			})
 		}

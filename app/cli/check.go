@@ -20,6 +20,7 @@ import (
 	"ullage/hazards/designfile"
 	"ullage/hazards/tolerance"
 	"ullage/report"
+	"ullage/report/display"
 )
 
 // checked is one design assessed by the check command, or the error
@@ -273,6 +274,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 		writeOneText(w, results[0], unitSystem)
 		return
 	}
+	sys := display.ParseSystem(unitSystem)
 	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s  %s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF", "failing criteria")
 	failed := 0
 	for _, c := range results {
@@ -282,8 +284,8 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 			continue
 		}
 		a := c.assessment
-		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %7.1f%% %8s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
-			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent, sfText(a), failingCriteria(a))
+		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, sys.Format(display.Pressure, a.Hot.PressurePa), sys.Format(display.Percent, a.Hot.UllagePercent), sfText(a), failingCriteria(a))
 	}
 	if failed > 0 {
 		fmt.Fprintf(w, "\nverdict: ERROR (%d of %d designs could not be assessed)\n", failed, len(results))
@@ -341,16 +343,18 @@ func overallVerdict(results []checked) string {
 func writeOneText(w io.Writer, c checked, unitSystem string) {
 	a := c.assessment
 	fmt.Fprintf(w, "%s — %s, revision %s (%s)\n", c.path, c.file.Product.Name, c.revision.Label, c.revision.Date)
-	fmt.Fprintf(w, "fluid %s, fill %s in %s\n", a.Fluid.Name, massText(a.Design.FillMassKg, unitSystem), volumeText(a.VolumeM3, unitSystem))
-	fmt.Fprintf(w, "at the hottest %s: %s, %s absolute, ullage %.1f %%\n", tempText(a.Design.HottestK, unitSystem), a.Hot.Phase, pressureText(a.Hot.PressurePa, unitSystem), a.Hot.UllagePercent)
+	sys := display.ParseSystem(unitSystem)
+	fmt.Fprintf(w, "fluid %s, fill %s in %s\n", a.Fluid.Name, sys.Format(display.Mass, a.Design.FillMassKg), sys.Format(display.VesselVolume, a.VolumeM3))
+	fmt.Fprintf(w, "at the hottest %s: %s, %s absolute, ullage %s\n", sys.Format(display.Temperature, a.Design.HottestK), a.Hot.Phase,
+		sys.Format(display.Pressure, a.Hot.PressurePa), sys.Format(display.Percent, a.Hot.UllagePercent))
 	if a.LiquidFullReached {
-		fmt.Fprintf(w, "liquid-full at %s\n", tempText(a.LiquidFullK, unitSystem))
+		fmt.Fprintf(w, "liquid-full at %s\n", sys.Format(display.Temperature, a.LiquidFullK))
 	} else {
 		fmt.Fprintln(w, "never liquid-full below the critical temperature")
 	}
 	fmt.Fprintln(w)
-	for _, f := range a.Findings {
-		fmt.Fprintf(w, "  %-8s %s\n           %s\n", strings.ToUpper(strings.ReplaceAll(string(f.Status), "-", " ")), f.Title, f.MessageIn(unitSystem == "us"))
+	for _, v := range display.Findings(a, sys) {
+		fmt.Fprintf(w, "  %-8s %s\n           %s\n           %s\n", v.Status, v.Title, v.Numbers(), v.Text())
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if r := c.tolerance; r != nil {
@@ -381,13 +385,12 @@ func trim(s string, n int) string {
 // sfText is the burst safety factor for the summary table: "none" when
 // nothing loads the vessel, "≥" before a capped factor.
 func sfText(a *hazards.Assessment) string {
-	switch {
-	case !a.HasBurstLoad():
-		return "none"
-	case a.BurstSafetyFactorBound == hazards.AtLeast:
-		return fmt.Sprintf("≥%g", a.BurstSafetyFactor)
+	for _, f := range a.Findings {
+		if f.Criterion == hazards.CriterionBurst {
+			return display.FindingValue(f)
+		}
 	}
-	return fmt.Sprintf("%.2f", a.BurstSafetyFactor)
+	return display.NoValue
 }
 
 func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {

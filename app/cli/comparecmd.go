@@ -8,6 +8,7 @@ import (
 	"ullage/hazards"
 	"ullage/hazards/compare"
 	"ullage/report"
+	"ullage/report/display"
 )
 
 func runCompare(args []string, stdout, stderr io.Writer) int {
@@ -104,7 +105,7 @@ func runCompare(args []string, stdout, stderr io.Writer) int {
 			return usageError(stderr, "compare", err)
 		}
 	} else {
-		writeCompareText(stdout, a, b, c)
+		writeCompareText(stdout, a, b, c, display.ParseSystem(o.value("units", "si")))
 	}
 	if b.assessment.Verdict == hazards.StatusFail {
 		return ExitFail
@@ -123,7 +124,7 @@ func sideLabel(c checked) string {
 	return fmt.Sprintf("%s rev %s", c.file.Product.Name, c.revision.Label)
 }
 
-func writeCompareText(w io.Writer, a, b checked, c compare.Comparison) {
+func writeCompareText(w io.Writer, a, b checked, c compare.Comparison, sys display.System) {
 	fmt.Fprintf(w, "A: %s (%s)\nB: %s (%s)\n\n", sideLabel(a), a.path, sideLabel(b), b.path)
 	if len(c.Statuses) > 0 {
 		fmt.Fprintln(w, "Findings that changed status:")
@@ -151,7 +152,7 @@ func writeCompareText(w io.Writer, a, b checked, c compare.Comparison) {
 		case r.Worse:
 			mark = "worse"
 		}
-		fmt.Fprintf(w, "  %-40s %12.4g → %-12.4g %-6s %s\n", r.Name, r.Old, r.New, r.Unit, mark)
+		fmt.Fprintf(w, "  %-42s %s → %s  (%s) %s\n", r.Name, display.ResultValue(r, r.Old, sys), display.ResultValue(r, r.New, sys), display.ResultDelta(r, sys), mark)
 	}
 	fmt.Fprintf(w, "\nverdict: %s → %s\n", designfileVerdict(a), designfileVerdict(b))
 }

@@ -1,13 +1,17 @@
 package cli
 
 import (
+	"bytes"
+	"encoding/json"
 	"errors"
 	"math"
+	"strings"
 
 	"ullage/fluids/units"
 	"ullage/hazards"
 	"ullage/hazards/designfile"
 	"ullage/hazards/tolerance"
+	"ullage/report/display"
 )
 
 // designJSON is the stable, documented JSON form of one checked design.
@@ -31,30 +35,30 @@ type designJSON struct {
 	BurstLoad    string `json:"burst_load"`
 	ExternalLoad string `json:"external_load"`
 	// The *_bound keys say a number is a bound ("at-least", "at-most").
-	BurstSafetyFactorBound     string            `json:"burst_safety_factor_bound,omitempty"`
-	FailureProbabilityBound    string            `json:"failure_probability_bound,omitempty"`
-	ImplosionSafetyFactorBound string            `json:"implosion_safety_factor_bound,omitempty"`
-	WorstUnitBurstSafetyFactor *float64          `json:"worst_unit_burst_safety_factor,omitempty"`
-	WorstUnitFailureProb       *float64          `json:"worst_unit_failure_probability,omitempty"`
-	MaxSafeTemperatureC        float64           `json:"max_safe_temperature_c"`
-	MaxSafeTemperatureNote     string            `json:"max_safe_temperature_bound"`
-	MaxSafeFillMassG           float64           `json:"max_safe_fill_mass_g"`
-	MaxSafeFillNote            string            `json:"max_safe_fill_bound"`
-	StoredEnergyJ              float64           `json:"stored_energy_j"`
-	FlashFraction              float64           `json:"flash_fraction"`
-	PeakConcentrationPPM       float64           `json:"peak_concentration_ppm"`
-	STELAveragePPM             float64           `json:"stel_average_ppm"`
-	TWA8hPPM                   float64           `json:"twa_8h_ppm"`
-	PercentLFL                 float64           `json:"percent_lfl"`
-	PeakBound                  string            `json:"peak_concentration_bound,omitempty"`
-	ConcentrationBoundPPM      float64           `json:"concentration_bound_ppm"`
-	ConcentrationBoundBy       string            `json:"concentration_bound_by"`
-	Limits                     []limitJSON       `json:"limits"`
-	LimitSets                  []string          `json:"limit_sets"`
-	LimitNotes                 []limitNoteJSON   `json:"limit_notes"`
-	Extrapolated               bool              `json:"extrapolated"`
-	Findings                   []hazards.Finding `json:"findings"`
-	Cautions                   []string          `json:"cautions"`
+	BurstSafetyFactorBound     string          `json:"burst_safety_factor_bound,omitempty"`
+	FailureProbabilityBound    string          `json:"failure_probability_bound,omitempty"`
+	ImplosionSafetyFactorBound string          `json:"implosion_safety_factor_bound,omitempty"`
+	WorstUnitBurstSafetyFactor *float64        `json:"worst_unit_burst_safety_factor,omitempty"`
+	WorstUnitFailureProb       *float64        `json:"worst_unit_failure_probability,omitempty"`
+	MaxSafeTemperatureC        float64         `json:"max_safe_temperature_c"`
+	MaxSafeTemperatureNote     string          `json:"max_safe_temperature_bound"`
+	MaxSafeFillMassG           float64         `json:"max_safe_fill_mass_g"`
+	MaxSafeFillNote            string          `json:"max_safe_fill_bound"`
+	StoredEnergyJ              float64         `json:"stored_energy_j"`
+	FlashFraction              float64         `json:"flash_fraction"`
+	PeakConcentrationPPM       float64         `json:"peak_concentration_ppm"`
+	STELAveragePPM             float64         `json:"stel_average_ppm"`
+	TWA8hPPM                   float64         `json:"twa_8h_ppm"`
+	PercentLFL                 float64         `json:"percent_lfl"`
+	PeakBound                  string          `json:"peak_concentration_bound,omitempty"`
+	ConcentrationBoundPPM      float64         `json:"concentration_bound_ppm"`
+	ConcentrationBoundBy       string          `json:"concentration_bound_by"`
+	Limits                     []limitJSON     `json:"limits"`
+	LimitSets                  []string        `json:"limit_sets"`
+	LimitNotes                 []limitNoteJSON `json:"limit_notes"`
+	Extrapolated               bool            `json:"extrapolated"`
+	Findings                   []findingJSON   `json:"findings"`
+	Cautions                   []string        `json:"cautions"`
 	// Tolerance is the sampled tolerance study, included with --samples.
 	Tolerance *tolerance.Result `json:"tolerance,omitempty"`
 	// Trace is the calculation record, included with --trace.
@@ -132,6 +136,27 @@ type limitNoteJSON struct {
 	Name      string `json:"name,omitempty"`
 	Reason    string `json:"reason"`
 	Statement string `json:"statement"`
+}
+
+// findingJSON is one finding as the JSON gives it: the engine's typed
+// fields (SI numbers, null where a value does not apply) and a "message"
+// for people, worded by the display package in SI units.
+type findingJSON map[string]any
+
+func findingOut(f hazards.Finding) findingJSON {
+	out := findingJSON{}
+	b, err := json.Marshal(f)
+	if err == nil {
+		dec := json.NewDecoder(bytes.NewReader(b))
+		dec.UseNumber()
+		err = dec.Decode(&out)
+	}
+	if err != nil {
+		out = findingJSON{"criterion": f.Criterion, "status": f.Status}
+	}
+	v := display.Finding(f, display.SI)
+	out["message"] = strings.TrimSpace(v.Numbers() + ". " + v.Text())
+	return out
 }
 
 func round(x float64, digits int) float64 {
@@ -219,7 +244,7 @@ func checkJSON(c checked) designJSON {
 	}
 	for _, f := range a.Findings {
 		f.Value, f.Limit, f.Margin = round(f.Value, 6), round(f.Limit, 6), round(f.Margin, 6)
-		d.Findings = append(d.Findings, f)
+		d.Findings = append(d.Findings, findingOut(f))
 	}
 	return d
 }

@@ -1,17 +1,14 @@
 package gui
 
 import (
-	"strconv"
-	"strings"
-
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
-	"ullage/fluids/units"
 	"ullage/hazards"
 	"ullage/hazards/compare"
+	"ullage/report/display"
 )
 
 // comparePanel sets any two revisions (or a revision and the working
@@ -216,7 +213,7 @@ func (c *comparePanel) render() {
 		case r.Changed():
 			mark = "changed"
 		}
-		rrows = append(rrows, compareLine(r.Name, resultText(r.OldText, r.Unit, u), resultText(r.NewText, r.Unit, u), mark, r.Changed()))
+		rrows = append(rrows, compareLine(r.Name, display.ResultValue(r, r.Old, u.display()), display.ResultValue(r, r.New, u.display()), mark, r.Changed()))
 	}
 	c.results.Objects = rrows
 	c.results.Refresh()
@@ -291,45 +288,6 @@ func compareLine(name, a, b, mark string, changed bool) fyne.CanvasObject {
 		m.Importance = widget.WarningImportance
 	}
 	return container.New(compareColumns, cell(name, false), cell(a, false), cell(b, changed), m)
-}
-
-// resultText converts a comparison result's text into the display units
-// where it is a plain number with a convertible unit.
-func resultText(text, unit string, u unitSystem) string {
-	if u == unitsSI {
-		return text
-	}
-	var q quantity
-	var scale float64
-	switch unit {
-	case "kPa":
-		q, scale = qPressure, 1000
-	case "°C":
-		q = qTemperature
-	case "g":
-		q, scale = qMass, 1e-3
-	default:
-		return text
-	}
-	prefix := ""
-	for _, p := range []string{"above ", "below "} {
-		if strings.HasPrefix(text, p) {
-			prefix, text = p, strings.TrimPrefix(text, p)
-		}
-	}
-	num, rest, ok := strings.Cut(text, " ")
-	if !ok || rest != unit {
-		return prefix + text
-	}
-	x, err := strconv.ParseFloat(num, 64)
-	if err != nil {
-		return prefix + text
-	}
-	si := x * scale
-	if q == qTemperature {
-		si = units.CelsiusToKelvin(x)
-	}
-	return prefix + u.show(q, si, 4)
 }
 
 // current returns the comparison shown, for export, when both sides

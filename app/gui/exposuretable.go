@@ -3,6 +3,7 @@ package gui
 import (
 	"fmt"
 	"strings"
+	"ullage/report/display"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
@@ -88,7 +89,7 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 	}
 	for _, f := range a.Findings {
 		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
-			add(false, setShortName(hazards.LimitSetUSOccupational), strings.TrimPrefix(f.Criterion, "exposure-")+": "+f.NotApplicable.Words(), "", "", "", "", "")
+			add(false, setShortName(hazards.LimitSetUSOccupational), strings.TrimPrefix(f.Criterion, "exposure-")+": "+display.ReasonWords(f.NotApplicable), "", "", "", "", "")
 		}
 	}
 	for _, set := range a.Release.LimitSets {
@@ -116,7 +117,7 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 		}
 		for _, n := range a.Release.LimitNotes {
 			if n.Set == set {
-				label := n.Reason.Words()
+				label := display.ReasonWords(n.Reason)
 				if n.Name != "" {
 					label = n.Name + ": " + label
 				}

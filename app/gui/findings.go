@@ -7,6 +7,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // findingsList is the table of findings, one row per criterion, with the
@@ -68,10 +69,11 @@ func newFindingsList() *findingsList {
 			word.SetText(statusWord(f.Status))
 			word.Importance = statusImportance(f.Status, fl.stale)
 			word.Refresh()
-			cells[1].(*widget.Label).SetText(f.Title)
-			cells[2].(*widget.Label).SetText(findingValue(f, f.Value))
-			cells[3].(*widget.Label).SetText(findingLimit(f))
-			cells[4].(*widget.Label).SetText(findingMargin(f))
+			v := display.Finding(f, fl.system())
+			cells[1].(*widget.Label).SetText(v.Title)
+			cells[2].(*widget.Label).SetText(v.Value)
+			cells[3].(*widget.Label).SetText(v.Limit)
+			cells[4].(*widget.Label).SetText(v.Margin)
 		})
 	fl.list.OnSelected = func(id widget.ListItemID) {
 		fl.selected = id
@@ -97,6 +99,14 @@ func newFindingsList() *findingsList {
 
 func bold(s string) *widget.Label {
 	return widget.NewLabelWithStyle(s, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+}
+
+// system returns the unit system the window shows.
+func (fl *findingsList) system() display.System {
+	if fl.us != nil && fl.us() {
+		return display.US
+	}
+	return display.SI
 }
 
 // statusImportance colours a status word; out-of-date words are grey.
@@ -194,7 +204,7 @@ func (fl *findingsList) describe() {
 	fl.working.Enable()
 	fl.detail.Segments = []widget.RichTextSegment{
 		&widget.TextSegment{Text: statusWord(f.Status) + " — " + f.Title + ". ", Style: widget.RichTextStyle{Inline: true, TextStyle: fyne.TextStyle{Bold: true}}},
-		&widget.TextSegment{Text: f.MessageIn(fl.us != nil && fl.us()), Style: widget.RichTextStyleParagraph},
+		&widget.TextSegment{Text: display.Finding(f, fl.system()).Text(), Style: widget.RichTextStyleParagraph},
 		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
 	}
 	if len(f.Steps) > 0 {

@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // keyNumbers lists the numbers behind the findings: the vessel at the
@@ -203,10 +204,5 @@ func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 
 // keyFinding shows a finding's value in the words the findings table uses.
 func keyFinding(a *hazards.Assessment, criterion string) string {
-	for _, f := range a.Findings {
-		if f.Criterion == criterion {
-			return findingValue(f, f.Value)
-		}
-	}
-	return "—"
+	return display.ValueOf(a, criterion)
 }

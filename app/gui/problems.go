@@ -2,12 +2,11 @@ package gui
 
 import (
 	"errors"
-	"regexp"
-	"strconv"
 	"strings"
 
 	"ullage/hazards"
 	"ullage/hazards/designfile"
+	"ullage/report/display"
 )
 
 // problem is an input the engine refused, in the reviewer's words: the
@@ -22,12 +21,20 @@ type problem struct {
 
 // problemOf turns an error from the engine or the design file into a
 // problem. The field's quantity, when the form has that field, decides
-// the units the limits are shown in.
+// the units the bounds are shown in; otherwise the bound's own SI unit
+// does.
 func problemOf(err error, u unitSystem, fieldQ func(path string) (quantity, bool)) problem {
 	var ie *hazards.InputError
 	if errors.As(err, &ie) {
-		q, _ := fieldQ(ie.Field)
-		return problem{Path: ie.Field, Text: humanise(ie.Want, q, u)}
+		q, ok := fieldQ(ie.Field)
+		if !ok || q == qNumber {
+			q = siQuantity(ie.Unit, q)
+		}
+		bound := display.SIBound(ie.Unit)
+		if q != qNumber {
+			bound = func(x float64) string { return u.show(q, x, 5) }
+		}
+		return problem{Path: ie.Field, Text: withLabels(display.InputRule(ie, bound))}
 	}
 	var fe *designfile.FileError
 	if errors.As(err, &fe) {
@@ -35,65 +42,17 @@ func problemOf(err error, u unitSystem, fieldQ func(path string) (quantity, bool
 		if i := strings.Index(path, ".design."); i >= 0 {
 			path = path[i+len(".design."):]
 		}
-		q, _ := fieldQ(path)
-		return problem{Path: path, Text: humanise(fe.Problem, q, u)}
+		return problem{Path: path, Text: withLabels(fe.Problem)}
 	}
 	return problem{Text: err.Error()}
 }
 
-// Numbers with an SI unit in engine messages. The unit must not run on
-// into a longer word.
-var (
-	rangeWithUnit = regexp.MustCompile(`(-?\d+(?:\.\d+)?(?:e[-+]?\d+)?) to (-?\d+(?:\.\d+)?(?:e[-+]?\d+)?) (K|kg|Pa|m³|m/s|m)([^\p{L}\p{N}³/]|$)`)
-	numberPattern = `(-?\d+(?:\.\d+)?(?:e[-+]?\d+)?) ?(K|kg|Pa|m³|m/s|m)(?:[^\p{L}³/]|$)`
-	numberWithSI  = regexp.MustCompile(numberPattern)
-	celsiusAside  = regexp.MustCompile(` \(-?\d+(?:\.\d+)? °C\)`)
-)
-
-// humanise rewrites an engine message for the screen: SI values are
-// shown in the units the reviewer works in, and field names by their
-// labels.
-func humanise(msg string, q quantity, u unitSystem) string {
-	if u == unitsUS || q != qNumber {
-		msg = celsiusAside.ReplaceAllString(msg, "")
-	}
-	msg = rangeWithUnit.ReplaceAllStringFunc(msg, func(m string) string {
-		s := rangeWithUnit.FindStringSubmatch(m)
-		qq := siQuantity(s[3], q)
-		a, errA := strconv.ParseFloat(s[1], 64)
-		b, errB := strconv.ParseFloat(s[2], 64)
-		if errA != nil || errB != nil {
-			return m
-		}
-		return sigFigures(u.fromSI(qq, a), 5) + " to " + u.show(qq, b, 5) + s[4]
-	})
-	msg = replaceNumbersWithSI(msg, q, u)
+// withLabels names the design's fields by their labels on screen.
+func withLabels(msg string) string {
 	for path, label := range fieldLabels {
 		msg = strings.ReplaceAll(msg, path, label)
 	}
 	return msg
-}
-
-// replaceNumbersWithSI converts every "number unit" left in msg.
-func replaceNumbersWithSI(msg string, q quantity, u unitSystem) string {
-	var b strings.Builder
-	rest := msg
-	for {
-		loc := numberWithSI.FindStringSubmatchIndex(rest)
-		if loc == nil {
-			b.WriteString(rest)
-			return b.String()
-		}
-		x, err := strconv.ParseFloat(rest[loc[2]:loc[3]], 64)
-		unit := rest[loc[4]:loc[5]]
-		b.WriteString(rest[:loc[2]])
-		if err != nil {
-			b.WriteString(rest[loc[2]:loc[5]])
-		} else {
-			b.WriteString(u.show(siQuantity(unit, q), x, 5))
-		}
-		rest = rest[loc[5]:]
-	}
 }
 
 // siQuantity returns the screen quantity for an SI unit in a message,

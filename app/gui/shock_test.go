@@ -133,7 +133,7 @@ func TestShockInTheComparison(t *testing.T) {
 	}
 	found := false
 	for _, r := range c.Results {
-		if r.Name == "Thermal-shock safety factor (weakest part)" && r.Better && strings.Contains(r.NewText, "lower bulb") {
+		if r.Name == "Thermal-shock safety factor (weakest part)" && r.Better && strings.Contains(r.New.Part, "lower bulb") {
 			found = true
 		}
 	}

@@ -5,6 +5,7 @@ import (
 	"strconv"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // shockKeyRows lists the thermal-shock result of each part and the seal's
@@ -17,7 +18,7 @@ func shockKeyRows(a *hazards.Assessment, u unitSystem) []keyRow {
 		n := strconv.Itoa(ps.Part + 1)
 		rows = append(rows, keyRow{
 			label: fmt.Sprintf("Thermal-shock safety factor, part %s (%s)", n, ps.Name),
-			value: fmt.Sprintf("%s (%s %s: %s against %s)", findingValue(hazards.Finding{}, c.SafetyFactor), c.Direction,
+			value: fmt.Sprintf("%s (%s %s: %s against %s)", display.Number(c.SafetyFactor, display.ValueFigures), c.Direction,
 				u.show(qTempDiff, c.DeltaK, 3), stressText(c.TotalStressPa, u), stressText(ps.StrengthPa, u)),
 			trace: []string{"thermal_shock_safety_factor_" + n, "thermal_shock_stress_" + n, "thermal_shock_strength_" + n, "thermal_shock_failure_probability_" + n},
 		})

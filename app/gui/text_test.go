@@ -8,26 +8,29 @@ import (
 	"ullage/hazards"
 )
 
-func TestHumaniseShowsLimitsInScreenUnits(t *testing.T) {
+func TestProblemsShowBoundsInScreenUnits(t *testing.T) {
 	tests := []struct {
-		msg  string
+		e    hazards.InputError
 		q    quantity
 		u    unitSystem
 		want string
 	}{
-		// Messages from hazards.Design.Validate.
-		{"must be from 20 to 800 K", qTemperature, unitsSI, "must be from -253.15 to 526.85 °C"},
-		{"must be from 20 to 800 K", qTemperature, unitsUS, "must be from -423.67 to 980.33 °F"},
-		{"must be greater than zero and at most 10 kg", qMass, unitsSI, "must be greater than zero and at most 10000 g"},
-		{"must be less than the outer radius (0.02 m)", qLength, unitsSI, "must be less than the outer radius (20 mm)"},
-		{"must not be above hottest_k (349.15 K)", qTemperature, unitsSI, "must not be above the hottest temperature (76 °C)"},
-		{"must be at or above the freezing point of Ethanol, 159.05 K (-114.1 °C)", qTemperature, unitsSI, "must be at or above the freezing point of Ethanol, -114.1 °C"},
-		{"must be from 1 to 20 (1 = perfectly mixed)", qNumber, unitsSI, "must be from 1 to 20 (1 = perfectly mixed)"},
-		{"must be from 0 to 0.1 m³ (0 means compute from the parts)", qVesselVolume, unitsSI, "must be from 0 to 100000 mL (0 means compute from the parts)"},
+		// Rules as hazards.Design.Validate gives them.
+		{hazards.InputError{Field: "hottest_k", Rule: hazards.RuleRange, Min: 20, Max: 800, Unit: "K"}, qTemperature, unitsSI, "must be from −253.15 °C to 526.85 °C"},
+		{hazards.InputError{Field: "hottest_k", Rule: hazards.RuleRange, Min: 20, Max: 800, Unit: "K"}, qTemperature, unitsUS, "must be from −423.67 °F to 980.33 °F"},
+		{hazards.InputError{Field: "fill_mass_kg", Rule: hazards.RulePositive, Max: 10, Unit: "kg"}, qMass, unitsSI, "must be greater than zero and at most 10000 g"},
+		{hazards.InputError{Field: "coldest_k", Rule: hazards.RuleAtMost, Max: 349.15, Unit: "K", Subject: "the hottest temperature"}, qTemperature, unitsSI, "must not be above the hottest temperature, 76 °C"},
+		{hazards.InputError{Field: "coldest_k", Rule: hazards.RuleAtLeast, Min: 159.05, Unit: "K", Subject: "the freezing point of Ethanol"}, qTemperature, unitsUS, "must be at or above the freezing point of Ethanol, −173.38 °F"},
+		{hazards.InputError{Field: "room.mixing_factor", Rule: hazards.RuleRange, Min: 1, Max: 20, Note: "(1 = perfectly mixed)"}, qNumber, unitsSI, "must be from 1 to 20 (1 = perfectly mixed)"},
+		{hazards.InputError{Field: "vessel.internal_volume_m3", Rule: hazards.RuleRange, Max: 0.1, Unit: "m³", Note: "(0 means compute from the parts)"}, qVesselVolume, unitsSI, "must be from 0 mL to 100000 mL (0 means compute from the parts)"},
+		{hazards.InputError{Field: "temperature", Rule: hazards.RuleAtLeast, Min: 159.05, Unit: "K", Subject: "the freezing point of Ethanol"}, qNumber, unitsSI, "must be at or above the freezing point of Ethanol, −114.1 °C"},
+		{hazards.InputError{Field: "fluid", Want: "name a fluid from the library"}, qNumber, unitsSI, "name a fluid from the library"},
 	}
 	for _, tc := range tests {
-		if got := humanise(tc.msg, tc.q, tc.u); got != tc.want {
-			t.Errorf("humanise(%q, %v, %s) = %q, want %q", tc.msg, tc.q, tc.u, got, tc.want)
+		e := tc.e
+		got := problemOf(&e, tc.u, func(string) (quantity, bool) { return tc.q, tc.q != qNumber }).Text
+		if got != tc.want {
+			t.Errorf("%+v in %s: %q, want %q", tc.e, tc.u, got, tc.want)
 		}
 	}
 }
@@ -133,28 +136,5 @@ func TestUserFluidIsCheckedBeforeUse(t *testing.T) {
 	}
 	if !strings.Contains(h.s.form.fluid.info.Text, "supplied by you") {
 		t.Errorf("fluid summary does not say the data are the reviewer's: %q", h.s.form.fluid.info.Text)
-	}
-}
-
-func TestFindingTexts(t *testing.T) {
-	tests := []struct {
-		f                    hazards.Finding
-		value, limit, margin string
-	}{
-		{hazards.Finding{Criterion: hazards.CriterionUllage, Unit: "%", Value: 23.1, Limit: 5, Margin: 0.181}, "23.1 %", "≥ 5 %", "+18 points"},
-		{hazards.Finding{Criterion: hazards.CriterionUllage, Unit: "%", Value: 8.8e-7, Limit: 5, Margin: -0.05}, "0 %", "≥ 5 %", "−5 points"},
-		{hazards.Finding{Criterion: hazards.CriterionBurst, Value: 1.21, Limit: 4, Margin: -0.6975}, "1.21", "≥ 4", "−70 %"},
-		{hazards.Finding{Criterion: hazards.CriterionBurst, Limit: 4, NotApplicable: hazards.ReasonNoBurstLoad}, "none — no burst load", "≥ 4", "—"},
-		{hazards.Finding{Criterion: hazards.CriterionBurst, Value: 1000, Limit: 4, Margin: 249, ValueBound: hazards.AtLeast}, "≥ 1000", "≥ 4", "250 × limit"},
-		{hazards.Finding{Criterion: hazards.CriterionSTEL, Status: hazards.StatusNotAssessed, Unit: "ppm", NotApplicable: hazards.ReasonNoPublishedLimit}, "not assessed — no published limit", "—", "—"},
-		{hazards.Finding{Criterion: hazards.CriterionFailure, Value: 0.23, Limit: 1e-4, Margin: -2299}, "0.23", "≤ 1 × 10⁻⁴", "2300 × limit"},
-		{hazards.Finding{Criterion: hazards.CriterionIDLH, Unit: "ppm", Value: 882, Limit: 3300, Margin: 0.733}, "882 ppm", "≤ 3300 ppm", "+73 %"},
-		{hazards.Finding{Criterion: hazards.CriterionCorrelationUse}, "—", "—", "—"},
-	}
-	for _, tc := range tests {
-		v, l, m := findingValue(tc.f, tc.f.Value), findingLimit(tc.f), findingMargin(tc.f)
-		if v != tc.value || l != tc.limit || m != tc.margin {
-			t.Errorf("%s: %q %q %q, want %q %q %q", tc.f.Criterion, v, l, m, tc.value, tc.limit, tc.margin)
-		}
 	}
 }

@@ -6,6 +6,7 @@ import (
 	"strings"
 
 	"ullage/fluids/units"
+	"ullage/report/display"
 )
 
 // unitSystem is the set of units the form and results are shown in.
@@ -50,6 +51,14 @@ const (
 	qStress                       // Pa ↔ MPa / psi
 	qRetardation                  // m ↔ nm (polariscope retardation)
 )
+
+// display returns the display package's name for the unit system.
+func (u unitSystem) display() display.System {
+	if u == unitsUS {
+		return display.US
+	}
+	return display.SI
+}
 
 // unit returns the unit label of q in the system, "" for plain numbers.
 func (u unitSystem) unit(q quantity) string {
@@ -178,53 +187,8 @@ func entryText(x float64) string {
 	return strconv.FormatFloat(r, 'g', -1, 64)
 }
 
-// sigFigures formats x to n significant digits in plain notation where it
-// reads well (0.001 to 10⁷) and in scientific notation otherwise.
-func sigFigures(x float64, n int) string {
-	if math.IsNaN(x) || math.IsInf(x, 0) {
-		return "—"
-	}
-	if x == 0 {
-		return "0"
-	}
-	ax := math.Abs(x)
-	if ax >= 1e-3 && ax < 1e7 {
-		digits := n - 1 - int(math.Floor(math.Log10(ax)))
-		if digits < 0 {
-			p := math.Pow(10, float64(-digits))
-			return strconv.FormatFloat(math.Round(x/p)*p, 'f', 0, 64)
-		}
-		return trimZeros(strconv.FormatFloat(x, 'f', digits, 64))
-	}
-	s := strconv.FormatFloat(x, 'e', n-1, 64)
-	mant, exp, _ := strings.Cut(s, "e")
-	e, _ := strconv.Atoi(exp)
-	return trimZeros(mant) + " × 10" + superscript(e)
-}
-
-// trimZeros removes trailing zeros after a decimal point.
-func trimZeros(s string) string {
-	if !strings.Contains(s, ".") {
-		return s
-	}
-	s = strings.TrimRight(s, "0")
-	return strings.TrimSuffix(s, ".")
-}
-
-// superscript writes an integer exponent in superscript digits.
-func superscript(n int) string {
-	const digits = "⁰¹²³⁴⁵⁶⁷⁸⁹"
-	sup := []rune(digits)
-	var b strings.Builder
-	if n < 0 {
-		b.WriteRune('⁻')
-		n = -n
-	}
-	for _, c := range strconv.Itoa(n) {
-		b.WriteRune(sup[c-'0'])
-	}
-	return b.String()
-}
+// sigFigures formats x to n significant digits by the display rule.
+func sigFigures(x float64, n int) string { return display.Number(x, n) }
 
 // parseNumber reads a number typed by a person: surrounding blanks are
 // ignored and a single decimal comma is accepted in place of a point.
@@ -241,4 +205,19 @@ func parseNumber(s string) (float64, bool) {
 		return 0, false
 	}
 	return x, true
+}
+
+// superscript writes an integer exponent in superscript digits (the
+// window's chart axis labels; the results use display.Number).
+func superscript(n int) string {
+	sup := []rune("⁰¹²³⁴⁵⁶⁷⁸⁹")
+	var b strings.Builder
+	if n < 0 {
+		b.WriteRune('⁻')
+		n = -n
+	}
+	for _, c := range strconv.Itoa(n) {
+		b.WriteRune(sup[c-'0'])
+	}
+	return b.String()
 }

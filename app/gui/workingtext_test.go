@@ -61,7 +61,7 @@ func TestWorkingTextLaysOutEachStep(t *testing.T) {
 			[]string{
 				"Step 2 of the calculation record",
 				"Step 2. Maximum safe temperature  ‡ outside a correlation's published range\n",
-				"  Root found:    P(T) − P_allow = 0 solved over [244.15, 470.165] K, tolerance 1 × 10⁻⁴ K, residual -2 × 10⁻⁶, 8 evaluations\n",
+				"  Root found:    P(T) − P_allow = 0 solved over [244.15, 470.165] K, tolerance 1 × 10⁻⁴ K, residual −2 × 10⁻⁶, 8 evaluations\n",
 				"  Result:        T_max = 456.237 K\n",
 			}, nil},
 		{"whole record under stage headings", "Whole calculation record", nil,

@@ -21,24 +21,26 @@ type InputChange struct {
 	Old, New string
 }
 
-// ResultChange is one headline result on both sides, in the unit named
-// (kPa, %, °C, g, J, ppm ...; "" for a plain ratio). Better and Worse say
-// whether the move from Old to New is for the better or the worse by the
-// quantity's own direction (a higher safety factor is better, a higher
-// pressure worse); both are false when the values are equal. OldText and
-// NewText are the values formatted for a person, with the unit, and say
-// "not reached", "above …" or "not assessed" where a bare number would
-// mislead; Old or New is then 0 (not reached, not assessed) or the end
-// of the searched range (above/below).
+// ResultChange is one headline result on both sides, as typed values:
+// Old and New are the readings of A and B, their values in SI units
+// (Unit: Pa, %, K, kg, J, ppm, % LFL; "" for a ratio or a probability)
+// and Quantity says what kind of value it is, so that each output can
+// show it in its own units. Better and Worse say whether the move from
+// Old to New is for the better or the worse by the quantity's own
+// direction (a higher safety factor is better, a higher pressure worse);
+// both are false when the values are equal or either side has no value.
 type ResultChange struct {
-	Name, Unit       string
-	Old, New         float64
-	Better, Worse    bool
-	OldText, NewText string
+	Name     string   `json:"name"`
+	Quantity Quantity `json:"quantity"`
+	Unit     string   `json:"unit"`
+	Old      Reading  `json:"old"`
+	New      Reading  `json:"new"`
+	Better   bool     `json:"better"`
+	Worse    bool     `json:"worse"`
 }
 
 // Changed reports whether the result differs between the sides.
-func (r ResultChange) Changed() bool { return r.Better || r.Worse || r.OldText != r.NewText }
+func (r ResultChange) Changed() bool { return r.Better || r.Worse || r.Old != r.New }
 
 // StatusChange is a review criterion whose status differs between the
 // sides; a criterion found on one side only has status StatusAbsent on the

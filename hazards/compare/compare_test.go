@@ -41,11 +41,11 @@ func TestFillCutFlipsUllage(t *testing.T) {
 		t.Fatalf("%d results; want every one of the %d quantities", got, len(quantities))
 	}
 	lf := findResult(t, c, "Liquid-full temperature")
-	if !lf.Better || lf.Worse || !(lf.New > lf.Old) {
+	if !lf.Better || lf.Worse || !(lf.New.Value > lf.Old.Value) {
 		t.Errorf("liquid-full temperature %+v; want it higher and better", lf)
 	}
 	p := findResult(t, c, "Pressure at the hottest temperature")
-	if !p.Better || !(p.New < p.Old) {
+	if !p.Better || !(p.New.Value < p.Old.Value) {
 		t.Errorf("pressure %+v; want it lower and better", p)
 	}
 	im := findResult(t, c, "Implosion safety factor")
@@ -77,7 +77,7 @@ func TestIdenticalDesigns(t *testing.T) {
 		t.Fatalf("%d results; want all %d listed", len(c.Results), len(quantities))
 	}
 	for _, r := range c.Results {
-		if r.Old != r.New || r.Better || r.Worse || r.OldText != r.NewText {
+		if r.Old != r.New || r.Better || r.Worse {
 			t.Errorf("%s: %+v; want unchanged", r.Name, r)
 		}
 	}
@@ -120,8 +120,8 @@ func TestCriterionOnOneSideOnly(t *testing.T) {
 	if found == 0 {
 		t.Fatal("the two fluids have the same criteria; pick another pair for this test")
 	}
-	if r := findResult(t, c, "Peak as a percentage of the LFL"); r.NewText != "not flammable" {
-		t.Errorf("HFC-245fa %% LFL shown as %q; want \"not flammable\"", r.NewText)
+	if r := findResult(t, c, "Peak as a percentage of the LFL"); r.New.State != NotFlammable {
+		t.Errorf("HFC-245fa %% LFL read as %+v; want not flammable", r.New)
 	}
 }
 
@@ -134,7 +134,7 @@ func TestSideWithoutAssessment(t *testing.T) {
 		t.Errorf("inputs %+v; the designs are the same", c.Inputs)
 	}
 	for _, r := range c.Results {
-		if r.OldText != "not assessed" || r.Better || r.Worse || r.Old != 0 {
+		if r.Old.State != NotAssessed || r.Better || r.Worse || r.Old.Value != 0 {
 			t.Errorf("%s: %+v; want A not assessed, neither better nor worse", r.Name, r)
 		}
 	}

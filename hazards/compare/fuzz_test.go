@@ -38,7 +38,7 @@ func FuzzCompare(f *testing.F) {
 		}
 		c := Compare(Side{Label: labelA, Design: da, Assessment: aa}, Side{Label: labelB, Design: db, Assessment: ab})
 		for _, r := range c.Results {
-			if r.Name == "" || math.IsNaN(r.Old) || math.IsInf(r.Old, 0) || math.IsNaN(r.New) || math.IsInf(r.New, 0) {
+			if r.Name == "" || math.IsNaN(r.Old.Value) || math.IsInf(r.Old.Value, 0) || math.IsNaN(r.New.Value) || math.IsInf(r.New.Value, 0) {
 				t.Errorf("result %+v", r)
 			}
 		}

@@ -2,109 +2,144 @@ package compare
 
 import (
 	"math"
-	"strconv"
 
-	"ullage/fluids/units"
 	"ullage/hazards"
 )
 
-// reading is one result of one assessment.
-type reading struct {
-	value float64 // in the display unit; 0 when there is no number
-	rank  float64 // what Better/Worse compare; may be ±Inf ("not reached")
-	text  string  // for a person, with the unit
-	// unranked: nothing to compare (not assessed on this side), so no
-	// better or worse is claimed.
+// Quantity is the kind of a headline result.
+type Quantity string
+
+// Kinds of headline result.
+const (
+	Pressure      Quantity = "pressure"       // Pa
+	Percent       Quantity = "percent"        // %
+	Temperature   Quantity = "temperature"    // K
+	Factor        Quantity = "factor"         // a safety factor
+	Probability   Quantity = "probability"    // a probability
+	Stress        Quantity = "stress"         // Pa
+	Mass          Quantity = "mass"           // kg
+	Energy        Quantity = "energy"         // J
+	Concentration Quantity = "concentration"  // ppm
+	PercentLFL    Quantity = "percent-of-lfl" // % of the lower flammable limit
+)
+
+// State says why a reading has no value.
+type State string
+
+// States of a reading without a value.
+const (
+	NotReached   State = "not reached"  // the vessel never goes liquid-full
+	NotAssessed  State = "not assessed" // no assessment, or no sudden change given
+	NotFlammable State = "not flammable"
+	NoneGiven    State = "none given"   // no residual stress given at the seal
+	NotComputed  State = "not computed" // a value that was not finite
+)
+
+// Reading is one side of a headline result. Value is in SI units and is
+// 0 when State says why there is none. Bound, when set, says the value
+// is a bound: "above" or "below" for a searched limit outside its search
+// range, "at-least" for a safety factor at the cap that stands for no
+// load. Part names the part the value belongs to, and for a thermal-shock
+// result ShockDeltaK and ShockDirection give the governing sudden change.
+type Reading struct {
+	Value          float64 `json:"value"`
+	State          State   `json:"state,omitempty"`
+	Bound          string  `json:"bound,omitempty"`
+	Part           string  `json:"part,omitempty"`
+	ShockDeltaK    float64 `json:"shock_delta_k,omitempty"`
+	ShockDirection string  `json:"shock_direction,omitempty"`
+	// rank is what Better/Worse compare; it may be ±Inf ("not reached").
+	rank float64
+	// unranked: nothing to compare, so no better or worse is claimed.
 	unranked bool
 }
 
 // quantity is one headline result and how to read it.
 type quantity struct {
-	name, unit     string
+	name           string
+	kind           Quantity
+	unit           string
 	higherIsBetter bool
-	read           func(a *hazards.Assessment) reading
+	read           func(a *hazards.Assessment) Reading
 }
 
-// plain is a reading whose number says it all.
-func plain(value float64, text string) reading { return reading{value: value, rank: value, text: text} }
+// value is a reading whose number says it all.
+func value(x float64) Reading { return Reading{Value: x, rank: x} }
 
 // quantities are the headline results, in the order Compare lists them.
 var quantities = []quantity{
-	{"Pressure at the hottest temperature", "kPa", false, func(a *hazards.Assessment) reading {
-		kPa := a.Hot.PressurePa / 1000
-		return plain(kPa, sig(kPa, 4)+" kPa")
+	{"Pressure at the hottest temperature", Pressure, "Pa", false, func(a *hazards.Assessment) Reading {
+		return value(a.Hot.PressurePa)
 	}},
-	{"Ullage at the hottest temperature", "%", true, func(a *hazards.Assessment) reading {
-		return plain(a.Hot.UllagePercent, fixed(a.Hot.UllagePercent, 1)+" %")
+	{"Ullage at the hottest temperature", Percent, "%", true, func(a *hazards.Assessment) Reading {
+		return value(a.Hot.UllagePercent)
 	}},
-	{"Liquid-full temperature", "°C", true, func(a *hazards.Assessment) reading {
+	{"Liquid-full temperature", Temperature, "K", true, func(a *hazards.Assessment) Reading {
 		if !a.LiquidFullReached {
-			return reading{rank: math.Inf(1), text: "not reached"}
+			return Reading{rank: math.Inf(1), State: NotReached}
 		}
-		c := units.KelvinToCelsius(a.LiquidFullK)
-		return plain(c, fixed(c, 1)+" °C")
+		return value(a.LiquidFullK)
 	}},
-	{"Burst safety factor", "", true, func(a *hazards.Assessment) reading {
+	{"Burst safety factor", Factor, "", true, func(a *hazards.Assessment) Reading {
 		return safetyFactor(a.BurstSafetyFactor)
 	}},
-	{"Failure probability over the service life", "", false, func(a *hazards.Assessment) reading {
-		return plain(a.FailureProbability, sig(a.FailureProbability, 2))
+	{"Failure probability over the service life", Probability, "", false, func(a *hazards.Assessment) Reading {
+		return value(a.FailureProbability)
 	}},
-	{"Implosion safety factor", "", true, func(a *hazards.Assessment) reading {
+	{"Implosion safety factor", Factor, "", true, func(a *hazards.Assessment) Reading {
 		return safetyFactor(a.ImplosionSafetyFactor)
 	}},
-	{"Thermal-shock safety factor (weakest part)", "", true, thermalShockReading},
-	{"Residual stress at the seal", "MPa", false, sealStressReading},
-	{"Maximum safe temperature", "°C", true, func(a *hazards.Assessment) reading {
-		c := units.KelvinToCelsius(a.MaxSafe.TemperatureK)
-		return plain(c, bounded(a.MaxSafe.TemperatureBound, fixed(c, 1)+" °C"))
+	{"Thermal-shock safety factor (weakest part)", Factor, "", true, thermalShockReading},
+	{"Residual stress at the seal", Stress, "Pa", false, sealStressReading},
+	{"Maximum safe temperature", Temperature, "K", true, func(a *hazards.Assessment) Reading {
+		return bounded(a.MaxSafe.TemperatureBound, value(a.MaxSafe.TemperatureK))
 	}},
-	{"Maximum safe fill", "g", true, func(a *hazards.Assessment) reading {
-		g := a.MaxSafe.FillMassKg * 1000
-		return plain(g, bounded(a.MaxSafe.FillBound, sig(g, 3)+" g"))
+	{"Maximum safe fill", Mass, "kg", true, func(a *hazards.Assessment) Reading {
+		return bounded(a.MaxSafe.FillBound, value(a.MaxSafe.FillMassKg))
 	}},
-	{"Stored energy at rupture", "J", false, func(a *hazards.Assessment) reading {
-		return plain(a.Rupture.StoredEnergyJ, sig(a.Rupture.StoredEnergyJ, 3)+" J")
+	{"Stored energy at rupture", Energy, "J", false, func(a *hazards.Assessment) Reading {
+		return value(a.Rupture.StoredEnergyJ)
 	}},
-	{"Peak concentration", "ppm", false, func(a *hazards.Assessment) reading {
-		return plain(a.Release.Peak.PPM, sig(a.Release.Peak.PPM, 3)+" ppm")
+	{"Peak concentration", Concentration, "ppm", false, func(a *hazards.Assessment) Reading {
+		return value(a.Release.Peak.PPM)
 	}},
-	{"15-minute average (STEL)", "ppm", false, func(a *hazards.Assessment) reading {
-		return plain(a.Release.STEL.PPM, sig(a.Release.STEL.PPM, 3)+" ppm")
+	{"15-minute average (STEL)", Concentration, "ppm", false, func(a *hazards.Assessment) Reading {
+		return value(a.Release.STEL.PPM)
 	}},
-	{"8-hour time-weighted average (TWA)", "ppm", false, func(a *hazards.Assessment) reading {
-		return plain(a.Release.TWA8h.PPM, sig(a.Release.TWA8h.PPM, 3)+" ppm")
+	{"8-hour time-weighted average (TWA)", Concentration, "ppm", false, func(a *hazards.Assessment) Reading {
+		return value(a.Release.TWA8h.PPM)
 	}},
-	{"Peak as a percentage of the LFL", "% LFL", false, func(a *hazards.Assessment) reading {
+	{"Peak as a percentage of the LFL", PercentLFL, "% LFL", false, func(a *hazards.Assessment) Reading {
 		if a.Fluid == nil || !a.Fluid.Flammability.Flammable || a.Fluid.Flammability.LFLPercent == nil {
-			return reading{text: "not flammable"}
+			return Reading{State: NotFlammable}
 		}
-		return plain(a.Release.PercentLFL, fixed(a.Release.PercentLFL, 1)+" % LFL")
+		return value(a.Release.PercentLFL)
 	}},
 }
 
-// safetyFactor reads a safety factor, saying when it is at the cap that
-// stands for "no load".
-func safetyFactor(x float64) reading {
+// safetyFactor reads a safety factor, marking the cap that stands for
+// "no load" as a lower bound.
+func safetyFactor(x float64) Reading {
+	r := value(x)
 	if x >= hazards.SafetyFactorCap {
-		return plain(x, "≥ "+sig(hazards.SafetyFactorCap, 4)+" (no load)")
+		r.Bound = string(hazards.AtLeast)
 	}
-	return plain(x, sig(x, 3))
+	return r
 }
 
 // bounded marks a searched limit that lies outside its search range.
-func bounded(b hazards.Bound, text string) string {
+func bounded(b hazards.Bound, r Reading) Reading {
 	switch b {
 	case hazards.BoundAbove:
-		return "above " + text
+		r.Bound = "above"
 	case hazards.BoundBelow:
-		return "below " + text
+		r.Bound = "below"
 	}
-	return text
+	return r
 }
 
 // notAssessed is the reading of a side without an assessment.
-var notAssessed = reading{text: "not assessed"}
+var notAssessed = Reading{State: NotAssessed, unranked: true}
 
 func resultChanges(a, b *hazards.Assessment) []ResultChange {
 	out := make([]ResultChange, len(quantities))
@@ -116,11 +151,13 @@ func resultChanges(a, b *hazards.Assessment) []ResultChange {
 		if b != nil {
 			newR = sanitise(q.read(b))
 		}
-		rc := ResultChange{Name: q.name, Unit: q.unit, Old: oldR.value, New: newR.value, OldText: oldR.text, NewText: newR.text}
+		rc := ResultChange{Name: q.name, Quantity: q.kind, Unit: q.unit}
 		if a != nil && b != nil && !oldR.unranked && !newR.unranked && oldR.rank != newR.rank {
 			rc.Better = (newR.rank > oldR.rank) == q.higherIsBetter
 			rc.Worse = !rc.Better
 		}
+		oldR.rank, oldR.unranked, newR.rank, newR.unranked = 0, false, 0, false
+		rc.Old, rc.New = oldR, newR
 		out[i] = rc
 	}
 	return out
@@ -128,44 +165,12 @@ func resultChanges(a, b *hazards.Assessment) []ResultChange {
 
 // sanitise keeps a non-finite number (which the engine never produces)
 // from reaching a result.
-func sanitise(r reading) reading {
-	if math.IsNaN(r.value) || math.IsInf(r.value, 0) {
-		return reading{text: "not computed"}
+func sanitise(r Reading) Reading {
+	if math.IsNaN(r.Value) || math.IsInf(r.Value, 0) {
+		return Reading{State: NotComputed, unranked: true}
 	}
 	if math.IsNaN(r.rank) {
-		r.rank = r.value
+		r.rank = r.Value
 	}
 	return r
-}
-
-// sig formats x with the given number of significant digits, in plain
-// notation between 0.001 and 10 million and in exponent notation outside.
-func sig(x float64, digits int) string {
-	ax := math.Abs(x)
-	switch {
-	case x == 0:
-		return "0"
-	case ax >= 1e-3 && ax < 1e7:
-		exp := int(math.Floor(math.Log10(ax)))
-		return strconv.FormatFloat(x, 'f', max(digits-1-exp, 0), 64)
-	}
-	return strconv.FormatFloat(x, 'e', digits-1, 64)
-}
-
-// fixed formats x with the given number of decimals, without "-0.0".
-func fixed(x float64, decimals int) string {
-	s := strconv.FormatFloat(x, 'f', decimals, 64)
-	if s[0] == '-' && isZeroText(s[1:]) {
-		return s[1:]
-	}
-	return s
-}
-
-func isZeroText(s string) bool {
-	for _, c := range s {
-		if c != '0' && c != '.' {
-			return false
-		}
-	}
-	return true
 }

@@ -59,8 +59,8 @@ func TestResultDirections(t *testing.T) {
 			t.Errorf("unexpected result %q", r.Name)
 			continue
 		}
-		if !(r.New > r.Old) {
-			t.Errorf("%s: %g → %g; the fake assessments should make it rise", r.Name, r.Old, r.New)
+		if !(r.New.Value > r.Old.Value) {
+			t.Errorf("%s: %g → %g; the fake assessments should make it rise", r.Name, r.Old.Value, r.New.Value)
 		}
 		if r.Better != want || r.Worse != !want {
 			t.Errorf("%s rising: Better %v, Worse %v; want Better %v", r.Name, r.Better, r.Worse, want)
@@ -68,26 +68,29 @@ func TestResultDirections(t *testing.T) {
 	}
 }
 
-func TestResultUnitsAndText(t *testing.T) {
+func TestResultUnitsAndValues(t *testing.T) {
 	a := fakeAssessment(2)
 	c := Compare(Side{Assessment: a}, Side{Assessment: a})
-	want := map[string][2]string{ // unit, text
-		"Pressure at the hottest temperature":        {"kPa", "2.000 kPa"},
-		"Ullage at the hottest temperature":          {"%", "2.0 %"},
-		"Liquid-full temperature":                    {"°C", "2.0 °C"},
-		"Burst safety factor":                        {"", "2.00"},
-		"Failure probability over the service life":  {"", "0.0020"},
-		"Maximum safe temperature":                   {"°C", "2.0 °C"},
-		"Maximum safe fill":                          {"g", "2.00 g"},
-		"Stored energy at rupture":                   {"J", "2.00 J"},
-		"Peak concentration":                         {"ppm", "2.00 ppm"},
-		"Peak as a percentage of the LFL":            {"% LFL", "2.0 % LFL"},
-		"Thermal-shock safety factor (weakest part)": {"", "2.00 (bulb, 50.0 K hot-to-cold)"},
-		"Residual stress at the seal":                {"MPa", "2.00 MPa (bulb)"},
+	want := map[string]struct {
+		q    Quantity
+		unit string
+		part string
+	}{
+		"Pressure at the hottest temperature":        {Pressure, "Pa", ""},
+		"Ullage at the hottest temperature":          {Percent, "%", ""},
+		"Liquid-full temperature":                    {Temperature, "K", ""},
+		"Burst safety factor":                        {Factor, "", ""},
+		"Failure probability over the service life":  {Probability, "", ""},
+		"Maximum safe fill":                          {Mass, "kg", ""},
+		"Stored energy at rupture":                   {Energy, "J", ""},
+		"Peak concentration":                         {Concentration, "ppm", ""},
+		"Peak as a percentage of the LFL":            {PercentLFL, "% LFL", ""},
+		"Thermal-shock safety factor (weakest part)": {Factor, "", "bulb"},
+		"Residual stress at the seal":                {Stress, "Pa", "bulb"},
 	}
 	for _, r := range c.Results {
-		if w, ok := want[r.Name]; ok && (r.Unit != w[0] || r.NewText != w[1]) {
-			t.Errorf("%s: unit %q, text %q; want %q, %q", r.Name, r.Unit, r.NewText, w[0], w[1])
+		if w, ok := want[r.Name]; ok && (r.Quantity != w.q || r.Unit != w.unit || r.New.Part != w.part || r.New.State != "") {
+			t.Errorf("%s: %s %q %+v; want %s %q part %q", r.Name, r.Quantity, r.Unit, r.New, w.q, w.unit, w.part)
 		}
 	}
 }
@@ -103,50 +106,29 @@ func TestResultSpecialCases(t *testing.T) {
 	never.ImplosionSafetyFactor = hazards.SafetyFactorCap
 	c := Compare(Side{Assessment: reached}, Side{Assessment: never})
 	tests := []struct {
-		name, newText string
-		better        bool
-		changed       bool
+		name    string
+		state   State
+		bound   string
+		better  bool
+		changed bool
 	}{
-		{"Liquid-full temperature", "not reached", true, true},
-		{"Maximum safe temperature", "above 2.0 °C", false, true},
-		{"Maximum safe fill", "below 2.00 g", false, true},
-		{"Implosion safety factor", "≥ 1000 (no load)", true, true},
+		{"Liquid-full temperature", NotReached, "", true, true},
+		{"Maximum safe temperature", "", "above", false, true},
+		{"Maximum safe fill", "", "below", false, true},
+		{"Implosion safety factor", "", "at-least", true, true},
 	}
 	for _, tt := range tests {
 		r := findResult(t, c, tt.name)
-		if r.NewText != tt.newText || r.Better != tt.better || r.Changed() != tt.changed {
-			t.Errorf("%s: %+v; want text %q, better %v, changed %v", tt.name, r, tt.newText, tt.better, tt.changed)
+		if r.New.State != tt.state || r.New.Bound != tt.bound || r.Better != tt.better || r.Changed() != tt.changed {
+			t.Errorf("%s: %+v; want state %q, bound %q, better %v, changed %v", tt.name, r, tt.state, tt.bound, tt.better, tt.changed)
 		}
 	}
-	if r := findResult(t, c, "Liquid-full temperature"); r.New != 0 {
-		t.Errorf("not reached reported as %g; want 0 with the text saying why", r.New)
+	if r := findResult(t, c, "Liquid-full temperature"); r.New.Value != 0 {
+		t.Errorf("not reached reported as %g; want 0 with the state saying why", r.New.Value)
 	}
 	back := Compare(Side{Assessment: never}, Side{Assessment: never})
 	if r := findResult(t, back, "Liquid-full temperature"); r.Changed() {
 		t.Errorf("not reached on both sides: %+v", r)
-	}
-}
-
-func TestNumberFormats(t *testing.T) {
-	tests := []struct {
-		got, want string
-	}{
-		{sig(23581.4, 4), "23581"},
-		{sig(191.46, 4), "191.5"},
-		{sig(0.328156, 3), "0.328"},
-		{sig(3.0e-14, 2), "3.0e-14"},
-		{sig(1, 2), "1.0"},
-		{sig(0, 3), "0"},
-		{sig(1.5e8, 3), "1.50e+08"},
-		{sig(-2.5, 2), "-2.5"},
-		{fixed(-0.01, 1), "0.0"},
-		{fixed(-0.06, 1), "-0.1"},
-		{fixed(52.8877, 1), "52.9"},
-	}
-	for i, tt := range tests {
-		if tt.got != tt.want {
-			t.Errorf("case %d: %q; want %q", i, tt.got, tt.want)
-		}
 	}
 }
 
@@ -164,7 +146,7 @@ func TestShockAndSealNotAssessed(t *testing.T) {
 			t.Errorf("%s: %+v; want changed text, neither better nor worse", name, r)
 		}
 	}
-	if r := findResult(t, c, "Thermal-shock safety factor (weakest part)"); r.OldText != "not assessed (no sudden change given)" {
-		t.Errorf("old side reads %q", r.OldText)
+	if r := findResult(t, c, "Thermal-shock safety factor (weakest part)"); r.Old.State != NotAssessed {
+		t.Errorf("old side reads %+v", r.Old)
 	}
 }

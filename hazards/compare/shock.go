@@ -4,9 +4,9 @@ import "ullage/hazards"
 
 // thermalShockReading reads the lowest thermal-shock safety factor of any
 // part, naming the part and the direction of the sudden change.
-func thermalShockReading(a *hazards.Assessment) reading {
+func thermalShockReading(a *hazards.Assessment) Reading {
 	if !a.Shock.Assessed {
-		return reading{text: "not assessed (no sudden change given)", unranked: true}
+		return Reading{State: NotAssessed, unranked: true}
 	}
 	best := -1
 	for i, p := range a.Shock.Parts {
@@ -15,20 +15,21 @@ func thermalShockReading(a *hazards.Assessment) reading {
 		}
 	}
 	if best < 0 {
-		return reading{text: "not assessed", unranked: true}
+		return Reading{State: NotAssessed, unranked: true}
 	}
 	p := a.Shock.Parts[best]
 	c := p.Cases[p.Governing]
 	r := safetyFactor(c.SafetyFactor)
-	r.text += " (" + p.Name + ", " + sig(c.DeltaK, 3) + " K " + c.Direction + ")"
+	r.Part, r.ShockDeltaK, r.ShockDirection = p.Name, c.DeltaK, c.Direction
 	return r
 }
 
 // sealStressReading reads the residual stress given at the seal.
-func sealStressReading(a *hazards.Assessment) reading {
+func sealStressReading(a *hazards.Assessment) Reading {
 	if a.Seal == nil {
-		return reading{text: "none given", unranked: true}
+		return Reading{State: NoneGiven, unranked: true}
 	}
-	mpa := a.Seal.StressPa / 1e6
-	return plain(mpa, sig(mpa, 3)+" MPa ("+a.Seal.Name+")")
+	r := value(a.Seal.StressPa)
+	r.Part = a.Seal.Name
+	return r
 }

@@ -1,0 +1,70 @@
+package hazards
+
+// FactKind says what kind of quantity a Fact holds and so its SI unit.
+type FactKind string
+
+// Kinds of fact, with the SI unit of Value.
+const (
+	FactTemperature     FactKind = "temperature"            // K
+	FactTempDifference  FactKind = "temperature-difference" // K
+	FactPressure        FactKind = "pressure"               // Pa
+	FactStress          FactKind = "stress"                 // Pa
+	FactStressPerKelvin FactKind = "stress-per-kelvin"      // Pa/K
+	FactMass            FactKind = "mass"                   // kg
+	FactVolume          FactKind = "volume"                 // m³
+	FactPercent         FactKind = "percent"                // %
+	FactConcentration   FactKind = "concentration"          // ppm
+	FactMinutes         FactKind = "minutes"                // min
+	FactHours           FactKind = "hours"                  // h
+	FactYears           FactKind = "years"                  // years
+	FactNumber          FactKind = "number"                 // a plain number
+	FactProbability     FactKind = "probability"            // a probability
+	FactName            FactKind = "name"                   // Text only: a glass, a part, a place
+)
+
+// Fact is one value behind a finding, typed, for the detail each output
+// words in its own units beside the value and the limit: the hottest
+// temperature, the overpressure, the glass. Value is in the SI unit of
+// Kind; Text holds a name (Kind FactName) or, for a number that does not
+// apply, the state ("not reached"); Bound, when set, says Value is a
+// bound.
+type Fact struct {
+	Name  string    `json:"name"`
+	Kind  FactKind  `json:"kind"`
+	Value float64   `json:"value"`
+	Text  string    `json:"text,omitempty"`
+	Bound Direction `json:"bound,omitempty"`
+}
+
+func fact(name string, kind FactKind, v float64) Fact {
+	return Fact{Name: name, Kind: kind, Value: finiteOr(v, 0)}
+}
+
+func named(name, text string) Fact { return Fact{Name: name, Kind: FactName, Text: text} }
+
+// unitOf returns the SI unit of a fact kind, for the calculation record.
+func (k FactKind) unitOf() string {
+	switch k {
+	case FactTemperature, FactTempDifference:
+		return "K"
+	case FactPressure, FactStress:
+		return "Pa"
+	case FactStressPerKelvin:
+		return "Pa/K"
+	case FactMass:
+		return "kg"
+	case FactVolume:
+		return "m³"
+	case FactPercent:
+		return "%"
+	case FactConcentration:
+		return "ppm"
+	case FactMinutes:
+		return "min"
+	case FactHours:
+		return "h"
+	case FactYears:
+		return "years"
+	}
+	return ""
+}

@@ -1,0 +1,99 @@
+package display
+
+import (
+	"math"
+	"strconv"
+	"strings"
+)
+
+// NoValue stands for a number that cannot be shown (not computed, or not
+// finite); no output ever prints NaN or infinity.
+const NoValue = "—"
+
+// Significant figures used everywhere a result is shown.
+const (
+	// ValueFigures is the number of significant figures of a result.
+	ValueFigures = 3
+	// MarginFigures is the number of significant figures of a margin.
+	MarginFigures = 2
+)
+
+// Plain notation is used for magnitudes from plainLow to below plainHigh,
+// scientific notation (× 10ⁿ) outside.
+const (
+	plainLow  = 1e-3
+	plainHigh = 1e6
+)
+
+// Number formats x to n significant figures: in plain notation for
+// magnitudes from 0.001 to below a million, as m × 10ⁿ (superscript
+// exponent) outside; trailing zeros after the decimal point are dropped,
+// a negative number takes a true minus sign, and a number that is not
+// finite is NoValue.
+func Number(x float64, n int) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return NoValue
+	}
+	if n < 1 {
+		n = 1
+	}
+	if x == 0 {
+		return "0"
+	}
+	// Round first, so that 999.96 to three figures is 1000 and the choice
+	// of notation sees the rounded number.
+	r, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'e', n-1, 64), 64)
+	ax := math.Abs(r)
+	var s string
+	if ax >= plainLow && ax < plainHigh {
+		dec := n - 1 - int(math.Floor(math.Log10(ax)))
+		if dec < 0 {
+			dec = 0
+		}
+		s = trimZeros(strconv.FormatFloat(r, 'f', dec, 64))
+	} else {
+		mant, exp, _ := strings.Cut(strconv.FormatFloat(r, 'e', n-1, 64), "e")
+		e, _ := strconv.Atoi(exp)
+		s = trimZeros(mant) + " × 10" + superscript(e)
+	}
+	if s == "-0" {
+		s = "0"
+	}
+	return strings.Replace(s, "-", "−", 1)
+}
+
+// Fixed formats x with the given number of decimals (temperatures to a
+// tenth of a degree), never as "−0"; a number that is not finite is
+// NoValue.
+func Fixed(x float64, decimals int) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return NoValue
+	}
+	s := strconv.FormatFloat(x, 'f', decimals, 64)
+	if strings.Trim(s, "-0.") == "" {
+		s = strings.TrimPrefix(s, "-")
+	}
+	return strings.Replace(s, "-", "−", 1)
+}
+
+// trimZeros removes trailing zeros after a decimal point.
+func trimZeros(s string) string {
+	if !strings.Contains(s, ".") {
+		return s
+	}
+	return strings.TrimSuffix(strings.TrimRight(s, "0"), ".")
+}
+
+// superscript writes an integer exponent in superscript digits.
+func superscript(n int) string {
+	sup := []rune("⁰¹²³⁴⁵⁶⁷⁸⁹")
+	var b strings.Builder
+	if n < 0 {
+		b.WriteRune('⁻')
+		n = -n
+	}
+	for _, c := range strconv.Itoa(n) {
+		b.WriteRune(sup[c-'0'])
+	}
+	return b.String()
+}
