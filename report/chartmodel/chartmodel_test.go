@@ -179,4 +179,3 @@ func writePNG(t *testing.T, name string, ch Chart) {
 		t.Fatal(err)
 	}
 }
-

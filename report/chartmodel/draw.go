@@ -222,4 +222,3 @@ func (e emptyNote) Plot(c draw.Canvas, _ *plot.Plot) {
 	sty.XAlign, sty.YAlign = draw.XCenter, draw.YCenter
 	c.FillText(sty, c.Center(), e.text)
 }
-
