@@ -10,6 +10,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/chartmodel"
 )
 
 // resultsPanel shows the last good results: the verdict, the findings,
@@ -94,16 +95,16 @@ func (r *resultsPanel) draw() {
 		r.verdict.clear()
 		r.list.set(nil, true)
 		r.keys.set(nil, u)
-		r.pt.set(chartSpec{Empty: "No results yet."}, false)
-		r.conc.set(chartSpec{Empty: "No results yet."}, false)
+		r.pt.set(chartmodel.Chart{Empty: "No results yet."}, false)
+		r.conc.set(chartmodel.Chart{Empty: "No results yet."}, false)
 		return
 	}
 	stale := s.problem != nil
 	r.verdict.set(a, s.revisionNote(), stale)
 	r.list.set(a.Findings, stale)
 	r.keys.set(a, u)
-	r.pt.set(pressureChart([]ptSide{{curve: o.pt}}, u), stale)
-	r.conc.set(releaseChart(o.conc, u), stale)
+	r.pt.set(chartmodel.Pressure("", []chartmodel.Side{{A: a}}, u.chartUnits()), stale)
+	r.conc.set(chartmodel.Release("", a, u.chartUnits()), stale)
 }
 
 // revisionNote says what the results are of: which revision, changed or

@@ -178,7 +178,7 @@ type grid struct {
 
 func (g *grid) Plot(c draw.Canvas, p *plot.Plot) {
 	trX, trY := p.Transforms(&c)
-	sty := draw.LineStyle{Color: color.Gray{Y: 215}, Width: vg.Points(0.35)}
+	sty := draw.LineStyle{Color: mix(g.o.bg(), g.o.fg(), 0.18), Width: vg.Points(0.35)}
 	if len(g.ch.Ranked) == 0 {
 		for _, t := range Ticks(g.ch.Y) {
 			if t.Label != "" {
@@ -221,4 +221,12 @@ func (e emptyNote) Plot(c draw.Canvas, _ *plot.Plot) {
 	sty := e.o.text(e.o.size(0))
 	sty.XAlign, sty.YAlign = draw.XCenter, draw.YCenter
 	c.FillText(sty, c.Center(), e.text)
+}
+
+// mix is the colour a share t of the way from a to b.
+func mix(a, b color.Color, t float64) color.Color {
+	r1, g1, b1, _ := a.RGBA()
+	r2, g2, b2, _ := b.RGBA()
+	m := func(x, y uint32) uint8 { return uint8((float64(x)*(1-t) + float64(y)*t) / 257) }
+	return color.NRGBA{R: m(r1, r2), G: m(g1, g2), B: m(b1, b2), A: 0xff}
 }

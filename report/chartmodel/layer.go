@@ -362,8 +362,9 @@ func (l *layer) glyph(c draw.Canvas, m Marker, at vg.Point) {
 	c.DrawGlyph(draw.GlyphStyle{Color: col, Radius: r, Shape: shape}, at)
 }
 
-// ranked draws horizontal bars from zero, one row each, dark when the
-// value is negative (a larger input lowers the margin), with the value.
+// ranked draws horizontal bars from zero, one row each, red (dark grey in
+// print) when the value is negative (a larger input lowers the margin),
+// blue (light grey) otherwise, with the value.
 func (l *layer) ranked(c draw.Canvas, trX, trY func(float64) vg.Length) {
 	n := len(l.ch.Ranked)
 	ts := l.o.text(l.o.size(-1))
@@ -372,9 +373,15 @@ func (l *layer) ranked(c draw.Canvas, trX, trY func(float64) vg.Length) {
 		row := float64(n - 1 - i)
 		y0, y1 := trY(row-0.32), trY(row+0.32)
 		x0, x1 := trX(0), trX(math.Max(-1, math.Min(1, b.Value)))
-		fill := color.Color(color.Gray{Y: 215})
+		fill := l.o.colour(Blue)
+		if l.o.Mono {
+			fill = color.Gray{Y: 215}
+		}
 		if b.Value < 0 {
-			fill = color.Gray{Y: 90}
+			fill = l.o.colour(Red)
+			if l.o.Mono {
+				fill = color.Gray{Y: 90}
+			}
 		}
 		pts := []vg.Point{{X: x0, Y: y0}, {X: x1, Y: y0}, {X: x1, Y: y1}, {X: x0, Y: y1}}
 		c.FillPolygon(fill, pts)
