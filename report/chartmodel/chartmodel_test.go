@@ -179,3 +179,36 @@ func writePNG(t *testing.T, name string, ch Chart) {
 		t.Fatal(err)
 	}
 }
+
+// The fill–temperature map: a larger fill goes liquid-full at a lower
+// temperature (the liquid swells into less ullage), so the liquid-full
+// line falls from left to right wherever it exists.
+func TestFillMapFalls(t *testing.T) {
+	a := assess(t, "liquidfull_design.json")
+	lib, err := fluids.Builtin()
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := FillMap(a.Design, lib)
+	if len(m.FillKg) < 20 {
+		t.Fatalf("%d fills assessed", len(m.FillKg))
+	}
+	prev, seen := 1e9, 0
+	for i, lf := range m.LiquidFullK {
+		if !(lf > 0) {
+			continue
+		}
+		seen++
+		if lf > prev+1e-6 {
+			t.Errorf("liquid-full at %g K for %g kg, above %g K for a smaller fill", lf, m.FillKg[i], prev)
+		}
+		prev = lf
+	}
+	if seen == 0 {
+		t.Error("no fill goes liquid-full")
+	}
+	kg := Quantity{Unit: "g", FromSI: func(x float64) float64 { return x * 1000 }, Format: func(x float64) string { return strconv.FormatFloat(x*1000, 'g', 3, 64) + " g" }}
+	writePNG(t, "fillmap-liquidfull", FillTemperature("Fill–temperature map", m, a, si, kg))
+	b := assess(t, "revision_b_design.json")
+	writePNG(t, "fillmap-b", FillTemperature("Fill–temperature map", FillMap(b.Design, lib), b, si, kg))
+}
