@@ -190,6 +190,17 @@ func TestFillMapFalls(t *testing.T) {
 		t.Fatal(err)
 	}
 	m := FillMap(a.Design, lib)
+	// The map through the assessment's own fluid is the same map.
+	if own := FillMapFor(a); !slices.Equal(own.FillKg, m.FillKg) || !slices.EqualFunc(own.LiquidFullK, m.LiquidFullK, func(x, y float64) bool { return x == y || (x != x && y != y) }) {
+		t.Error("the map through the assessment's fluid differs from the map through the library")
+	}
+	// At the design's own fill (an exact sample) the line meets the
+	// assessment's liquid-full temperature.
+	for i, f := range m.FillKg {
+		if f == a.Design.FillMassKg && m.LiquidFullK[i] != a.LiquidFullK {
+			t.Errorf("liquid-full at the design fill %g K, the assessment says %g K", m.LiquidFullK[i], a.LiquidFullK)
+		}
+	}
 	if len(m.FillKg) < 20 {
 		t.Fatalf("%d fills assessed", len(m.FillKg))
 	}

@@ -63,6 +63,22 @@ func FillMap(d hazards.Design, lib *fluids.Library) FillMapData {
 	return out
 }
 
+// FillMapFor is FillMap for an assessment, with its own fluid, so that
+// the map agrees with the assessment whatever library it came from.
+func FillMapFor(a *hazards.Assessment) FillMapData {
+	if a == nil || a.Fluid == nil {
+		return FillMapData{}
+	}
+	sub := fluids.BuiltinSubstanceOf(a.Fluid) // keeps a built-in fluid's reference equation
+	if sub == nil {
+		var err error
+		if sub, err = fluids.NewSubstance(a.Fluid); err != nil {
+			return FillMapData{}
+		}
+	}
+	return FillMap(a.Design, (&fluids.Library{}).With(sub))
+}
+
 // MassQuantity converts and formats a fill mass for the map's axis.
 type MassQuantity = Quantity
 
