@@ -25,6 +25,16 @@ func (u unitSystem) chartUnits() chartmodel.Units {
 func (w *assessmentWriter) pressureChart() {
 	ch := chartmodel.Pressure("Figure 1. Internal pressure against temperature", []chartmodel.Side{{A: w.a}}, w.u.chartUnits())
 	w.d.drawModelChart(ch, chartHeight)
+	w.fillMapChart()
+}
+
+// fillMapChart is figure 1b: how much may be filled, and how hot it may
+// get, at a glance.
+func (w *assessmentWriter) fillMapChart() {
+	mq := w.u.massQ()
+	mass := chartmodel.Quantity{Unit: mq.unit, FromSI: mq.conv, Format: w.u.mass}
+	ch := chartmodel.FillTemperature("Figure 1b. Fill–temperature map", chartmodel.FillMapFor(w.a), w.a, w.u.chartUnits(), mass)
+	w.d.drawModelChart(ch, chartHeight)
 }
 
 // concentrationChart is figure 2: concentration against time after the

@@ -21,7 +21,7 @@ func TestChartCaptures(t *testing.T) {
 	h.runStudyWith("2000", "7", "5")
 	tp := h.s.tol
 	charts := map[string]*chart{
-		"pressure": h.s.results.pt, "release": h.s.results.conc,
+		"pressure": h.s.results.pt, "release": h.s.results.conc, "fillmap": h.s.results.fill,
 		"histogram": tp.hist, "drivers": tp.drivers,
 	}
 	for name, c := range charts {

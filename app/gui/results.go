@@ -26,6 +26,7 @@ type resultsPanel struct {
 	list     *findingsList
 	keys     *keyNumbers
 	pt, conc *chart
+	fill     *chart
 	tabs     *container.AppTabs
 
 	object fyne.CanvasObject
@@ -50,10 +51,11 @@ func newResultsPanel(s *session) *resultsPanel {
 	r.list = newFindingsList()
 	r.list.us = func() bool { return s.units() == unitsUS }
 	r.keys = newKeyNumbers()
-	r.pt, r.conc = newChart(), newChart()
+	r.pt, r.conc, r.fill = newChart(), newChart(), newChart()
 	r.tabs = container.NewAppTabs(
 		container.NewTabItem("Pressure against temperature", r.pt),
 		container.NewTabItem("Vapour in the room", r.conc),
+		container.NewTabItem("Fill and temperature", r.fill),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 	)
 	split := container.NewVSplit(r.list.object, r.tabs)
@@ -97,6 +99,7 @@ func (r *resultsPanel) draw() {
 		r.keys.set(nil, u)
 		r.pt.set(chartmodel.Chart{Empty: "No results yet."}, false)
 		r.conc.set(chartmodel.Chart{Empty: "No results yet."}, false)
+		r.fill.set(chartmodel.Chart{Empty: "No results yet."}, false)
 		return
 	}
 	stale := s.problem != nil
@@ -105,6 +108,8 @@ func (r *resultsPanel) draw() {
 	r.keys.set(a, u)
 	r.pt.set(chartmodel.Pressure("", []chartmodel.Side{{A: a}}, u.chartUnits()), stale)
 	r.conc.set(chartmodel.Release("", a, u.chartUnits()), stale)
+	mass := chartmodel.Quantity{Unit: u.unit(qMass), FromSI: func(x float64) float64 { return u.fromSI(qMass, x) }, Format: func(x float64) string { return u.show(qMass, x, 3) }}
+	r.fill.set(chartmodel.FillTemperature("", o.fillMap, a, u.chartUnits(), mass), stale)
 }
 
 // revisionNote says what the results are of: which revision, changed or
