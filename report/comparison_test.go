@@ -58,7 +58,7 @@ func TestComparisonReadsBack(t *testing.T) {
 				"Overall verdict and findings whose status changed", "Rev. A", "Rev. B",
 				"Inputs side by side", "Results side by side", "Findings side by side",
 				"Figure 1. Internal pressure against temperature, both revisions",
-				"Rev. A: internal pressure", "Rev. B: internal pressure", "qualified, licensed professionals",
+				"Internal pressure, Rev. A", "Internal pressure, Rev. B", "qualified, licensed professionals",
 				"Approved by", fmt.Sprintf("Page %d of %d", info.pages, info.pages),
 			}, tc.want...)
 			for _, s := range c.Statuses {

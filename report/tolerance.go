@@ -2,10 +2,10 @@ package report
 
 import (
 	"fmt"
-	"math"
 	"strings"
 
 	"ullage/hazards/tolerance"
+	"ullage/report/chartmodel"
 )
 
 // toleranceStudy prints the sampled tolerance study: the failure rates
@@ -72,58 +72,7 @@ func pct(x float64) string {
 
 // histogramChart draws the units' safety factors as bars.
 func (w *assessmentWriter) histogramChart(h tolerance.Histogram) {
-	if len(h.Counts) == 0 {
-		return
-	}
-	d := w.d
-	const height = 48.0
-	d.subheading("Figure 3. Burst safety factor of the sampled units")
-	d.need(height + 14)
-	x0, y0 := d.left+14, d.y+2
-	wd, ht := d.width()-18, height
-	maxC := 1
-	for _, c := range h.Counts {
-		if c > maxC {
-			maxC = c
-		}
-	}
-	lo, hi := h.Edges[0], h.Edges[len(h.Edges)-1]
-	fx := func(v float64) float64 { return x0 + wd*(v-lo)/(hi-lo) }
-	d.c.setLineWidth(0.2)
-	d.c.setDash()
-	d.c.setStroke(midGrey)
-	d.c.setFill(lightGrey)
-	for i, c := range h.Counts {
-		bh := ht * float64(c) / float64(maxC)
-		d.c.rect(fx(h.Edges[i]), y0+ht-bh, fx(h.Edges[i+1])-fx(h.Edges[i]), bh, "FD")
-	}
-	d.c.setStroke(black)
-	d.c.line(x0, y0+ht, x0+wd, y0+ht)
-	d.c.line(x0, y0, x0, y0+ht)
-	if lo < 1 && hi > 1 {
-		d.c.setDash(1.2, 0.8)
-		d.c.line(fx(1), y0, fx(1), y0+ht)
-		d.c.setDash()
-		d.use(small)
-		d.c.drawText(fx(1)+1.5, y0+10, "← bursts: factor below 1")
-	}
-	d.use(small)
-	for i := 0; i <= 4; i++ {
-		v := lo + (hi-lo)*float64(i)/4
-		s := fmt.Sprintf("%.3g", v)
-		d.c.drawText(fx(v)-d.c.textWidth(s)/2, y0+ht+4, s)
-	}
-	s := fmt.Sprintf("%d", maxC)
-	d.c.drawText(x0-d.c.textWidth(s)-1.5, y0+2, s)
-	d.c.drawText(x0-3, y0+ht+1, "0")
-	d.c.drawText(x0+wd/2-20, y0+ht+8.5, "unit safety factor (strength over stress)")
-	d.y = y0 + ht + 11
-	if h.Below+h.Above > 0 {
-		d.note(fmt.Sprintf("%d units below and %d above the range shown.", h.Below, h.Above))
-	}
-	if h.NoLoad > 0 {
-		d.note(fmt.Sprintf("%d units are not over-pressurised at their hottest temperature and carry no burst load; they are not drawn.", h.NoLoad))
-	}
+	w.d.drawModelChart(chartmodel.Histogram("Figure 3. Burst safety factor of the sampled units", h), histogramHeight)
 }
 
 // driverChart ranks the inputs by their rank correlation with the safety
@@ -132,38 +81,8 @@ func (w *assessmentWriter) driverChart(ds []tolerance.Driver, n int) {
 	if len(ds) == 0 {
 		return
 	}
-	d := w.d
-	rowH := 5.0
-	d.subheading("Figure 4. What drives the safety margin")
-	d.need(float64(len(ds))*rowH + 16)
-	labelW := 58.0
-	x0 := d.left + labelW
-	wd := d.width() - labelW - 4
-	mid := x0 + wd/2
-	y := d.y + 1
-	d.c.setLineWidth(0.2)
-	d.c.setDash()
-	for _, dr := range ds {
-		d.use(body)
-		d.c.drawText(d.left, baseline(y, rowH, body.size), d.fit(dr.Label, labelW-2))
-		bw := wd / 2 * math.Abs(dr.RankCorrelation)
-		x := mid
-		if dr.RankCorrelation < 0 {
-			x = mid - bw
-			d.c.setFill(darkGrey)
-		} else {
-			d.c.setFill(lightGrey)
-		}
-		d.c.setStroke(black)
-		d.c.rect(x, y+1, bw, rowH-2, "FD")
-		d.use(small)
-		d.c.drawText(mid+wd/2+1-d.c.textWidth("+1.00")-1, baseline(y, rowH, small.size), fmt.Sprintf("%+.2f", dr.RankCorrelation))
-		y += rowH
-	}
-	d.c.setStroke(black)
-	d.c.line(mid, d.y, mid, y)
-	d.y = y + 1
-	d.note(fmt.Sprintf("Spearman rank correlation with the unit safety factor over the first %d units (Spearman, Am. J. Psychol. 15, 72 (1904)). Dark bars lower the margin as the input grows: tighten those tolerances first.", n))
+	w.d.drawModelChart(chartmodel.Drivers("Figure 4. What drives the safety margin", ds), float64(len(ds))*6+22)
+	w.d.note(fmt.Sprintf("Spearman rank correlation with the unit safety factor over the first %d units (Spearman, Am. J. Psychol. 15, 72 (1904)). Dark bars lower the margin as the input grows: tighten those tolerances first.", n))
 }
 
 // inputValue formats a varied input's nominal value in the record's units.

@@ -8,16 +8,16 @@ import (
 
 	"ullage/fluids"
 	"ullage/hazards"
+	"ullage/report/chartmodel"
 )
 
 // outcome is one assessment computed in the background: the results and
-// the chart data, or the error that stopped it.
+// the fill–temperature map, or the error that stopped it.
 type outcome struct {
 	gen        uint64
 	assessment *hazards.Assessment
 	err        error
-	pt         ptCurve
-	conc       concCurves
+	fillMap    chartmodel.FillMapData
 	took       time.Duration
 }
 
@@ -36,7 +36,7 @@ func evaluate(d hazards.Design, lib *fluids.Library) (o outcome) {
 	if err != nil {
 		return outcome{err: err}
 	}
-	return outcome{assessment: a, pt: pressureCurve(a), conc: releaseCurves(a)}
+	return outcome{assessment: a, fillMap: chartmodel.FillMapFor(a)}
 }
 
 // assessor runs assessments off the UI goroutine. Requests coming faster

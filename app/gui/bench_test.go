@@ -4,6 +4,8 @@ import (
 	"testing"
 
 	"fyne.io/fyne/v2/test"
+
+	"ullage/report/chartmodel"
 )
 
 // BenchmarkEditToFindings times the whole path from a changed field to
@@ -43,14 +45,14 @@ func BenchmarkEvaluate(b *testing.B) {
 	}
 }
 
-// BenchmarkChartRedraw times rebuilding the pressure chart's canvas
-// objects for new results.
+// BenchmarkChartRedraw times drawing the pressure chart's image for new
+// results.
 func BenchmarkChartRedraw(b *testing.B) {
 	h := newHarnessIn(b, b.TempDir())
 	c := newChart()
 	w := test.NewTempWindow(b, c)
 	w.Resize(w.Canvas().Size().AddWidthHeight(600, 300))
-	spec := pressureChart([]ptSide{{curve: h.s.last.pt}}, unitsSI)
+	spec := chartmodel.Pressure("", []chartmodel.Side{{A: h.s.last.assessment}}, unitsSI.chartUnits())
 	b.ReportAllocs()
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {

@@ -2,6 +2,7 @@ package gui
 
 import (
 	"slices"
+	"ullage/report/chartmodel"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/widget"
@@ -40,5 +41,5 @@ func (c *comparePanel) refusePair(msg string) {
 	c.inputs.Objects, c.results.Objects = nil, nil
 	c.inputs.Refresh()
 	c.results.Refresh()
-	c.chart.set(chartSpec{Empty: "Nothing to compare."}, false)
+	c.chart.set(chartmodel.Chart{Empty: "Nothing to compare."}, false)
 }

@@ -8,6 +8,7 @@ import (
 
 	"ullage/hazards"
 	"ullage/hazards/compare"
+	"ullage/report/chartmodel"
 	"ullage/report/display"
 )
 
@@ -218,15 +219,8 @@ func (c *comparePanel) render() {
 	c.results.Objects = rrows
 	c.results.Refresh()
 
-	var sides []ptSide
-	if c.outA.assessment != nil {
-		sides = append(sides, ptSide{name: cmp.A.Label, curve: c.outA.pt, colour: colourGrey, dashed: true})
-	}
-	if c.outB.assessment != nil {
-		sides = append(sides, ptSide{name: cmp.B.Label, curve: c.outB.pt, colour: colourBlue})
-	}
-	spec := pressureChart(sides, u)
-	spec.Title = "Pressure against temperature, both sides"
+	spec := chartmodel.Pressure("Pressure against temperature, both sides",
+		[]chartmodel.Side{{Name: cmp.A.Label, A: c.outA.assessment}, {Name: cmp.B.Label, A: c.outB.assessment}}, u.chartUnits())
 	c.chart.set(spec, false)
 }
 

@@ -10,6 +10,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/chartmodel"
 )
 
 // resultsPanel shows the last good results: the verdict, the findings,
@@ -26,6 +27,7 @@ type resultsPanel struct {
 	keys     *keyNumbers
 	expo     *exposureTable
 	pt, conc *chart
+	fill     *chart
 	tabs     *container.AppTabs
 	// area holds the findings and, below them, the charts; laid out
 	// again when the number of findings changes.
@@ -54,10 +56,11 @@ func newResultsPanel(s *session) *resultsPanel {
 	r.list.us = func() bool { return s.units() == unitsUS }
 	r.keys = newKeyNumbers()
 	r.expo = newExposureTable()
-	r.pt, r.conc = newChart(), newChart()
+	r.pt, r.conc, r.fill = newChart(), newChart(), newChart()
 	r.tabs = container.NewAppTabs(
 		container.NewTabItem("Pressure against temperature", r.pt),
 		container.NewTabItem("Vapour in the room", r.conc),
+		container.NewTabItem("Fill and temperature", r.fill),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 		container.NewTabItem("Exposure limits", r.expo.object),
 	)
@@ -105,8 +108,9 @@ func (r *resultsPanel) draw() {
 		r.area.Refresh()
 		r.keys.set(nil, u)
 		r.expo.set(nil)
-		r.pt.set(chartSpec{Empty: "No results yet."}, false)
-		r.conc.set(chartSpec{Empty: "No results yet."}, false)
+		r.pt.set(chartmodel.Chart{Empty: "No results yet."}, false)
+		r.conc.set(chartmodel.Chart{Empty: "No results yet."}, false)
+		r.fill.set(chartmodel.Chart{Empty: "No results yet."}, false)
 		return
 	}
 	stale := s.problem != nil
@@ -118,8 +122,10 @@ func (r *resultsPanel) draw() {
 	}
 	r.keys.set(a, u)
 	r.expo.set(a)
-	r.pt.set(pressureChart([]ptSide{{curve: o.pt}}, u), stale)
-	r.conc.set(releaseChart(o.conc, u), stale)
+	r.pt.set(chartmodel.Pressure("", []chartmodel.Side{{A: a}}, u.chartUnits()), stale)
+	r.conc.set(chartmodel.Release("", a, u.chartUnits()), stale)
+	mass := chartmodel.Quantity{Unit: u.unit(qMass), FromSI: func(x float64) float64 { return u.fromSI(qMass, x) }, Format: func(x float64) string { return u.show(qMass, x, 3) }}
+	r.fill.set(chartmodel.FillTemperature("", o.fillMap, a, u.chartUnits(), mass), stale)
 }
 
 // revisionNote says what the results are of: which revision, changed or

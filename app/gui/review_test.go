@@ -29,8 +29,8 @@ func TestExampleShowsResultsAtOnce(t *testing.T) {
 	if len(h.s.results.pt.spec.Series) != 1 || len(h.s.results.pt.spec.Series[0].X) < 50 {
 		t.Errorf("pressure chart not drawn: %+v", h.s.results.pt.spec.Series)
 	}
-	if len(h.s.results.conc.spec.Series) != 3 || len(h.s.results.conc.spec.Marks) == 0 {
-		t.Errorf("release chart lacks curves or limit lines: %d series, %d marks", len(h.s.results.conc.spec.Series), len(h.s.results.conc.spec.Marks))
+	if len(h.s.results.conc.spec.Series) != 3 || len(h.s.results.conc.spec.Lines) == 0 {
+		t.Errorf("release chart lacks curves or limit lines: %d series, %d lines", len(h.s.results.conc.spec.Series), len(h.s.results.conc.spec.Lines))
 	}
 	if h.s.doc.dirty() {
 		t.Error("a freshly opened example counts as changed")

@@ -46,15 +46,18 @@ func TestSmallStudyFillsThePanel(t *testing.T) {
 			t.Errorf("the panel lacks %q", want)
 		}
 	}
-	n := tp.hist.hist.Below + tp.hist.hist.Above + tp.hist.hist.NoLoad
-	for _, c := range tp.hist.hist.Counts {
+	n := r.Histogram.Below + r.Histogram.Above + r.Histogram.NoLoad
+	for _, c := range tp.hist.spec.Bars.Counts {
 		n += c
 	}
 	if n != 2000 {
 		t.Errorf("the histogram accounts for %d units, want 2000", n)
 	}
-	if len(tp.drivers.drivers) != len(r.Sensitivity) || len(r.Sensitivity) == 0 {
-		t.Errorf("%d drivers drawn of %d", len(tp.drivers.drivers), len(r.Sensitivity))
+	if !strings.Contains(tp.histNote.Text, "of 2000 units are drawn") {
+		t.Errorf("the histogram does not say how many units it shows: %q", tp.histNote.Text)
+	}
+	if len(tp.drivers.spec.Ranked) != len(r.Sensitivity) || len(r.Sensitivity) == 0 {
+		t.Errorf("%d drivers drawn of %d", len(tp.drivers.spec.Ranked), len(r.Sensitivity))
 	}
 	if !strings.HasPrefix(tp.status.Text, "Finished") || tp.busy.Visible() || tp.runBtn.Disabled() || !tp.cancelBtn.Disabled() {
 		t.Errorf("the panel still looks busy: %q", tp.status.Text)

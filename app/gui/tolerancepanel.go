@@ -15,6 +15,7 @@ import (
 
 	"ullage/hazards"
 	"ullage/hazards/tolerance"
+	"ullage/report/chartmodel"
 )
 
 // Defaults of the study's settings.
@@ -50,9 +51,9 @@ type tolerancePanel struct {
 	about     *widget.Label
 	fractions *fyne.Container
 	spreadTab *fyne.Container
-	hist      *barChart
+	hist      *chart
 	histNote  *widget.Label
-	drivers   *barChart
+	drivers   *chart
 	driveNote *widget.Label
 	inputs    *fyne.Container
 	results   *fyne.Container
@@ -126,9 +127,9 @@ func newTolerancePanel(s *session) *tolerancePanel {
 	tp.about.Wrapping = fyne.TextWrapWord
 	tp.fractions = container.NewVBox()
 	tp.spreadTab = container.NewVBox()
-	tp.hist = newBarChart(barsHistogram)
+	tp.hist = newChart()
 	tp.histNote = caption("")
-	tp.drivers = newBarChart(barsDrivers)
+	tp.drivers = newChart()
 	tp.driveNote = caption("")
 	tp.inputs = container.NewVBox()
 	tp.results = container.NewVBox(
@@ -303,9 +304,10 @@ func (tp *tolerancePanel) refresh() {
 		groupDigits(r.Samples), st.of, r.Seed, sigFigures(r.HottestSpreadK/spreadScale(u), 3), spreadUnit(u), r.HottestDistribution, r.DimensionDistribution, in))
 	tp.showFractions(r)
 	tp.showSpread(r, u)
-	tp.hist.setHistogram(r.Histogram, !current)
-	tp.histNote.SetText(histogramNotes(r.Histogram, r))
-	tp.drivers.setDrivers(r.Sensitivity, !current)
+	hist := chartmodel.Histogram("", r.Histogram)
+	tp.hist.set(hist, !current)
+	tp.histNote.SetText(histogramNotes(hist, r))
+	tp.drivers.set(chartmodel.Drivers("", r.Sensitivity), !current)
 	tp.driveNote.SetText(fmt.Sprintf("Spearman rank correlation of each input with the unit safety factor over the first %s units, strongest first. A filled bar to the left means a larger value lowers the margin; tighten those tolerances first. An outlined bar to the right means it raises the margin.", groupDigits(r.SensitivityUnits)))
 	tp.showInputs(r, u)
 	tp.results.Show()
@@ -389,4 +391,14 @@ func pairRows(rows [][2]string) []fyne.CanvasObject {
 // durationText is a short duration: 0.42 s, 3.1 s.
 func durationText(d time.Duration) string {
 	return sigFigures(d.Seconds(), 2) + " s"
+}
+
+// histogramNotes says what the histogram leaves out (the chart model's
+// notes) and which units count at a factor of 0.
+func histogramNotes(h chartmodel.Chart, r *tolerance.Result) string {
+	notes := append([]string(nil), h.Notes...)
+	if r != nil && r.UnsealableUnits > 0 {
+		notes = append(notes, fmt.Sprintf("%s could not be sealed (their fill would not fit as liquid) and count at a factor of 0.", plural(r.UnsealableUnits, "unit")))
+	}
+	return strings.Join(notes, " ")
 }

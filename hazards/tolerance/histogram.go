@@ -23,15 +23,12 @@ type Histogram struct {
 	NoLoad int       `json:"no_load"`
 }
 
-// HistogramTop is the highest safety factor a histogram shows: margins are
-// judged between 1 and a few times the minimum safety factor, and a few
-// lightly loaded units with factors in the hundreds would otherwise squash
-// every bin that matters into one.
-const HistogramTop = 20
-
-// loadedHistogram bins the safety factors of the units under burst load,
-// from 0 to the 99th percentile of those units, at least 1 and at most
-// HistogramTop.
+// loadedHistogram bins the safety factors of the units under burst load
+// over the range those units span: from their 1st to their 99th
+// percentile, starting at 0 when the lowest units come near a factor of
+// 1 (so that the bursting side is in view), and reaching at least 1.
+// Below and Above count the few units outside, so that no range of
+// factors hides the bulk of the units.
 func loadedHistogram(factors []float64) Histogram {
 	loaded := make([]float64, 0, len(factors))
 	for _, v := range factors {
@@ -39,11 +36,18 @@ func loadedHistogram(factors []float64) Histogram {
 			loaded = append(loaded, v)
 		}
 	}
-	hi := 1.0
+	lo, hi := 0.0, 1.0
 	if len(loaded) > 0 {
-		hi = math.Min(math.Max(percentiles(append([]float64(nil), loaded...), len(loaded)).P99, 1), HistogramTop)
+		ps := percentiles(append([]float64(nil), loaded...), len(loaded))
+		hi = math.Max(ps.P99, 1)
+		if ps.P1 > 2 {
+			lo = math.Floor(0.9 * ps.P1)
+		}
+		if !(hi > lo) {
+			hi = lo + 1
+		}
 	}
-	h := newHistogram(loaded, 0, hi)
+	h := newHistogram(loaded, lo, hi)
 	h.NoLoad = len(factors) - len(loaded)
 	return h
 }

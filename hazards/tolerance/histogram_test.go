@@ -45,3 +45,22 @@ func TestLoadedHistogramLeavesOutUnloadedUnits(t *testing.T) {
 		t.Errorf("top edge %g, want the loaded units' 99th percentile (≤ 2.5)", top)
 	}
 }
+
+// The range follows the data: units far above a factor of 20 are binned,
+// not piled up off the chart (a fixed top of 20 once left all of them
+// outside).
+func TestLoadedHistogramRangeFromData(t *testing.T) {
+	x := make([]float64, 0, 200)
+	for i := range 200 {
+		x = append(x, 40+float64(i)/10) // factors 40 to 59.9
+	}
+	h := loadedHistogram(x)
+	lo, hi := h.Edges[0], h.Edges[len(h.Edges)-1]
+	// 0.9 × the 1st percentile (≈ 40.2) floored, and the 99th (≈ 59.7).
+	if lo != 36 || hi < 59 || hi > 60 {
+		t.Errorf("range %g to %g, want 36 to about 59.7", lo, hi)
+	}
+	if h.Below+h.Above > 4 {
+		t.Errorf("%d below and %d above: want at most 1 %% each side", h.Below, h.Above)
+	}
+}

@@ -67,8 +67,9 @@ type Result struct {
 	PressurePa   Percentiles `json:"pressure_pa"`
 	SafetyFactor Percentiles `json:"safety_factor"`
 	// Histogram counts the burst safety factors of the units under burst
-	// load, from 0 to their 99th percentile (at least 1, at most
-	// HistogramTop), for a chart; units with no load are counted in NoLoad.
+	// load over the range they span (1st to 99th percentile, from 0 when
+	// the lowest come near 1), for a chart; units with no load are counted
+	// in NoLoad, units outside the range in Below and Above.
 	Histogram Histogram `json:"histogram"`
 
 	// Sensitivity ranks the varying inputs by how strongly they move the
