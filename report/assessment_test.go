@@ -80,7 +80,7 @@ func TestAssessmentReadsBack(t *testing.T) {
 				"Fingerprint " + m.Fingerprint[:20],
 			}, c.want...)
 			for _, f := range a.Findings {
-				want = append(want, f.Title, squash(f.Message))
+				want = append(want, f.Title, squash(f.MessageIn(c.o.Units == UnitsUS)))
 			}
 			for _, s := range want {
 				if !strings.Contains(text, squash(s)) {

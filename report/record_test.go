@@ -11,7 +11,7 @@ import (
 // points at its steps.
 func TestCalculationRecordReadsBack(t *testing.T) {
 	a := assess(t, "typical_design.json")
-	pdf := render(t, loadMeta(t, "meta_a.json"), a, Options{Deterministic: true})
+	pdf := render(t, loadMeta(t, "meta_a.json"), a, Options{Deterministic: true, Appendix: true})
 	text := pdfText(t, writeTemp(t, "record.pdf", pdf))
 	flat := strings.Join(strings.Fields(text), " ")
 	if !strings.Contains(flat, "Appendix: Calculation record") {

@@ -1,0 +1,56 @@
+package report
+
+import (
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"ullage/fluids"
+	"ullage/hazards"
+	"ullage/hazards/designfile"
+)
+
+// exampleRecords assesses each revision of the bundled example.
+func exampleRecords(t *testing.T) (*designfile.File, []*hazards.Assessment) {
+	t.Helper()
+	f, err := designfile.Load(filepath.Join("..", "assets", "examples", "tidemark-lantern.json"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	lib, err := fluids.Builtin()
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []*hazards.Assessment
+	for _, r := range f.Revisions {
+		a, err := hazards.Assess(r.Design, lib)
+		if err != nil {
+			t.Fatalf("revision %s: %v", r.Label, err)
+		}
+		out = append(out, a)
+	}
+	return f, out
+}
+
+// TestExampleRecordLength checks that the default record of each revision
+// of the bundled example is at most 10 pages in either unit system, and
+// that the calculation record appears only when asked for.
+func TestExampleRecordLength(t *testing.T) {
+	f, as := exampleRecords(t)
+	for i, a := range as {
+		r := f.Revisions[i]
+		m := Meta{Product: f.Product.Name, PartNumber: f.Product.PartNumber, Revision: r.Label, Fingerprint: r.Fingerprint()}
+		for _, units := range []string{UnitsSI, UnitsUS} {
+			for _, annex := range []bool{false, true} {
+				path := writeTemp(t, "r.pdf", render(t, m, a, Options{Units: units, Appendix: annex}))
+				pages := readInfo(t, path).pages
+				if !annex && pages > 10 {
+					t.Errorf("revision %s, %s: %d pages without the annex, want at most 10", r.Label, units, pages)
+				}
+				if got := strings.Contains(pdfText(t, path), "Calculation record"); got != annex {
+					t.Errorf("revision %s, %s: annex requested %v, printed %v", r.Label, units, annex, got)
+				}
+			}
+		}
+	}
+}
