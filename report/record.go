@@ -42,13 +42,20 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 		{{text: "Method", dim: true}, {text: s.Method}},
 		{{text: "Equation", dim: true}, {text: s.Equation, mono: true}},
 	}
+	if len(s.Uses) > 0 {
+		rows = append(rows, []cell{{text: "Uses", dim: true}, {text: usesText(w.a, s.Uses)}})
+	}
 	for _, v := range s.Inputs {
 		rows = append(rows, []cell{{text: v.Symbol, dim: true}, {text: traceValue(v)}})
 	}
 	for _, v := range s.Intermediate {
 		rows = append(rows, []cell{{text: v.Symbol, dim: true, italic: true}, {text: traceValue(v), italic: true}})
 	}
-	rows = append(rows, []cell{{text: "Result", bold: true}, {text: traceValue(s.Result), bold: true}})
+	if f := s.Finding; f != nil {
+		rows = append(rows, []cell{{text: "Result", bold: true}, {text: findingResultText(f), bold: true}})
+	} else {
+		rows = append(rows, []cell{{text: "Result", bold: true}, {text: traceValue(s.Result), bold: true}})
+	}
 	if s.Root != nil {
 		r := s.Root
 		text := fmt.Sprintf("solved %s over [%s, %s] %s, tolerance %s, residual %s, %d evaluations (%s)",
@@ -62,6 +69,42 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 	d.subheadingSmall(title)
 	d.drawTable(table{cols: []col{{"", 0.22, 'L'}, {"", 0.78, 'L'}}, rows: rows, noHeader: true, size: 7.5, keep: 3})
 	d.space(1.5)
+}
+
+// usesText is "uses steps 13 and 14 (Vessel at the hottest temperature …;
+// Liquid-full temperature)": the steps whose results a step takes.
+func usesText(a *hazards.Assessment, steps []int) string {
+	parts := make([]string, len(steps))
+	var titles []string
+	for i, n := range steps {
+		parts[i] = strconv.Itoa(n)
+		if n >= 1 && n <= len(a.Trace) {
+			titles = append(titles, a.Trace[n-1].Title)
+		}
+	}
+	text := "steps " + strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
+	if len(parts) == 1 {
+		text = "step " + parts[0]
+	}
+	if len(titles) > 0 {
+		text += " (" + strings.Join(titles, "; ") + ")"
+	}
+	return text
+}
+
+// findingResultText is a finding's outcome in words: "FAIL: value 2.1,
+// limit at least 5 %, margin −58 % of the limit", in SI as computed.
+func findingResultText(f *hazards.FindingResult) string {
+	word := statusWord(f.Status)
+	if f.NotApplicable != "" {
+		return word + ": " + f.NotApplicable.Words()
+	}
+	unit := ""
+	if f.Unit != "" {
+		unit = " " + f.Unit
+	}
+	dir := map[hazards.Direction]string{hazards.AtLeast: "at least ", hazards.AtMost: "at most "}[f.Direction]
+	return fmt.Sprintf("%s: value %s%s, limit %s%s%s, margin %s %% of the limit", word, g6(f.Value), unit, dir, g6(f.Limit), unit, g6(100*f.Margin))
 }
 
 // traceValue prints a value with its unit and source.

@@ -30,7 +30,22 @@ func TestCalculationRecordReadsBack(t *testing.T) {
 			t.Errorf("step %d: equation %q missing", s.Number, eq)
 		}
 	}
-	for _, want := range []string{"Weibull, J. Appl. Mech. 18, 293 (1951)", "Brent", "Working: calculation record, steps"} {
+	// Links between steps and a finding's outcome read as words, never as
+	// a step key or a "margin" unit.
+	for _, bad := range []string{"[state_hot]", " margin [", "margin Result", "step 1 ["} {
+		if strings.Contains(flat, bad) {
+			t.Errorf("%q printed", bad)
+		}
+	}
+	for _, s := range a.Trace {
+		if len(s.Uses) > 1 && !strings.Contains(flat, usesText(a, s.Uses)[:20]) {
+			t.Errorf("step %d: %q missing", s.Number, usesText(a, s.Uses))
+		}
+		if s.Finding != nil && !strings.Contains(flat, squash(findingResultText(s.Finding))[:25]) {
+			t.Errorf("step %d: %q missing", s.Number, findingResultText(s.Finding))
+		}
+	}
+	for _, want := range []string{"Weibull, J. Appl. Mech. 18, 293 (1951)", "Brent", "Working: calculation record, steps", "Uses steps"} {
 		if !strings.Contains(flat, want) {
 			t.Errorf("%q missing", want)
 		}
