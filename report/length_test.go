@@ -5,6 +5,8 @@ import (
 	"strings"
 	"testing"
 
+	"golang.org/x/image/font/gofont/goregular"
+
 	"ullage/fluids"
 	"ullage/hazards"
 	"ullage/hazards/designfile"
@@ -52,5 +54,20 @@ func TestExampleRecordLength(t *testing.T) {
 				}
 			}
 		}
+	}
+}
+
+// TestHyphenReadsBack checks that a part number keeps its hyphen-minus
+// (U+002D) in the text of the record, drawn with the ordinary hyphen's
+// glyph: the rebuilt font maps U+002D to the soft hyphen's glyph.
+func TestHyphenReadsBack(t *testing.T) {
+	f, as := exampleRecords(t)
+	m := Meta{Product: f.Product.Name, PartNumber: "BC-TL-1", Revision: "A"}
+	text := pdfText(t, writeTemp(t, "h.pdf", render(t, m, as[0], Options{})))
+	if !strings.Contains(text, "BC-TL-1") {
+		t.Error("part number BC-TL-1 does not read back with U+002D")
+	}
+	if _, ok := rebuildHyphen(shortHyphen(goregular.TTF)); !ok {
+		t.Error("the regular font could not be rebuilt")
 	}
 }
