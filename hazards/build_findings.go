@@ -144,7 +144,8 @@ func (a *Assessment) findings() {
 	for _, x := range fs {
 		a.Verdict = Worse(a.Verdict, x.Status)
 	}
-	a.Cautions = append(append([]string(nil), StandardCautions...), fluidCautions(f)...)
+	a.Cautions = append(append([]string(nil), StandardCautions...), fluidCautions(f, false)...)
+	a.CautionsUS = append(append([]string(nil), StandardCautions...), fluidCautions(f, true)...)
 }
 
 // measure writes temperatures and pressures in one unit system, for the

@@ -71,7 +71,7 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 		inputSpec{"Time at the hottest", []string{"hours_at_hottest"}, num(func(d *hazards.Design) string { return plain(d.HoursAtHottest) + " h" })},
 		inputSpec{"Sudden temperature change", []string{"thermal_shock"}, num(func(d *hazards.Design) string { return shockInputText(d.ThermalShock, u) })},
 		inputSpec{"Residual stress at the seal", []string{"seal_stress"}, num(func(d *hazards.Design) string { return sealInputText(d.SealStress, u) })},
-		inputSpec{"Room", []string{"room.preset_id"}, num(func(d *hazards.Design) string { return firstNonBlank(d.Room.PresetID, "custom") })},
+		inputSpec{"Room", []string{"room.preset_id"}, num(func(d *hazards.Design) string { return presetName(d.Room.PresetID) })},
 		inputSpec{"Room volume", []string{"room.volume_m3"}, num(func(d *hazards.Design) string { return u.roomVolume(d.Room.VolumeM3) })},
 		inputSpec{"Air changes per hour", []string{"room.air_changes_per_hour"}, num(func(d *hazards.Design) string { return plain(d.Room.AirChangesPerHour) })},
 		inputSpec{"Mixing factor", []string{"room.mixing_factor"}, num(func(d *hazards.Design) string { return plain(d.Room.MixingFactor) })},

@@ -195,7 +195,11 @@ func (w *comparisonWriter) cautions() {
 		if s.Assessment == nil {
 			continue
 		}
-		for _, x := range s.Assessment.Cautions {
+		list := s.Assessment.Cautions
+		if w.u.us && len(s.Assessment.CautionsUS) > 0 {
+			list = s.Assessment.CautionsUS
+		}
+		for _, x := range list {
 			if !seen[x] {
 				seen[x] = true
 				cs = append(cs, x)

@@ -71,3 +71,24 @@ func TestHyphenReadsBack(t *testing.T) {
 		t.Error("the regular font could not be rebuilt")
 	}
 }
+
+// TestFlammabilityCautionOnce checks that the example's flammability
+// caution is printed once, with the flash point in the record's units:
+// ethanol's flash point in the library is 286 K (13 °C, 55 °F by
+// °F = °C × 9/5 + 32).
+func TestFlammabilityCautionOnce(t *testing.T) {
+	f, as := exampleRecords(t)
+	m := Meta{Product: f.Product.Name, Revision: "A"}
+	for _, c := range []struct{ units, want string }{{UnitsSI, "flash point 13 °C"}, {UnitsUS, "flash point 55 °F"}} {
+		text := squash(pdfText(t, writeTemp(t, "c.pdf", render(t, m, as[0], Options{Units: c.units}))))
+		if n := strings.Count(strings.ToLower(text), "flash point"); n != 2 { // the caution and the property table
+			t.Errorf("%s: %q appears %d times, want twice (once in the cautions, once in the fluid's properties)", c.units, "flash point", n)
+		}
+		if !strings.Contains(text, c.want) {
+			t.Errorf("%s: %q missing", c.units, c.want)
+		}
+		if strings.Contains(text, "13 C") {
+			t.Errorf("%s: flash point without the degree sign", c.units)
+		}
+	}
+}

@@ -34,7 +34,7 @@ func (w *assessmentWriter) calculationRecord() {
 
 func (w *assessmentWriter) traceStep(s hazards.Step) {
 	d := w.d
-	title := fmt.Sprintf("Step %d.  %s", s.Number, s.Title)
+	title := fmt.Sprintf("Step %d.  %s", s.Number, minusSigns(s.Title))
 	if s.Extrapolated {
 		title += "  ‡"
 	}
@@ -121,9 +121,29 @@ func traceValue(v hazards.Value) string {
 
 // g6 formats a number to six significant figures, enough to repeat a
 // step by hand.
+// Negative numbers carry the minus sign (U+2212), as everywhere else in
+// the record; powers of ten are written ×10ⁿ.
 func g6(x float64) string {
 	s := strconv.FormatFloat(x, 'g', 6, 64)
-	return strings.Replace(s, "e", "×10^", 1)
+	if strings.Contains(s, "e") {
+		return power(x, 6)
+	}
+	return strings.Replace(s, "-", "−", 1)
+}
+
+// minusSigns writes a hyphen-minus that stands before a digit at the start
+// of a word ("(-29.0 °C)") as the minus sign the rest of the record uses.
+func minusSigns(s string) string {
+	if !strings.Contains(s, "-") {
+		return s
+	}
+	r := []rune(s)
+	for i := range r {
+		if r[i] == '-' && i+1 < len(r) && r[i+1] >= '0' && r[i+1] <= '9' && (i == 0 || strings.ContainsRune(" ([=", r[i-1])) {
+			r[i] = '−'
+		}
+	}
+	return string(r)
 }
 
 // stepList is "steps 41, 22, 21" for a finding.
