@@ -1,6 +1,7 @@
 package report
 
 import (
+	"os/exec"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -74,8 +75,8 @@ func TestHyphenReadsBack(t *testing.T) {
 
 // TestFlammabilityCautionOnce checks that the example's flammability
 // caution is printed once, with the flash point in the record's units:
-// ethanol's flash point in the library is 286 K (13 °C, 55 °F by
-// °F = °C × 9/5 + 32).
+// ethanol's flash point in the library is 285.93 K, the NIOSH Pocket
+// Guide's 55 °F converted (12.8 °C, printed to the nearest degree).
 func TestFlammabilityCautionOnce(t *testing.T) {
 	f, as := exampleRecords(t)
 	m := Meta{Product: f.Product.Name, Revision: "A"}
@@ -90,5 +91,30 @@ func TestFlammabilityCautionOnce(t *testing.T) {
 		if strings.Contains(text, "13 C") {
 			t.Errorf("%s: flash point without the degree sign", c.units)
 		}
+	}
+}
+
+// TestDataBehindVerdict checks that page 1 lists the soft inputs taken
+// from the data's own source fields: revision B's borosilicate glass
+// states its strength and Weibull modulus as assumptions in its source.
+func TestDataBehindVerdict(t *testing.T) {
+	f, as := exampleRecords(t)
+	b := as[len(as)-1]
+	var assumed []string
+	for _, v := range softInputs(b) {
+		if v.kind == softAssumed {
+			assumed = append(assumed, v.name)
+		}
+	}
+	if !strings.Contains(strings.Join(assumed, ","), "characteristic strength") || !strings.Contains(strings.Join(assumed, ","), "Weibull modulus") {
+		t.Errorf("assumed inputs %q, want the glass strength and Weibull modulus", assumed)
+	}
+	path := writeTemp(t, "d.pdf", render(t, Meta{Product: f.Product.Name, Revision: "B"}, b, Options{}))
+	out, err := exec.Command(needTool(t, "pdftotext"), "-f", "1", "-l", "1", path, "-").Output()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if p1 := squash(string(out)); !strings.Contains(p1, "Data behind this verdict") || !strings.Contains(p1, "Stated assumptions") {
+		t.Error("page 1 has no data-behind-the-verdict box with the stated assumptions")
 	}
 }
