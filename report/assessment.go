@@ -73,6 +73,8 @@ type assessmentWriter struct {
 	tol *tolerance.Result
 	// appendix says whether to print the calculation record as an annex.
 	appendix bool
+	// refs numbers the sources the calculation record cites.
+	refs *references
 }
 
 func (w *assessmentWriter) write() {

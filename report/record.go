@@ -22,6 +22,7 @@ func (w *assessmentWriter) calculationRecord() {
 	d.newPage()
 	d.heading("Appendix: Calculation record")
 	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding in section 7 lists the steps behind it.")
+	w.refs = &references{index: map[string]int{}}
 	stage := ""
 	for _, s := range w.a.Trace {
 		if s.Stage != stage {
@@ -30,6 +31,39 @@ func (w *assessmentWriter) calculationRecord() {
 		}
 		w.traceStep(s)
 	}
+	d.subheading("References")
+	d.lead("Sources cited in the calculation record by number, each once.")
+	rows := make([][]cell, len(w.refs.list))
+	for i, r := range w.refs.list {
+		rows[i] = []cell{{text: fmt.Sprintf("[%d]", i+1), dim: true}, {text: r, italic: true}}
+	}
+	d.drawTable(table{cols: []col{{"", 0.08, 'L'}, {"", 0.92, 'L'}}, rows: rows, noHeader: true, size: 7.5})
+}
+
+// references numbers the sources of the calculation record in the order
+// they are first cited.
+type references struct {
+	list  []string
+	index map[string]int
+}
+
+// shortSource is the longest source printed in full at each use; a longer
+// one is cited by its number in the reference list.
+const shortSource = 40
+
+// cite returns "[n]" for a long source, numbering it on first use, or the
+// source itself when it is short ("design input", "definition").
+func (r *references) cite(source string) string {
+	if r == nil || len([]rune(source)) <= shortSource {
+		return source
+	}
+	n, ok := r.index[source]
+	if !ok {
+		r.list = append(r.list, source)
+		n = len(r.list)
+		r.index[source] = n
+	}
+	return fmt.Sprintf("[%d]", n)
 }
 
 func (w *assessmentWriter) traceStep(s hazards.Step) {
@@ -46,15 +80,15 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 		rows = append(rows, []cell{{text: "Uses", dim: true}, {text: usesText(w.a, s.Uses)}})
 	}
 	for _, v := range s.Inputs {
-		rows = append(rows, []cell{{text: v.Symbol, dim: true}, {text: traceValue(v)}})
+		rows = append(rows, []cell{{text: v.Symbol, dim: true}, {text: w.traceValue(v)}})
 	}
 	for _, v := range s.Intermediate {
-		rows = append(rows, []cell{{text: v.Symbol, dim: true, italic: true}, {text: traceValue(v), italic: true}})
+		rows = append(rows, []cell{{text: v.Symbol, dim: true, italic: true}, {text: w.traceValue(v), italic: true}})
 	}
 	if f := s.Finding; f != nil {
 		rows = append(rows, []cell{{text: "Result", bold: true}, {text: findingResultText(f), bold: true}})
 	} else {
-		rows = append(rows, []cell{{text: "Result", bold: true}, {text: traceValue(s.Result), bold: true}})
+		rows = append(rows, []cell{{text: "Result", bold: true}, {text: w.traceValue(s.Result), bold: true}})
 	}
 	if s.Root != nil {
 		r := s.Root
@@ -62,7 +96,7 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 			r.Equation, g6(r.Lo), g6(r.Hi), r.Unit, g6(r.Tolerance), g6(r.Residual), r.Evaluations, r.Bound)
 		rows = append(rows, []cell{{text: "Root", dim: true}, {text: text}})
 	}
-	rows = append(rows, []cell{{text: "Source", dim: true}, {text: s.Source, italic: true}})
+	rows = append(rows, []cell{{text: "Source", dim: true}, {text: w.refs.cite(s.Source), italic: true}})
 	if s.Note != "" {
 		rows = append(rows, []cell{{text: "Note", dim: true}, {text: s.Note, italic: true}})
 	}
@@ -107,14 +141,19 @@ func findingResultText(f *hazards.FindingResult) string {
 	return fmt.Sprintf("%s: value %s%s, limit %s%s%s, margin %s %% of the limit", word, g6(f.Value), unit, dir, g6(f.Limit), unit, g6(100*f.Margin))
 }
 
-// traceValue prints a value with its unit and source.
-func traceValue(v hazards.Value) string {
+// traceValue prints a value with its unit and source, a long source by
+// its number in the reference list.
+func (w *assessmentWriter) traceValue(v hazards.Value) string {
 	s := g6(v.Value)
 	if v.Unit != "" {
 		s += " " + v.Unit
 	}
 	if v.Source != "" {
-		s += "   [" + v.Source + "]"
+		if c := w.refs.cite(v.Source); c != v.Source {
+			s += "   " + c
+		} else {
+			s += "   (" + c + ")"
+		}
 	}
 	return s
 }
