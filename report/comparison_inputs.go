@@ -119,10 +119,10 @@ func covers(fields []string, changed string) bool {
 func (w *comparisonWriter) inputs() {
 	d, c := w.d, w.c
 	d.heading("Inputs side by side")
-	d.lead(fmt.Sprintf("%s between the revisions. A changed row starts with %s and is printed in bold.", countInputs(len(c.Inputs)), changedMark))
 	specs := inputSpecs(w.u, max(len(c.A.Design.Vessel.Parts), len(c.B.Design.Vessel.Parts)))
 	used := make([]bool, len(c.Inputs))
 	var rows [][]cell
+	marked := 0
 	for _, s := range specs {
 		va, vb := s.value(&c.A.Design, c.A.Assessment), s.value(&c.B.Design, c.B.Assessment)
 		changed := va != vb
@@ -134,16 +134,20 @@ func (w *comparisonWriter) inputs() {
 		name := "   " + s.label
 		if changed {
 			name = changedMark + " " + s.label
+			marked++
 		}
 		rows = append(rows, []cell{{text: name, bold: changed}, {text: va, bold: changed}, {text: vb, bold: changed}})
 	}
-	d.drawTable(table{cols: []col{{"Input", 1.6, 'L'}, {w.la, 2.2, 'L'}, {w.lb, 2.2, 'L'}}, rows: rows, zebra: true})
 	var other [][]cell
 	for i, ic := range c.Inputs {
 		if !used[i] {
 			other = append(other, []cell{{text: changedMark + " " + ic.Field, bold: true, mono: true}, {text: ic.Old}, {text: ic.New}})
 		}
 	}
+	// The count is the number of rows marked, here and in the table of
+	// other changed inputs below.
+	d.lead(fmt.Sprintf("%s between the revisions. A changed row starts with %s and is printed in bold.", countInputs(marked+len(other)), changedMark))
+	d.drawTable(table{cols: []col{{"Input", 1.6, 'L'}, {w.la, 2.2, 'L'}, {w.lb, 2.2, 'L'}}, rows: rows, zebra: true})
 	if len(other) > 0 {
 		d.subheading("Other changed inputs, as stored in the design files (SI)")
 		d.drawTable(table{cols: []col{{"Field", 1.8, 'L'}, {w.la, 2.1, 'L'}, {w.lb, 2.1, 'L'}}, rows: other, size: 7.5})

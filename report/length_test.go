@@ -1,6 +1,8 @@
 package report
 
 import (
+	"bytes"
+	"fmt"
 	"os/exec"
 	"path/filepath"
 	"strings"
@@ -10,6 +12,7 @@ import (
 
 	"ullage/fluids"
 	"ullage/hazards"
+	"ullage/hazards/compare"
 	"ullage/hazards/designfile"
 )
 
@@ -116,5 +119,27 @@ func TestDataBehindVerdict(t *testing.T) {
 	}
 	if p1 := squash(string(out)); !strings.Contains(p1, "Data behind this verdict") || !strings.Contains(p1, "Stated assumptions") {
 		t.Error("page 1 has no data-behind-the-verdict box with the stated assumptions")
+	}
+}
+
+// TestComparisonCountsMarkedRows checks that the comparison's count of
+// differing inputs equals the rows it marks, and that its findings table
+// cites the limits' sources.
+func TestComparisonCountsMarkedRows(t *testing.T) {
+	f, as := exampleRecords(t)
+	c := compare.Compare(compare.Side{Label: "A", Design: as[0].Design, Assessment: as[0]}, compare.Side{Label: "B", Design: as[1].Design, Assessment: as[1]})
+	var buf bytes.Buffer
+	if err := WriteComparison(&buf, Meta{Product: f.Product.Name, Revision: "A"}, Meta{Product: f.Product.Name, Revision: "B"}, c, Options{}); err != nil {
+		t.Fatal(err)
+	}
+	text := pdfText(t, writeTemp(t, "c.pdf", buf.Bytes()))
+	_, inputs, _ := strings.Cut(text, "Inputs side by side")
+	inputs, _, _ = strings.Cut(inputs, "Results side by side")
+	marked := strings.Count(inputs, changedMark) - 1 // the lead names the mark once
+	if want := fmt.Sprintf("%d inputs differ", marked); !strings.Contains(inputs, want) {
+		t.Errorf("%d rows marked, but the record does not say %q", marked, want)
+	}
+	if !strings.Contains(text, "Sources of the limits") {
+		t.Error("the findings table cites no sources of its limits")
 	}
 }
