@@ -198,5 +198,5 @@ func stepList(steps []int) string {
 	if len(steps) == 1 {
 		word = "step"
 	}
-	return "Working: calculation record, " + word + " " + strings.Join(parts, ", ")
+	return "Working: calculation record (annex, printed on request), " + word + " " + strings.Join(parts, ", ")
 }
