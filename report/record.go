@@ -21,7 +21,7 @@ func (w *assessmentWriter) calculationRecord() {
 	}
 	d.newPage()
 	d.heading("Appendix: Calculation record")
-	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding in section 7 lists the steps behind it.")
+	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding lists the steps behind it; long sources are cited by number and listed at the end of this annex.")
 	w.refs = &references{index: map[string]int{}}
 	stage := ""
 	for _, s := range w.a.Trace {
