@@ -18,8 +18,9 @@ var StandardCautions = []string{
 	"The release models assume the whole fill evaporates at once and spreads as the chosen room model describes; real rooms, spills onto fabric and heat sources can give higher local concentrations.",
 }
 
-// fluidCautions returns the warnings the fluid itself calls for.
-func fluidCautions(f *fluids.Fluid) []string {
+// fluidCautions returns the warnings the fluid itself calls for, with
+// temperatures in °C, or in °F when us is true.
+func fluidCautions(f *fluids.Fluid, us bool) []string {
 	var out []string
 	if f.PotentialCarcinogen.Value {
 		out = append(out, fmt.Sprintf("%s is listed as a potential occupational carcinogen by %s (%s). Keep exposure as low as feasible.", f.Name, f.PotentialCarcinogen.Body, f.PotentialCarcinogen.Source))
@@ -28,8 +29,10 @@ func fluidCautions(f *fluids.Fluid) []string {
 		msg := fmt.Sprintf("%s is flammable", f.Name)
 		if f.Flammability.LFLPercent != nil {
 			msg += fmt.Sprintf(" (LFL %.3g %% by volume", f.Flammability.LFLPercent.Value)
-			if f.Flammability.FlashPointK != nil {
-				msg += fmt.Sprintf(", flash point %.0f °C", units.KelvinToCelsius(f.Flammability.FlashPointK.Value))
+			if fp := f.Flammability.FlashPointK; fp != nil && us {
+				msg += fmt.Sprintf(", flash point %.0f °F", units.KelvinToFahrenheit(fp.Value))
+			} else if fp != nil {
+				msg += fmt.Sprintf(", flash point %.0f °C", units.KelvinToCelsius(fp.Value))
 			}
 			msg += ")"
 		}
@@ -41,7 +44,13 @@ func fluidCautions(f *fluids.Fluid) []string {
 			break
 		}
 	}
+	flashStated := f.Flammability.Flammable && f.Flammability.LFLPercent != nil && f.Flammability.FlashPointK != nil
 	for _, w := range f.Warnings {
+		// The caution above states the flash point from the typed value;
+		// a warning of the data that repeats it is left out.
+		if flashStated && strings.Contains(strings.ToLower(w), "flash point") && !strings.Contains(strings.ToLower(w), "autoignition") {
+			continue
+		}
 		if strings.TrimSpace(w) != "" {
 			out = append(out, w)
 		}

@@ -1,6 +1,7 @@
 package hazards
 
 import (
+	"encoding/json"
 	"fmt"
 	"math"
 	"sort"
@@ -62,6 +63,44 @@ type Step struct {
 	Root         *RootRecord `json:"root,omitempty"`
 	Note         string      `json:"note,omitempty"`
 	Extrapolated bool        `json:"extrapolated,omitempty"`
+	// Uses are the numbers of the earlier steps whose results this step
+	// takes, in the order it takes them.
+	Uses []int `json:"uses,omitempty"`
+	// Finding, set on the steps of the Findings stage only, is the
+	// finding's outcome; Result is then unused (zero).
+	Finding *FindingResult `json:"finding,omitempty"`
+}
+
+// FindingResult is the outcome a finding's step records: the criterion,
+// the status, the value and the limit in Unit, which way the limit holds,
+// the margin (a fraction of the limit, positive on the safe side) and the
+// limit's source. When NotApplicable is set, Value and Margin are not
+// results (the JSON gives null).
+type FindingResult struct {
+	Criterion     string    `json:"criterion"`
+	Status        Status    `json:"status"`
+	Value         float64   `json:"value"`
+	Limit         float64   `json:"limit"`
+	Unit          string    `json:"unit,omitempty"`
+	Direction     Direction `json:"direction"`
+	Margin        float64   `json:"margin"`
+	LimitSource   string    `json:"limit_source"`
+	NotApplicable Reason    `json:"not_applicable,omitempty"`
+}
+
+// MarshalJSON writes a finding's outcome with null value and margin when
+// they were not computed (NotApplicable set).
+func (r FindingResult) MarshalJSON() ([]byte, error) {
+	type plain FindingResult
+	out := struct {
+		plain
+		Value  *float64 `json:"value"`
+		Margin *float64 `json:"margin"`
+	}{plain: plain(r)}
+	if r.NotApplicable == "" {
+		out.Value, out.Margin = &r.Value, &r.Margin
+	}
+	return json.Marshal(out)
 }
 
 // tracer numbers steps as they are added and remembers which step gave
@@ -379,18 +418,13 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	// Findings.
 	for i := range a.Findings {
 		fd := &a.Findings[i]
-		deps := a.findingDependencies(fd.Criterion)
-		refs := []Value{}
-		for _, k := range deps {
-			if n := tr.by[k]; n > 0 {
-				refs = append(refs, Value{Symbol: "step", Value: float64(n), Source: k})
-			}
-		}
+		deps := stepNumbers(tr, a.findingDependencies(fd.Criterion))
 		n := tr.add("finding_"+fd.Criterion, Step{Stage: StageFindings, Title: fd.Title, Method: "comparison with the criterion",
-			Equation: "status from value against limit (caution band as documented)", Inputs: refs,
-			Intermediate: append([]Value{{Symbol: "value", Value: fd.Value, Unit: fd.Unit}, {Symbol: "limit", Value: fd.Limit, Unit: fd.Unit, Source: fd.Source}}, factValues(fd.Facts)...),
-			Result:       Value{Symbol: string(fd.Status), Value: fd.Margin, Unit: "margin"}, Source: fd.Source})
-		fd.Steps = append([]int{n}, stepNumbers(tr, deps)...)
+			Equation: "status from value against limit (caution band as documented)", Uses: deps,
+			Finding: &FindingResult{Criterion: fd.Criterion, Status: fd.Status, Value: fd.Value, Limit: fd.Limit, Unit: fd.Unit,
+				Direction: fd.Direction, Margin: fd.Margin, LimitSource: fd.Source, NotApplicable: fd.NotApplicable},
+			Intermediate: factValues(fd.Facts), Source: fd.Source})
+		fd.Steps = append([]int{n}, deps...)
 	}
 	a.amendSealSteps(tr)
 	a.Trace = tr.steps
@@ -486,14 +520,11 @@ func (a *Assessment) stateStep(title string, st VesselState, tag string, tr *tra
 	s := Step{Stage: StageVessel, Title: fmt.Sprintf("%s, %.2f K (%.1f °C): %s", title, st.TemperatureK, units.KelvinToCelsius(st.TemperatureK), st.Phase),
 		Extrapolated: st.Flags.Extrapolated(), Result: Value{Symbol: "P", Value: st.PressurePa, Unit: "Pa"}}
 	refs := []Value{{Symbol: "m", Value: d.FillMassKg, Unit: "kg"}, {Symbol: "V", Value: a.VolumeM3, Unit: "m³"}}
-	if n := tr.by["psat_"+tag]; n > 0 {
-		refs = append(refs, Value{Symbol: "P_sat", Value: tr.steps[n-1].Result.Value, Unit: "Pa", Source: fmt.Sprintf("step %d", n)})
-	}
-	if n := tr.by["rhol_"+tag]; n > 0 {
-		refs = append(refs, Value{Symbol: "ρl", Value: tr.steps[n-1].Result.Value, Unit: "kg/m³", Source: fmt.Sprintf("step %d", n)})
-	}
-	if n := tr.by["rhov_"+tag]; n > 0 {
-		refs = append(refs, Value{Symbol: "ρv", Value: tr.steps[n-1].Result.Value, Unit: "kg/m³", Source: fmt.Sprintf("step %d", n)})
+	for _, k := range []struct{ key, symbol, unit string }{{"psat_", "P_sat", "Pa"}, {"rhol_", "ρl", "kg/m³"}, {"rhov_", "ρv", "kg/m³"}} {
+		if n := tr.by[k.key+tag]; n > 0 {
+			refs = append(refs, Value{Symbol: k.symbol, Value: tr.steps[n-1].Result.Value, Unit: k.unit})
+			s.Uses = append(s.Uses, n)
+		}
 	}
 	refs = append(refs, Value{Symbol: "n_gas", Value: a.vessel.gasMoles, Unit: "mol"})
 	s.Inputs = refs

@@ -40,7 +40,7 @@ func WriteAssessment(w io.Writer, m Meta, a *hazards.Assessment, o Options) erro
 	info.fixedDate = o.creationDate(m)
 	c := newCanvas(o.Paper, info)
 	d := newDoc(c, newUnitSystem(o.Units), "Hazard assessment · "+recordName(m)+" · "+recordDate(m), footerText(m))
-	aw := &assessmentWriter{d: d, m: m, a: a, u: d.u, tol: o.Tolerance}
+	aw := &assessmentWriter{d: d, m: m, a: a, u: d.u, tol: o.Tolerance, appendix: o.Appendix}
 	aw.write()
 	if err := c.err(); err != nil {
 		return fmt.Errorf("report: drawing the assessment: %w", err)
@@ -71,12 +71,17 @@ type assessmentWriter struct {
 	u unitSystem
 	// tol is the tolerance study to print, or nil.
 	tol *tolerance.Result
+	// appendix says whether to print the calculation record as an annex.
+	appendix bool
+	// refs numbers the sources the calculation record cites.
+	refs *references
 }
 
 func (w *assessmentWriter) write() {
 	w.d.newPage()
 	w.titleBlock()
 	w.summary()
+	w.d.signOff(w.m.Reviewer)
 	w.inputs()
 	w.vesselState()
 	w.glass()
@@ -88,8 +93,9 @@ func (w *assessmentWriter) write() {
 	w.toleranceStudy()
 	w.cautions()
 	w.provenance()
-	w.d.signOff(w.m.Reviewer)
-	w.calculationRecord()
+	if w.appendix {
+		w.calculationRecord()
+	}
 	w.d.finishPages()
 }
 

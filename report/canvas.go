@@ -90,10 +90,10 @@ func newCanvas(paper string, info docInfo) *canvas {
 	// The library writes into the font bytes while it subsets them, so
 	// each document gets its own copy: the shared font data stay intact
 	// and every document comes out the same.
-	p.AddUTF8FontFromBytes("sans", "", bytes.Clone(goregular.TTF))
-	p.AddUTF8FontFromBytes("sans", "B", bytes.Clone(gobold.TTF))
-	p.AddUTF8FontFromBytes("sans", "I", bytes.Clone(goitalic.TTF))
-	p.AddUTF8FontFromBytes("mono", "", bytes.Clone(gomono.TTF))
+	p.AddUTF8FontFromBytes("sans", "", bytes.Clone(shortHyphen(goregular.TTF)))
+	p.AddUTF8FontFromBytes("sans", "B", bytes.Clone(shortHyphen(gobold.TTF)))
+	p.AddUTF8FontFromBytes("sans", "I", bytes.Clone(shortHyphen(goitalic.TTF)))
+	p.AddUTF8FontFromBytes("mono", "", bytes.Clone(shortHyphen(gomono.TTF)))
 	p.SetTitle(printable(info.title), true)
 	p.SetAuthor(printable(info.author), true)
 	p.SetSubject(printable(info.subject), true)

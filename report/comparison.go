@@ -120,9 +120,10 @@ func (w *comparisonWriter) write() {
 	w.inputs()
 	w.results()
 	w.findings()
+	// The sign-off follows the findings it signs, never alone on a page.
+	d.signOff(firstNonBlank(w.mb.Reviewer, w.ma.Reviewer))
 	w.chart()
 	w.cautions()
-	d.signOff(firstNonBlank(w.mb.Reviewer, w.ma.Reviewer))
 	d.finishPages()
 }
 

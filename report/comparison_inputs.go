@@ -71,7 +71,7 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 		inputSpec{"Time at the hottest", []string{"hours_at_hottest"}, num(func(d *hazards.Design) string { return plain(d.HoursAtHottest) + " h" })},
 		inputSpec{"Sudden temperature change", []string{"thermal_shock"}, num(func(d *hazards.Design) string { return shockInputText(d.ThermalShock, u) })},
 		inputSpec{"Residual stress at the seal", []string{"seal_stress"}, num(func(d *hazards.Design) string { return sealInputText(d.SealStress, u) })},
-		inputSpec{"Room", []string{"room.preset_id"}, num(func(d *hazards.Design) string { return firstNonBlank(d.Room.PresetID, "custom") })},
+		inputSpec{"Room", []string{"room.preset_id"}, num(func(d *hazards.Design) string { return presetName(d.Room.PresetID) })},
 		inputSpec{"Room volume", []string{"room.volume_m3"}, num(func(d *hazards.Design) string { return u.roomVolume(d.Room.VolumeM3) })},
 		inputSpec{"Air changes per hour", []string{"room.air_changes_per_hour"}, num(func(d *hazards.Design) string { return plain(d.Room.AirChangesPerHour) })},
 		inputSpec{"Mixing factor", []string{"room.mixing_factor"}, num(func(d *hazards.Design) string { return plain(d.Room.MixingFactor) })},
@@ -126,10 +126,10 @@ func covers(fields []string, changed string) bool {
 func (w *comparisonWriter) inputs() {
 	d, c := w.d, w.c
 	d.heading("Inputs side by side")
-	d.lead(fmt.Sprintf("%s between the revisions. A changed row starts with %s and is printed in bold.", countInputs(len(c.Inputs)), changedMark))
 	specs := inputSpecs(w.u, max(len(c.A.Design.Vessel.Parts), len(c.B.Design.Vessel.Parts)))
 	used := make([]bool, len(c.Inputs))
 	var rows [][]cell
+	marked := 0
 	for _, s := range specs {
 		va, vb := s.value(&c.A.Design, c.A.Assessment), s.value(&c.B.Design, c.B.Assessment)
 		changed := va != vb
@@ -141,16 +141,20 @@ func (w *comparisonWriter) inputs() {
 		name := "   " + s.label
 		if changed {
 			name = changedMark + " " + s.label
+			marked++
 		}
 		rows = append(rows, []cell{{text: name, bold: changed}, {text: va, bold: changed}, {text: vb, bold: changed}})
 	}
-	d.drawTable(table{cols: []col{{"Input", 1.6, 'L'}, {w.la, 2.2, 'L'}, {w.lb, 2.2, 'L'}}, rows: rows, zebra: true})
 	var other [][]cell
 	for i, ic := range c.Inputs {
 		if !used[i] {
 			other = append(other, []cell{{text: changedMark + " " + ic.Field, bold: true, mono: true}, {text: ic.Old}, {text: ic.New}})
 		}
 	}
+	// The count is the number of rows marked, here and in the table of
+	// other changed inputs below.
+	d.lead(fmt.Sprintf("%s between the revisions. A changed row starts with %s and is printed in bold.", countInputs(marked+len(other)), changedMark))
+	d.drawTable(table{cols: []col{{"Input", 1.6, 'L'}, {w.la, 2.2, 'L'}, {w.lb, 2.2, 'L'}}, rows: rows, zebra: true})
 	if len(other) > 0 {
 		d.subheading("Other changed inputs, as stored in the design files (SI)")
 		d.drawTable(table{cols: []col{{"Field", 1.8, 'L'}, {w.la, 2.1, 'L'}, {w.lb, 2.1, 'L'}}, rows: other, size: 7.5})

@@ -1,6 +1,9 @@
 package report
 
 import (
+	"fmt"
+	"strings"
+
 	"ullage/hazards"
 	"ullage/hazards/compare"
 	"ullage/report/display"
@@ -74,8 +77,35 @@ func (w *comparisonWriter) findings() {
 		return cell{status: f.Status}, cell{text: display.FindingValue(*f)}
 	}
 	var rows [][]cell
+	refs := &references{index: map[string]int{}}
+	limitOf := func(f *hazards.Finding, s compare.Side) (string, string) {
+		if f == nil || s.Assessment == nil {
+			return "", ""
+		}
+		return display.FindingLimit(*f), f.Source
+	}
 	for _, id := range order {
 		p := byID[id]
+		la, srcA := limitOf(p.a, c.A)
+		lb, srcB := limitOf(p.b, c.B)
+		limit := firstNonBlank(lb, la)
+		if la != "" && lb != "" && la != lb {
+			limit = la + " / " + lb
+		}
+		var cites []string
+		for _, src := range []string{srcA, srcB} {
+			if strings.TrimSpace(src) != "" {
+				n := refs.cite(src)
+				if !strings.HasPrefix(n, "[") { // a short source is numbered too
+					refs.list = append(refs.list, src)
+					refs.index[src] = len(refs.list)
+					n = fmt.Sprintf("[%d]", len(refs.list))
+				}
+				if len(cites) == 0 || cites[0] != n {
+					cites = append(cites, n)
+				}
+			}
+		}
 		changed := p.a == nil || p.b == nil || p.a.Status != p.b.Status
 		name := "   " + p.title
 		if changed {
@@ -83,11 +113,17 @@ func (w *comparisonWriter) findings() {
 		}
 		sa, va := side(p.a, c.A)
 		sb, vb := side(p.b, c.B)
-		rows = append(rows, []cell{{text: name, bold: changed}, sa, va, sb, vb})
+		rows = append(rows, []cell{{text: name, bold: changed}, sa, va, sb, vb, {text: limit}, {text: strings.Join(cites, " "), dim: true}})
 	}
 	d.pendingLegend()
-	d.drawTable(table{cols: []col{{"Criterion", 2.9, 'L'}, {w.la, 1.15, 'L'}, {"", 1, 'R'}, {w.lb, 1.15, 'L'}, {"", 1, 'R'}},
+	d.drawTable(table{cols: []col{{"Criterion", 2.5, 'L'}, {w.la, 1.05, 'L'}, {"", 0.95, 'R'}, {w.lb, 1.05, 'L'}, {"", 0.95, 'R'}, {"Limit", 0.9, 'R'}, {"Source", 0.6, 'L'}},
 		rows: rows, zebra: true, size: 8})
+	src := make([][]cell, len(refs.list))
+	for i, r := range refs.list {
+		src[i] = []cell{{text: fmt.Sprintf("[%d]", i+1), dim: true}, {text: r, italic: true}}
+	}
+	d.subheading("Sources of the limits")
+	d.drawTable(table{cols: []col{{"", 0.07, 'L'}, {"", 0.93, 'L'}}, rows: src, noHeader: true, size: 7})
 }
 
 // cautions prints the cautions of both sides, each once.
@@ -100,7 +136,11 @@ func (w *comparisonWriter) cautions() {
 		if s.Assessment == nil {
 			continue
 		}
-		for _, x := range s.Assessment.Cautions {
+		list := s.Assessment.Cautions
+		if w.u.us && len(s.Assessment.CautionsUS) > 0 {
+			list = s.Assessment.CautionsUS
+		}
+		for _, x := range list {
 			if !seen[x] {
 				seen[x] = true
 				cs = append(cs, x)

@@ -48,7 +48,11 @@ func (d *doc) findingBlock(s hazards.Status, title, numbers, message, source str
 func (w *assessmentWriter) cautions() {
 	d := w.d
 	d.heading("Cautions")
-	d.box("Read before relying on this record", cautionParas(w.a.Cautions))
+	cs := w.a.Cautions
+	if w.u.us && len(w.a.CautionsUS) > 0 {
+		cs = w.a.CautionsUS
+	}
+	d.box("Read before relying on this record", cautionParas(cs))
 }
 
 // cautionParas lists the cautions as bullets after a sentence deferring

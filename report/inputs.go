@@ -97,12 +97,21 @@ func partsTable(parts []hazards.Part, u unitSystem) table {
 	}, rows: rows, zebra: true}
 }
 
+// presetName is the name of a room preset ("custom" for none, the id
+// itself when the preset is unknown).
+func presetName(id string) string {
+	if id == "" {
+		return "custom"
+	}
+	if p, err := hazards.LookupRoomPreset(id); err == nil && p.Name != "" {
+		return p.Name
+	}
+	return id
+}
+
 // roomPairs lists the release scenario.
 func roomPairs(r hazards.Room, u unitSystem) [][2]string {
-	preset := r.PresetID
-	if preset == "" {
-		preset = "custom"
-	}
+	preset := presetName(r.PresetID)
 	return [][2]string{
 		{"Room", preset},
 		{"Room volume", u.roomVolume(r.VolumeM3)},

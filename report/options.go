@@ -46,6 +46,10 @@ type Options struct {
 	// Tolerance, when not nil, adds the sampled tolerance study of the
 	// same design as a section of the assessment record.
 	Tolerance *tolerance.Result
+	// Appendix, when true, adds the calculation record (every step of the
+	// engine's trace) to the assessment record as an annex; without it the
+	// record names the annex and leaves it out.
+	Appendix bool
 }
 
 // FixedDate is the creation date written in Deterministic mode when the

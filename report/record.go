@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"strconv"
 	"strings"
+	"ullage/report/display"
 
 	"ullage/hazards"
 )
@@ -21,7 +22,8 @@ func (w *assessmentWriter) calculationRecord() {
 	}
 	d.newPage()
 	d.heading("Appendix: Calculation record")
-	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding in section 7 lists the steps behind it.")
+	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding lists the steps behind it; long sources are cited by number and listed at the end of this annex.")
+	w.refs = &references{index: map[string]int{}}
 	stage := ""
 	for _, s := range w.a.Trace {
 		if s.Stage != stage {
@@ -30,11 +32,44 @@ func (w *assessmentWriter) calculationRecord() {
 		}
 		w.traceStep(s)
 	}
+	d.subheading("References")
+	d.lead("Sources cited in the calculation record by number, each once.")
+	rows := make([][]cell, len(w.refs.list))
+	for i, r := range w.refs.list {
+		rows[i] = []cell{{text: fmt.Sprintf("[%d]", i+1), dim: true}, {text: r, italic: true}}
+	}
+	d.drawTable(table{cols: []col{{"", 0.08, 'L'}, {"", 0.92, 'L'}}, rows: rows, noHeader: true, size: 7.5})
+}
+
+// references numbers the sources of the calculation record in the order
+// they are first cited.
+type references struct {
+	list  []string
+	index map[string]int
+}
+
+// shortSource is the longest source printed in full at each use; a longer
+// one is cited by its number in the reference list.
+const shortSource = 40
+
+// cite returns "[n]" for a long source, numbering it on first use, or the
+// source itself when it is short ("design input", "definition").
+func (r *references) cite(source string) string {
+	if r == nil || len([]rune(source)) <= shortSource {
+		return source
+	}
+	n, ok := r.index[source]
+	if !ok {
+		r.list = append(r.list, source)
+		n = len(r.list)
+		r.index[source] = n
+	}
+	return fmt.Sprintf("[%d]", n)
 }
 
 func (w *assessmentWriter) traceStep(s hazards.Step) {
 	d := w.d
-	title := fmt.Sprintf("Step %d.  %s", s.Number, s.Title)
+	title := fmt.Sprintf("Step %d.  %s", s.Number, minusSigns(s.Title))
 	if s.Extrapolated {
 		title += "  ‡"
 	}
@@ -42,20 +77,27 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 		{{text: "Method", dim: true}, {text: s.Method}},
 		{{text: "Equation", dim: true}, {text: s.Equation, mono: true}},
 	}
+	if len(s.Uses) > 0 {
+		rows = append(rows, []cell{{text: "Uses", dim: true}, {text: usesText(w.a, s.Uses)}})
+	}
 	for _, v := range s.Inputs {
-		rows = append(rows, []cell{{text: v.Symbol, dim: true}, {text: traceValue(v)}})
+		rows = append(rows, []cell{{text: v.Symbol, dim: true}, {text: w.traceValue(v)}})
 	}
 	for _, v := range s.Intermediate {
-		rows = append(rows, []cell{{text: v.Symbol, dim: true, italic: true}, {text: traceValue(v), italic: true}})
+		rows = append(rows, []cell{{text: v.Symbol, dim: true, italic: true}, {text: w.traceValue(v), italic: true}})
 	}
-	rows = append(rows, []cell{{text: "Result", bold: true}, {text: traceValue(s.Result), bold: true}})
+	if f := s.Finding; f != nil {
+		rows = append(rows, []cell{{text: "Result", bold: true}, {text: findingResultText(f), bold: true}})
+	} else {
+		rows = append(rows, []cell{{text: "Result", bold: true}, {text: w.traceValue(s.Result), bold: true}})
+	}
 	if s.Root != nil {
 		r := s.Root
 		text := fmt.Sprintf("solved %s over [%s, %s] %s, tolerance %s, residual %s, %d evaluations (%s)",
 			r.Equation, g6(r.Lo), g6(r.Hi), r.Unit, g6(r.Tolerance), g6(r.Residual), r.Evaluations, r.Bound)
 		rows = append(rows, []cell{{text: "Root", dim: true}, {text: text}})
 	}
-	rows = append(rows, []cell{{text: "Source", dim: true}, {text: s.Source, italic: true}})
+	rows = append(rows, []cell{{text: "Source", dim: true}, {text: w.refs.cite(s.Source), italic: true}})
 	if s.Note != "" {
 		rows = append(rows, []cell{{text: "Note", dim: true}, {text: s.Note, italic: true}})
 	}
@@ -64,23 +106,84 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 	d.space(1.5)
 }
 
-// traceValue prints a value with its unit and source.
-func traceValue(v hazards.Value) string {
+// usesText is "uses steps 13 and 14 (Vessel at the hottest temperature …;
+// Liquid-full temperature)": the steps whose results a step takes.
+func usesText(a *hazards.Assessment, steps []int) string {
+	parts := make([]string, len(steps))
+	var titles []string
+	for i, n := range steps {
+		parts[i] = strconv.Itoa(n)
+		if n >= 1 && n <= len(a.Trace) {
+			titles = append(titles, a.Trace[n-1].Title)
+		}
+	}
+	text := "steps " + strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
+	if len(parts) == 1 {
+		text = "step " + parts[0]
+	}
+	if len(titles) > 0 {
+		text += " (" + strings.Join(titles, "; ") + ")"
+	}
+	return text
+}
+
+// findingResultText is a finding's outcome in words: "FAIL: value 2.1,
+// limit at least 5 %, margin −58 % of the limit", in SI as computed.
+func findingResultText(f *hazards.FindingResult) string {
+	word := statusWord(f.Status)
+	if f.NotApplicable != "" {
+		return word + ": " + display.ReasonWords(f.NotApplicable)
+	}
+	unit := ""
+	if f.Unit != "" {
+		unit = " " + f.Unit
+	}
+	dir := map[hazards.Direction]string{hazards.AtLeast: "at least ", hazards.AtMost: "at most "}[f.Direction]
+	return fmt.Sprintf("%s: value %s%s, limit %s%s%s, margin %s %% of the limit", word, g6(f.Value), unit, dir, g6(f.Limit), unit, g6(100*f.Margin))
+}
+
+// traceValue prints a value with its unit and source, a long source by
+// its number in the reference list.
+func (w *assessmentWriter) traceValue(v hazards.Value) string {
 	s := g6(v.Value)
 	if v.Unit != "" {
 		s += " " + v.Unit
 	}
 	if v.Source != "" {
-		s += "   [" + v.Source + "]"
+		if c := w.refs.cite(v.Source); c != v.Source {
+			s += "   " + c
+		} else {
+			s += "   (" + c + ")"
+		}
 	}
 	return s
 }
 
 // g6 formats a number to six significant figures, enough to repeat a
 // step by hand.
+// Negative numbers carry the minus sign (U+2212), as everywhere else in
+// the record; powers of ten are written ×10ⁿ.
 func g6(x float64) string {
 	s := strconv.FormatFloat(x, 'g', 6, 64)
-	return strings.Replace(s, "e", "×10^", 1)
+	if strings.Contains(s, "e") {
+		return power(x, 6)
+	}
+	return strings.Replace(s, "-", "−", 1)
+}
+
+// minusSigns writes a hyphen-minus that stands before a digit at the start
+// of a word ("(-29.0 °C)") as the minus sign the rest of the record uses.
+func minusSigns(s string) string {
+	if !strings.Contains(s, "-") {
+		return s
+	}
+	r := []rune(s)
+	for i := range r {
+		if r[i] == '-' && i+1 < len(r) && r[i+1] >= '0' && r[i+1] <= '9' && (i == 0 || strings.ContainsRune(" ([=", r[i-1])) {
+			r[i] = '−'
+		}
+	}
+	return string(r)
 }
 
 // stepList is "steps 41, 22, 21" for a finding.
@@ -96,5 +199,5 @@ func stepList(steps []int) string {
 	if len(steps) == 1 {
 		word = "step"
 	}
-	return "Working: calculation record, " + word + " " + strings.Join(parts, ", ")
+	return "Working: calculation record (annex, printed on request), " + word + " " + strings.Join(parts, ", ")
 }

@@ -60,6 +60,7 @@ func (w *assessmentWriter) summary() {
 	}
 	tally := fmt.Sprintf("%d pass · %d caution · %d fail, of %d criteria", counts[hazards.StatusPass], counts[hazards.StatusCaution], counts[hazards.StatusFail], len(a.Findings))
 	d.verdictBox("Overall verdict", a.Verdict, tally, expl)
+	w.dataBehind()
 	d.subheading("Summary of findings")
 	rows := make([][]cell, 0, len(a.Findings))
 	for _, f := range a.Findings {

@@ -40,7 +40,7 @@ type checked struct {
 var checkValueFlags = []string{"rev", "pdf", "units", "paper", "reviewer", "fluids", "samples", "seed", "hot-spread-k"}
 
 func runCheck(args []string, stdout, stderr io.Writer) int {
-	o, err := parseArgs(args, []string{"json", "trace", replaceFlag}, checkValueFlags)
+	o, err := parseArgs(args, []string{"json", "trace", "appendix", replaceFlag}, checkValueFlags)
 	if err != nil {
 		return usageError(stderr, "check", err)
 	}
@@ -107,6 +107,7 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		c := results[0]
 		var buf bytes.Buffer
 		ro.Tolerance = c.tolerance
+		ro.Appendix = o.bools["appendix"]
 		if err := report.WriteAssessment(&buf, recordMeta(c.file, c.revision, o), c.assessment, ro); err != nil {
 			fmt.Fprintf(stderr, "ullage check: writing the record: %v\n", err)
 			return ExitUsage

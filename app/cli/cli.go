@@ -73,6 +73,7 @@ Usage:
       --paper a4|letter paper size of the PDF (default a4)
       --reviewer NAME   reviewer printed on the PDF
       --trace           add the calculation record to the --json output
+      --appendix        add the calculation record to the --pdf record as an annex
       --samples N       add a tolerance study of N sampled units
       --seed S          seed of the study (default 1; same seed, same answer)
       --hot-spread-k K  ± spread of the hottest temperature in the study

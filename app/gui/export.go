@@ -7,6 +7,10 @@ import (
 	"io"
 	"strings"
 
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/dialog"
+	"fyne.io/fyne/v2/widget"
+
 	"ullage/app/buildinfo"
 	"ullage/fluids"
 	"ullage/hazards/designfile"
@@ -58,12 +62,17 @@ func (s *session) revisionMeta(label string) report.Meta {
 // writeAssessmentPDF writes the assessment record of the working copy,
 // with the tolerance study when one was run on the working copy as it is
 // now; both the Export menu and --smoke come through here.
-func (s *session) writeAssessmentPDF(w io.Writer) error {
+func (s *session) writeAssessmentPDF(w io.Writer) error { return s.writeAssessment(w, false) }
+
+// writeAssessment writes the assessment record, with the calculation
+// record as an annex when appendix is true.
+func (s *session) writeAssessment(w io.Writer, appendix bool) error {
 	if s.last.assessment == nil || s.stale() {
 		return errNoResults
 	}
 	opts := s.settings.reportOptions()
 	opts.Tolerance = s.currentStudy()
+	opts.Appendix = appendix
 	var buf bytes.Buffer
 	if err := report.WriteAssessment(&buf, s.recordMeta(), s.last.assessment, opts); err != nil {
 		return fmt.Errorf("the record could not be written: %w", err)
@@ -94,7 +103,22 @@ func (s *session) exportAssessmentDialog() {
 		s.showError(errNoResults)
 		return
 	}
-	s.exportDialog(s.assessmentPDFName(), s.writeAssessmentPDF)
+	name := s.assessmentPDFName()
+	// Asked first, in a dialog of its own, so that the choice of file
+	// stays in the one dialog every record export uses.
+	annex := widget.NewCheck("Include the calculation record as an annex (every step, equation and source; about 20 more pages)", nil)
+	body := container.NewVBox(widget.NewLabel("The record holds the inputs, results, findings, cautions, sources and the sign-off block."), annex)
+	dialog.ShowCustomConfirm("Export assessment PDF", "Choose where to write it…", "Cancel", body, func(ok bool) {
+		if ok {
+			s.exportAssessmentWhere(name, annex.Checked)
+		}
+	}, s.win)
+}
+
+// exportAssessmentWhere asks where to write the assessment record, with
+// the calculation record as an annex when appendix is true.
+func (s *session) exportAssessmentWhere(name string, appendix bool) {
+	s.exportDialog(name, func(w io.Writer) error { return s.writeAssessment(w, appendix) })
 }
 
 // assessmentPDFName is the suggested file name of the assessment

@@ -55,6 +55,21 @@ func TestExportWritesAReadablePDF(t *testing.T) {
 	}
 }
 
+// TestExportAnnexOnRequest checks that the calculation record is printed
+// only when the export asks for it.
+func TestExportAnnexOnRequest(t *testing.T) {
+	h := newHarness(t)
+	for _, annex := range []bool{false, true} {
+		var buf bytes.Buffer
+		if err := h.s.writeAssessment(&buf, annex); err != nil {
+			t.Fatal(err)
+		}
+		if got := strings.Contains(pdfText(t, buf.Bytes()), "Calculation record"); got != annex {
+			t.Errorf("annex requested %v, calculation record printed %v", annex, got)
+		}
+	}
+}
+
 func TestExportComparisonPDF(t *testing.T) {
 	h := newHarness(t)
 	var buf bytes.Buffer

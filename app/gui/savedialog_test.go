@@ -103,7 +103,7 @@ func TestExportNeverWritesOverTheDesignFile(t *testing.T) {
 
 	h.idle()
 	before := h.s.lastWhere
-	h.s.exportAssessmentDialog()
+	h.s.exportAssessmentWhere(h.s.assessmentPDFName(), false)
 	w := h.s.lastWhere
 	if w == before {
 		t.Fatalf("the export dialog did not open: stale %v, results %v", h.s.stale(), h.s.last.assessment != nil)

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"strconv"
 	"strings"
+	"ullage/report/display"
 
 	"ullage/hazards"
 )
@@ -68,13 +69,13 @@ func stepLines(a *hazards.Assessment, s hazards.Step) []stepLine {
 	if s.Equation != "" {
 		add(labelEquation, s.Equation, "", lineEquation)
 	}
-	given, uses := labelGiven, labelUses
+	uses := labelUses
+	for _, n := range s.Uses {
+		add(uses, stepReference(a, n), "", linePlain)
+		uses = ""
+	}
+	given := labelGiven
 	for _, v := range s.Inputs {
-		if v.Symbol == "step" {
-			add(uses, stepReference(a, int(v.Value), v.Source), "", linePlain)
-			uses = ""
-			continue
-		}
 		add(given, valueText(v), v.Source, lineValue)
 		given = ""
 	}
@@ -98,11 +99,11 @@ func stepLines(a *hazards.Assessment, s hazards.Step) []stepLine {
 
 // stepReference names another step of the record: "step 33, Burst
 // safety factor".
-func stepReference(a *hazards.Assessment, n int, key string) string {
+func stepReference(a *hazards.Assessment, n int) string {
 	if n >= 1 && n <= len(a.Trace) {
 		return fmt.Sprintf("step %d, %s", n, a.Trace[n-1].Title)
 	}
-	return fmt.Sprintf("step %d (%s)", n, strings.ReplaceAll(key, "_", " "))
+	return fmt.Sprintf("step %d", n)
 }
 
 // valueText is "symbol = value unit", the value to six significant
@@ -118,13 +119,22 @@ func valueText(v hazards.Value) string {
 	return v.Symbol + " = " + s
 }
 
-// stepResultText is a step's result; a finding's result is its status and
-// its margin.
+// stepResultText is a step's result; a finding's result is its status,
+// its value and its limit: "FAIL: value 2.1 %, limit at least 5 %".
 func stepResultText(s hazards.Step) string {
-	if s.Stage == hazards.StageFindings {
-		return fmt.Sprintf("%s, margin %s", statusWord(hazards.Status(s.Result.Symbol)), six(s.Result.Value))
+	f := s.Finding
+	if f == nil {
+		return valueText(s.Result)
 	}
-	return valueText(s.Result)
+	if f.NotApplicable != "" {
+		return statusWord(f.Status) + ": " + display.ReasonWords(f.NotApplicable)
+	}
+	unit := ""
+	if f.Unit != "" {
+		unit = " " + f.Unit
+	}
+	dir := map[hazards.Direction]string{hazards.AtLeast: "at least ", hazards.AtMost: "at most "}[f.Direction]
+	return fmt.Sprintf("%s: value %s%s, limit %s%s%s", statusWord(f.Status), six(f.Value), unit, dir, six(f.Limit), unit)
 }
 
 // rootText says how a root was found.

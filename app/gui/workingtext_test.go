@@ -25,9 +25,9 @@ func sampleRecord() *hazards.Assessment {
 			Root:     &hazards.RootRecord{Equation: "P(T) − P_allow = 0", Lo: 244.15, Hi: 470.165, Unit: "K", Tolerance: 1e-4, Residual: -2e-6, Evaluations: 8},
 			Source:   "Brent (1973)", Extrapolated: true},
 		{Number: 3, Stage: hazards.StageFindings, Title: "Burst safety factor", Method: "comparison with the criterion",
-			Inputs: []hazards.Value{{Symbol: "step", Value: 1, Source: "stress_0"}},
-			Result: hazards.Value{Symbol: string(hazards.StatusPass), Value: 0.25, Unit: "margin"},
-			Note:   "Passes with room to spare."},
+			Uses:    []int{1},
+			Finding: &hazards.FindingResult{Status: hazards.StatusPass, Value: 2.5, Limit: 2, Direction: hazards.AtLeast, Margin: 0.25},
+			Note:    "Passes with room to spare."},
 	}}
 }
 
@@ -46,7 +46,7 @@ func TestWorkingTextLaysOutEachStep(t *testing.T) {
 				"Steps 3 and 1 of the calculation record (3 steps)",
 				"Step 3. Burst safety factor\n",
 				"  Uses:          step 1, Hoop stress, bulb\n",
-				"  Result:        PASS, margin 0.25\n",
+				"  Result:        PASS: value 2.5, limit at least 2\n",
 				"  Note:          Passes with room to spare.\n",
 				"Step 1. Hoop stress, bulb\n",
 				"  Equation:      σ = ΔP · r_m /(2t)\n",
