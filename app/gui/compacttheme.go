@@ -35,3 +35,19 @@ func (t compactTheme) Size(n fyne.ThemeSizeName) float32 {
 	}
 	return t.current().Size(n)
 }
+
+// denseTheme is compactTheme with the least padding that still keeps rows
+// apart, for the findings table, whose every row must stay in view on a
+// 1280×800 screen.
+type denseTheme struct{ compactTheme }
+
+// Size is compactTheme's size with tighter padding still.
+func (t denseTheme) Size(n fyne.ThemeSizeName) float32 {
+	switch n {
+	case theme.SizeNameInnerPadding:
+		return 2
+	case theme.SizeNamePadding:
+		return 1
+	}
+	return t.compactTheme.Size(n)
+}

@@ -43,5 +43,5 @@ func (fl *findingsList) wantedHeight() float32 {
 
 // rowHeight is the height of one findings row in the compact theme.
 func (fl *findingsList) rowHeight() float32 {
-	return container.NewThemeOverride(fl.list.CreateItem(), compactTheme{}).MinSize().Height
+	return container.NewThemeOverride(fl.list.CreateItem(), denseTheme{}).MinSize().Height
 }

@@ -93,7 +93,7 @@ func (h *harness) checkAllRowsVisible(t *testing.T, size fyne.Size, tag string) 
 		t.Fatalf("%d findings; the example has at least 8", n)
 	}
 	row := fl.rowHeight()
-	need := float32(n)*row + float32(n-1)*compactTheme{}.Size(theme.SizeNamePadding)
+	need := float32(n)*row + float32(n-1)*denseTheme{}.Size(theme.SizeNamePadding)
 	if got := fl.list.Size().Height; got+0.5 < need {
 		t.Errorf("at %.0f×%.0f%s the findings list is %.0f high, %d rows need %.0f", size.Width, size.Height, tag, got, n, need)
 	}

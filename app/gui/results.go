@@ -66,7 +66,7 @@ func newResultsPanel(s *session) *resultsPanel {
 	)
 	// Every finding is shown without scrolling; the charts take what
 	// height is left.
-	findings := container.NewThemeOverride(r.list.object, compactTheme{})
+	findings := container.NewThemeOverride(r.list.object, denseTheme{})
 	split := container.New(findingsFirst{want: r.list.wantedHeight}, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
 	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)
