@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"strings"
+	"ullage/report/display"
 
 	"ullage/hazards"
 )
@@ -93,7 +94,7 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 		inputSpec{"Criteria: limit sets", []string{"criteria.limit_sets"}, num(func(d *hazards.Design) string {
 			var names []string
 			for _, id := range d.Criteria.AppliedLimitSets() {
-				names = append(names, setShort(id))
+				names = append(names, display.LimitSetShort(id))
 			}
 			return strings.Join(names, ", ")
 		})},

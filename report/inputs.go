@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"strings"
+	"ullage/report/display"
 
 	"ullage/hazards"
 )
@@ -158,7 +159,7 @@ func criteriaTable(cr hazards.Criteria) table {
 func limitSetsRow(cr hazards.Criteria) []cell {
 	var names []string
 	for _, id := range cr.AppliedLimitSets() {
-		names = append(names, setShort(id))
+		names = append(names, display.LimitSetShort(id))
 	}
 	grounds := "Chosen for this review."
 	if len(cr.LimitSets) == 0 {

@@ -234,7 +234,7 @@ func exposureTable(a *hazards.Assessment) table {
 	var rows [][]cell
 	for _, f := range a.Findings {
 		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
-			rows = append(rows, []cell{{text: setShort(hazards.LimitSetUSOccupational)}, {text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: display.ReasonWords(hazards.ReasonNoPublishedLimit), dim: true}, {}, {}, {}, {}, {}})
+			rows = append(rows, []cell{{text: display.LimitSetShort(hazards.LimitSetUSOccupational)}, {text: strings.TrimPrefix(f.Criterion, "exposure-")}, {text: display.ReasonWords(hazards.ReasonNoPublishedLimit), dim: true}, {}, {}, {}, {}, {}})
 		}
 	}
 	for _, set := range a.Release.LimitSets {
@@ -258,34 +258,17 @@ func exposureTable(a *hazards.Assessment) table {
 			if l.Standing == "interim" || l.Standing == "proposed" {
 				name += " (" + l.Standing + ")"
 			}
-			rows = append(rows, []cell{{text: setShort(l.Set)}, {text: l.Kind, bold: l.Governs}, {text: name, bold: l.Governs}, {text: plain(l.PPM)}, {text: period},
+			rows = append(rows, []cell{{text: display.LimitSetShort(l.Set)}, {text: l.Kind, bold: l.Governs}, {text: name, bold: l.Governs}, {text: plain(l.PPM)}, {text: period},
 				{text: avg, bold: l.Governs}, {text: sig(100*l.Share, 3) + " %", bold: l.Governs}, {text: g, bold: true}})
 		}
 		for _, n := range a.Release.LimitNotes {
 			if n.Set == set {
-				rows = append(rows, []cell{{text: setShort(n.Set)}, {text: n.Name}, {text: display.ReasonWords(n.Reason), dim: true}, {}, {}, {}, {}, {}})
+				rows = append(rows, []cell{{text: display.LimitSetShort(n.Set)}, {text: n.Name}, {text: display.ReasonWords(n.Reason), dim: true}, {}, {}, {}, {}, {}})
 			}
 		}
 	}
 	return table{cols: []col{{"Set", 0.9, 'L'}, {"Kind", 0.7, 'L'}, {"Limit", 1.6, 'L'}, {"ppm", 0.6, 'R'}, {"Averaged over", 0.9, 'R'},
 		{"Average, ppm", 0.9, 'R'}, {"Share", 0.7, 'R'}, {"", 0.7, 'L'}}, rows: rows, size: 7.5, zebra: true, keep: 2}
-}
-
-// setShort names a limit set in a table cell.
-func setShort(id string) string {
-	switch id {
-	case hazards.LimitSetUSOccupational:
-		return "US work"
-	case hazards.LimitSetUSPublicAcute:
-		return "US public"
-	case hazards.LimitSetEUOccupational:
-		return "EU work"
-	case hazards.LimitSetUKWEL:
-		return "UK WEL"
-	case hazards.LimitSetDEAGW:
-		return "DE AGW"
-	}
-	return id
 }
 
 // exposureTableNote says how the table was made.

@@ -3,6 +3,7 @@ package gui
 import (
 	"fmt"
 	"strings"
+	"ullage/report/display"
 
 	"ullage/fluids"
 	"ullage/hazards"
@@ -54,7 +55,7 @@ func inputRows(f *designForm, a, b *hazards.Design, lib *fluids.Library, u unitS
 			text("Limit sets", func(d *hazards.Design) string {
 				var names []string
 				for _, id := range d.Criteria.AppliedLimitSets() {
-					names = append(names, setShortName(id))
+					names = append(names, display.LimitSetShort(id))
 				}
 				return strings.Join(names, ", ")
 			})

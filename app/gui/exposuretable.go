@@ -89,7 +89,7 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 	}
 	for _, f := range a.Findings {
 		if f.NotApplicable == hazards.ReasonNoPublishedLimit {
-			add(false, setShortName(hazards.LimitSetUSOccupational), strings.TrimPrefix(f.Criterion, "exposure-")+": "+display.ReasonWords(f.NotApplicable), "", "", "", "", "")
+			add(false, display.LimitSetShort(hazards.LimitSetUSOccupational), strings.TrimPrefix(f.Criterion, "exposure-")+": "+display.ReasonWords(f.NotApplicable), "", "", "", "", "")
 		}
 	}
 	for _, set := range a.Release.LimitSets {
@@ -113,7 +113,7 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 			if l.Governs {
 				g = "governs"
 			}
-			add(l.Governs, setShortName(l.Set), name, sigFigures(l.PPM, 4), period, avg, fmt.Sprintf("%s %%", sigFigures(100*l.Share, 3)), g)
+			add(l.Governs, display.LimitSetShort(l.Set), name, sigFigures(l.PPM, 4), period, avg, fmt.Sprintf("%s %%", sigFigures(100*l.Share, 3)), g)
 		}
 		for _, n := range a.Release.LimitNotes {
 			if n.Set == set {
@@ -121,7 +121,7 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 				if n.Name != "" {
 					label = n.Name + ": " + label
 				}
-				add(false, setShortName(n.Set), label, "", "", "", "", "")
+				add(false, display.LimitSetShort(n.Set), label, "", "", "", "", "")
 			}
 		}
 	}
@@ -155,21 +155,4 @@ func (t *exposureTable) set(a *hazards.Assessment) {
 	}
 	t.words.SetText(strings.Join(words, "\n"))
 	t.body.Refresh()
-}
-
-// setShortName names a limit set in a table cell.
-func setShortName(id string) string {
-	switch id {
-	case hazards.LimitSetUSOccupational:
-		return "US work"
-	case hazards.LimitSetUSPublicAcute:
-		return "US public"
-	case hazards.LimitSetEUOccupational:
-		return "EU work"
-	case hazards.LimitSetUKWEL:
-		return "UK WEL"
-	case hazards.LimitSetDEAGW:
-		return "DE AGW"
-	}
-	return id
 }

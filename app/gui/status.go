@@ -2,7 +2,7 @@ package gui
 
 import (
 	"image/color"
-	"strings"
+	"ullage/report/display"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/theme"
@@ -11,19 +11,7 @@ import (
 )
 
 // statusWord is a status in capitals, readable without colour.
-func statusWord(s hazards.Status) string {
-	switch s {
-	case hazards.StatusPass:
-		return "PASS"
-	case hazards.StatusCaution:
-		return "CAUTION"
-	case hazards.StatusFail:
-		return "FAIL"
-	case hazards.StatusNotAssessed:
-		return "NOT ASSESSED"
-	}
-	return strings.ToUpper(string(s))
-}
+func statusWord(s hazards.Status) string { return display.StatusWord(s) }
 
 // statusIcon gives each status a shape of its own — a tick, a warning
 // triangle, a cross — coloured as well, so that neither colour nor shape

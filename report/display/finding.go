@@ -330,3 +330,21 @@ func Detail(f hazards.Finding, s System) string {
 	}
 	return strings.Join(parts, "; ") + "."
 }
+
+// LimitSetShort names a limit set in a table cell: "US work", "US
+// public", "EU work", "UK WEL", "DE AGW"; an unknown id as it is.
+func LimitSetShort(id string) string {
+	switch id {
+	case hazards.LimitSetUSOccupational:
+		return "US work"
+	case hazards.LimitSetUSPublicAcute:
+		return "US public"
+	case hazards.LimitSetEUOccupational:
+		return "EU work"
+	case hazards.LimitSetUKWEL:
+		return "UK WEL"
+	case hazards.LimitSetDEAGW:
+		return "DE AGW"
+	}
+	return id
+}
