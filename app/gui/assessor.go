@@ -8,7 +8,6 @@ import (
 
 	"ullage/fluids"
 	"ullage/hazards"
-	"ullage/report/chartmodel"
 )
 
 // outcome is one assessment computed in the background: the results and
@@ -17,7 +16,6 @@ type outcome struct {
 	gen        uint64
 	assessment *hazards.Assessment
 	err        error
-	fillMap    chartmodel.FillMapData
 	took       time.Duration
 }
 
@@ -36,7 +34,7 @@ func evaluate(d hazards.Design, lib *fluids.Library) (o outcome) {
 	if err != nil {
 		return outcome{err: err}
 	}
-	return outcome{assessment: a, fillMap: chartmodel.FillMapFor(a)}
+	return outcome{assessment: a}
 }
 
 // assessor runs assessments off the UI goroutine. Requests coming faster

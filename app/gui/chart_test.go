@@ -19,6 +19,7 @@ var chartPNGs = flag.String("chart-png", "", "write the window's charts as PNGs 
 func TestChartCaptures(t *testing.T) {
 	h := newHarness(t)
 	h.runStudyWith("2000", "7", "5")
+	h.s.results.drawFill() // drawn when its tab comes to the front
 	tp := h.s.tol
 	charts := map[string]*chart{
 		"pressure": h.s.results.pt, "release": h.s.results.conc, "fillmap": h.s.results.fill,

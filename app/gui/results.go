@@ -28,7 +28,12 @@ type resultsPanel struct {
 	expo     *exposureTable
 	pt, conc *chart
 	fill     *chart
-	tabs     *container.AppTabs
+	// fillPending draws the fill–temperature map of the latest results;
+	// the map re-assesses some forty fills, so it is drawn only while its
+	// tab is in front (nil once drawn).
+	fillPending func()
+	fillTab     *container.TabItem
+	tabs        *container.AppTabs
 	// area holds the findings and, below them, the charts; laid out
 	// again when the number of findings changes.
 	area *fyne.Container
@@ -60,10 +65,15 @@ func newResultsPanel(s *session) *resultsPanel {
 	r.tabs = container.NewAppTabs(
 		container.NewTabItem("Pressure against temperature", r.pt),
 		container.NewTabItem("Vapour in the room", r.conc),
-		container.NewTabItem("Fill and temperature", r.fill),
+		r.newFillTab(),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 		container.NewTabItem("Exposure limits", r.expo.object),
 	)
+	r.tabs.OnSelected = func(t *container.TabItem) {
+		if t == r.fillTab {
+			r.drawFill()
+		}
+	}
 	// Every finding is shown without scrolling; the charts take what
 	// height is left.
 	findings := container.NewThemeOverride(r.list.object, denseTheme{})
@@ -110,6 +120,7 @@ func (r *resultsPanel) draw() {
 		r.expo.set(nil)
 		r.pt.set(chartmodel.Chart{Empty: "No results yet."}, false)
 		r.conc.set(chartmodel.Chart{Empty: "No results yet."}, false)
+		r.fillPending = nil
 		r.fill.set(chartmodel.Chart{Empty: "No results yet."}, false)
 		return
 	}
@@ -125,7 +136,27 @@ func (r *resultsPanel) draw() {
 	r.pt.set(chartmodel.Pressure("", []chartmodel.Side{{A: a}}, u.chartUnits()), stale)
 	r.conc.set(chartmodel.Release("", a, u.chartUnits()), stale)
 	mass := chartmodel.Quantity{Unit: u.unit(qMass), FromSI: func(x float64) float64 { return u.fromSI(qMass, x) }, Format: func(x float64) string { return u.show(qMass, x, 3) }}
-	r.fill.set(chartmodel.FillTemperature("", o.fillMap, a, u.chartUnits(), mass), stale)
+	r.fillPending = func() {
+		r.fill.set(chartmodel.FillTemperature("", chartmodel.FillMapFor(a), a, u.chartUnits(), mass), stale)
+	}
+	if r.tabs.Selected() == r.fillTab {
+		r.drawFill()
+	}
+}
+
+// newFillTab makes the tab of the fill–temperature map.
+func (r *resultsPanel) newFillTab() *container.TabItem {
+	r.fillTab = container.NewTabItem("Fill and temperature", r.fill)
+	return r.fillTab
+}
+
+// drawFill draws the fill–temperature map if the latest results have not
+// been drawn yet.
+func (r *resultsPanel) drawFill() {
+	if f := r.fillPending; f != nil {
+		r.fillPending = nil
+		f()
+	}
 }
 
 // revisionNote says what the results are of: which revision, changed or
