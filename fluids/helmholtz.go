@@ -100,6 +100,30 @@ type tauCache struct {
 	gx          [maxCachedGauss]float64 // the τ part of the Gaussian exponent
 }
 
+// deltaPart returns the density part of Gaussian term g at reduced
+// density delta, given the term's temperature factor gf and the τ part of
+// its exponent gx from the tauCache, and δ^d: f, the term times δ-factors;
+// A = δ·∂ln f/∂δ; dA, the second-derivative factor δ²·(∂²f/∂δ²)/f. ok is
+// false when the bell is so far away (exponent below −600, a value under
+// 1e-260) that the term adds nothing. Both evaluations of the equation
+// call it, so they agree bit for bit.
+func (g *gaussTerm) deltaPart(delta, gf, gx, deltaPowD float64) (f, A, dA float64, ok bool) {
+	dd := delta - g.eps
+	if !g.rational {
+		if -g.eta*dd*dd+gx < -600 {
+			return 0, 0, 0, false
+		}
+		f = gf * deltaPowD * math.Exp(-g.eta*dd*dd)
+		A = float64(g.d) - 2*g.eta*delta*dd
+		dA = A*A - float64(g.d) - 2*g.eta*delta*delta
+		return f, A, dA, true
+	}
+	f = gf * deltaPowD * math.Exp(g.eta*dd*dd)
+	A = float64(g.d) + 2*g.eta*delta*dd
+	dA = A*A - float64(g.d) + 2*g.eta*delta*delta
+	return f, A, dA, true
+}
+
 // prepareTau fills c for inverse reduced temperature tau.
 func (h *helmholtz) prepareTau(tau float64, c *tauCache) {
 	c.tau = tau
@@ -206,22 +230,9 @@ func (h *helmholtz) evalCached(delta float64, c *tauCache) residualDerivs {
 		sdt += f * A * B
 	}
 	for i := range h.gauss {
-		g := &h.gauss[i]
-		dd := delta - g.eps
-		var f, A, dA float64
-		if !g.rational {
-			x := -g.eta*dd*dd + c.gx[i]
-			if x < -600 {
-				// Below 1e-260: the bell is far away; nothing to add.
-				continue
-			}
-			f = c.gf[i] * dp[g.d] * math.Exp(-g.eta*dd*dd)
-			A = float64(g.d) - 2*g.eta*delta*dd
-			dA = A*A - float64(g.d) - 2*g.eta*delta*delta
-		} else {
-			f = c.gf[i] * dp[g.d] * math.Exp(g.eta*dd*dd)
-			A = float64(g.d) + 2*g.eta*delta*dd
-			dA = A*A - float64(g.d) + 2*g.eta*delta*delta
+		f, A, dA, ok := h.gauss[i].deltaPart(delta, c.gf[i], c.gx[i], dp[h.gauss[i].d])
+		if !ok {
+			continue
 		}
 		B := c.gB[i]
 		a += f
@@ -355,21 +366,9 @@ func (h *helmholtz) densityDerivsCached(delta float64, c *tauCache) (sd, sdd flo
 		sdd += f * (A*A - A + extraD)
 	}
 	for i := range h.gauss {
-		g := &h.gauss[i]
-		dd := delta - g.eps
-		var f, A, dA float64
-		if !g.rational {
-			x := -g.eta*dd*dd + c.gx[i]
-			if x < -600 {
-				continue
-			}
-			f = c.gf[i] * dp[g.d] * math.Exp(-g.eta*dd*dd)
-			A = float64(g.d) - 2*g.eta*delta*dd
-			dA = A*A - float64(g.d) - 2*g.eta*delta*delta
-		} else {
-			f = c.gf[i] * dp[g.d] * math.Exp(g.eta*dd*dd)
-			A = float64(g.d) + 2*g.eta*delta*dd
-			dA = A*A - float64(g.d) + 2*g.eta*delta*delta
+		f, A, dA, ok := h.gauss[i].deltaPart(delta, c.gf[i], c.gx[i], dp[h.gauss[i].d])
+		if !ok {
+			continue
 		}
 		sd += f * A
 		sdd += f * dA
