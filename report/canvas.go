@@ -265,7 +265,9 @@ func (c *canvas) bookmark(title string, level int, y float64) {
 func printable(s string) string {
 	ok := utf8.ValidString(s)
 	for i := 0; ok && i < len(s); i++ {
-		if s[i] < 0x20 || s[i] == 0x7f || s[i] >= 0xf0 {
+		// 0xc2 0x80–0x9f is a C1 control character (U+0080–U+009F).
+		c1 := s[i] == 0xc2 && i+1 < len(s) && s[i+1] >= 0x80 && s[i+1] <= 0x9f
+		if s[i] < 0x20 || s[i] == 0x7f || s[i] >= 0xf0 || c1 {
 			ok = false
 		}
 	}
