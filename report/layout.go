@@ -166,27 +166,31 @@ func (d *doc) fit(s string, w float64) string {
 // character at a time, so the time is linear in its length.
 func (d *doc) wrap(s string, w float64) []string {
 	var out []string
+	space := d.c.textWidth(" ")
 	for _, para := range strings.Split(s, "\n") {
-		line := ""
+		line, lineW := "", 0.0
 		for _, word := range strings.Fields(para) {
-			try := word
-			if line != "" {
-				try = line + " " + word
+			// Widths add up (the font has no kerning), so each word is
+			// measured once rather than the whole line again.
+			wordW := d.c.textWidth(word)
+			if line != "" && lineW+space+wordW <= w {
+				line, lineW = line+" "+word, lineW+space+wordW
+				continue
 			}
-			if d.c.textWidth(try) <= w {
-				line = try
+			if line == "" && wordW <= w {
+				line, lineW = word, wordW
 				continue
 			}
 			if line != "" {
 				out = append(out, line)
-				line = ""
 			}
-			if d.c.textWidth(word) > w && utf8.RuneCountInString(word) > 1 {
+			if wordW > w && utf8.RuneCountInString(word) > 1 {
 				pieces := d.breakWord([]rune(word), w)
 				out = append(out, pieces[:len(pieces)-1]...)
 				word = pieces[len(pieces)-1]
+				wordW = d.c.textWidth(word)
 			}
-			line = word
+			line, lineW = word, wordW
 		}
 		out = append(out, line)
 	}
