@@ -406,6 +406,16 @@ func TestEUOccupationalAgainstSources(t *testing.T) {
 	if e := find(t, "dichloromethane", LimitSetEUOccupational, "IOELV", 480); !strings.Contains(e.Source, "2017/164") || e.Status != StatusIndicative {
 		t.Errorf("dichloromethane: source %q status %q; EU-OSHA lists methylene chloride among the agents of Directive 2017/164/EU", e.Source, e.Status)
 	}
+	// Directive (EU) 2019/1831, Annex (German text): aniline, chloromethane,
+	// trimethylamine, cumene, sec-butyl acetate, 4-aminotoluene, isobutyl
+	// acetate, isoamyl alcohol, n-butyl acetate, phosphoryl chloride; none of
+	// the built-in fluids.
+	for _, f := range []string{"n-butane", "ethanol", "2-propanol", "water"} {
+		sub, err := LimitsFor(f, LimitSetEUOccupational)
+		if err != nil || sub.Coverage != CoverageNonePublished || !strings.Contains(sub.Statement, "2019/1831 read in full") {
+			t.Errorf("%s: %+v, %v; want none published, naming the 2019/1831 annex as read", f, sub, err)
+		}
+	}
 }
 
 func TestUKWELAgainstSources(t *testing.T) {
