@@ -90,7 +90,7 @@ func TestCriterionOnOneSideOnly(t *testing.T) {
 	a := overfilledBulb()
 	a.FillMassKg = 0.012
 	b := a
-	b.Fluid = "1-1-1-3-3-pentafluoropropane" // not flammable (no LFL), no published exposure limit
+	b.Fluid = "perfluoro-2-methyl-3-pentanone" // not flammable (no LFL), no published exposure limit, no AEGL or PAC
 	b.FillMassKg = 0.015
 	c := Compare(side(t, "A", a), side(t, "B", b))
 	oldSet, newSet := map[string]bool{}, map[string]bool{}
@@ -121,7 +121,7 @@ func TestCriterionOnOneSideOnly(t *testing.T) {
 		t.Fatal("the two fluids have the same criteria; pick another pair for this test")
 	}
 	if r := findResult(t, c, "Peak as a percentage of the LFL"); r.New.State != NotFlammable {
-		t.Errorf("HFC-245fa %% LFL read as %+v; want not flammable", r.New)
+		t.Errorf("perfluoro(2-methyl-3-pentanone) %% LFL read as %+v; want not flammable", r.New)
 	}
 }
 
