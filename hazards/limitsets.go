@@ -192,7 +192,7 @@ func publicLimits(sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
 			s := LimitSpec{Set: LimitSetUSPublicAcute, Body: l.Body, Name: e.Label(), Kind: e.Kind, PPM: l.PPM, Source: l.Source,
 				PeriodS: e.Minutes * 60, WholePeriod: true, Standing: string(e.Status), Date: e.Date,
 				Protects:   fmt.Sprintf("%s, %s", publicPopulation, durationWords(e.Minutes)),
-				Definition: "AEGL and PAC: the airborne concentration above which the general public, including susceptible individuals, could experience the tier's effects for a single exposure of the stated duration (US EPA AEGL program; US DOE PAC, from memory); averaged over that duration for a person present throughout"}
+				Definition: "AEGL and PAC: the airborne concentration above which the general public, including susceptible individuals, could experience the tier's effects for a single exposure of the stated duration (AEGL tier definitions of the US EPA AEGL program, from memory; PAC tiers and their AEGL → ERPG → TEEL order as described on NOAA's page \"Protective Action Criteria for Chemicals (PACs)\", read in a stored copy); averaged over that duration for a person present throughout"}
 			if tier == 3 {
 				s.PeriodS = 0
 				s.Definition = "the peak (highest one-minute average) against the life-threatening tier at its shortest published duration: the peak is at least every longer average (our screening rule)"
