@@ -2,6 +2,7 @@ package report
 
 import (
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // Chart heights in mm.
@@ -17,7 +18,7 @@ func (u unitSystem) chartUnits() chartmodel.Units {
 	return chartmodel.Units{
 		Temperature: chartmodel.Quantity{Unit: tq.unit, FromSI: tq.conv, Format: u.temperature},
 		Pressure:    chartmodel.Quantity{Unit: pq.unit, FromSI: pq.conv, Format: u.pressure},
-		Number:      plain,
+		Number:      display.Stated,
 	}
 }
 

@@ -68,28 +68,28 @@ func inputSpecs(u unitSystem, nParts int) []inputSpec {
 			}
 			return d.Glass.ID
 		}},
-		inputSpec{"Service life", []string{"service_life_years"}, num(func(d *hazards.Design) string { return plain(d.ServiceLifeYears) + " years" })},
-		inputSpec{"Time at the hottest", []string{"hours_at_hottest"}, num(func(d *hazards.Design) string { return plain(d.HoursAtHottest) + " h" })},
+		inputSpec{"Service life", []string{"service_life_years"}, num(func(d *hazards.Design) string { return display.Stated(d.ServiceLifeYears) + " years" })},
+		inputSpec{"Time at the hottest", []string{"hours_at_hottest"}, num(func(d *hazards.Design) string { return display.Stated(d.HoursAtHottest) + " h" })},
 		inputSpec{"Sudden temperature change", []string{"thermal_shock"}, num(func(d *hazards.Design) string { return shockInputText(d.ThermalShock, u) })},
 		inputSpec{"Residual stress at the seal", []string{"seal_stress"}, num(func(d *hazards.Design) string { return sealInputText(d.SealStress, u) })},
 		inputSpec{"Room", []string{"room.preset_id"}, num(func(d *hazards.Design) string { return presetName(d.Room.PresetID) })},
 		inputSpec{"Room volume", []string{"room.volume_m3"}, num(func(d *hazards.Design) string { return u.roomVolume(d.Room.VolumeM3) })},
-		inputSpec{"Air changes per hour", []string{"room.air_changes_per_hour"}, num(func(d *hazards.Design) string { return plain(d.Room.AirChangesPerHour) })},
-		inputSpec{"Mixing factor", []string{"room.mixing_factor"}, num(func(d *hazards.Design) string { return plain(d.Room.MixingFactor) })},
+		inputSpec{"Air changes per hour", []string{"room.air_changes_per_hour"}, num(func(d *hazards.Design) string { return display.Stated(d.Room.AirChangesPerHour) })},
+		inputSpec{"Mixing factor", []string{"room.mixing_factor"}, num(func(d *hazards.Design) string { return display.Stated(d.Room.MixingFactor) })},
 		inputSpec{"Near-field radius", []string{"room.near_field_radius_m"}, num(func(d *hazards.Design) string { return u.roomLength(d.Room.NearFieldRadiusM) })},
 		inputSpec{"Near-field air speed", []string{"room.near_field_air_speed_m_s"}, num(func(d *hazards.Design) string { return u.speed(d.Room.NearFieldAirSpeed) })},
-		inputSpec{LabelExposureTime, []string{"room.exposure_minutes"}, num(func(d *hazards.Design) string { return plain(d.Room.ExposureMinutes) + " min" })},
+		inputSpec{LabelExposureTime, []string{"room.exposure_minutes"}, num(func(d *hazards.Design) string { return display.Stated(d.Room.ExposureMinutes) + " min" })},
 		inputSpec{"Criteria: burst, implosion safety factors", []string{"criteria.min_burst_safety_factor", "criteria.min_implosion_safety_factor"}, num(func(d *hazards.Design) string {
-			return "≥ " + plain(d.Criteria.MinBurstSafetyFactor) + ", ≥ " + plain(d.Criteria.MinImplosionSafetyFactor)
+			return "≥ " + display.Stated(d.Criteria.MinBurstSafetyFactor) + ", ≥ " + display.Stated(d.Criteria.MinImplosionSafetyFactor)
 		})},
-		inputSpec{"Criteria: failure probability", []string{"criteria.max_failure_probability"}, num(func(d *hazards.Design) string { return "≤ " + plain(d.Criteria.MaxFailureProbability) })},
-		inputSpec{"Criteria: ullage at the hottest", []string{"criteria.min_ullage_percent"}, num(func(d *hazards.Design) string { return "≥ " + plain(d.Criteria.MinUllagePercent) + " %" })},
+		inputSpec{"Criteria: failure probability", []string{"criteria.max_failure_probability"}, num(func(d *hazards.Design) string { return "≤ " + display.Stated(d.Criteria.MaxFailureProbability) })},
+		inputSpec{"Criteria: ullage at the hottest", []string{"criteria.min_ullage_percent"}, num(func(d *hazards.Design) string { return "≥ " + display.Stated(d.Criteria.MinUllagePercent) + " %" })},
 		inputSpec{"Criteria: exposure, flammability", []string{"criteria.max_fraction_of_limit", "criteria.max_percent_lfl", "criteria.limit_bodies"}, num(func(d *hazards.Design) string {
 			bodies := "all bodies"
 			if len(d.Criteria.LimitBodies) > 0 {
 				bodies = strings.Join(d.Criteria.LimitBodies, ", ")
 			}
-			return fmt.Sprintf("≤ %s of the limit (%s); ≤ %s %% LFL", plain(d.Criteria.MaxFractionOfLimit), bodies, plain(d.Criteria.MaxPercentLFL))
+			return fmt.Sprintf("≤ %s of the limit (%s); ≤ %s %% LFL", display.Stated(d.Criteria.MaxFractionOfLimit), bodies, display.Stated(d.Criteria.MaxPercentLFL))
 		})},
 		inputSpec{"Criteria: limit sets", []string{"criteria.limit_sets"}, num(func(d *hazards.Design) string {
 			var names []string

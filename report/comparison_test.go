@@ -40,7 +40,7 @@ func TestComparisonReadsBack(t *testing.T) {
 		w, h float64
 		want []string // the fill change is the fixtures' own numbers: 44 g and 30 g, 1.55 oz and 1.06 oz
 	}{
-		{"si-a4", Options{}, a4W, a4H, []string{"► Fill mass 44.0 g ± 0.500 g 30.0 g ± 0.500 g", "Hottest temperature 76.0 °C 76.0 °C"}},
+		{"si-a4", Options{}, a4W, a4H, []string{"► Fill mass 44 g ± 0.5 g 30 g ± 0.5 g", "Hottest temperature 76.0 °C 76.0 °C"}},
 		{"us-letter", Options{Units: UnitsUS, Paper: PaperLetter}, letterW, letterH, []string{"► Fill mass 1.55 oz ± 0.0176 oz 1.06 oz ± 0.0176 oz", "Hottest temperature 168.8 °F 168.8 °F"}},
 	}
 	for _, tc := range cases {

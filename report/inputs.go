@@ -67,8 +67,8 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 		[2]string{"Coldest temperature", u.temperature(ds.ColdestK)},
 		[2]string{LabelAmbientPressure, u.pressure(ds.AmbientPressurePa)},
 		[2]string{"Glass", glass},
-		[2]string{"Service life", plain(ds.ServiceLifeYears) + " years"},
-		[2]string{"Time at the hottest", plain(ds.HoursAtHottest) + " h over the life"},
+		[2]string{"Service life", display.Stated(ds.ServiceLifeYears) + " years"},
+		[2]string{"Time at the hottest", display.Stated(ds.HoursAtHottest) + " h over the life"},
 		[2]string{"Sudden temperature change", shockInputText(ds.ThermalShock, u)},
 		[2]string{"Residual stress at the seal", sealInputText(ds.SealStress, u)},
 	)
@@ -116,11 +116,11 @@ func roomPairs(r hazards.Room, u unitSystem) [][2]string {
 	return [][2]string{
 		{"Room", preset},
 		{"Room volume", u.roomVolume(r.VolumeM3)},
-		{"Air changes per hour", plain(r.AirChangesPerHour) + " per hour"},
-		{"Mixing factor", plain(r.MixingFactor) + " (1 = perfectly mixed)"},
+		{"Air changes per hour", display.Stated(r.AirChangesPerHour) + " per hour"},
+		{"Mixing factor", display.Stated(r.MixingFactor) + " (1 = perfectly mixed)"},
 		{"Near-field radius", u.roomLength(r.NearFieldRadiusM)},
 		{"Near-field air speed", u.speed(r.NearFieldAirSpeed)},
-		{LabelExposureTime, plain(r.ExposureMinutes) + " min after the breakage"},
+		{LabelExposureTime, display.Stated(r.ExposureMinutes) + " min after the breakage"},
 		{"Near-field volume", u.roomVolume(hazards.NearFieldVolume(r.NearFieldRadiusM))},
 	}
 }
@@ -135,17 +135,17 @@ func criteriaTable(cr hazards.Criteria) table {
 	row := func(name, key string, v, dv float64, text string) []cell {
 		grounds := hazards.DefaultCriteriaGrounds[key]
 		if v != dv {
-			grounds = "Set for this review (default " + plain(dv) + ": " + grounds + ")"
+			grounds = "Set for this review (default " + display.Stated(dv) + ": " + grounds + ")"
 		}
 		return []cell{{text: name}, {text: text}, {text: grounds, dim: true}}
 	}
 	rows := [][]cell{
-		row("Minimum burst safety factor", "min_burst_safety_factor", cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, plain(cr.MinBurstSafetyFactor)),
-		row("Minimum implosion safety factor", "min_implosion_safety_factor", cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, plain(cr.MinImplosionSafetyFactor)),
-		row("Maximum failure probability", "max_failure_probability", cr.MaxFailureProbability, def.MaxFailureProbability, plain(cr.MaxFailureProbability)),
-		row("Minimum ullage at the hottest", "min_ullage_percent", cr.MinUllagePercent, def.MinUllagePercent, plain(cr.MinUllagePercent)+" %"),
-		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, plain(cr.MaxFractionOfLimit)),
-		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, plain(cr.MaxPercentLFL)+" %"),
+		row("Minimum burst safety factor", "min_burst_safety_factor", cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, display.Stated(cr.MinBurstSafetyFactor)),
+		row("Minimum implosion safety factor", "min_implosion_safety_factor", cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, display.Stated(cr.MinImplosionSafetyFactor)),
+		row("Maximum failure probability", "max_failure_probability", cr.MaxFailureProbability, def.MaxFailureProbability, display.Stated(cr.MaxFailureProbability)),
+		row("Minimum ullage at the hottest", "min_ullage_percent", cr.MinUllagePercent, def.MinUllagePercent, display.Stated(cr.MinUllagePercent)+" %"),
+		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, display.Stated(cr.MaxFractionOfLimit)),
+		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, display.Stated(cr.MaxPercentLFL)+" %"),
 		{{text: "Exposure limits from"}, {text: bodies}, {text: "Chosen for this review. Every limit of these bodies is averaged over its own period as its body defines it (NIOSH REL TWA up to a 10-hour day, OSHA PEL and ACGIH TLV TWA 8 hours, STEL 15 minutes or the stated period, ceiling at its stated period or the peak, IDLH 30 minutes); for each kind the limit with the largest share of its limit governs, and a kind with no published limit is listed as not assessed.", dim: true}},
 		limitSetsRow(cr),
 		{{text: "Strength checked at"}, {text: "nominal and thinnest walls"}, {text: "The burst safety factor is found for the nominal unit and for the weakest permitted unit: every wall at its thinnest, the fill and volume tolerances stacked to raise the pressure (common practice: strength at the minimum permitted thickness).", dim: true}},

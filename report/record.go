@@ -160,16 +160,8 @@ func (w *assessmentWriter) traceValue(v hazards.Value) string {
 }
 
 // g6 formats a number to six significant figures, enough to repeat a
-// step by hand.
-// Negative numbers carry the minus sign (U+2212), as everywhere else in
-// the record; powers of ten are written ×10ⁿ.
-func g6(x float64) string {
-	s := strconv.FormatFloat(x, 'g', 6, 64)
-	if strings.Contains(s, "e") {
-		return power(x, 6)
-	}
-	return strings.Replace(s, "-", "−", 1)
-}
+// step by hand, by the display package's one rule.
+func g6(x float64) string { return display.Number(x, 6) }
 
 // minusSigns writes a hyphen-minus that stands before a digit at the start
 // of a word ("(-29.0 °C)") as the minus sign the rest of the record uses.

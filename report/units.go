@@ -49,7 +49,7 @@ func (u unitSystem) energyQ() quantity                { return u.q(display.Energ
 
 // with formats v in q to n significant figures with the unit.
 func with(q quantity, v float64, n int) string {
-	s := sig(q.conv(v), n)
+	s := display.Number(q.conv(v), n)
 	if s == noValue {
 		return s
 	}
@@ -58,11 +58,11 @@ func with(q quantity, v float64, n int) string {
 
 func (u unitSystem) temperature(k float64) string {
 	q := u.temperatureQ()
-	return fixed(q.conv(k), 1) + " " + q.unit
+	return display.Fixed(q.conv(k), 1) + " " + q.unit
 }
 func (u unitSystem) temperatureDifference(k float64) string {
 	q := u.temperatureDifferenceQ()
-	return fixed(q.conv(k), 1) + " " + q.unit
+	return display.Fixed(q.conv(k), 1) + " " + q.unit
 }
 func (u unitSystem) pressure(pa float64) string { return with(u.pressureQ(), pa, 4) }
 func (u unitSystem) stress(pa float64) string   { return with(u.stressQ(), pa, 3) }

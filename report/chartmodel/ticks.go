@@ -14,7 +14,8 @@ type Tick struct {
 
 // Ticks returns the ticks of an axis. A linear axis gets steps of 1, 2 or
 // 5 times a power of ten, about eight of them, labelled with as many
-// decimals as the step needs. A logarithmic axis gets a labelled tick at
+// decimals as the step needs; an axis of counts (Whole) steps by at least
+// one, with no tick between whole numbers. A logarithmic axis gets a labelled tick at
 // each decade (every second or third decade on a long axis), with 2 and 5
 // labelled too on an axis shorter than two and a half decades, and
 // unlabelled ticks between. The labels of one axis are all written the
@@ -27,16 +28,22 @@ func Ticks(a Axis) []Tick {
 	if a.Log {
 		return logTicks(a.Min, a.Max)
 	}
-	return linearTicks(a.Min, a.Max)
+	return linearTicks(a.Min, a.Max, a.Whole)
 }
 
-func linearTicks(lo, hi float64) []Tick {
+func linearTicks(lo, hi float64, whole bool) []Tick {
 	step := NiceStep((hi - lo) / 8)
-	dec := max(0, int(-math.Floor(math.Log10(step)+1e-9)))
 	minor := step / 5
 	if m := step / math.Pow(10, math.Floor(math.Log10(step)+1e-9)); math.Abs(m-2) < 1e-9 {
 		minor = step / 4
 	}
+	if whole {
+		step, minor = max(step, 1), max(minor, 1)
+		if math.Mod(step, minor) != 0 {
+			minor = step
+		}
+	}
+	dec := max(0, int(-math.Floor(math.Log10(step)+1e-9)))
 	var out []Tick
 	first := math.Ceil(lo/minor - 1e-9)
 	for i := first; i*minor <= hi+minor*1e-6; i++ {
