@@ -115,7 +115,7 @@ func TestAssessmentCautionsAndSources(t *testing.T) {
 		"Weibull modulus":        g.WeibullModulus.Source,
 		"stress corrosion":       g.StressCorrosionExponent.Source,
 	}
-	for i, c := range a.Cautions {
+	for i, c := range display.Cautions(a, display.SI) {
 		want[fmt.Sprintf("caution %d", i)] = c
 	}
 	for i, p := range f.VapourPressure {

@@ -136,11 +136,7 @@ func (w *comparisonWriter) cautions() {
 		if s.Assessment == nil {
 			continue
 		}
-		list := s.Assessment.Cautions
-		if w.u.us && len(s.Assessment.CautionsUS) > 0 {
-			list = s.Assessment.CautionsUS
-		}
-		for _, x := range list {
+		for _, x := range display.Cautions(s.Assessment, w.u.system()) {
 			if !seen[x] {
 				seen[x] = true
 				cs = append(cs, x)

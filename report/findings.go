@@ -48,11 +48,7 @@ func (d *doc) findingBlock(s hazards.Status, title, numbers, message, source str
 func (w *assessmentWriter) cautions() {
 	d := w.d
 	d.heading("Cautions")
-	cs := w.a.Cautions
-	if w.u.us && len(w.a.CautionsUS) > 0 {
-		cs = w.a.CautionsUS
-	}
-	d.box("Read before relying on this record", cautionParas(cs))
+	d.box("Read before relying on this record", cautionParas(display.Cautions(w.a, w.u.system())))
 }
 
 // cautionParas lists the cautions as bullets after a sentence deferring

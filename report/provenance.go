@@ -102,7 +102,7 @@ func fluidTable(f *fluids.Fluid, u unitSystem) table {
 	if fl.Flammable {
 		flam = "yes"
 	}
-	rows = append(rows, []cell{{text: "Flammable"}, {text: flam}, {}, sourceCell(firstNonBlank(fl.Note, "library"))})
+	rows = append(rows, []cell{{text: "Flammable"}, {text: flam}, {}, sourceCell(firstNonBlank(display.Warning(fl.Note, u.system()), "library"))})
 	opt := func(name string, s *fluids.Sourced, format func(float64) string) {
 		if s != nil {
 			rows = append(rows, []cell{{text: name}, {text: format(s.Value)}, {}, sourceCell(s.Source)})

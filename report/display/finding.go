@@ -294,7 +294,7 @@ func factQuantity(k hazards.FactKind) Quantity {
 // not reached".
 func FactText(f hazards.Fact, s System) string {
 	if f.Text != "" {
-		return f.Name + ": " + f.Text
+		return f.Name + ": " + Warning(f.Text, s)
 	}
 	var v string
 	switch f.Kind {
