@@ -47,7 +47,7 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 	}
 	pairs := [][2]string{
 		{"Fluid", fluid},
-		{"Fill mass", withTolerance(u.mass(ds.FillMassKg), ds.FillMassToleranceKg, u.mass)},
+		{"Fill mass", display.WithTolerance(u.mass(ds.FillMassKg), ds.FillMassToleranceKg, u.mass)},
 		{"Internal volume", vol},
 	}
 	if a != nil {
@@ -69,8 +69,8 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 		[2]string{"Glass", glass},
 		[2]string{"Service life", display.Stated(ds.ServiceLifeYears) + " years"},
 		[2]string{"Time at the hottest", display.Stated(ds.HoursAtHottest) + " h over the life"},
-		[2]string{"Sudden temperature change", shockInputText(ds.ThermalShock, u)},
-		[2]string{"Residual stress at the seal", sealInputText(ds.SealStress, u)},
+		[2]string{"Sudden temperature change", display.ShockText(ds.ThermalShock, u.system())},
+		[2]string{"Residual stress at the seal", display.SealText(ds.SealStress, u.system())},
 	)
 	return pairs
 }
@@ -98,21 +98,9 @@ func partsTable(parts []hazards.Part, u unitSystem) table {
 	}, rows: rows, zebra: true}
 }
 
-// presetName is the name of a room preset ("custom" for none, the id
-// itself when the preset is unknown).
-func presetName(id string) string {
-	if id == "" {
-		return "custom"
-	}
-	if p, err := hazards.LookupRoomPreset(id); err == nil && p.Name != "" {
-		return p.Name
-	}
-	return id
-}
-
 // roomPairs lists the release scenario.
 func roomPairs(r hazards.Room, u unitSystem) [][2]string {
-	preset := presetName(r.PresetID)
+	preset := display.RoomPresetName(r.PresetID)
 	return [][2]string{
 		{"Room", preset},
 		{"Room volume", u.roomVolume(r.VolumeM3)},
@@ -166,12 +154,4 @@ func limitSetsRow(cr hazards.Criteria) []cell {
 		grounds = "The default, as the design names none: a consumer product may break where the general public, children included, breathes the release, so the public acute benchmarks (AEGL, DOE PAC) apply beside the US occupational limits."
 	}
 	return []cell{{text: "Limit sets"}, {text: strings.Join(names, ", ")}, {text: grounds, dim: true}}
-}
-
-// withTolerance appends "± tolerance" when there is one.
-func withTolerance(value string, tol float64, format func(float64) string) string {
-	if tol <= 0 {
-		return value
-	}
-	return value + " ± " + format(tol)
 }

@@ -65,39 +65,3 @@ func capitalFirst(s string) string {
 	r, n := utf8.DecodeRuneInString(s)
 	return string(unicode.ToUpper(r)) + s[n:]
 }
-
-// shockInputText describes the design's sudden changes in a line.
-func shockInputText(s hazards.ThermalShock, u unitSystem) string {
-	if !s.Given() {
-		return "none given: thermal shock not assessed"
-	}
-	var parts []string
-	add := func(dir string, dk float64, preset string) {
-		if dk <= 0 {
-			return
-		}
-		t := dir + " " + u.temperatureDifference(dk)
-		if preset != "" {
-			t += " (" + preset + ")"
-		}
-		parts = append(parts, t)
-	}
-	add(hazards.ShockHotToCold, s.HotToColdK, s.HotToColdPresetID)
-	add(hazards.ShockColdToHot, s.ColdToHotK, s.ColdToHotPresetID)
-	out := parts[0]
-	if len(parts) > 1 {
-		out += "; " + parts[1]
-	}
-	return out
-}
-
-// sealInputText describes the design's seal stress in a line.
-func sealInputText(s hazards.SealStress, u unitSystem) string {
-	switch {
-	case !s.Given():
-		return "none given"
-	case s.RetardationM > 0:
-		return fmt.Sprintf("%s: retardation %s nm over %s", s.Part, display.Number(s.RetardationM*1e9, 3), u.length(s.PathLengthM))
-	}
-	return s.Part + ": " + u.stress(s.ResidualStressPa)
-}
