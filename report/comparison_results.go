@@ -116,7 +116,7 @@ func (w *comparisonWriter) findings() {
 		rows = append(rows, []cell{{text: name, bold: changed}, sa, va, sb, vb, {text: limit}, {text: strings.Join(cites, " "), dim: true}})
 	}
 	d.pendingLegend()
-	d.drawTable(table{cols: []col{{"Criterion", 2.5, 'L'}, {w.la, 1.05, 'L'}, {"", 0.95, 'R'}, {w.lb, 1.05, 'L'}, {"", 0.95, 'R'}, {"Limit", 0.9, 'R'}, {"Source", 0.6, 'L'}},
+	d.drawTable(table{cols: []col{{"Criterion", 2.2, 'L'}, {w.la, 0.95, 'L'}, {"", 1.15, 'R'}, {w.lb, 0.95, 'L'}, {"", 1.15, 'R'}, {"Limit", 1.1, 'R'}, {"Source", 0.5, 'L'}},
 		rows: rows, zebra: true, size: 8})
 	src := make([][]cell, len(refs.list))
 	for i, r := range refs.list {
