@@ -81,6 +81,7 @@ func (w *assessmentWriter) write() {
 	w.d.newPage()
 	w.titleBlock()
 	w.summary()
+	w.cautions()
 	w.d.signOff(w.m.Reviewer)
 	w.inputs()
 	w.vesselState()
@@ -91,7 +92,6 @@ func (w *assessmentWriter) write() {
 	w.release()
 	w.findings()
 	w.toleranceStudy()
-	w.cautions()
 	w.provenance()
 	if w.appendix {
 		w.calculationRecord()

@@ -7,7 +7,7 @@ import (
 
 // Chart heights in mm.
 const (
-	chartHeight     = 88
+	chartHeight     = 78
 	histogramHeight = 56
 )
 

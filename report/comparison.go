@@ -120,10 +120,11 @@ func (w *comparisonWriter) write() {
 	w.inputs()
 	w.results()
 	w.findings()
-	// The sign-off follows the findings it signs, never alone on a page.
+	// The cautions come before the sign-off, as in the assessment, and
+	// the sign-off follows the findings it signs, never alone on a page.
+	w.cautions()
 	d.signOff(firstNonBlank(w.mb.Reviewer, w.ma.Reviewer))
 	w.chart()
-	w.cautions()
 	d.finishPages()
 }
 

@@ -34,10 +34,10 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 	}
 	vol := "computed from the parts"
 	if ds.Vessel.InternalVolumeM3 > 0 {
-		vol = u.vesselVolume(ds.Vessel.InternalVolumeM3) + " measured"
+		vol = u.given(display.VesselVolume, ds.Vessel.InternalVolumeM3) + " measured"
 	}
 	if ds.Vessel.VolumeToleranceM3 > 0 {
-		vol += ", " + u.plusMinus(u.vesselVolume(ds.Vessel.VolumeToleranceM3))
+		vol += ", " + u.plusMinus(u.given(display.VesselVolume, ds.Vessel.VolumeToleranceM3))
 	}
 	glass := ds.Glass.ID
 	if ds.Glass.Custom != nil {
@@ -47,7 +47,7 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 	}
 	pairs := [][2]string{
 		{"Fluid", fluid},
-		{"Fill mass", display.WithTolerance(u.mass(ds.FillMassKg), ds.FillMassToleranceKg, u.mass)},
+		{"Fill mass", display.WithTolerance(u.given(display.Mass, ds.FillMassKg), ds.FillMassToleranceKg, func(x float64) string { return u.given(display.Mass, x) })},
 		{"Internal volume", vol},
 	}
 	if a != nil {
@@ -56,7 +56,7 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 			[2]string{"Fill density", u.density(a.FillDensity)},
 			[2]string{"Liquid share at sealing", percent(a.LiquidFractionAtSealing, 3) + " of the volume"})
 	}
-	gas := u.pressure(ds.ResidualGasPressurePa)
+	gas := u.given(display.Pressure, ds.ResidualGasPressurePa)
 	if ds.ResidualGasPressurePa == 0 {
 		gas = "none (fully evacuated)"
 	}
@@ -65,7 +65,7 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 		[2]string{LabelResidualGas, gas},
 		[2]string{"Hottest temperature", u.temperature(ds.HottestK)},
 		[2]string{"Coldest temperature", u.temperature(ds.ColdestK)},
-		[2]string{LabelAmbientPressure, u.pressure(ds.AmbientPressurePa)},
+		[2]string{LabelAmbientPressure, u.given(display.Pressure, ds.AmbientPressurePa)},
 		[2]string{"Glass", glass},
 		[2]string{"Service life", display.Stated(ds.ServiceLifeYears) + " years"},
 		[2]string{"Time at the hottest", display.Stated(ds.HoursAtHottest) + " h over the life"},
@@ -81,14 +81,14 @@ func partsTable(parts []hazards.Part, u unitSystem) table {
 	for _, p := range parts {
 		length := noValue
 		if p.Shape == hazards.ShapeTube {
-			length = u.length(p.LengthM)
+			length = u.given(display.Length, p.LengthM)
 		}
 		tol := "not stated"
 		if p.WallToleranceM > 0 {
-			tol = u.plusMinus(u.length(p.WallToleranceM))
+			tol = u.plusMinus(u.given(display.Length, p.WallToleranceM))
 		}
 		rows = append(rows, []cell{
-			{text: p.Name}, {text: p.Shape}, {text: u.length(p.OuterDiameterM)}, {text: u.length(p.WallThicknessM)},
+			{text: p.Name}, {text: p.Shape}, {text: u.given(display.Length, p.OuterDiameterM)}, {text: u.given(display.Length, p.WallThicknessM)},
 			{text: tol}, {text: length}, {text: u.vesselVolume(p.InternalVolume())},
 		})
 	}
@@ -103,11 +103,11 @@ func roomPairs(r hazards.Room, u unitSystem) [][2]string {
 	preset := display.RoomPresetName(r.PresetID)
 	return [][2]string{
 		{"Room", preset},
-		{"Room volume", u.roomVolume(r.VolumeM3)},
+		{"Room volume", u.given(display.RoomVolume, r.VolumeM3)},
 		{"Air changes per hour", display.Stated(r.AirChangesPerHour) + " per hour"},
 		{"Mixing factor", display.Stated(r.MixingFactor) + " (1 = perfectly mixed)"},
-		{"Near-field radius", u.roomLength(r.NearFieldRadiusM)},
-		{"Near-field air speed", u.speed(r.NearFieldAirSpeed)},
+		{"Near-field radius", u.given(display.RoomLength, r.NearFieldRadiusM)},
+		{"Near-field air speed", u.given(display.Speed, r.NearFieldAirSpeed)},
 		{LabelExposureTime, display.Stated(r.ExposureMinutes) + " min after the breakage"},
 		{"Near-field volume", u.roomVolume(hazards.NearFieldVolume(r.NearFieldRadiusM))},
 	}
@@ -139,7 +139,7 @@ func criteriaTable(cr hazards.Criteria) table {
 		{{text: "Strength checked at"}, {text: "nominal and thinnest walls"}, {text: "The burst safety factor is found for the nominal unit and for the weakest permitted unit: every wall at its thinnest, the fill and volume tolerances stacked to raise the pressure (common practice: strength at the minimum permitted thickness).", dim: true}},
 		{{text: "Peak concentration"}, {text: "highest 1-minute average"}, {text: "The highest one-minute average in the room or beside the breakage, the top of the charted curves; no concentration is taken above the saturated vapour at the room temperature, the whole fill in the near field, or pure vapour.", dim: true}},
 	}
-	return table{cols: []col{{"Criterion", 2.2, 'L'}, {"Value", 1.3, 'R'}, {"Grounds", 5, 'L'}}, rows: rows, zebra: true}
+	return table{cols: []col{{"Criterion", 2.2, 'L'}, {"Value", 1.3, 'R'}, {"Grounds", 5, 'L'}}, rows: rows, zebra: true, size: 7.5}
 }
 
 // limitSetsRow names the limit sets applied and whether they are the

@@ -52,6 +52,31 @@ type references struct {
 // one is cited by its number in the reference list.
 const shortSource = 40
 
+// number returns "[n]" for any source, numbering it on first use: a list
+// of the limits' sources, where even a short source is cited by number.
+func (r *references) number(source string) string {
+	n, ok := r.index[source]
+	if !ok {
+		r.list = append(r.list, source)
+		n = len(r.list)
+		r.index[source] = n
+	}
+	return fmt.Sprintf("[%d]", n)
+}
+
+// sourceList prints a numbered list of sources under a subheading.
+func (d *doc) sourceList(title string, list []string) {
+	if len(list) == 0 {
+		return
+	}
+	rows := make([][]cell, len(list))
+	for i, r := range list {
+		rows[i] = []cell{{text: fmt.Sprintf("[%d]", i+1), dim: true}, {text: r, italic: true}}
+	}
+	d.subheading(title)
+	d.drawTable(table{cols: []col{{"", 0.07, 'L'}, {"", 0.93, 'L'}}, rows: rows, noHeader: true, size: 7})
+}
+
 // cite returns "[n]" for a long source, numbering it on first use, or the
 // source itself when it is short ("design input", "definition").
 func (r *references) cite(source string) string {
@@ -178,8 +203,9 @@ func minusSigns(s string) string {
 	return string(r)
 }
 
-// stepList is "steps 41, 22, 21" for a finding.
-func stepList(steps []int) string {
+// stepNumbers names the calculation record's steps behind a finding in
+// a few words: "calculation steps 50, 13, 14".
+func stepNumbers(steps []int) string {
 	if len(steps) == 0 {
 		return ""
 	}
@@ -187,9 +213,9 @@ func stepList(steps []int) string {
 	for i, n := range steps {
 		parts[i] = strconv.Itoa(n)
 	}
-	word := "steps"
+	word := "calculation steps "
 	if len(steps) == 1 {
-		word = "step"
+		word = "calculation step "
 	}
-	return "Working: calculation record (annex, printed on request), " + word + " " + strings.Join(parts, ", ")
+	return word + strings.Join(parts, ", ")
 }

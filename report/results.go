@@ -43,7 +43,7 @@ func (w *assessmentWriter) vesselState() {
 			string(s.Phase),
 			markIf(u.pressure(s.PressurePa), s.Flags),
 			gas,
-			markIf(display.Fixed(s.UllagePercent, 2)+" %", s.Flags),
+			markIf(u.f(display.Percent, s.UllagePercent), s.Flags),
 			markIf(u.mass(s.LiquidMassKg), s.Flags),
 			markIf(u.mass(s.VapourMassKg), s.Flags),
 			dens(s.LiquidDensity),

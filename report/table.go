@@ -38,7 +38,7 @@ type table struct {
 
 const (
 	cellPadX = 1.4
-	cellPadY = 1.0
+	cellPadY = 0.75
 )
 
 func (c cell) style(size float64) style {

@@ -25,7 +25,7 @@ func (w *assessmentWriter) thermalShock() {
 			c := ps.Cases[ps.Governing]
 			rows = append(rows, []cell{
 				{text: ps.Name}, {text: c.Direction + ", " + u.temperatureDifference(c.DeltaK)},
-				{text: u.stress(ps.StressPerKelvin) + " per K"}, {text: u.stress(c.ThermalStressPa)},
+				{text: u.system().StressPerDegree(ps.StressPerKelvin)}, {text: u.stress(c.ThermalStressPa)},
 				{text: u.stress(c.PressureStressPa + c.ResidualStressPa)}, {text: u.stress(ps.StrengthPa)},
 				{text: display.ValueOf(a, hazards.ThermalShockCriterion(ps.Part)), bold: true}, {text: display.Number(c.FailureProbability, 2)},
 				{text: u.temperatureDifference(ps.AllowableDeltaK)},

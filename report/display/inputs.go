@@ -3,6 +3,8 @@ package display
 import (
 	"fmt"
 	"strings"
+	"unicode"
+	"unicode/utf8"
 
 	"ullage/hazards"
 	"ullage/hazards/compare"
@@ -98,13 +100,23 @@ func ShockText(sh hazards.ThermalShock, s System) string {
 		}
 		t := dir + " " + s.Input(TempDifference, dk)
 		if preset != "" {
-			t += " (" + ShockPresetName(preset) + ")"
+			t += " (" + lowerFirst(ShockPresetName(preset)) + ")"
 		}
 		parts = append(parts, t)
 	}
 	add(hazards.ShockHotToCold, sh.HotToColdK, sh.HotToColdPresetID)
 	add(hazards.ShockColdToHot, sh.ColdToHotK, sh.ColdToHotPresetID)
 	return strings.Join(parts, "; ")
+}
+
+// lowerFirst lower-cases the first letter of a name set inside a
+// sentence ("From a hot car …" becomes "from a hot car …").
+func lowerFirst(s string) string {
+	r, n := utf8.DecodeRuneInString(s)
+	if n == 0 {
+		return s
+	}
+	return string(unicode.ToLower(r)) + s[n:]
 }
 
 // SealText describes the design's residual stress at the seal in a line.
