@@ -72,7 +72,7 @@ func TestTicks(t *testing.T) {
 		{"log decades, all plain", Axis{Min: 1, Max: 1e4, Log: true}, []string{"1", "10", "100", "1000", "10000"}},
 		{"log decades past 10⁴: all powers, never a mix", Axis{Min: 1, Max: 1e5, Log: true}, []string{"10⁰", "10¹", "10²", "10³", "10⁴", "10⁵"}},
 		{"short log axis adds 2 and 5", Axis{Min: 100, Max: 1000, Log: true}, []string{"100", "200", "500", "1000"}},
-		{"small decades", Axis{Min: 1e-4, Max: 1e-2, Log: true}, []string{"10⁻⁴", "2×10⁻⁴", "5×10⁻⁴", "10⁻³", "2×10⁻³", "5×10⁻³", "10⁻²"}},
+		{"small decades", Axis{Min: 1e-4, Max: 1e-2, Log: true}, []string{"10⁻⁴", "2 × 10⁻⁴", "5 × 10⁻⁴", "10⁻³", "2 × 10⁻³", "5 × 10⁻³", "10⁻²"}},
 		{"counts step in whole numbers", Axis{Min: 0, Max: 4, Whole: true}, []string{"0", "1", "2", "3", "4"}},
 		{"counts over a wider range", Axis{Min: 0, Max: 12, Whole: true}, []string{"0", "2", "4", "6", "8", "10", "12"}},
 		{"empty axis", Axis{Min: 1, Max: 1}, nil},

@@ -101,6 +101,15 @@ func Stated(x float64) string {
 	return Number(x, n)
 }
 
+// PowerOfTen writes m × 10^e in [Number]'s notation: "10⁵" when m is 1,
+// "2 × 10⁵" otherwise (a chart's tick labels).
+func PowerOfTen(m, e int) string {
+	if m == 1 {
+		return "10" + superscript(e)
+	}
+	return strconv.Itoa(m) + " × 10" + superscript(e)
+}
+
 // trimZeros removes trailing zeros after a decimal point.
 func trimZeros(s string) string {
 	if !strings.Contains(s, ".") {

@@ -60,10 +60,10 @@ func Spread(p1, p50, p99 float64, format func(float64) string) string {
 }
 
 // Correlation formats a rank correlation with its sign and two decimals
-// ("−0.71", "+0.15").
+// ("−0.71", "+0.15"), and one that rounds to zero as "0.00".
 func Correlation(r float64) string {
 	s := Fixed(r, 2)
-	if s == NoValue || strings.HasPrefix(s, "−") {
+	if s == NoValue || s == "0.00" || strings.HasPrefix(s, "−") {
 		return s
 	}
 	return "+" + s
