@@ -3,9 +3,9 @@ package report
 import (
 	"fmt"
 	"strings"
-	"ullage/report/display"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // inputs prints the design as reviewed.

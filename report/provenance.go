@@ -3,11 +3,11 @@ package report
 import (
 	"fmt"
 	"strings"
-	"ullage/report/display"
 
 	"ullage/fluids"
 	"ullage/fluids/units"
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // provenance prints the source of every fluid and glass value used, each

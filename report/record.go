@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"strconv"
 	"strings"
-	"ullage/report/display"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // calculationRecord prints the appendix that walks through the engine's

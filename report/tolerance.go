@@ -6,10 +6,9 @@ import (
 	"strings"
 
 	"ullage/hazards"
-	"ullage/report/display"
-
 	"ullage/hazards/tolerance"
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // toleranceStudy prints the sampled tolerance study: the failure rates
