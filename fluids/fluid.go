@@ -49,7 +49,11 @@ type Fluid struct {
 	ExposureLimits           []ExposureLimit           `json:"exposure_limits"`
 	NoNumericLimit           []NonNumericLimit         `json:"no_numeric_limit"`
 	PotentialCarcinogen      CarcinogenFlag            `json:"potential_carcinogen"`
-	Warnings                 []string                  `json:"warnings"`
+	// Warnings are the fluid's own cautions, one sentence each. A
+	// temperature or pressure in them is written as an SI quantity in
+	// braces ("{313.15 K}", "{5.7e5 Pa}"), which the display layer prints
+	// in the reader's units; the same holds for Flammability.Note.
+	Warnings []string `json:"warnings"`
 	// Uncertainty is optional: the stated uncertainty of the record's
 	// correlations, one entry per property. A fluid with a reference
 	// equation of state takes the equation's statements instead.

@@ -76,10 +76,6 @@ type Assessment struct {
 
 	Findings []Finding
 	Verdict  Status
-	// Cautions are the standard cautions plus those the fluid calls for.
-	Cautions []string
-	// CautionsUS are the same cautions with temperatures in °F.
-	CautionsUS []string
 	// Flags gathers every correlation stretched anywhere in the review.
 	Flags fluids.Flags
 

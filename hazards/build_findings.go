@@ -114,8 +114,6 @@ func (a *Assessment) findings() {
 	for _, x := range fs {
 		a.Verdict = Worse(a.Verdict, x.Status)
 	}
-	a.Cautions = append(append([]string(nil), StandardCautions...), fluidCautions(f, false)...)
-	a.CautionsUS = append(append([]string(nil), StandardCautions...), fluidCautions(f, true)...)
 }
 
 // worstCaseFinding judges the worst-case unit's ullage by the same rule as

@@ -10,13 +10,16 @@ import (
 )
 
 // WriteAssessment writes the PDF record of one assessed revision to w: a
-// header block and the summary of findings with the overall verdict on the
-// first page, then the inputs, the vessel state with a pressure–temperature
-// chart, the glass, the limits, the rupture, the release with a
-// concentration chart, each finding with its message and source, the
-// cautions, the provenance of every fluid and glass value, and a sign-off
-// block. Every page carries "Page x of y" and the product, revision and
-// design fingerprint.
+// header block, the overall verdict, the data behind it and the summary of
+// findings from the first page, the cautions and the sign-off block (on
+// page 2 for a design like the bundled example), then the inputs, the
+// vessel state with a pressure–temperature chart and the fill–temperature
+// map, the glass, thermal shock, the limits, the rupture, the release with
+// a concentration chart, each finding with the facts behind it and a
+// numbered list of its limits' sources, any tolerance study, the
+// provenance of every fluid and glass value and, on request, the
+// calculation record as an annex. Every page carries "Page x of y" and the
+// product, revision and design fingerprint.
 //
 // a must come from hazards.Assess. It returns an *OptionError (wrapping
 // ErrInvalidOptions) for bad options or a missing assessment, and any
@@ -81,6 +84,7 @@ func (w *assessmentWriter) write() {
 	w.d.newPage()
 	w.titleBlock()
 	w.summary()
+	w.cautions()
 	w.d.signOff(w.m.Reviewer)
 	w.inputs()
 	w.vesselState()
@@ -91,7 +95,6 @@ func (w *assessmentWriter) write() {
 	w.release()
 	w.findings()
 	w.toleranceStudy()
-	w.cautions()
 	w.provenance()
 	if w.appendix {
 		w.calculationRecord()

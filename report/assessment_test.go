@@ -32,17 +32,18 @@ func TestAssessmentReadsBack(t *testing.T) {
 		w, h float64
 		// want are strings the record must contain. The conversions of
 		// the design's inputs are plain arithmetic on the fixture:
-		// 76 °C = 168.8 °F, 30 m³ = 1059 ft³ (1 ft³ = 0.028316846592 m³,
-		// exact), 6 g = 0.212 oz (1 oz = 28.349523125 g, exact).
+		// 76 °C = 168.8 °F, 30 m³ = 1059.4 ft³ (1 ft³ = 0.028316846592 m³,
+		// exact), 6 g = 0.2116 oz (1 oz = 28.349523125 g, exact); inputs
+		// print with four figures at most, results with three.
 		want []string
 	}{
 		{"si-a4", Options{Units: UnitsSI, Paper: PaperA4}, a4W, a4H, []string{
-			"Hottest temperature 76.0 °C", "Coldest temperature −29.0 °C", "Room volume 30.0 m³", "Fill mass 6.00 g ± 0.200 g",
-			fmt.Sprintf("%.1f kPa", a.Hot.PressurePa/1000), "mg/m³", "Units SI (°C, kPa, mm, g, m³)",
+			"Hottest temperature 76.0 °C", "Coldest temperature −29.0 °C", "Room volume 30 m³", "Fill mass 6 g ± 0.2 g",
+			fmt.Sprintf("%.3g kPa", a.Hot.PressurePa/1000), "mg/m³", "Units SI (°C, kPa, mm, g, m³)",
 		}},
 		{"us-letter", Options{Units: UnitsUS, Paper: PaperLetter}, letterW, letterH, []string{
-			"Hottest temperature 168.8 °F", "Room volume 1059 ft³", "Fill mass 0.212 oz",
-			fmt.Sprintf("%.2f psi", a.Hot.PressurePa/6894.757293168), "mg/m³", "US customary (°F, psi, in, oz, ft³)",
+			"Hottest temperature 168.8 °F", "Room volume 1059 ft³", "Fill mass 0.2116 oz",
+			fmt.Sprintf("%.3g psi", a.Hot.PressurePa/6894.757293168), "mg/m³", "US customary (°F, psi, in, oz, ft³)",
 		}},
 		{"si-letter", Options{Units: UnitsSI, Paper: PaperLetter}, letterW, letterH, []string{"Hottest temperature 76.0 °C"}},
 		{"us-a4", Options{Units: UnitsUS, Paper: PaperA4}, a4W, a4H, []string{"Hottest temperature 168.8 °F"}},
@@ -115,7 +116,7 @@ func TestAssessmentCautionsAndSources(t *testing.T) {
 		"Weibull modulus":        g.WeibullModulus.Source,
 		"stress corrosion":       g.StressCorrosionExponent.Source,
 	}
-	for i, c := range a.Cautions {
+	for i, c := range display.Cautions(a, display.SI) {
 		want[fmt.Sprintf("caution %d", i)] = c
 	}
 	for i, p := range f.VapourPressure {

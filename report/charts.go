@@ -2,11 +2,12 @@ package report
 
 import (
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // Chart heights in mm.
 const (
-	chartHeight     = 88
+	chartHeight     = 78
 	histogramHeight = 56
 )
 
@@ -17,7 +18,7 @@ func (u unitSystem) chartUnits() chartmodel.Units {
 	return chartmodel.Units{
 		Temperature: chartmodel.Quantity{Unit: tq.unit, FromSI: tq.conv, Format: u.temperature},
 		Pressure:    chartmodel.Quantity{Unit: pq.unit, FromSI: pq.conv, Format: u.pressure},
-		Number:      plain,
+		Number:      display.Stated,
 	}
 }
 

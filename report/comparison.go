@@ -120,10 +120,11 @@ func (w *comparisonWriter) write() {
 	w.inputs()
 	w.results()
 	w.findings()
-	// The sign-off follows the findings it signs, never alone on a page.
+	// The cautions come before the sign-off, as in the assessment, and
+	// the sign-off follows the findings it signs, never alone on a page.
+	w.cautions()
 	d.signOff(firstNonBlank(w.mb.Reviewer, w.ma.Reviewer))
 	w.chart()
-	w.cautions()
 	d.finishPages()
 }
 
@@ -169,8 +170,21 @@ func verdict(s compare.Side) hazards.Status {
 func (w *comparisonWriter) statusChanges() {
 	d, c := w.d, w.c
 	const rowH, titleH, pad = 6.5, 8.0, 2.5
-	n := max(len(c.Statuses), 1)
-	h := titleH + 2*rowH + 2 + float64(n)*rowH + 2*pad + 4
+	colA, colB := d.left+0.52*d.width(), d.left+0.76*d.width()
+	// Each criterion is printed in full, wrapped in its column.
+	d.use(body)
+	markW := d.c.textWidth(changedMark + " ")
+	lineH := lineHeight(body.size)
+	titles := make([][]string, len(c.Statuses))
+	rowsH := rowH
+	if len(c.Statuses) > 0 {
+		rowsH = 0
+	}
+	for i, s := range c.Statuses {
+		titles[i] = d.wrap(s.Title, colA-d.left-pad-4-markW)
+		rowsH += rowH + float64(len(titles[i])-1)*lineH
+	}
+	h := titleH + 2*rowH + 2 + rowsH + 2*pad + 4
 	d.need(h)
 	cv := d.c
 	top := d.y
@@ -182,7 +196,6 @@ func (w *comparisonWriter) statusChanges() {
 	d.use(style{faceBold, 10, black})
 	cv.drawText(d.left+pad+1, baseline(top+1, titleH, 10), "Overall verdict and findings whose status changed")
 	y := top + titleH + 1
-	colA, colB := d.left+0.52*d.width(), d.left+0.76*d.width()
 	d.use(smallBold)
 	cv.drawText(colA, baseline(y, rowH, 7.5), w.la)
 	cv.drawText(colB, baseline(y, rowH, 7.5), w.lb)
@@ -201,14 +214,17 @@ func (w *comparisonWriter) statusChanges() {
 		d.use(bodyItalic)
 		cv.drawText(d.left+pad+1, baseline(y, rowH, 9), "No finding changed status between the revisions.")
 	}
-	for _, s := range c.Statuses {
+	for i, s := range c.Statuses {
 		d.use(body)
-		cv.drawText(d.left+pad+1, baseline(y, rowH, 9), changedMark+" "+d.fit(s.Title, colA-d.left-pad-6))
+		cv.drawText(d.left+pad+1, baseline(y, rowH, 9), changedMark)
+		for j, ln := range titles[i] {
+			cv.drawText(d.left+pad+1+markW, baseline(y, rowH, 9)+float64(j)*lineH, ln)
+		}
 		w.statusAt(colA, y, rowH, s.Old, 8.5)
 		d.use(body)
 		cv.drawText(colB-6, baseline(y, rowH, 9), "→")
 		w.statusAt(colB, y, rowH, s.New, 8.5)
-		y += rowH
+		y += rowH + float64(len(titles[i])-1)*lineH
 	}
 	d.y = top + h + 3
 }

@@ -1,7 +1,6 @@
 package report
 
 import (
-	"fmt"
 	"strings"
 
 	"ullage/hazards"
@@ -95,12 +94,7 @@ func (w *comparisonWriter) findings() {
 		var cites []string
 		for _, src := range []string{srcA, srcB} {
 			if strings.TrimSpace(src) != "" {
-				n := refs.cite(src)
-				if !strings.HasPrefix(n, "[") { // a short source is numbered too
-					refs.list = append(refs.list, src)
-					refs.index[src] = len(refs.list)
-					n = fmt.Sprintf("[%d]", len(refs.list))
-				}
+				n := refs.number(src)
 				if len(cites) == 0 || cites[0] != n {
 					cites = append(cites, n)
 				}
@@ -116,14 +110,9 @@ func (w *comparisonWriter) findings() {
 		rows = append(rows, []cell{{text: name, bold: changed}, sa, va, sb, vb, {text: limit}, {text: strings.Join(cites, " "), dim: true}})
 	}
 	d.pendingLegend()
-	d.drawTable(table{cols: []col{{"Criterion", 2.5, 'L'}, {w.la, 1.05, 'L'}, {"", 0.95, 'R'}, {w.lb, 1.05, 'L'}, {"", 0.95, 'R'}, {"Limit", 0.9, 'R'}, {"Source", 0.6, 'L'}},
+	d.drawTable(table{cols: []col{{"Criterion", 1.95, 'L'}, {w.la, 1.1, 'L'}, {"", 1.05, 'R'}, {w.lb, 1.1, 'L'}, {"", 1.05, 'R'}, {"Limit", 1.1, 'R'}, {"Source", 0.65, 'L'}},
 		rows: rows, zebra: true, size: 8})
-	src := make([][]cell, len(refs.list))
-	for i, r := range refs.list {
-		src[i] = []cell{{text: fmt.Sprintf("[%d]", i+1), dim: true}, {text: r, italic: true}}
-	}
-	d.subheading("Sources of the limits")
-	d.drawTable(table{cols: []col{{"", 0.07, 'L'}, {"", 0.93, 'L'}}, rows: src, noHeader: true, size: 7})
+	d.sourceList("Sources of the limits", refs.list)
 }
 
 // cautions prints the cautions of both sides, each once.
@@ -136,11 +125,7 @@ func (w *comparisonWriter) cautions() {
 		if s.Assessment == nil {
 			continue
 		}
-		list := s.Assessment.Cautions
-		if w.u.us && len(s.Assessment.CautionsUS) > 0 {
-			list = s.Assessment.CautionsUS
-		}
-		for _, x := range list {
+		for _, x := range display.Cautions(s.Assessment, w.u.system()) {
 			if !seen[x] {
 				seen[x] = true
 				cs = append(cs, x)

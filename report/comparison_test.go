@@ -38,10 +38,10 @@ func TestComparisonReadsBack(t *testing.T) {
 		name string
 		o    Options
 		w, h float64
-		want []string // the fill change is the fixtures' own numbers: 44 g and 30 g, 1.55 oz and 1.06 oz
+		want []string // the fill change is the fixtures' own numbers: 44 g and 30 g, 1.552 oz and 1.058 oz to four figures (1 oz = 28.349523125 g)
 	}{
-		{"si-a4", Options{}, a4W, a4H, []string{"► Fill mass 44.0 g ± 0.500 g 30.0 g ± 0.500 g", "Hottest temperature 76.0 °C 76.0 °C"}},
-		{"us-letter", Options{Units: UnitsUS, Paper: PaperLetter}, letterW, letterH, []string{"► Fill mass 1.55 oz ± 0.0176 oz 1.06 oz ± 0.0176 oz", "Hottest temperature 168.8 °F 168.8 °F"}},
+		{"si-a4", Options{}, a4W, a4H, []string{"► Fill mass 44 g ± 0.5 g 30 g ± 0.5 g", "Hottest temperature 76.0 °C 76.0 °C"}},
+		{"us-letter", Options{Units: UnitsUS, Paper: PaperLetter}, letterW, letterH, []string{"► Fill mass 1.552 oz ± 0.01764 oz 1.058 oz ± 0.01764 oz", "Hottest temperature 168.8 °F 168.8 °F"}},
 	}
 	for _, tc := range cases {
 		t.Run(tc.name, func(t *testing.T) {

@@ -51,5 +51,5 @@ func ExampleWriteAssessment() {
 	}
 	pages := bytes.Count(buf.Bytes(), []byte("/Type /Page")) - bytes.Count(buf.Bytes(), []byte("/Type /Pages"))
 	fmt.Printf("%s, %d pages, verdict %s\n", buf.Bytes()[:8], pages, a.Verdict)
-	// Output: %PDF-1.3, 11 pages, verdict fail
+	// Output: %PDF-1.3, 9 pages, verdict fail
 }

@@ -7,35 +7,44 @@ import (
 	"ullage/report/display"
 )
 
-// findings prints every finding with its numbers, message and the source
-// of its limit; each finding is kept whole on one page.
+// findings prints every finding with its numbers, the facts behind it,
+// the number of its limit's source in the list that follows and the
+// steps of the calculation record behind it; each finding is kept whole
+// on one page.
 func (w *assessmentWriter) findings() {
 	d := w.d
 	d.heading("Findings")
+	d.lead("Each finding with the values behind it. The source of its limit is cited by number from the list that follows; the steps named are those of the calculation record, an annex printed on request.")
+	refs := &references{index: map[string]int{}}
 	for _, v := range display.Findings(w.a, w.u.system()) {
-		f := v.Finding
-		source := "Source of the limit: " + v.Source
-		if steps := stepList(f.Steps); steps != "" {
-			source += ".  " + steps + "."
+		numbers := v.Numbers()
+		if strings.TrimSpace(v.Source) != "" {
+			numbers += "   ·   Source " + refs.number(v.Source)
 		}
-		d.findingBlock(f.Status, v.Title, v.Numbers(), v.Text(), source)
+		text := v.Text()
+		if steps := stepNumbers(v.Finding.Steps); steps != "" {
+			text = strings.TrimSpace(text + " " + capitalFirst(steps) + ".")
+		}
+		d.findingBlock(v.Finding.Status, v.Title, numbers, text)
 	}
+	d.sourceList("Sources of the limits", refs.list)
 }
 
-// findingBlock prints one finding: the status on the left, the text on
-// the right.
-func (d *doc) findingBlock(s hazards.Status, title, numbers, message, source string) {
-	const statusW, pad = 27.0, 1.6
+// findingBlock prints one finding: the status on the left, the title,
+// numbers and text on the right.
+func (d *doc) findingBlock(s hazards.Status, title, numbers, message string) {
+	const statusW, pad, size = 27.0, 1.6, 8.5
 	paras := []para{{text: title, st: bodyBold}, {text: numbers, st: body}}
 	if message != "" {
 		paras = append(paras, para{text: message, st: body, gap: 0.6})
 	}
-	if source != "" {
-		paras = append(paras, para{text: source, st: smallIt, gap: 0.6})
-	}
 	lines, h := d.layoutParas(paras, d.width()-statusW)
+	d.use(style{faceBold, size, black})
+	word := d.wrap(statusWord(s), statusW-2-statusMarkWidth(size)-1.2)
+	lh := lineHeight(body.size)
+	h = max(h, float64(len(word))*lh)
 	d.need(h + 2*pad)
-	d.drawStatusInline(d.left, d.y+pad, lineHeight(body.size), s, 8.5)
+	d.drawStatusWrapped(d.left, d.y+pad, lh, s, size, word)
 	d.drawLines(lines, d.left+statusW, d.y+pad)
 	d.y += h + 2*pad
 	d.c.setStroke(lightGrey)
@@ -48,11 +57,7 @@ func (d *doc) findingBlock(s hazards.Status, title, numbers, message, source str
 func (w *assessmentWriter) cautions() {
 	d := w.d
 	d.heading("Cautions")
-	cs := w.a.Cautions
-	if w.u.us && len(w.a.CautionsUS) > 0 {
-		cs = w.a.CautionsUS
-	}
-	d.box("Read before relying on this record", cautionParas(cs))
+	d.box("Read before relying on this record", cautionParas(display.Cautions(w.a, w.u.system())))
 }
 
 // cautionParas lists the cautions as bullets after a sentence deferring

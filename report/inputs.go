@@ -3,9 +3,9 @@ package report
 import (
 	"fmt"
 	"strings"
-	"ullage/report/display"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // inputs prints the design as reviewed.
@@ -34,10 +34,10 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 	}
 	vol := "computed from the parts"
 	if ds.Vessel.InternalVolumeM3 > 0 {
-		vol = u.vesselVolume(ds.Vessel.InternalVolumeM3) + " measured"
+		vol = u.given(display.VesselVolume, ds.Vessel.InternalVolumeM3) + " measured"
 	}
 	if ds.Vessel.VolumeToleranceM3 > 0 {
-		vol += ", " + u.plusMinus(u.vesselVolume(ds.Vessel.VolumeToleranceM3))
+		vol += ", " + u.plusMinus(u.given(display.VesselVolume, ds.Vessel.VolumeToleranceM3))
 	}
 	glass := ds.Glass.ID
 	if ds.Glass.Custom != nil {
@@ -47,7 +47,7 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 	}
 	pairs := [][2]string{
 		{"Fluid", fluid},
-		{"Fill mass", withTolerance(u.mass(ds.FillMassKg), ds.FillMassToleranceKg, u.mass)},
+		{"Fill mass", display.WithTolerance(u.given(display.Mass, ds.FillMassKg), ds.FillMassToleranceKg, func(x float64) string { return u.given(display.Mass, x) })},
 		{"Internal volume", vol},
 	}
 	if a != nil {
@@ -56,7 +56,7 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 			[2]string{"Fill density", u.density(a.FillDensity)},
 			[2]string{"Liquid share at sealing", percent(a.LiquidFractionAtSealing, 3) + " of the volume"})
 	}
-	gas := u.pressure(ds.ResidualGasPressurePa)
+	gas := u.given(display.Pressure, ds.ResidualGasPressurePa)
 	if ds.ResidualGasPressurePa == 0 {
 		gas = "none (fully evacuated)"
 	}
@@ -65,12 +65,12 @@ func designPairs(ds *hazards.Design, a *hazards.Assessment, u unitSystem) [][2]s
 		[2]string{LabelResidualGas, gas},
 		[2]string{"Hottest temperature", u.temperature(ds.HottestK)},
 		[2]string{"Coldest temperature", u.temperature(ds.ColdestK)},
-		[2]string{LabelAmbientPressure, u.pressure(ds.AmbientPressurePa)},
+		[2]string{LabelAmbientPressure, u.given(display.Pressure, ds.AmbientPressurePa)},
 		[2]string{"Glass", glass},
-		[2]string{"Service life", plain(ds.ServiceLifeYears) + " years"},
-		[2]string{"Time at the hottest", plain(ds.HoursAtHottest) + " h over the life"},
-		[2]string{"Sudden temperature change", shockInputText(ds.ThermalShock, u)},
-		[2]string{"Residual stress at the seal", sealInputText(ds.SealStress, u)},
+		[2]string{"Service life", display.Stated(ds.ServiceLifeYears) + " years"},
+		[2]string{"Time at the hottest", display.Stated(ds.HoursAtHottest) + " h over the life"},
+		[2]string{"Sudden temperature change", display.ShockText(ds.ThermalShock, u.system())},
+		[2]string{"Residual stress at the seal", display.SealText(ds.SealStress, u.system())},
 	)
 	return pairs
 }
@@ -81,14 +81,14 @@ func partsTable(parts []hazards.Part, u unitSystem) table {
 	for _, p := range parts {
 		length := noValue
 		if p.Shape == hazards.ShapeTube {
-			length = u.length(p.LengthM)
+			length = u.given(display.Length, p.LengthM)
 		}
 		tol := "not stated"
 		if p.WallToleranceM > 0 {
-			tol = u.plusMinus(u.length(p.WallToleranceM))
+			tol = u.plusMinus(u.given(display.Length, p.WallToleranceM))
 		}
 		rows = append(rows, []cell{
-			{text: p.Name}, {text: p.Shape}, {text: u.length(p.OuterDiameterM)}, {text: u.length(p.WallThicknessM)},
+			{text: p.Name}, {text: p.Shape}, {text: u.given(display.Length, p.OuterDiameterM)}, {text: u.given(display.Length, p.WallThicknessM)},
 			{text: tol}, {text: length}, {text: u.vesselVolume(p.InternalVolume())},
 		})
 	}
@@ -98,29 +98,17 @@ func partsTable(parts []hazards.Part, u unitSystem) table {
 	}, rows: rows, zebra: true}
 }
 
-// presetName is the name of a room preset ("custom" for none, the id
-// itself when the preset is unknown).
-func presetName(id string) string {
-	if id == "" {
-		return "custom"
-	}
-	if p, err := hazards.LookupRoomPreset(id); err == nil && p.Name != "" {
-		return p.Name
-	}
-	return id
-}
-
 // roomPairs lists the release scenario.
 func roomPairs(r hazards.Room, u unitSystem) [][2]string {
-	preset := presetName(r.PresetID)
+	preset := display.RoomPresetName(r.PresetID)
 	return [][2]string{
 		{"Room", preset},
-		{"Room volume", u.roomVolume(r.VolumeM3)},
-		{"Air changes per hour", plain(r.AirChangesPerHour) + " per hour"},
-		{"Mixing factor", plain(r.MixingFactor) + " (1 = perfectly mixed)"},
-		{"Near-field radius", u.roomLength(r.NearFieldRadiusM)},
-		{"Near-field air speed", u.speed(r.NearFieldAirSpeed)},
-		{LabelExposureTime, plain(r.ExposureMinutes) + " min after the breakage"},
+		{"Room volume", u.given(display.RoomVolume, r.VolumeM3)},
+		{"Air changes per hour", display.Stated(r.AirChangesPerHour) + " per hour"},
+		{"Mixing factor", display.Stated(r.MixingFactor) + " (1 = perfectly mixed)"},
+		{"Near-field radius", u.given(display.RoomLength, r.NearFieldRadiusM)},
+		{"Near-field air speed", u.given(display.Speed, r.NearFieldAirSpeed)},
+		{LabelExposureTime, display.Stated(r.ExposureMinutes) + " min after the breakage"},
 		{"Near-field volume", u.roomVolume(hazards.NearFieldVolume(r.NearFieldRadiusM))},
 	}
 }
@@ -135,23 +123,23 @@ func criteriaTable(cr hazards.Criteria) table {
 	row := func(name, key string, v, dv float64, text string) []cell {
 		grounds := hazards.DefaultCriteriaGrounds[key]
 		if v != dv {
-			grounds = "Set for this review (default " + plain(dv) + ": " + grounds + ")"
+			grounds = "Set for this review (default " + display.Stated(dv) + ": " + grounds + ")"
 		}
 		return []cell{{text: name}, {text: text}, {text: grounds, dim: true}}
 	}
 	rows := [][]cell{
-		row("Minimum burst safety factor", "min_burst_safety_factor", cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, plain(cr.MinBurstSafetyFactor)),
-		row("Minimum implosion safety factor", "min_implosion_safety_factor", cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, plain(cr.MinImplosionSafetyFactor)),
-		row("Maximum failure probability", "max_failure_probability", cr.MaxFailureProbability, def.MaxFailureProbability, plain(cr.MaxFailureProbability)),
-		row("Minimum ullage at the hottest", "min_ullage_percent", cr.MinUllagePercent, def.MinUllagePercent, plain(cr.MinUllagePercent)+" %"),
-		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, plain(cr.MaxFractionOfLimit)),
-		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, plain(cr.MaxPercentLFL)+" %"),
+		row("Minimum burst safety factor", "min_burst_safety_factor", cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, display.Stated(cr.MinBurstSafetyFactor)),
+		row("Minimum implosion safety factor", "min_implosion_safety_factor", cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, display.Stated(cr.MinImplosionSafetyFactor)),
+		row("Maximum failure probability", "max_failure_probability", cr.MaxFailureProbability, def.MaxFailureProbability, display.Stated(cr.MaxFailureProbability)),
+		row("Minimum ullage at the hottest", "min_ullage_percent", cr.MinUllagePercent, def.MinUllagePercent, display.Stated(cr.MinUllagePercent)+" %"),
+		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, display.Stated(cr.MaxFractionOfLimit)),
+		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, display.Stated(cr.MaxPercentLFL)+" %"),
 		{{text: "Exposure limits from"}, {text: bodies}, {text: "Chosen for this review. Every limit of these bodies is averaged over its own period as its body defines it (NIOSH REL TWA up to a 10-hour day, OSHA PEL and ACGIH TLV TWA 8 hours, STEL 15 minutes or the stated period, ceiling at its stated period or the peak, IDLH 30 minutes); for each kind the limit with the largest share of its limit governs, and a kind with no published limit is listed as not assessed.", dim: true}},
 		limitSetsRow(cr),
 		{{text: "Strength checked at"}, {text: "nominal and thinnest walls"}, {text: "The burst safety factor is found for the nominal unit and for the weakest permitted unit: every wall at its thinnest, the fill and volume tolerances stacked to raise the pressure (common practice: strength at the minimum permitted thickness).", dim: true}},
 		{{text: "Peak concentration"}, {text: "highest 1-minute average"}, {text: "The highest one-minute average in the room or beside the breakage, the top of the charted curves; no concentration is taken above the saturated vapour at the room temperature, the whole fill in the near field, or pure vapour.", dim: true}},
 	}
-	return table{cols: []col{{"Criterion", 2.2, 'L'}, {"Value", 1.3, 'R'}, {"Grounds", 5, 'L'}}, rows: rows, zebra: true}
+	return table{cols: []col{{"Criterion", 2.2, 'L'}, {"Value", 1.3, 'R'}, {"Grounds", 5, 'L'}}, rows: rows, zebra: true, size: 7.5}
 }
 
 // limitSetsRow names the limit sets applied and whether they are the
@@ -166,12 +154,4 @@ func limitSetsRow(cr hazards.Criteria) []cell {
 		grounds = "The default, as the design names none: a consumer product may break where the general public, children included, breathes the release, so the public acute benchmarks (AEGL, DOE PAC) apply beside the US occupational limits."
 	}
 	return []cell{{text: "Limit sets"}, {text: strings.Join(names, ", ")}, {text: grounds, dim: true}}
-}
-
-// withTolerance appends "± tolerance" when there is one.
-func withTolerance(value string, tol float64, format func(float64) string) string {
-	if tol <= 0 {
-		return value
-	}
-	return value + " ± " + format(tol)
 }

@@ -162,14 +162,15 @@ func (d *doc) fit(s string, w float64) string {
 
 // wrap breaks s into lines no wider than w mm in the current font, at
 // spaces where it can and inside a word only when the word alone is too
-// wide. Newlines in s start new lines. A long word is measured once, a
+// wide; a number in powers of ten ("1 × 10⁻⁴") is kept on one line.
+// Newlines in s start new lines. A long word is measured once, a
 // character at a time, so the time is linear in its length.
 func (d *doc) wrap(s string, w float64) []string {
 	var out []string
 	space := d.c.textWidth(" ")
 	for _, para := range strings.Split(s, "\n") {
 		line, lineW := "", 0.0
-		for _, word := range strings.Fields(para) {
+		for _, word := range keepPowers(strings.Fields(para)) {
 			// Widths add up (the font has no kerning), so each word is
 			// measured once rather than the whole line again.
 			wordW := d.c.textWidth(word)
@@ -193,6 +194,21 @@ func (d *doc) wrap(s string, w float64) []string {
 			line, lineW = word, wordW
 		}
 		out = append(out, line)
+	}
+	return out
+}
+
+// keepPowers joins "m", "×" and "10ⁿ" into one word, so that a line never
+// breaks inside a number written in powers of ten.
+func keepPowers(words []string) []string {
+	out := words[:0:0]
+	for i := 0; i < len(words); i++ {
+		if words[i] == "×" && len(out) > 0 && i+1 < len(words) && strings.HasPrefix(words[i+1], "10") {
+			out[len(out)-1] += " × " + words[i+1]
+			i++
+			continue
+		}
+		out = append(out, words[i])
 	}
 	return out
 }

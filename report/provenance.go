@@ -7,6 +7,7 @@ import (
 	"ullage/fluids"
 	"ullage/fluids/units"
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // provenance prints the source of every fluid and glass value used, each
@@ -77,55 +78,60 @@ func sourceCell(s string) cell {
 
 // fluidTable lists the fluid's sourced constants.
 func fluidTable(f *fluids.Fluid, u unitSystem) table {
-	at := func(t float64) string { return "at " + u.temperature(t) }
+	// A value's conditions follow it on a line of their own.
+	at := func(v string, t float64) string { return v + "\nat " + u.temperature(t) }
 	rows := [][]cell{
-		{{text: "Molar mass"}, {text: sig(f.MolarMass.Value*1000, 5) + " g/mol"}, {}, sourceCell(f.MolarMass.Source)},
-		{{text: "Critical temperature"}, {text: u.temperature(f.CriticalTemperature.Value)}, {}, sourceCell(f.CriticalTemperature.Source)},
-		{{text: "Critical pressure"}, {text: u.pressure(f.CriticalPressure.Value)}, {}, sourceCell(f.CriticalPressure.Source)},
-		{{text: "Critical density"}, {text: u.density(f.CriticalDensity.Value)}, {}, sourceCell(f.CriticalDensity.Source)},
-		{{text: "Acentric factor"}, {text: sig(f.AcentricFactor.Value, 4)}, {}, sourceCell(f.AcentricFactor.Source)},
-		{{text: "Normal boiling point"}, {text: u.temperature(f.NormalBoilingPoint.Value)}, {}, sourceCell(f.NormalBoilingPoint.Source)},
-		{{text: "Freezing point"}, {text: u.temperature(f.FreezingPoint.Value)}, {text: "lowest temperature accepted"}, sourceCell(f.FreezingPoint.Source)},
+		{{text: "Molar mass"}, {text: display.Number(f.MolarMass.Value*1000, 5) + " g/mol"}, sourceCell(f.MolarMass.Source)},
+		{{text: "Critical temperature"}, {text: u.temperature(f.CriticalTemperature.Value)}, sourceCell(f.CriticalTemperature.Source)},
+		{{text: "Critical pressure"}, {text: u.given(display.Pressure, f.CriticalPressure.Value)}, sourceCell(f.CriticalPressure.Source)},
+		{{text: "Critical density"}, {text: u.given(display.Density, f.CriticalDensity.Value)}, sourceCell(f.CriticalDensity.Source)},
+		{{text: "Acentric factor"}, {text: display.Number(f.AcentricFactor.Value, 4)}, sourceCell(f.AcentricFactor.Source)},
+		{{text: "Normal boiling point"}, {text: u.temperature(f.NormalBoilingPoint.Value)}, sourceCell(f.NormalBoilingPoint.Source)},
+		{{text: "Freezing point"}, {text: u.temperature(f.FreezingPoint.Value) + "\nlowest accepted"}, sourceCell(f.FreezingPoint.Source)},
 	}
 	// A record paired with a reference equation of state may leave out
 	// the reference liquid density and heat of vaporisation.
 	if f.LiquidDensity.Value > 0 {
-		rows = append(rows, []cell{{text: "Liquid density"}, {text: u.density(f.LiquidDensity.Value)}, {text: at(f.LiquidDensity.TemperatureK)}, sourceCell(f.LiquidDensity.Source)})
+		rows = append(rows, []cell{{text: "Liquid density"}, {text: at(u.given(display.Density, f.LiquidDensity.Value), f.LiquidDensity.TemperatureK)}, sourceCell(f.LiquidDensity.Source)})
 	}
 	if f.HeatOfVaporisation.Value > 0 {
-		rows = append(rows, []cell{{text: "Heat of vaporisation"}, {text: sig(f.HeatOfVaporisation.Value/1000, 4) + " kJ/mol"}, {text: at(f.HeatOfVaporisation.TemperatureK)}, sourceCell(f.HeatOfVaporisation.Source)})
+		rows = append(rows, []cell{{text: "Heat of vaporisation"}, {text: at(display.Number(f.HeatOfVaporisation.Value/1000, 4)+" kJ/mol", f.HeatOfVaporisation.TemperatureK)}, sourceCell(f.HeatOfVaporisation.Source)})
 	}
-	rows = append(rows, []cell{{text: "Liquid heat capacity"}, {text: sig(f.LiquidHeatCapacity.Value, 4) + " J/(mol·K)"}, {text: at(f.LiquidHeatCapacity.TemperatureK)}, sourceCell(f.LiquidHeatCapacity.Source)})
+	rows = append(rows, []cell{{text: "Liquid heat capacity"}, {text: at(display.Number(f.LiquidHeatCapacity.Value, 4)+" J/(mol·K)", f.LiquidHeatCapacity.TemperatureK)}, sourceCell(f.LiquidHeatCapacity.Source)})
 	fl := f.Flammability
 	flam := "no"
 	if fl.Flammable {
 		flam = "yes"
 	}
-	rows = append(rows, []cell{{text: "Flammable"}, {text: flam}, {}, sourceCell(firstNonBlank(fl.Note, "library"))})
+	rows = append(rows, []cell{{text: "Flammable"}, {text: flam}, sourceCell(firstNonBlank(display.Warning(fl.Note, u.system()), "library"))})
 	opt := func(name string, s *fluids.Sourced, format func(float64) string) {
 		if s != nil {
-			rows = append(rows, []cell{{text: name}, {text: format(s.Value)}, {}, sourceCell(s.Source)})
+			rows = append(rows, []cell{{text: name}, {text: format(s.Value)}, sourceCell(s.Source)})
 		}
 	}
-	vol := func(x float64) string { return sig(x, 3) + " % by volume" }
+	vol := func(x float64) string { return display.Number(x, 3) + " % by volume" }
 	opt("Lower flammability limit", fl.LFLPercent, vol)
 	opt("Upper flammability limit", fl.UFLPercent, vol)
 	opt("Flash point", fl.FlashPointK, u.temperature)
 	opt("Autoignition temperature", fl.AutoignitionK, u.temperature)
 	if f.PotentialCarcinogen.Value {
-		rows = append(rows, []cell{{text: "Potential carcinogen"}, {text: "listed by " + f.PotentialCarcinogen.Body}, {}, sourceCell(f.PotentialCarcinogen.Source)})
+		rows = append(rows, []cell{{text: "Potential carcinogen"}, {text: "listed by " + f.PotentialCarcinogen.Body}, sourceCell(f.PotentialCarcinogen.Source)})
 	}
-	return table{cols: []col{{"Property", 1.5, 'L'}, {"Value", 1.3, 'R'}, {"Conditions", 1.1, 'L'}, {"Source", 4.6, 'L'}}, rows: rows, size: 7.5, zebra: true}
+	return table{cols: []col{{"Property", 1.6, 'L'}, {"Value", 1.5, 'R'}, {"Source", 5.4, 'L'}}, rows: rows, size: 7.5, zebra: true}
 }
+
+// samePaper stands for the equation's paper, cited in full on the first
+// row of its table.
+const samePaper = "the same paper"
 
 // equationTable describes a reference equation of state: paper, range,
 // reducing constants and where the coefficients were read.
 func equationTable(e *fluids.EquationOfState, u unitSystem) table {
 	rows := [][]cell{
 		{{text: "Equation"}, {text: e.Name}, sourceCell(e.Paper.Citation())},
-		{{text: "Stated range"}, {text: u.temperature(e.Range.TMinK) + " to " + u.temperature(e.Range.TMaxK) + ", up to " + u.pressure(e.Range.PMaxPa)}, sourceCell(e.Range.Source)},
-		{{text: "Reducing temperature"}, {text: u.temperature(e.Reducing.TemperatureK)}, sourceCell(e.Paper.Citation())},
-		{{text: "Reducing density"}, {text: u.density(e.Reducing.DensityMolM3 * e.MolarMass)}, sourceCell(e.Paper.Citation())},
+		{{text: "Stated range"}, {text: u.temperature(e.Range.TMinK) + " to " + u.temperature(e.Range.TMaxK) + ", up to " + u.given(display.Pressure, e.Range.PMaxPa)}, sourceCell(e.Range.Source)},
+		{{text: "Reducing temperature"}, {text: u.temperature(e.Reducing.TemperatureK)}, sourceCell(samePaper)},
+		{{text: "Reducing density"}, {text: u.given(display.Density, e.Reducing.DensityMolM3*e.MolarMass)}, sourceCell(samePaper)},
 		{{text: "Terms"}, {text: fmt.Sprintf("%d in the residual Helmholtz energy", len(e.Residual))}, sourceCell(e.Transcription)},
 	}
 	return table{cols: []col{{"Item", 1.5, 'L'}, {"Value", 2.4, 'L'}, {"Source", 4.6, 'L'}}, rows: rows, size: 7.5, zebra: true}
@@ -135,7 +141,7 @@ func equationTable(e *fluids.EquationOfState, u unitSystem) table {
 func uncertaintyTable(us []fluids.Uncertainty) table {
 	var rows [][]cell
 	for _, x := range us {
-		rows = append(rows, []cell{{text: strings.ReplaceAll(x.Property, "_", " ")}, {text: "±" + sig(x.Percent, 3) + " %"}, {text: x.Statement}, sourceCell(x.Source)})
+		rows = append(rows, []cell{{text: strings.ReplaceAll(x.Property, "_", " ")}, {text: "±" + display.Number(x.Percent, 3) + " %"}, {text: x.Statement}, sourceCell(x.Source)})
 	}
 	if len(rows) == 0 {
 		rows = append(rows, []cell{{text: "all properties"}, {text: noValue}, {text: "no uncertainty is stated for this fluid's correlations"}, sourceCell("library")})
@@ -147,12 +153,12 @@ func uncertaintyTable(us []fluids.Uncertainty) table {
 func vapourPressureTable(f *fluids.Fluid, u unitSystem) table {
 	var rows [][]cell
 	for _, p := range f.VapourPressure {
-		coef := fmt.Sprintf("A = %s, B = %s, C = %s", sig(p.A, 6), sig(p.B, 6), sig(p.C, 6))
+		coef := fmt.Sprintf("A = %s, B = %s, C = %s", display.Number(p.A, 6), display.Number(p.B, 6), display.Number(p.C, 6))
 		if p.D != 0 {
-			coef += ", D = " + sig(p.D, 6)
+			coef += ", D = " + display.Number(p.D, 6)
 		}
 		if p.E != 0 {
-			coef += ", E = " + sig(p.E, 6)
+			coef += ", E = " + display.Number(p.E, 6)
 		}
 		rows = append(rows, []cell{{text: p.Form}, {text: coef, mono: true}, {text: u.temperature(p.TMinK) + " to " + u.temperature(p.TMaxK)}, sourceCell(p.Source)})
 	}
@@ -174,7 +180,7 @@ func limitsTable(f *fluids.Fluid, limits []hazards.LimitResult) table {
 	for _, l := range f.ExposureLimits {
 		period := noValue
 		if l.Minutes > 0 {
-			period = plain(l.Minutes) + " min"
+			period = display.Stated(l.Minutes) + " min"
 		}
 		g := ""
 		if gov[l] {
@@ -182,7 +188,7 @@ func limitsTable(f *fluids.Fluid, limits []hazards.LimitResult) table {
 		}
 		rows = append(rows, []cell{
 			{text: l.Body, bold: gov[l]}, {text: l.Kind, bold: gov[l]}, {text: l.Averaging, bold: gov[l]}, {text: period},
-			{text: plain(l.PPM), bold: gov[l]}, {text: sig(units.PpmToMgPerM3(l.PPM, f.MolarMass.Value), 3)}, {text: g, bold: true}, sourceCell(l.Source),
+			{text: display.Stated(l.PPM), bold: gov[l]}, {text: display.Number(units.PpmToMgPerM3(l.PPM, f.MolarMass.Value), 3)}, {text: g, bold: true}, sourceCell(l.Source),
 		})
 	}
 	if len(rows) == 0 {
@@ -197,14 +203,14 @@ func limitsTable(f *fluids.Fluid, limits []hazards.LimitResult) table {
 // glassTable lists the glass properties with their sources.
 func glassTable(g *hazards.Glass, u unitSystem) table {
 	rows := [][]cell{
-		{{text: "Elastic modulus"}, {text: u.stress(g.ElasticModulus.Value)}, sourceCell(g.ElasticModulus.Source)},
-		{{text: "Poisson's ratio"}, {text: sig(g.PoissonRatio.Value, 3)}, sourceCell(g.PoissonRatio.Source)},
-		{{text: "Thermal expansion"}, {text: sig(g.Expansion.Value*1e6, 3) + " ×10⁻⁶ /K"}, sourceCell(g.Expansion.Source)},
-		{{text: "Characteristic strength"}, {text: u.stress(g.CharacteristicStrength.Value)}, sourceCell(g.CharacteristicStrength.Source)},
-		{{text: "Reference area"}, {text: u.surface(g.ReferenceArea.Value)}, sourceCell(g.ReferenceArea.Source)},
-		{{text: "Reference load time"}, {text: plain(g.ReferenceLoad.Value) + " s"}, sourceCell(g.ReferenceLoad.Source)},
-		{{text: "Weibull modulus"}, {text: sig(g.WeibullModulus.Value, 3)}, sourceCell(g.WeibullModulus.Source)},
-		{{text: "Stress-corrosion exponent"}, {text: sig(g.StressCorrosionExponent.Value, 3)}, sourceCell(g.StressCorrosionExponent.Source)},
+		{{text: "Elastic modulus"}, {text: u.given(display.Stress, g.ElasticModulus.Value)}, sourceCell(g.ElasticModulus.Source)},
+		{{text: "Poisson's ratio"}, {text: display.Number(g.PoissonRatio.Value, 3)}, sourceCell(g.PoissonRatio.Source)},
+		{{text: "Thermal expansion"}, {text: display.Number(g.Expansion.Value, 3) + " /K"}, sourceCell(g.Expansion.Source)},
+		{{text: "Characteristic strength"}, {text: u.given(display.Stress, g.CharacteristicStrength.Value)}, sourceCell(g.CharacteristicStrength.Source)},
+		{{text: "Reference area"}, {text: u.given(display.Surface, g.ReferenceArea.Value)}, sourceCell(g.ReferenceArea.Source)},
+		{{text: "Reference load time"}, {text: display.Stated(g.ReferenceLoad.Value) + " s"}, sourceCell(g.ReferenceLoad.Source)},
+		{{text: "Weibull modulus"}, {text: display.Number(g.WeibullModulus.Value, 3)}, sourceCell(g.WeibullModulus.Source)},
+		{{text: "Stress-corrosion exponent"}, {text: display.Number(g.StressCorrosionExponent.Value, 3)}, sourceCell(g.StressCorrosionExponent.Source)},
 	}
 	return table{cols: []col{{"Property", 1.9, 'L'}, {"Value", 1.2, 'R'}, {"Source", 5.4, 'L'}}, rows: rows, size: 7.5, zebra: true}
 }
@@ -233,7 +239,7 @@ func validityTable(a *hazards.Assessment, u unitSystem) table {
 		e := sub.EquationOfState()
 		tc = sub.CriticalTemperature()
 		cs = []corr{
-			{"Reference equation of state (" + e.Name + ")", u.temperature(e.Range.TMinK) + " to " + u.temperature(e.Range.TMaxK) + ", up to " + u.pressure(e.Range.PMaxPa),
+			{"Reference equation of state (" + e.Name + ")", u.temperature(e.Range.TMinK) + " to " + u.temperature(e.Range.TMaxK) + ", up to " + u.given(display.Pressure, e.Range.PMaxPa),
 				fluids.EquationOfStateExtrapolated, true},
 			{"Supercritical state (same equation)", "above the critical temperature, " + u.temperature(tc), fluids.SupercriticalState, false},
 		}

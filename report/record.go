@@ -4,9 +4,9 @@ import (
 	"fmt"
 	"strconv"
 	"strings"
-	"ullage/report/display"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // calculationRecord prints the appendix that walks through the engine's
@@ -51,6 +51,31 @@ type references struct {
 // shortSource is the longest source printed in full at each use; a longer
 // one is cited by its number in the reference list.
 const shortSource = 40
+
+// number returns "[n]" for any source, numbering it on first use: a list
+// of the limits' sources, where even a short source is cited by number.
+func (r *references) number(source string) string {
+	n, ok := r.index[source]
+	if !ok {
+		r.list = append(r.list, source)
+		n = len(r.list)
+		r.index[source] = n
+	}
+	return fmt.Sprintf("[%d]", n)
+}
+
+// sourceList prints a numbered list of sources under a subheading.
+func (d *doc) sourceList(title string, list []string) {
+	if len(list) == 0 {
+		return
+	}
+	rows := make([][]cell, len(list))
+	for i, r := range list {
+		rows[i] = []cell{{text: fmt.Sprintf("[%d]", i+1), dim: true}, {text: r, italic: true}}
+	}
+	d.subheading(title)
+	d.drawTable(table{cols: []col{{"", 0.07, 'L'}, {"", 0.93, 'L'}}, rows: rows, noHeader: true, size: 7})
+}
 
 // cite returns "[n]" for a long source, numbering it on first use, or the
 // source itself when it is short ("design input", "definition").
@@ -160,16 +185,8 @@ func (w *assessmentWriter) traceValue(v hazards.Value) string {
 }
 
 // g6 formats a number to six significant figures, enough to repeat a
-// step by hand.
-// Negative numbers carry the minus sign (U+2212), as everywhere else in
-// the record; powers of ten are written ×10ⁿ.
-func g6(x float64) string {
-	s := strconv.FormatFloat(x, 'g', 6, 64)
-	if strings.Contains(s, "e") {
-		return power(x, 6)
-	}
-	return strings.Replace(s, "-", "−", 1)
-}
+// step by hand, by the display package's one rule.
+func g6(x float64) string { return display.Number(x, 6) }
 
 // minusSigns writes a hyphen-minus that stands before a digit at the start
 // of a word ("(-29.0 °C)") as the minus sign the rest of the record uses.
@@ -186,8 +203,9 @@ func minusSigns(s string) string {
 	return string(r)
 }
 
-// stepList is "steps 41, 22, 21" for a finding.
-func stepList(steps []int) string {
+// stepNumbers names the calculation record's steps behind a finding in
+// a few words: "calculation steps 50, 13, 14".
+func stepNumbers(steps []int) string {
 	if len(steps) == 0 {
 		return ""
 	}
@@ -195,9 +213,9 @@ func stepList(steps []int) string {
 	for i, n := range steps {
 		parts[i] = strconv.Itoa(n)
 	}
-	word := "steps"
+	word := "calculation steps "
 	if len(steps) == 1 {
-		word = "step"
+		word = "calculation step "
 	}
-	return "Working: calculation record (annex, printed on request), " + word + " " + strings.Join(parts, ", ")
+	return word + strings.Join(parts, ", ")
 }

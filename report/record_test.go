@@ -47,7 +47,7 @@ func TestCalculationRecordReadsBack(t *testing.T) {
 			t.Errorf("step %d: %q missing", s.Number, findingResultText(s.Finding))
 		}
 	}
-	for _, want := range []string{"Weibull, J. Appl. Mech. 18, 293 (1951)", "Brent", "Working: calculation record (annex, printed on request), steps", "Uses steps"} {
+	for _, want := range []string{"Weibull, J. Appl. Mech. 18, 293 (1951)", "Brent", "Calculation steps", "Uses steps"} {
 		if !strings.Contains(flat, want) {
 			t.Errorf("%q missing", want)
 		}

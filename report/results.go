@@ -43,7 +43,7 @@ func (w *assessmentWriter) vesselState() {
 			string(s.Phase),
 			markIf(u.pressure(s.PressurePa), s.Flags),
 			gas,
-			markIf(fixed(s.UllagePercent, 2)+" %", s.Flags),
+			markIf(u.f(display.Percent, s.UllagePercent), s.Flags),
 			markIf(u.mass(s.LiquidMassKg), s.Flags),
 			markIf(u.mass(s.VapourMassKg), s.Flags),
 			dens(s.LiquidDensity),
@@ -95,9 +95,9 @@ func (w *assessmentWriter) glass() {
 	rows := make([][]cell, 0, len(a.Parts))
 	for _, p := range a.Parts {
 		rows = append(rows, []cell{
-			{text: p.Name}, {text: p.Shape + ", " + p.Form}, {text: sig(p.WallRatio, 3)}, {text: sig(p.StressPerPascal, 3)},
+			{text: p.Name}, {text: p.Shape + ", " + p.Form}, {text: display.Number(p.WallRatio, 3)}, {text: display.Number(p.StressPerPascal, 3)},
 			{text: u.stress(p.HoopStressPa)}, {text: u.area(p.AreaM2)}, {text: u.stress(p.ClassicalBucklingPa)},
-			{text: sig(p.KnockDown, 2)}, {text: u.stress(p.BucklingPa)},
+			{text: display.Number(p.KnockDown, 2)}, {text: u.stress(p.BucklingPa)},
 		})
 	}
 	d.drawTable(table{cols: []col{
@@ -109,14 +109,14 @@ func (w *assessmentWriter) glass() {
 	over := a.Hot.PressurePa - ds.AmbientPressurePa
 	d.subheading("Strength and safety factors")
 	d.keyValues([][2]string{
-		{"Short-term burst overpressure", u.pressure(a.Strength.ShortTermBurstPa) + " (63.2 % of units fail, reference load time " + plain(a.Glass.ReferenceLoad.Value) + " s)"},
-		{"Static-fatigue factor", sig(a.Strength.DurationFactor, 3) + " for " + plain(ds.HoursAtHottest) + " h at the hottest"},
+		{"Short-term burst overpressure", u.pressure(a.Strength.ShortTermBurstPa) + " (63.2 % of units fail, reference load time " + display.Stated(a.Glass.ReferenceLoad.Value) + " s)"},
+		{"Static-fatigue factor", display.Number(a.Strength.DurationFactor, 3) + " for " + display.Stated(ds.HoursAtHottest) + " h at the hottest"},
 		{"Long-term burst overpressure", u.pressure(a.Strength.LongTermBurstPa)},
 		{"Governing part", gp.Name + ": strength " + u.stress(a.Strength.GoverningStrengthPa) + ", allowable stress " + u.stress(a.Strength.AllowableStressPa)},
 		{"Overpressure at the hottest", u.pressure(over) + " over ambient"},
 		{"Allowable internal pressure", u.pressure(a.AllowablePressurePa()) + " absolute"},
-		{"Burst safety factor", burstText(a) + ", required " + sig(a.RequiredSafetyFactor, 3) + " (the larger of the minimum factor and the factor that meets the failure-probability target)"},
-		{"Failure probability", failureText(a) + " (Weibull modulus " + plain(a.Glass.WeibullModulus.Value) + ")"},
+		{"Burst safety factor", burstText(a) + ", required " + display.Number(a.RequiredSafetyFactor, 3) + " (the larger of the minimum factor and the factor that meets the failure-probability target)"},
+		{"Failure probability", failureText(a) + " (Weibull modulus " + display.Stated(a.Glass.WeibullModulus.Value) + ")"},
 		{"External load at the coldest", u.pressure(a.ExternalLoadPa) + " (outside minus inside)"},
 		{"Implosion safety factor", implosionText(a) + " on the knocked-down buckling pressure"},
 	}, 1)
@@ -139,7 +139,7 @@ func failureText(a *hazards.Assessment) string {
 	if !a.HasBurstLoad() {
 		return s
 	}
-	return s + " per unit over " + plain(a.Design.ServiceLifeYears) + " years"
+	return s + " per unit over " + display.Stated(a.Design.ServiceLifeYears) + " years"
 }
 
 // implosionText is the implosion safety factor as the findings word it.
@@ -177,7 +177,7 @@ func (w *assessmentWriter) rupture() {
 	r := a.Rupture
 	d.heading("Rupture at the hottest temperature")
 	d.keyValues([][2]string{
-		{"Expansion energy of the vapour space", u.energy(r.GasEnergyJ) + " (Brode, γ = " + plain(hazards.VapourHeatCapacityRatio) + ")"},
+		{"Expansion energy of the vapour space", u.energy(r.GasEnergyJ) + " (Brode, γ = " + display.Stated(hazards.VapourHeatCapacityRatio) + ")"},
 		{"Flash fraction", percent(r.FlashFraction, 3) + " of the liquid flashes to vapour on release"},
 		{"Energy of the flashed vapour", u.energy(r.FlashEnergyJ)},
 		{"Strain energy of compressed liquid", u.energy(r.LiquidStrainEnergyJ)},
@@ -205,18 +205,18 @@ func (w *assessmentWriter) release() {
 	d.lead(fmt.Sprintf("The whole fill (%s) is taken to evaporate at once into the room described in the inputs. The highest of the well-mixed room and the near field around the breakage is reported; the peak is the highest average over %s (the shortest the models resolve), and the near field is never averaged over less, the time it takes to mix.",
 		u.mass(r.MassKg), fmt.Sprintf("%d s", hazards.PeakAveragingS)))
 	row := func(name string, e hazards.Exposure) []cell {
-		return []cell{{text: name}, {text: sig(e.PPM, 3) + " ppm", bold: true}, {text: sig(e.MgM3, 3) + " mg/m³"}, {text: zoneName(e.Zone)}}
+		return []cell{{text: name}, {text: display.Number(e.PPM, 3) + " ppm", bold: true}, {text: display.Number(e.MgM3, 3) + " mg/m³"}, {text: zoneName(e.Zone)}}
 	}
 	lfl := "not flammable"
 	if a.Fluid.Flammability.LFLPercent != nil {
-		lfl = sig(r.PercentLFL, 3) + " % of the LFL (" + sig(a.Fluid.Flammability.LFLPercent.Value, 3) + " % by volume)"
+		lfl = display.Number(r.PercentLFL, 3) + " % of the LFL (" + display.Number(a.Fluid.Flammability.LFLPercent.Value, 3) + " % by volume)"
 	}
 	d.drawTable(table{cols: []col{{"Measure", 1.6, 'L'}, {"ppm", 1, 'R'}, {"mg/m³", 1.1, 'R'}, {"Where", 2, 'L'}}, rows: [][]cell{
 		row("Peak", r.Peak), row("15-minute average", r.STEL), row("8-hour time-weighted average", r.TWA8h),
 	}, zebra: true, keep: 3})
 	d.drawTable(exposureTable(a))
 	d.note(exposureTableNote(a))
-	tc := sig(r.RoomTimeConstantS/3600, 3) + " h"
+	tc := display.Number(r.RoomTimeConstantS/3600, 3) + " h"
 	if r.RoomTimeConstantS >= 1e9 {
 		tc = "no ventilation: the vapour stays"
 	}
@@ -242,11 +242,11 @@ func exposureTable(a *hazards.Assessment) table {
 			if l.Set != set {
 				continue
 			}
-			period := sig(l.Exposure.AveragingS/60, 3) + " min"
+			period := display.Number(l.Exposure.AveragingS/60, 3) + " min"
 			if l.Exposure.AveragingS <= hazards.PeakAveragingS {
 				period = "peak (1 min)"
 			}
-			avg := sig(l.Exposure.PPM, 3)
+			avg := display.Number(l.Exposure.PPM, 3)
 			if l.Exposure.Bounded {
 				avg = "≤ " + avg
 			}
@@ -258,8 +258,8 @@ func exposureTable(a *hazards.Assessment) table {
 			if l.Standing == "interim" || l.Standing == "proposed" {
 				name += " (" + l.Standing + ")"
 			}
-			rows = append(rows, []cell{{text: display.LimitSetShort(l.Set)}, {text: l.Kind, bold: l.Governs}, {text: name, bold: l.Governs}, {text: plain(l.PPM)}, {text: period},
-				{text: avg, bold: l.Governs}, {text: sig(100*l.Share, 3) + " %", bold: l.Governs}, {text: g, bold: true}})
+			rows = append(rows, []cell{{text: display.LimitSetShort(l.Set)}, {text: l.Kind, bold: l.Governs}, {text: name, bold: l.Governs}, {text: display.Stated(l.PPM)}, {text: period},
+				{text: avg, bold: l.Governs}, {text: display.Number(100*l.Share, 3) + " %", bold: l.Governs}, {text: g, bold: true}})
 		}
 		for _, n := range a.Release.LimitNotes {
 			if n.Set == set {
@@ -284,5 +284,5 @@ func exposureTableNote(a *hazards.Assessment) string {
 	}
 	return sets + " Each limit is averaged over its own period as its body defines it; within each kind the limit with the largest share of its limit governs. " +
 		"Public benchmarks (AEGL, PAC) protect the general public, children included, for a single exposure: each is averaged over its own duration for a person present throughout; AEGL-2 is the fail line, AEGL-1 the caution line, and the peak is held to AEGL-3. " +
-		"Every concentration is held to the physical bound, " + sig(b.PPM, 3) + " ppm (" + b.By + "); a value marked ≤ is that bound."
+		"Every concentration is held to the physical bound, " + display.Number(b.PPM, 3) + " ppm (" + b.By + "); a value marked ≤ is that bound."
 }

@@ -1,9 +1,8 @@
 package report
 
 import (
-	"strings"
-
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // Each status has a word and a shape of its own, so that it reads the same
@@ -11,23 +10,16 @@ import (
 // triangle with a black outline, fail a solid black square with a white
 // cross.
 
-// statusWord is the printed word for a status.
+// statusWord is the printed word for a status, the display package's
+// (PASS, CAUTION, FAIL, NOT ASSESSED); NONE for no status at all.
 func statusWord(s hazards.Status) string {
 	if s == "" {
 		return "NONE"
 	}
-	if s == hazards.StatusNotAssessed {
-		return "NOT ASSESSED"
-	}
-	return strings.ToUpper(string(s))
+	return display.StatusWord(s)
 }
 
 func statusMarkWidth(sizePt float64) float64 { return sizePt * ptMM * 0.95 }
-
-func (d *doc) statusWordWidth(s hazards.Status, sizePt float64) float64 {
-	d.use(style{faceBold, sizePt, black})
-	return d.c.textWidth(statusWord(s))
-}
 
 // drawStatusMark draws the shape of a status in a square of side a whose
 // top-left corner is (x, y).
@@ -67,6 +59,17 @@ func (d *doc) drawStatusInline(x, y, lh float64, s hazards.Status, sizePt float6
 	w := statusWord(s)
 	d.c.drawText(x+a+1.2, baseline(y, lh, sizePt), w)
 	return a + 1.2 + d.c.textWidth(w)
+}
+
+// drawStatusWrapped draws the mark beside the first of the status word's
+// lines (the word wrapped to its column), each line lh high from y.
+func (d *doc) drawStatusWrapped(x, y, lh float64, s hazards.Status, sizePt float64, lines []string) {
+	a := statusMarkWidth(sizePt)
+	d.drawStatusMark(x, y+(lh-a)/2, a, s)
+	d.use(style{faceBold, sizePt, black})
+	for i, ln := range lines {
+		d.c.drawText(x+a+1.2, baseline(y+float64(i)*lh, lh, sizePt), ln)
+	}
 }
 
 // statusLegend prints one line explaining the marks.

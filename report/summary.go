@@ -52,7 +52,7 @@ func (w *assessmentWriter) summary() {
 	var expl string
 	switch a.Verdict {
 	case hazards.StatusFail:
-		expl = "The design does not meet every review criterion. It should not be released as it stands; see the findings below and in section 7."
+		expl = "The design does not meet every review criterion. It should not be released as it stands; see the summary below and the Findings section."
 	case hazards.StatusCaution:
 		expl = "The design meets the review criteria, but at least one narrowly or with a value that could not be judged cleanly. Read each caution before signing."
 	default:
@@ -69,7 +69,7 @@ func (w *assessmentWriter) summary() {
 	}
 	d.drawTable(table{cols: []col{
 		{"Status", 1.25, 'L'}, {"Criterion", 2.9, 'L'}, {"Value", 1.35, 'R'}, {"Limit", 1.35, 'R'}, {"Margin", 1.8, 'R'},
-	}, rows: rows, size: 8.5, keep: len(rows)})
+	}, rows: rows, size: 8.5, keep: 4})
 	d.statusLegend()
 	d.note(display.MarginNote)
 }

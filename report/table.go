@@ -11,7 +11,8 @@ type col struct {
 }
 
 // cell is one table entry. A cell with a status shows the status mark and
-// word before any text.
+// its word, wrapped to the column (NOT / ASSESSED) when it is too wide,
+// and no text.
 type cell struct {
 	text               string
 	bold, italic, mono bool
@@ -37,7 +38,7 @@ type table struct {
 
 const (
 	cellPadX = 1.4
-	cellPadY = 1.0
+	cellPadY = 0.75
 )
 
 func (c cell) style(size float64) style {
@@ -67,11 +68,15 @@ func (d *doc) layoutRow(cells []cell, widths []float64, size float64) ([][]strin
 		}
 		c := cells[i]
 		st := c.style(size)
-		d.use(st)
 		w := widths[i] - 2*cellPadX
 		if c.status != "" {
-			w -= statusMarkWidth(size) + d.statusWordWidth(c.status, size) + 1.5
+			st = style{faceBold, size, black}
+			d.use(st)
+			lines[i] = d.wrap(statusWord(c.status), max(w-statusMarkWidth(size)-1.2, 5))
+			h = max(h, float64(len(lines[i]))*lineHeight(st.size))
+			continue
 		}
+		d.use(st)
 		if c.text != "" {
 			lines[i] = d.wrap(c.text, max(w, 5))
 		}
@@ -167,9 +172,9 @@ func (d *doc) drawRow(t table, cells []cell, lines [][]string, widths []float64,
 		lh := lineHeight(st.size)
 		tx, tw := x+cellPadX, w-2*cellPadX
 		if c.status != "" {
-			mw := d.drawStatusInline(tx, d.y+cellPadY, lh, c.status, size)
-			tx += mw + 1.5
-			tw -= mw + 1.5
+			d.drawStatusWrapped(tx, d.y+cellPadY, lh, c.status, size, lines[i])
+			x += w
+			continue
 		}
 		d.use(st)
 		for j, ln := range lines[i] {

@@ -19,15 +19,15 @@ func (w *assessmentWriter) thermalShock() {
 		d.lead("Thermal shock: not assessed. " + capitalFirst(hazards.ShockNotAssessed) + ".")
 	} else {
 		d.lead(fmt.Sprintf("A sudden change of surface temperature ΔT puts the surface of the glass into a stress E·α·ΔT/(1 − ν) (Kingery, Bowen and Uhlmann, Introduction to Ceramics, ch. 16): tension on a surface cooled suddenly, the dangerous case; when the outside is warmed suddenly the tension appears on the inner surface and around the warmed patch, and is taken at the same bound, which it cannot exceed. The value is the upper bound for instant surface cooling; the pressure stress at the start and any residual stress at the seal are added. Each part is held against its own short-term strength for its outer area and a load of %s s, with the burst check's required safety factor (%s).",
-			plain(a.Shock.LoadSeconds), sig(a.Shock.RequiredSafetyFactor, 3)))
+			display.Stated(a.Shock.LoadSeconds), display.Number(a.Shock.RequiredSafetyFactor, 3)))
 		rows := make([][]cell, 0, len(a.Shock.Parts))
 		for _, ps := range a.Shock.Parts {
 			c := ps.Cases[ps.Governing]
 			rows = append(rows, []cell{
 				{text: ps.Name}, {text: c.Direction + ", " + u.temperatureDifference(c.DeltaK)},
-				{text: u.stress(ps.StressPerKelvin) + " per K"}, {text: u.stress(c.ThermalStressPa)},
+				{text: u.system().StressPerDegree(ps.StressPerKelvin)}, {text: u.stress(c.ThermalStressPa)},
 				{text: u.stress(c.PressureStressPa + c.ResidualStressPa)}, {text: u.stress(ps.StrengthPa)},
-				{text: display.ValueOf(a, hazards.ThermalShockCriterion(ps.Part)), bold: true}, {text: sig(c.FailureProbability, 2)},
+				{text: display.ValueOf(a, hazards.ThermalShockCriterion(ps.Part)), bold: true}, {text: display.Number(c.FailureProbability, 2)},
 				{text: u.temperatureDifference(ps.AllowableDeltaK)},
 			})
 		}
@@ -46,11 +46,11 @@ func (w *assessmentWriter) thermalShock() {
 		how := "measured stress, as given"
 		if s.FromRetardation {
 			how = fmt.Sprintf("from a retardation of %s nm over %s of glass, σ = δ/(C·L) with C = %s /Pa (%s); retardation by the polariscope methods of ASTM C148",
-				sig(s.RetardationM*1e9, 3), u.length(s.PathLengthM), sig(s.Coefficient.Value, 3), s.Coefficient.Source)
+				display.Number(s.RetardationM*1e9, 3), u.length(s.PathLengthM), display.Number(s.Coefficient.Value, 3), s.Coefficient.Source)
 		}
 		d.keyValues([][2]string{
 			{"Residual stress at the seal", u.stress(s.StressPa) + " in the " + s.Name + ": " + how},
-			{"Burst resistance with it", u.pressure(s.BurstWithPa) + " long-term burst overpressure (" + u.pressure(s.BurstWithoutPa) + " without); failure probability " + sig(s.FailureWith, 2) + " (" + sig(s.FailureWithout, 2) + " without)"},
+			{"Burst resistance with it", u.pressure(s.BurstWithPa) + " long-term burst overpressure (" + u.pressure(s.BurstWithoutPa) + " without); failure probability " + display.Number(s.FailureWith, 2) + " (" + display.Number(s.FailureWithout, 2) + " without)"},
 		}, 1)
 	} else if ds.Vessel.Parts != nil {
 		d.keyValues([][2]string{{"Residual stress at the seal", "none given: the burst check assumes well-annealed seals"}}, 1)
@@ -64,40 +64,4 @@ func capitalFirst(s string) string {
 	}
 	r, n := utf8.DecodeRuneInString(s)
 	return string(unicode.ToUpper(r)) + s[n:]
-}
-
-// shockInputText describes the design's sudden changes in a line.
-func shockInputText(s hazards.ThermalShock, u unitSystem) string {
-	if !s.Given() {
-		return "none given: thermal shock not assessed"
-	}
-	var parts []string
-	add := func(dir string, dk float64, preset string) {
-		if dk <= 0 {
-			return
-		}
-		t := dir + " " + u.temperatureDifference(dk)
-		if preset != "" {
-			t += " (" + preset + ")"
-		}
-		parts = append(parts, t)
-	}
-	add(hazards.ShockHotToCold, s.HotToColdK, s.HotToColdPresetID)
-	add(hazards.ShockColdToHot, s.ColdToHotK, s.ColdToHotPresetID)
-	out := parts[0]
-	if len(parts) > 1 {
-		out += "; " + parts[1]
-	}
-	return out
-}
-
-// sealInputText describes the design's seal stress in a line.
-func sealInputText(s hazards.SealStress, u unitSystem) string {
-	switch {
-	case !s.Given():
-		return "none given"
-	case s.RetardationM > 0:
-		return fmt.Sprintf("%s: retardation %s nm over %s", s.Part, sig(s.RetardationM*1e9, 3), u.length(s.PathLengthM))
-	}
-	return s.Part + ": " + u.stress(s.ResidualStressPa)
 }

@@ -2,10 +2,13 @@ package report
 
 import (
 	"fmt"
+	"strconv"
 	"strings"
 
+	"ullage/hazards"
 	"ullage/hazards/tolerance"
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // toleranceStudy prints the sampled tolerance study: the failure rates
@@ -24,50 +27,44 @@ func (w *assessmentWriter) toleranceStudy() {
 	for _, x := range r.Inputs {
 		nominal, spread := w.inputValue(x.Key, x.Nominal), "± "+w.inputSpread(x.Key, x.PlusMinus)
 		if x.Distribution == tolerance.Weibull {
-			spread = fmt.Sprintf("Weibull modulus %.3g", x.Shape)
+			spread = "Weibull modulus " + display.Number(x.Shape, display.ValueFigures)
 		}
-		rows = append(rows, []cell{{text: x.Label}, {text: x.Distribution}, {text: nominal}, {text: spread}})
+		rows = append(rows, []cell{{text: x.Label}, {text: display.DistributionWords(x.Distribution)}, {text: nominal}, {text: spread}})
 	}
 	d.subheading("Inputs that vary from unit to unit")
-	d.drawTable(table{cols: []col{{"Input", 0.36, 'L'}, {"Distribution", 0.18, 'L'}, {"Nominal", 0.2, 'R'}, {"Tolerance or spread", 0.26, 'R'}}, rows: rows, size: 8, zebra: true})
-	prop := func(p tolerance.Proportion) string {
-		return fmt.Sprintf("%d of %d  (%s, 95 %% interval %s – %s)", p.Count, p.Total, pct(p.Estimate), pct(p.Low), pct(p.High))
-	}
+	d.drawTable(table{cols: []col{{"Input", 0.3, 'L'}, {"Distribution", 0.3, 'L'}, {"Nominal", 0.18, 'R'}, {"Tolerance or spread", 0.22, 'R'}}, rows: rows, size: 8, zebra: true})
+	d.note(display.PlusMinusNote)
 	pairs := [][2]string{
-		{"Liquid-full below the hottest temperature", prop(r.LiquidFullFraction)},
-		{"Burst over the service life", prop(r.BurstFraction)},
-		{"Mean failure probability", fmt.Sprintf("%.3g (strength integrated exactly)", r.MeanFailureProbability)},
+		{"Liquid-full below the hottest temperature", display.Proportion(r.LiquidFullFraction)},
+		{"Burst over the service life", display.Proportion(r.BurstFraction)},
+		{"Mean failure probability", display.Number(r.MeanFailureProbability, display.ValueFigures) + " (strength integrated exactly)"},
 	}
 	if r.ExposureLimited {
-		pairs = append(pairs, [2]string{"Release above a governing limit", prop(r.ExposureExceedFraction)})
+		pairs = append(pairs, [2]string{"Release above a governing limit", display.Proportion(r.ExposureExceedFraction)})
 	} else {
 		pairs = append(pairs, [2]string{"Release above a governing limit", "no published numeric limit applies: not assessed"})
 	}
 	if r.UnsealableUnits > 0 {
-		pairs = append(pairs, [2]string{"Units that could not be sealed", fmt.Sprintf("%d (counted as liquid-full and burst)", r.UnsealableUnits)})
+		pairs = append(pairs, [2]string{"Units that could not be sealed", strconv.Itoa(r.UnsealableUnits) + " (counted as liquid-full and burst)"})
 	}
 	if r.ExtrapolatedUnits > 0 {
-		pairs = append(pairs, [2]string{"Units computed outside a correlation's range", fmt.Sprintf("%d ‡", r.ExtrapolatedUnits)})
+		pairs = append(pairs, [2]string{"Units computed outside a correlation's range", strconv.Itoa(r.ExtrapolatedUnits) + " ‡"})
 	}
 	pp, sf := r.PressurePa, r.SafetyFactor
+	factor := func(x float64) string {
+		if x >= hazards.SafetyFactorCap {
+			return "no burst load"
+		}
+		return display.Number(x, display.ValueFigures)
+	}
 	pairs = append(pairs,
-		[2]string{"Pressure at the hottest, P1 / P50 / P99", w.u.pressure(pp.P1) + " / " + w.u.pressure(pp.P50) + " / " + w.u.pressure(pp.P99)},
-		[2]string{"Unit safety factor, P1 / P50 / P99", fmt.Sprintf("%.3g / %.3g / %.3g", sf.P1, sf.P50, sf.P99)})
+		[2]string{"Pressure at the hottest, P1 / P50 / P99", display.Spread(pp.P1, pp.P50, pp.P99, w.u.pressure)},
+		[2]string{"Unit safety factor, P1 / P50 / P99", display.Spread(sf.P1, sf.P50, sf.P99, factor)},
+		[2]string{"Strongest driver of the safety factor", display.StrongestDriver(r.Sensitivity)})
 	d.subheading("Results")
 	d.keyValues(pairs, 1)
 	w.histogramChart(r.Histogram)
 	w.driverChart(r.Sensitivity, r.SensitivityUnits)
-}
-
-func pct(x float64) string {
-	switch {
-	case x == 0:
-		return "0 %"
-	case x < 1e-3:
-		return fmt.Sprintf("%.2g %%", 100*x)
-	default:
-		return fmt.Sprintf("%.3g %%", 100*x)
-	}
 }
 
 // histogramChart draws the units' safety factors as bars.
@@ -82,7 +79,11 @@ func (w *assessmentWriter) driverChart(ds []tolerance.Driver, n int) {
 		return
 	}
 	w.d.drawModelChart(chartmodel.Drivers("Figure 4. What drives the safety margin", ds), float64(len(ds))*6+22)
-	w.d.note(fmt.Sprintf("Spearman rank correlation with the unit safety factor over the first %d units (Spearman, Am. J. Psychol. 15, 72 (1904)). Dark bars lower the margin as the input grows: tighten those tolerances first.", n))
+	note := fmt.Sprintf("Spearman rank correlation with the unit safety factor over the first %d units (Spearman, Am. J. Psychol. 15, 72 (1904)). Dark bars lower the margin as the input grows: tighten those tolerances first.", n)
+	if display.WallLowersMargin(ds) {
+		note += " " + display.WallVolumeNote
+	}
+	w.d.note(note)
 }
 
 // inputValue formats a varied input's nominal value in the record's units.
@@ -99,7 +100,7 @@ func (w *assessmentWriter) inputValue(key string, v float64) string {
 	case strings.HasSuffix(key, "wall_thickness_m"):
 		return w.u.length(v)
 	}
-	return fmt.Sprintf("%.4g", v)
+	return display.Number(v, display.ValueFigures+1)
 }
 
 // inputSpread formats a ± spread (a difference, so temperatures convert

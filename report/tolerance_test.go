@@ -7,6 +7,7 @@ import (
 
 	"ullage/fluids"
 	"ullage/hazards/tolerance"
+	"ullage/report/display"
 )
 
 // TestToleranceSection: the study appears in the record with its
@@ -24,9 +25,21 @@ func TestToleranceSection(t *testing.T) {
 	pdf := render(t, loadMeta(t, "meta_a.json"), a, Options{Deterministic: true, Tolerance: r})
 	flat := strings.Join(strings.Fields(pdfText(t, writeTemp(t, "tol.pdf", pdf))), " ")
 	for _, want := range []string{"Tolerance study", "3000 units were drawn (seed 5)", "Wilson, J. Am. Stat. Assoc. 22, 209 (1927)",
-		"Liquid-full below the hottest temperature", "What drives the safety margin", "Spearman"} {
+		"Liquid-full below the hottest temperature", "What drives the safety margin", "Spearman",
+		squashed(display.PlusMinusNote), "Strongest driver of the safety factor"} {
 		if !strings.Contains(flat, want) {
 			t.Errorf("record lacks %q", want)
 		}
 	}
+	if strings.Contains(flat, "e+0") || strings.Contains(flat, "e-0") {
+		t.Error("the tolerance section prints e-notation")
+	}
+	// The note may break across a page; its opening words say why.
+	if display.WallLowersMargin(r.Sensitivity) && !strings.Contains(flat, "A thicker wall can lower the margin: the outside size is fixed, so a thicker wall shrinks") {
+		t.Error("a wall lowers the margin, but the record does not say why")
+	}
 }
+
+// squashed is s with its runs of white space made single spaces, as the
+// record's text reads back.
+func squashed(s string) string { return strings.Join(strings.Fields(s), " ") }

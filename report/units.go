@@ -47,38 +47,31 @@ func (u unitSystem) densityQ() quantity               { return u.q(display.Densi
 func (u unitSystem) speedQ() quantity                 { return u.q(display.Speed) }
 func (u unitSystem) energyQ() quantity                { return u.q(display.Energy) }
 
-// with formats v in q to n significant figures with the unit.
-func with(q quantity, v float64, n int) string {
-	s := sig(q.conv(v), n)
-	if s == noValue {
-		return s
-	}
-	return s + " " + q.unit
-}
+// Computed values are formatted by the display package's rule for results
+// (display.System.Format: three significant figures, temperatures to a
+// tenth of a degree); values a person or a data table stated, by its rule
+// for stated values (given: display.System.Input).
+func (u unitSystem) f(k display.Quantity, x float64) string { return u.system().Format(k, x) }
 
-func (u unitSystem) temperature(k float64) string {
-	q := u.temperatureQ()
-	return fixed(q.conv(k), 1) + " " + q.unit
-}
-func (u unitSystem) temperatureDifference(k float64) string {
-	q := u.temperatureDifferenceQ()
-	return fixed(q.conv(k), 1) + " " + q.unit
-}
-func (u unitSystem) pressure(pa float64) string { return with(u.pressureQ(), pa, 4) }
-func (u unitSystem) stress(pa float64) string   { return with(u.stressQ(), pa, 3) }
-func (u unitSystem) length(m float64) string    { return with(u.lengthQ(), m, 3) }
-func (u unitSystem) roomLength(m float64) string {
-	return with(u.roomLengthQ(), m, 3)
-}
-func (u unitSystem) mass(kg float64) string         { return with(u.massQ(), kg, 3) }
-func (u unitSystem) vesselVolume(m3 float64) string { return with(u.vesselVolumeQ(), m3, 3) }
-func (u unitSystem) roomVolume(m3 float64) string   { return with(u.roomVolumeQ(), m3, 3) }
-func (u unitSystem) area(m2 float64) string         { return with(u.areaQ(), m2, 3) }
-func (u unitSystem) surface(m2 float64) string      { return with(u.surfaceQ(), m2, 3) }
-func (u unitSystem) density(kgm3 float64) string    { return with(u.densityQ(), kgm3, 4) }
-func (u unitSystem) speed(ms float64) string        { return with(u.speedQ(), ms, 3) }
-func (u unitSystem) energy(j float64) string        { return with(u.energyQ(), j, 3) }
-func (u unitSystem) plusMinus(s string) string      { return "± " + s }
+// given formats a stated value: an input of the design or a value of the
+// data, with the figures it was given (at most four).
+func (u unitSystem) given(k display.Quantity, x float64) string { return u.system().Input(k, x) }
+
+func (u unitSystem) temperature(k float64) string           { return u.f(display.Temperature, k) }
+func (u unitSystem) temperatureDifference(k float64) string { return u.f(display.TempDifference, k) }
+func (u unitSystem) pressure(pa float64) string             { return u.f(display.Pressure, pa) }
+func (u unitSystem) stress(pa float64) string               { return u.f(display.Stress, pa) }
+func (u unitSystem) length(m float64) string                { return u.f(display.Length, m) }
+func (u unitSystem) roomLength(m float64) string            { return u.f(display.RoomLength, m) }
+func (u unitSystem) mass(kg float64) string                 { return u.f(display.Mass, kg) }
+func (u unitSystem) vesselVolume(m3 float64) string         { return u.f(display.VesselVolume, m3) }
+func (u unitSystem) roomVolume(m3 float64) string           { return u.f(display.RoomVolume, m3) }
+func (u unitSystem) area(m2 float64) string                 { return u.f(display.Area, m2) }
+func (u unitSystem) surface(m2 float64) string              { return u.f(display.Surface, m2) }
+func (u unitSystem) density(kgm3 float64) string            { return u.f(display.Density, kgm3) }
+func (u unitSystem) speed(ms float64) string                { return u.f(display.Speed, ms) }
+func (u unitSystem) energy(j float64) string                { return u.f(display.Energy, j) }
+func (u unitSystem) plusMinus(s string) string              { return "± " + s }
 func (u unitSystem) name() string {
 	if u.us {
 		return "US customary (°F, psi, in, oz, ft³)"

@@ -276,7 +276,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 		return
 	}
 	sys := display.ParseSystem(unitSystem)
-	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s  %s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF", "failing criteria")
+	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %13s %13s  %s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF", "failing criteria")
 	failed := 0
 	for _, c := range results {
 		if c.err != nil {
@@ -285,7 +285,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 			continue
 		}
 		a := c.assessment
-		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %8s %8s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
+		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %13s %13s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
 			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, sys.Format(display.Pressure, a.Hot.PressurePa), sys.Format(display.Percent, a.Hot.UllagePercent), sfText(a), failingCriteria(a))
 	}
 	if failed > 0 {
@@ -355,25 +355,13 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintln(w)
 	for _, v := range display.Findings(a, sys) {
-		fmt.Fprintf(w, "  %-8s %s\n           %s\n           %s\n", v.Status, v.Title, v.Numbers(), v.Text())
+		fmt.Fprintf(w, "  %-12s %s\n               %s\n               %s\n", v.Status, v.Title, v.Numbers(), v.Text())
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
-	if r := c.tolerance; r != nil {
-		fmt.Fprintf(w, "\ntolerance study: %d units, seed %d\n", r.Samples, r.Seed)
-		fmt.Fprintf(w, "  liquid-full below the hottest  %s\n", proportionText(r.LiquidFullFraction))
-		fmt.Fprintf(w, "  burst over the service life    %s\n", proportionText(r.BurstFraction))
-		if r.ExposureLimited {
-			fmt.Fprintf(w, "  release above a limit          %s\n", proportionText(r.ExposureExceedFraction))
-		}
-		if len(r.Sensitivity) > 0 {
-			fmt.Fprintf(w, "  strongest driver of the margin %s (rank correlation %+.2f)\n", r.Sensitivity[0].Label, r.Sensitivity[0].RankCorrelation)
-		}
+	if c.tolerance != nil {
+		writeToleranceText(w, c.tolerance)
 	}
 	fmt.Fprintf(w, "\n%s\n", hazards.StandardCautions[0])
-}
-
-func proportionText(p tolerance.Proportion) string {
-	return fmt.Sprintf("%d of %d (%.3g %%, 95 %% interval %.3g – %.3g %%)", p.Count, p.Total, 100*p.Estimate, 100*p.Low, 100*p.High)
 }
 
 func trim(s string, n int) string {

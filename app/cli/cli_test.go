@@ -39,7 +39,7 @@ func TestExitStatuses(t *testing.T) {
 		{"fluid-state below freezing", []string{"fluid-state", "water", "--temp-c", "-40"}, ExitUsage, "", "freezing point"},
 		{"fluid-state NaN", []string{"fluid-state", "water", "--temp-c", "NaN"}, ExitUsage, "", "finite"},
 		{"fluid-state unknown fluid", []string{"fluid-state", "unobtainium", "--temp-c", "20"}, ExitUsage, "", "unobtainium"},
-		{"compare revisions", []string{"compare", "testdata/good.json", "--rev", "A", "--rev", "B"}, ExitPass, "fail → pass", ""},
+		{"compare revisions", []string{"compare", "testdata/good.json", "--rev", "A", "--rev", "B"}, ExitPass, "FAIL → PASS", ""},
 		{"compare needs two", []string{"compare", "testdata/good.json"}, ExitUsage, "", "two files"},
 		{"help", []string{"help"}, ExitPass, "Usage", ""},
 		{"version", []string{"version"}, ExitPass, "Ullage", ""},

@@ -4,6 +4,8 @@ import (
 	"bytes"
 	"fmt"
 	"io"
+	"strings"
+	"unicode/utf8"
 
 	"ullage/hazards"
 	"ullage/hazards/compare"
@@ -124,37 +126,66 @@ func sideLabel(c checked) string {
 	return fmt.Sprintf("%s rev %s", c.file.Product.Name, c.revision.Label)
 }
 
+// writeCompareText prints a comparison in the words of the comparison
+// record: the findings that changed status, the changed inputs under the
+// record's labels in the chosen units, and every headline result.
 func writeCompareText(w io.Writer, a, b checked, c compare.Comparison, sys display.System) {
 	fmt.Fprintf(w, "A: %s (%s)\nB: %s (%s)\n\n", sideLabel(a), a.path, sideLabel(b), b.path)
 	if len(c.Statuses) > 0 {
 		fmt.Fprintln(w, "Findings that changed status:")
+		width := 0
 		for _, s := range c.Statuses {
-			fmt.Fprintf(w, "  %-50s %s → %s\n", s.Title, s.Old, s.New)
+			width = max(width, utf8.RuneCountInString(s.Title))
+		}
+		for _, s := range c.Statuses {
+			fmt.Fprintf(w, "  %s  %s → %s\n", pad(s.Title, width), statusText(s.Old), statusText(s.New))
 		}
 		fmt.Fprintln(w)
 	} else {
 		fmt.Fprintln(w, "No finding changed status.")
 		fmt.Fprintln(w)
 	}
-	fmt.Fprintln(w, "Changed inputs:")
-	if len(c.Inputs) == 0 {
-		fmt.Fprintln(w, "  none")
+	rows := display.InputRows(&c, sys)
+	fmt.Fprintf(w, "Changed inputs: %s.\n", display.CountInputs(display.ChangedCount(rows)))
+	width := 0
+	for _, r := range rows {
+		if r.Changed {
+			width = max(width, utf8.RuneCountInString(r.Label))
+		}
 	}
-	for _, in := range c.Inputs {
-		fmt.Fprintf(w, "  %-45s %s → %s\n", in.Field, in.Old, in.New)
+	for _, r := range rows {
+		if r.Changed {
+			fmt.Fprintf(w, "  %s  %s → %s\n", pad(r.Label, width), r.A, r.B)
+		}
 	}
 	fmt.Fprintln(w, "\nResults:")
+	width = 0
+	for _, r := range c.Results {
+		width = max(width, utf8.RuneCountInString(r.Name))
+	}
 	for _, r := range c.Results {
 		mark := ""
 		switch {
 		case r.Better:
-			mark = "better"
+			mark = " better"
 		case r.Worse:
-			mark = "worse"
+			mark = " worse"
 		}
-		fmt.Fprintf(w, "  %-42s %s → %s  (%s) %s\n", r.Name, display.ResultValue(r, r.Old, sys), display.ResultValue(r, r.New, sys), display.ResultDelta(r, sys), mark)
+		fmt.Fprintf(w, "  %s  %s → %s  (%s)%s\n", pad(r.Name, width), display.ResultValue(r, r.Old, sys), display.ResultValue(r, r.New, sys), display.ResultDelta(r, sys), mark)
 	}
-	fmt.Fprintf(w, "\nverdict: %s → %s\n", designfileVerdict(a), designfileVerdict(b))
+	fmt.Fprintf(w, "\nverdict: %s → %s\n", display.StatusWord(a.assessment.Verdict), display.StatusWord(b.assessment.Verdict))
 }
 
-func designfileVerdict(c checked) string { return string(c.assessment.Verdict) }
+// statusText words a finding's status in a comparison: the status word,
+// or "absent" for a criterion one side does not have.
+func statusText(s hazards.Status) string {
+	if s == compare.StatusAbsent {
+		return "absent"
+	}
+	return display.StatusWord(s)
+}
+
+// pad fills s with spaces to width characters.
+func pad(s string, width int) string {
+	return s + strings.Repeat(" ", max(0, width-utf8.RuneCountInString(s)))
+}

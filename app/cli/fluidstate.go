@@ -7,6 +7,7 @@ import (
 
 	"ullage/fluids"
 	"ullage/fluids/units"
+	"ullage/report/display"
 )
 
 type fluidStateJSON struct {
@@ -91,11 +92,14 @@ func runFluidState(args []string, stdout, stderr io.Writer) int {
 		}
 		return ExitPass
 	}
-	fmt.Fprintf(stdout, "%s at %g °C\n", s.Fluid().Name, tc)
-	fmt.Fprintf(stdout, "  vapour pressure        %.6g kPa\n", sat.PressurePa/1000)
-	fmt.Fprintf(stdout, "  saturated liquid      %.6g kg/m³\n", sat.LiquidDensity)
-	fmt.Fprintf(stdout, "  saturated vapour      %.6g kg/m³\n", sat.VapourDensity)
-	fmt.Fprintf(stdout, "  heat of vaporisation  %.6g kJ/kg\n", sat.HeatOfVaporisation/1000)
+	// Six figures, enough to check a property table, by the display
+	// layer's rule (never e-notation).
+	n := func(x float64) string { return display.Number(x, 6) }
+	fmt.Fprintf(stdout, "%s at %s °C\n", s.Fluid().Name, display.Stated(tc))
+	fmt.Fprintf(stdout, "  vapour pressure        %s kPa\n", n(sat.PressurePa/1000))
+	fmt.Fprintf(stdout, "  saturated liquid      %s kg/m³\n", n(sat.LiquidDensity))
+	fmt.Fprintf(stdout, "  saturated vapour      %s kg/m³\n", n(sat.VapourDensity))
+	fmt.Fprintf(stdout, "  heat of vaporisation  %s kJ/kg\n", n(sat.HeatOfVaporisation/1000))
 	fmt.Fprintf(stdout, "  from                  %s\n", s.Route())
 	if sat.Flags != 0 {
 		fmt.Fprintf(stdout, "  note: %s\n", sat.Flags)

@@ -199,7 +199,7 @@ func checkJSON(c checked) designJSON {
 		Limits:                 []limitJSON{},
 		LimitNotes:             []limitNoteJSON{},
 		Extrapolated:           a.Flags.Extrapolated(),
-		Cautions:               a.Cautions,
+		Cautions:               display.Cautions(a, display.SI),
 		Tolerance:              c.tolerance,
 	}
 	d.ThermalShock, d.ThermalShockNote = shockResults(a)

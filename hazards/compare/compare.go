@@ -12,13 +12,17 @@ type Side struct {
 	Assessment *hazards.Assessment
 }
 
-// InputChange is one design input that differs between the sides. Field
-// is the path as in the design file's JSON (vessel.parts[1].wall_thickness_m);
-// Old and New are the values formatted with their units, or Absent for a
-// part, glass or other item present on one side only.
+// InputChange is one design input that differs between the sides, as
+// typed values: Field is the path as in the design file's JSON
+// (vessel.parts[1].wall_thickness_m), Unit the kind of quantity the field
+// holds (UnitNone for text, a plain number or a group), and Old and New
+// the values of A and B (KindAbsent for a part, glass or other item
+// present on one side only). The display layer words them.
 type InputChange struct {
-	Field    string
-	Old, New string
+	Field string     `json:"field"`
+	Unit  Unit       `json:"unit,omitempty"`
+	Old   InputValue `json:"old"`
+	New   InputValue `json:"new"`
 }
 
 // ResultChange is one headline result on both sides, as typed values:
@@ -53,9 +57,6 @@ type StatusChange struct {
 // StatusAbsent marks a criterion that one side's assessment does not
 // have (for instance an exposure limit that applies to one fluid only).
 const StatusAbsent hazards.Status = "absent"
-
-// Absent is the value shown for an input present on one side only.
-const Absent = "absent"
 
 // Comparison is the full side-by-side view of revision A (old) and B
 // (new).

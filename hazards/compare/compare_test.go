@@ -18,7 +18,7 @@ func TestFillCutFlipsUllage(t *testing.T) {
 	b := side(t, "B", d)
 	c := Compare(a, b)
 
-	want := []InputChange{{Field: "fill_mass_kg", Old: "0.02 kg", New: "0.012 kg"}}
+	want := []InputChange{{Field: "fill_mass_kg", Unit: UnitMass, Old: num(UnitMass, 0.02), New: num(UnitMass, 0.012)}}
 	if !reflect.DeepEqual(c.Inputs, want) {
 		t.Errorf("inputs %+v; want %+v", c.Inputs, want)
 	}

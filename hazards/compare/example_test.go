@@ -42,7 +42,7 @@ func ExampleCompare() {
 	c := compare.Compare(sides[0], sides[1])
 
 	for _, in := range c.Inputs {
-		fmt.Printf("%s: %s → %s\n", in.Field, in.Old, in.New)
+		fmt.Printf("%s (%s, SI): %g → %g\n", in.Field, in.Unit, in.Old.Number, in.New.Number)
 	}
 	for _, s := range c.Statuses {
 		fmt.Printf("%s: %s → %s\n", s.Criterion, s.Old, s.New)
@@ -57,7 +57,7 @@ func ExampleCompare() {
 		fmt.Printf("%s: %s\n", r.Name, verdict)
 	}
 	// Output:
-	// fill_mass_kg: 0.02 kg → 0.012 kg
+	// fill_mass_kg (mass, SI): 0.02 → 0.012
 	// ullage-at-hottest: fail → pass
 	// burst-safety-factor: fail → pass
 	// failure-probability: fail → pass

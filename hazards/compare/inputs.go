@@ -3,10 +3,8 @@ package compare
 import (
 	"fmt"
 	"reflect"
-	"strconv"
 	"strings"
 
-	"ullage/fluids/units"
 	"ullage/hazards"
 )
 
@@ -36,16 +34,16 @@ func diff(out *[]InputChange, path, name string, a, b reflect.Value) {
 		switch {
 		case a.IsNil() && b.IsNil():
 		case a.IsNil():
-			*out = append(*out, InputChange{Field: path, Old: Absent, New: describe(name, b.Elem())})
+			*out = append(*out, change(path, name, InputValue{Kind: KindAbsent}, read(path, name, b.Elem())))
 		case b.IsNil():
-			*out = append(*out, InputChange{Field: path, Old: describe(name, a.Elem()), New: Absent})
+			*out = append(*out, change(path, name, read(path, name, a.Elem()), InputValue{Kind: KindAbsent}))
 		default:
 			diff(out, path, name, a.Elem(), b.Elem())
 		}
 	case reflect.Slice:
 		if a.Type().Elem().Kind() != reflect.Struct {
-			if oldV, newV := describe(name, a), describe(name, b); oldV != newV {
-				*out = append(*out, InputChange{Field: path, Old: oldV, New: newV})
+			if oldV, newV := read(path, name, a), read(path, name, b); !reflect.DeepEqual(oldV, newV) {
+				*out = append(*out, change(path, name, oldV, newV))
 			}
 			return
 		}
@@ -53,18 +51,23 @@ func diff(out *[]InputChange, path, name string, a, b reflect.Value) {
 			at := fmt.Sprintf("%s[%d]", path, i)
 			switch {
 			case i >= a.Len():
-				*out = append(*out, InputChange{Field: at, Old: Absent, New: describe(name, b.Index(i))})
+				*out = append(*out, change(at, name, InputValue{Kind: KindAbsent}, read(at, name, b.Index(i))))
 			case i >= b.Len():
-				*out = append(*out, InputChange{Field: at, Old: describe(name, a.Index(i)), New: Absent})
+				*out = append(*out, change(at, name, read(at, name, a.Index(i)), InputValue{Kind: KindAbsent}))
 			default:
 				diff(out, at, name, a.Index(i), b.Index(i))
 			}
 		}
 	default:
 		if !sameScalar(a, b) {
-			*out = append(*out, InputChange{Field: path, Old: describe(name, a), New: describe(name, b)})
+			*out = append(*out, change(path, name, read(path, name, a), read(path, name, b)))
 		}
 	}
+}
+
+// change is one InputChange, its unit the one its values carry.
+func change(path, name string, oldV, newV InputValue) InputChange {
+	return InputChange{Field: path, Unit: unitOf(path, name), Old: oldV, New: newV}
 }
 
 // sameScalar reports whether two plain values are equal (NaN equal to
@@ -77,13 +80,13 @@ func sameScalar(a, b reflect.Value) bool {
 	return a.Interface() == b.Interface()
 }
 
-// describe formats a value for a person: numbers with the unit their JSON
-// name carries, text quoted, lists in brackets, structures as
-// "name: value" pairs.
-func describe(name string, v reflect.Value) string {
+// read turns a design value into a typed InputValue: numbers in SI with
+// the unit their JSON name carries, text, switches, lists and groups of
+// named fields.
+func read(path, name string, v reflect.Value) InputValue {
 	switch v.Kind() {
 	case reflect.Struct:
-		var parts []string
+		g := InputValue{Kind: KindGroup}
 		for _, f := range jsonFields(v.Type()) {
 			if f.omitZero && v.FieldByIndex(f.index).IsZero() {
 				continue
@@ -92,81 +95,79 @@ func describe(name string, v reflect.Value) string {
 			if f.name == "value" {
 				unitName = name
 			}
-			parts = append(parts, f.name+": "+describe(unitName, v.FieldByIndex(f.index)))
+			g.Fields = append(g.Fields, InputField{Name: f.name, Value: read(join(path, f.name), unitName, v.FieldByIndex(f.index))})
 		}
-		return "{" + strings.Join(parts, ", ") + "}"
+		return g
 	case reflect.Pointer:
 		if v.IsNil() {
-			return Absent
+			return InputValue{Kind: KindAbsent}
 		}
-		return describe(name, v.Elem())
+		return read(path, name, v.Elem())
 	case reflect.Slice:
-		items := make([]string, v.Len())
-		for i := range items {
-			items[i] = describe(name, v.Index(i))
+		l := InputValue{Kind: KindList, Items: []InputValue{}}
+		for i := 0; i < v.Len(); i++ {
+			l.Items = append(l.Items, read(fmt.Sprintf("%s[%d]", path, i), name, v.Index(i)))
 		}
-		return "[" + strings.Join(items, ", ") + "]"
+		return l
 	case reflect.String:
-		return strconv.Quote(v.String())
+		return InputValue{Kind: KindText, Text: v.String()}
+	case reflect.Bool:
+		return InputValue{Kind: KindSwitch, On: v.Bool()}
 	case reflect.Float64, reflect.Float32:
-		return withUnit(name, v.Float())
+		return InputValue{Kind: KindNumber, Unit: unitOf(path, name), Number: v.Float()}
+	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
+		return InputValue{Kind: KindNumber, Number: float64(v.Int())}
+	case reflect.Uint, reflect.Uint8, reflect.Uint16, reflect.Uint32, reflect.Uint64:
+		return InputValue{Kind: KindNumber, Number: float64(v.Uint())}
 	}
-	return fmt.Sprint(v.Interface())
+	return InputValue{Kind: KindText, Text: fmt.Sprint(v.Interface())}
 }
-
-// kelvin is the unit that also shows degrees Celsius.
-const kelvin = "K"
 
 // inputUnits maps the ending of a JSON name to its unit; the first match
 // wins, so longer endings come before shorter ones they end with.
-var inputUnits = []struct{ suffix, unit string }{
-	{"_per_hour", "per hour"},
-	{"_per_k", "1/K"},
-	{"_per_pa", "1/Pa"},
-	{"hot_to_cold_k", "K change"},
-	{"cold_to_hot_k", "K change"},
-	{"_difference_k", "K change"},
-	{"_k", kelvin},
-	{"_m_s", "m/s"},
-	{"_m3", "m³"},
-	{"_m2", "m²"},
-	{"_kg", "kg"},
-	{"_pa", "Pa"},
-	{"_m", "m"},
-	{"_years", "years"},
-	{"_minutes", "min"},
-	{"_seconds", "s"},
-	{"_percent", "%"},
-	{"_percent_lfl", "% of LFL"},
-	{"hours_at_hottest", "h"},
+var inputUnits = []struct {
+	suffix string
+	unit   Unit
+}{
+	{"_per_hour", UnitPerHour},
+	{"_per_k", UnitPerKelvin},
+	{"_per_pa", UnitPerPascal},
+	{"hot_to_cold_k", UnitTemperatureChange},
+	{"cold_to_hot_k", UnitTemperatureChange},
+	{"_difference_k", UnitTemperatureChange},
+	{"_k", UnitTemperature},
+	{"_m_s", UnitSpeed},
+	{"_m3", UnitVolume},
+	{"_m2", UnitArea},
+	{"_kg", UnitMass},
+	{"_pa", UnitPressure},
+	{"_m", UnitLength},
+	{"_years", UnitYears},
+	{"_minutes", UnitMinutes},
+	{"_seconds", UnitSeconds},
+	{"_percent_lfl", UnitPercentLFL},
+	{"_percent", UnitPercent},
+	{"hours_at_hottest", UnitHours},
 }
 
-// withUnit formats x with the unit named by the JSON name; temperatures
-// in kelvin also show degrees Celsius.
-func withUnit(name string, x float64) string {
-	s := strconv.FormatFloat(x, 'g', -1, 64)
+// unitOf returns the unit the JSON name carries; a length or a volume of
+// the room (under "room.") is a room's, not the vessel's.
+func unitOf(path, name string) Unit {
 	for _, u := range inputUnits {
 		if !strings.HasSuffix(name, u.suffix) {
 			continue
 		}
-		if u.unit == kelvin {
-			return s + " K (" + trimZeros(strconv.FormatFloat(units.KelvinToCelsius(x), 'f', 2, 64)) + " °C)"
+		if strings.HasPrefix(path, "room.") {
+			switch u.unit {
+			case UnitLength:
+				return UnitRoomLength
+			case UnitVolume:
+				return UnitRoomVolume
+			}
 		}
-		return s + " " + u.unit
+		return u.unit
 	}
-	return s
-}
-
-// trimZeros drops trailing zeros after a decimal point: "76.00" → "76".
-func trimZeros(s string) string {
-	if !strings.Contains(s, ".") {
-		return s
-	}
-	s = strings.TrimRight(strings.TrimRight(s, "0"), ".")
-	if s == "-0" {
-		return "0"
-	}
-	return s
+	return UnitNone
 }
 
 // jsonField is one struct field under its JSON name.

@@ -8,8 +8,27 @@ import (
 	"ullage/hazards"
 )
 
+// Helpers for the expected typed values.
+func num(u Unit, x float64) InputValue { return InputValue{Kind: KindNumber, Unit: u, Number: x} }
+func text(s string) InputValue         { return InputValue{Kind: KindText, Text: s} }
+
+var absent = InputValue{Kind: KindAbsent}
+
+// field is one named field of an expected group.
+func field(name string, v InputValue) InputField { return InputField{Name: name, Value: v} }
+
+// The expected changes are read off the edits: each changed field with
+// its SI value and the unit its JSON name carries.
 func TestInputChanges(t *testing.T) {
 	custom := &hazards.Glass{ID: "mine", Name: "Own glass", WeibullModulus: hazards.Sourced{Value: 8, Source: "own tests"}}
+	sourced := func(u Unit, x float64, src string) InputValue {
+		return InputValue{Kind: KindGroup, Fields: []InputField{field("value", num(u, x)), field("source", text(src))}}
+	}
+	part := func(name, shape string, od, wall, length float64) InputValue {
+		return InputValue{Kind: KindGroup, Fields: []InputField{field("name", text(name)), field("shape", text(shape)),
+			field("outer_diameter_m", num(UnitLength, od)), field("wall_thickness_m", num(UnitLength, wall)),
+			field("wall_tolerance_m", num(UnitLength, 0)), field("length_m", num(UnitLength, length))}}
+	}
 	tests := []struct {
 		name string
 		edit func(d *hazards.Design)
@@ -17,40 +36,48 @@ func TestInputChanges(t *testing.T) {
 	}{
 		{"nothing", func(d *hazards.Design) {}, nil},
 		{"fluid", func(d *hazards.Design) { d.Fluid = "ethanol" },
-			[]InputChange{{"fluid", `"acetone"`, `"ethanol"`}}},
-		{"hottest temperature in kelvin and Celsius", func(d *hazards.Design) { d.HottestK = 333.15 },
-			[]InputChange{{"hottest_k", "349.15 K (76 °C)", "333.15 K (60 °C)"}}},
-		{"coldest below zero", func(d *hazards.Design) { d.ColdestK = 244.15 },
-			[]InputChange{{"coldest_k", "253.15 K (-20 °C)", "244.15 K (-29 °C)"}}},
+			[]InputChange{{"fluid", UnitNone, text("acetone"), text("ethanol")}}},
+		{"hottest temperature in kelvin", func(d *hazards.Design) { d.HottestK = 333.15 },
+			[]InputChange{{"hottest_k", UnitTemperature, num(UnitTemperature, 349.15), num(UnitTemperature, 333.15)}}},
 		{"wall of the first part", func(d *hazards.Design) { d.Vessel.Parts[0].WallThicknessM = 0.002 },
-			[]InputChange{{"vessel.parts[0].wall_thickness_m", "0.0015 m", "0.002 m"}}},
+			[]InputChange{{"vessel.parts[0].wall_thickness_m", UnitLength, num(UnitLength, 0.0015), num(UnitLength, 0.002)}}},
 		{"part added", func(d *hazards.Design) {
 			d.Vessel.Parts = append(d.Vessel.Parts, hazards.Part{Name: "stem", Shape: hazards.ShapeTube, OuterDiameterM: 0.006, WallThicknessM: 0.001, LengthM: 0.05})
-		}, []InputChange{{"vessel.parts[1]", Absent,
-			`{name: "stem", shape: "tube", outer_diameter_m: 0.006 m, wall_thickness_m: 0.001 m, wall_tolerance_m: 0 m, length_m: 0.05 m}`}}},
+		}, []InputChange{{"vessel.parts[1]", UnitNone, absent, part("stem", "tube", 0.006, 0.001, 0.05)}}},
 		{"part removed", func(d *hazards.Design) { d.Vessel.Parts = nil },
-			[]InputChange{{"vessel.parts[0]",
-				`{name: "bulb", shape: "sphere", outer_diameter_m: 0.04 m, wall_thickness_m: 0.0015 m, wall_tolerance_m: 0 m, length_m: 0 m}`, Absent}}},
+			[]InputChange{{"vessel.parts[0]", UnitNone, part("bulb", "sphere", 0.04, 0.0015, 0), absent}}},
 		{"measured volume", func(d *hazards.Design) { d.Vessel.InternalVolumeM3 = 2.6e-5 },
-			[]InputChange{{"vessel.internal_volume_m3", "0 m³", "2.6e-05 m³"}}},
-		{"room and ventilation", func(d *hazards.Design) { d.Room.AirChangesPerHour = 2; d.Room.NearFieldAirSpeed = 0.05 },
-			[]InputChange{{"room.air_changes_per_hour", "0.45 per hour", "2 per hour"}, {"room.near_field_air_speed_m_s", "0.1 m/s", "0.05 m/s"}}},
+			[]InputChange{{"vessel.internal_volume_m3", UnitVolume, num(UnitVolume, 0), num(UnitVolume, 2.6e-5)}}},
+		{"room and ventilation", func(d *hazards.Design) {
+			d.Room.AirChangesPerHour = 2
+			d.Room.NearFieldAirSpeed = 0.05
+			d.Room.NearFieldRadiusM = 2
+		},
+			[]InputChange{{"room.air_changes_per_hour", UnitPerHour, num(UnitPerHour, 0.45), num(UnitPerHour, 2)},
+				{"room.near_field_radius_m", UnitRoomLength, num(UnitRoomLength, 1), num(UnitRoomLength, 2)},
+				{"room.near_field_air_speed_m_s", UnitSpeed, num(UnitSpeed, 0.1), num(UnitSpeed, 0.05)}}},
 		{"hours and criteria", func(d *hazards.Design) {
 			d.HoursAtHottest = 500
 			d.Criteria.MaxPercentLFL = 10
 			d.Criteria.MinBurstSafetyFactor = 5
 		},
-			[]InputChange{{"hours_at_hottest", "1000 h", "500 h"}, {"criteria.min_burst_safety_factor", "4", "5"}, {"criteria.max_percent_lfl", "25 % of LFL", "10 % of LFL"}}},
+			[]InputChange{{"hours_at_hottest", UnitHours, num(UnitHours, 1000), num(UnitHours, 500)},
+				{"criteria.min_burst_safety_factor", UnitNone, num(UnitNone, 4), num(UnitNone, 5)},
+				{"criteria.max_percent_lfl", UnitPercentLFL, num(UnitPercentLFL, 25), num(UnitPercentLFL, 10)}}},
 		{"limit bodies as a whole", func(d *hazards.Design) { d.Criteria.LimitBodies = []string{"NIOSH", "OSHA"} },
-			[]InputChange{{"criteria.limit_bodies", "[]", `["NIOSH", "OSHA"]`}}},
+			[]InputChange{{"criteria.limit_bodies", UnitNone, InputValue{Kind: KindList, Items: []InputValue{}},
+				InputValue{Kind: KindList, Items: []InputValue{text("NIOSH"), text("OSHA")}}}}},
 		{"custom glass added", func(d *hazards.Design) { d.Glass.Custom = custom },
-			[]InputChange{{"glass.custom", Absent, `{id: "mine", name: "Own glass", note: "", ` +
-				`elastic_modulus_pa: {value: 0 Pa, source: ""}, poisson_ratio: {value: 0, source: ""}, ` +
-				`expansion_per_k: {value: 0 1/K, source: ""}, characteristic_strength_pa: {value: 0 Pa, source: ""}, ` +
-				`reference_area_m2: {value: 0 m², source: ""}, reference_load_seconds: {value: 0 s, source: ""}, ` +
-				`weibull_modulus: {value: 8, source: "own tests"}, stress_corrosion_exponent: {value: 0, source: ""}}`}}},
+			[]InputChange{{"glass.custom", UnitNone, absent, InputValue{Kind: KindGroup, Fields: []InputField{
+				field("id", text("mine")), field("name", text("Own glass")), field("note", text("")),
+				field("elastic_modulus_pa", sourced(UnitPressure, 0, "")), field("poisson_ratio", sourced(UnitNone, 0, "")),
+				field("expansion_per_k", sourced(UnitPerKelvin, 0, "")), field("characteristic_strength_pa", sourced(UnitPressure, 0, "")),
+				field("reference_area_m2", sourced(UnitArea, 0, "")), field("reference_load_seconds", sourced(UnitSeconds, 0, "")),
+				field("weibull_modulus", sourced(UnitNone, 8, "own tests")), field("stress_corrosion_exponent", sourced(UnitNone, 0, "")),
+			}}}}},
 		{"residual gas", func(d *hazards.Design) { d.ResidualGasPressurePa = 500; d.FillMassToleranceKg = 0.0005 },
-			[]InputChange{{"fill_mass_tolerance_kg", "0 kg", "0.0005 kg"}, {"residual_gas_pressure_pa", "0 Pa", "500 Pa"}}},
+			[]InputChange{{"fill_mass_tolerance_kg", UnitMass, num(UnitMass, 0), num(UnitMass, 0.0005)},
+				{"residual_gas_pressure_pa", UnitPressure, num(UnitPressure, 0), num(UnitPressure, 500)}}},
 		{"minus zero is zero", func(d *hazards.Design) { d.ResidualGasPressurePa = math.Copysign(0, -1) }, nil},
 	}
 	for _, tt := range tests {
@@ -59,7 +86,7 @@ func TestInputChanges(t *testing.T) {
 			tt.edit(&b)
 			got := inputChanges(&a, &b)
 			if !reflect.DeepEqual(got, tt.want) {
-				t.Errorf("changes\n got %q\nwant %q", got, tt.want)
+				t.Errorf("changes\n got %+v\nwant %+v", got, tt.want)
 			}
 		})
 	}
@@ -75,42 +102,46 @@ func TestInputChangesCustomGlass(t *testing.T) {
 	g.Expansion.Source = "maker's sheet"
 	b.Glass.Custom = &g
 	want := []InputChange{
-		{"glass.custom.expansion_per_k.value", "9e-06 1/K", "3.3e-06 1/K"},
-		{"glass.custom.expansion_per_k.source", `""`, `"maker's sheet"`},
-		{"glass.custom.characteristic_strength_pa.value", "3e+07 Pa", "4e+07 Pa"},
+		{"glass.custom.expansion_per_k.value", UnitPerKelvin, num(UnitPerKelvin, 9e-6), num(UnitPerKelvin, 3.3e-6)},
+		{"glass.custom.expansion_per_k.source", UnitNone, text(""), text("maker's sheet")},
+		{"glass.custom.characteristic_strength_pa.value", UnitPressure, num(UnitPressure, 3e7), num(UnitPressure, 4e7)},
 	}
 	if got := inputChanges(&a, &b); !reflect.DeepEqual(got, want) {
-		t.Errorf("changes\n got %q\nwant %q", got, want)
+		t.Errorf("changes\n got %+v\nwant %+v", got, want)
 	}
 }
 
-func TestWithUnit(t *testing.T) {
+// The unit of a field comes from the ending of its JSON name; a length
+// or volume under room. is the room's.
+func TestUnitOf(t *testing.T) {
 	tests := []struct {
-		name string
-		x    float64
-		want string
+		path, name string
+		want       Unit
 	}{
-		{"fill_mass_kg", 0.006, "0.006 kg"},
-		{"sealing_temperature_k", 273.15, "273.15 K (0 °C)"},
-		{"expansion_per_k", 9e-6, "9e-06 1/K"},
-		{"volume_m3", 30, "30 m³"},
-		{"reference_area_m2", 1, "1 m²"},
-		{"near_field_radius_m", 1, "1 m"},
-		{"near_field_air_speed_m_s", 0.1, "0.1 m/s"},
-		{"air_changes_per_hour", 0.45, "0.45 per hour"},
-		{"ambient_pressure_pa", 101325, "101325 Pa"},
-		{"service_life_years", 10, "10 years"},
-		{"exposure_minutes", 480, "480 min"},
-		{"reference_load_seconds", 60, "60 s"},
-		{"min_ullage_percent", 5, "5 %"},
-		{"max_percent_lfl", 25, "25 % of LFL"},
-		{"hours_at_hottest", 1000, "1000 h"},
-		{"mixing_factor", 3, "3"},
-		{"max_failure_probability", 1e-4, "0.0001"},
+		{"fill_mass_kg", "fill_mass_kg", UnitMass},
+		{"sealing_temperature_k", "sealing_temperature_k", UnitTemperature},
+		{"thermal_shock.hot_to_cold_k", "hot_to_cold_k", UnitTemperatureChange},
+		{"glass.custom.expansion_per_k.value", "expansion_per_k", UnitPerKelvin},
+		{"room.volume_m3", "volume_m3", UnitRoomVolume},
+		{"vessel.internal_volume_m3", "internal_volume_m3", UnitVolume},
+		{"glass.custom.reference_area_m2.value", "reference_area_m2", UnitArea},
+		{"room.near_field_radius_m", "near_field_radius_m", UnitRoomLength},
+		{"vessel.parts[0].outer_diameter_m", "outer_diameter_m", UnitLength},
+		{"room.near_field_air_speed_m_s", "near_field_air_speed_m_s", UnitSpeed},
+		{"room.air_changes_per_hour", "air_changes_per_hour", UnitPerHour},
+		{"ambient_pressure_pa", "ambient_pressure_pa", UnitPressure},
+		{"service_life_years", "service_life_years", UnitYears},
+		{"room.exposure_minutes", "exposure_minutes", UnitMinutes},
+		{"glass.custom.reference_load_seconds.value", "reference_load_seconds", UnitSeconds},
+		{"criteria.min_ullage_percent", "min_ullage_percent", UnitPercent},
+		{"criteria.max_percent_lfl", "max_percent_lfl", UnitPercentLFL},
+		{"hours_at_hottest", "hours_at_hottest", UnitHours},
+		{"room.mixing_factor", "mixing_factor", UnitNone},
+		{"criteria.max_failure_probability", "max_failure_probability", UnitNone},
 	}
 	for _, tt := range tests {
-		if got := withUnit(tt.name, tt.x); got != tt.want {
-			t.Errorf("withUnit(%q, %g) = %q; want %q", tt.name, tt.x, got, tt.want)
+		if got := unitOf(tt.path, tt.name); got != tt.want {
+			t.Errorf("unitOf(%q) = %q; want %q", tt.path, got, tt.want)
 		}
 	}
 }

@@ -33,6 +33,13 @@ const (
 	NotFlammable State = "not flammable"
 	NoneGiven    State = "none given"   // no residual stress given at the seal
 	NotComputed  State = "not computed" // a value that was not finite
+	// NoBurstLoad: the vessel is not above ambient pressure at the
+	// hottest temperature, so the burst safety factor and the failure
+	// probability are not results (the best case of each).
+	NoBurstLoad State = State(hazards.ReasonNoBurstLoad)
+	// NoExternalLoad: the vessel is not below ambient pressure at the
+	// coldest temperature, so the implosion safety factor is not a result.
+	NoExternalLoad State = State(hazards.ReasonNoExternalLoad)
 )
 
 // Reading is one side of a headline result. Value is in SI units and is
@@ -81,12 +88,21 @@ var quantities = []quantity{
 		return value(a.LiquidFullK)
 	}},
 	{"Burst safety factor", Factor, "", true, func(a *hazards.Assessment) Reading {
+		if !a.HasBurstLoad() {
+			return Reading{State: NoBurstLoad, rank: math.Inf(1)}
+		}
 		return safetyFactor(a.BurstSafetyFactor)
 	}},
 	{"Failure probability over the service life", Probability, "", false, func(a *hazards.Assessment) Reading {
+		if !a.HasBurstLoad() {
+			return Reading{State: NoBurstLoad, rank: math.Inf(-1)}
+		}
 		return value(a.FailureProbability)
 	}},
 	{"Implosion safety factor", Factor, "", true, func(a *hazards.Assessment) Reading {
+		if !a.HasExternalLoad() {
+			return Reading{State: NoExternalLoad, rank: math.Inf(1)}
+		}
 		return safetyFactor(a.ImplosionSafetyFactor)
 	}},
 	{"Thermal-shock safety factor (weakest part)", Factor, "", true, thermalShockReading},

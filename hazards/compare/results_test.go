@@ -19,6 +19,7 @@ func fakeAssessment(x float64) *hazards.Assessment {
 		BurstSafetyFactor:     x,
 		FailureProbability:    x / 1000,
 		ImplosionSafetyFactor: x,
+		ExternalLoadPa:        1,
 		MaxSafe:               hazards.MaxSafe{TemperatureK: 273.15 + x, TemperatureBound: hazards.BoundFound, FillMassKg: x / 1000, FillBound: hazards.BoundFound},
 		Rupture:               hazards.Rupture{StoredEnergyJ: x},
 		Release: hazards.Release{Peak: hazards.Exposure{PPM: x}, STEL: hazards.Exposure{PPM: x},
@@ -129,6 +130,35 @@ func TestResultSpecialCases(t *testing.T) {
 	back := Compare(Side{Assessment: never}, Side{Assessment: never})
 	if r := findResult(t, back, "Liquid-full temperature"); r.Changed() {
 		t.Errorf("not reached on both sides: %+v", r)
+	}
+}
+
+// A vessel never above ambient at its hottest carries no burst load, and
+// one never below ambient at its coldest no external load: the readings
+// say so in words, never a probability of 0 or a capped factor, and count
+// as the better side.
+func TestNoLoadStates(t *testing.T) {
+	loaded := fakeAssessment(2)
+	free := fakeAssessment(2)
+	free.Design.AmbientPressurePa = 1e6 // above the hottest pressure, 2 kPa
+	free.ExternalLoadPa = -1
+	free.FailureProbability = 0
+	c := Compare(Side{Assessment: loaded}, Side{Assessment: free})
+	for _, tt := range []struct {
+		name  string
+		state State
+	}{
+		{"Burst safety factor", NoBurstLoad},
+		{"Failure probability over the service life", NoBurstLoad},
+		{"Implosion safety factor", NoExternalLoad},
+	} {
+		r := findResult(t, c, tt.name)
+		if r.New.State != tt.state || !r.Better || r.Old.State != "" {
+			t.Errorf("%s: %+v; want %q on the new side only, better", tt.name, r, tt.state)
+		}
+	}
+	if r := findResult(t, Compare(Side{Assessment: free}, Side{Assessment: free}), "Burst safety factor"); r.Changed() {
+		t.Errorf("no burst load on both sides: %+v", r)
 	}
 }
 

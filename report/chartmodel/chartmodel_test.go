@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"flag"
 	"image/png"
+	"math"
 	"os"
 	"path/filepath"
 	"slices"
@@ -71,7 +72,9 @@ func TestTicks(t *testing.T) {
 		{"log decades, all plain", Axis{Min: 1, Max: 1e4, Log: true}, []string{"1", "10", "100", "1000", "10000"}},
 		{"log decades past 10⁴: all powers, never a mix", Axis{Min: 1, Max: 1e5, Log: true}, []string{"10⁰", "10¹", "10²", "10³", "10⁴", "10⁵"}},
 		{"short log axis adds 2 and 5", Axis{Min: 100, Max: 1000, Log: true}, []string{"100", "200", "500", "1000"}},
-		{"small decades", Axis{Min: 1e-4, Max: 1e-2, Log: true}, []string{"10⁻⁴", "2×10⁻⁴", "5×10⁻⁴", "10⁻³", "2×10⁻³", "5×10⁻³", "10⁻²"}},
+		{"small decades", Axis{Min: 1e-4, Max: 1e-2, Log: true}, []string{"10⁻⁴", "2 × 10⁻⁴", "5 × 10⁻⁴", "10⁻³", "2 × 10⁻³", "5 × 10⁻³", "10⁻²"}},
+		{"counts step in whole numbers", Axis{Min: 0, Max: 4, Whole: true}, []string{"0", "1", "2", "3", "4"}},
+		{"counts over a wider range", Axis{Min: 0, Max: 12, Whole: true}, []string{"0", "2", "4", "6", "8", "10", "12"}},
 		{"empty axis", Axis{Min: 1, Max: 1}, nil},
 		{"log axis from zero", Axis{Min: 0, Max: 10, Log: true}, nil},
 	}
@@ -222,4 +225,17 @@ func TestFillMapFalls(t *testing.T) {
 	writePNG(t, "fillmap-liquidfull", FillTemperature("Fill–temperature map", m, a, si, kg))
 	b := assess(t, "revision_b_design.json")
 	writePNG(t, "fillmap-b", FillTemperature("Fill–temperature map", FillMap(b.Design, lib), b, si, kg))
+}
+
+// A count axis has no tick, labelled or not, between whole numbers, for
+// any number of units a histogram bar can hold.
+func TestWholeTicks(t *testing.T) {
+	for _, hi := range []float64{1, 2, 3, 4, 5, 7, 11, 13, 40, 110, 1200} {
+		lo, top := LinearRange(0, hi*1.1)
+		for _, tk := range Ticks(Axis{Min: lo, Max: math.Max(math.Ceil(top), 1), Whole: true}) {
+			if tk.Value != math.Trunc(tk.Value) {
+				t.Errorf("count axis up to %g: tick at %g", hi, tk.Value)
+			}
+		}
+	}
 }

@@ -87,7 +87,8 @@ type MassQuantity = Quantity
 // factor reaches its minimum and the minimum-ullage line; the design
 // point with its tolerance box (fill ± its tolerance, up to the hottest);
 // and the hottest and coldest temperatures. Below all three lines a fill
-// and temperature pass these criteria.
+// and temperature pass these criteria. The temperature axis depends only
+// on the design's coldest and hottest temperatures.
 func FillTemperature(title string, m FillMapData, a *hazards.Assessment, u Units, mass MassQuantity) Chart {
 	ch := Chart{
 		Title:  title,
@@ -125,14 +126,10 @@ func FillTemperature(title string, m FillMapData, a *hazards.Assessment, u Units
 		ch.Boxes = append(ch.Boxes, Box{X0: mass.FromSI(d.FillMassKg - tol), X1: mass.FromSI(d.FillMassKg + tol), Y0: tq.FromSI(d.ColdestK), Y1: tq.FromSI(d.HottestK), Style: Style{Dotted, 1, Green}})
 		ch.Notes = append(ch.Notes, "The dotted box spans the fill tolerance (± "+mass.Format(tol)+") from the coldest to the hottest temperature.")
 	}
-	lo, hi := d.ColdestK, d.HottestK
-	for _, ys := range [][]float64{m.LiquidFullK, m.BurstLimitK, m.UllageLimitK} {
-		for _, y := range ys {
-			if finite(y) && y < d.HottestK+2*reachK {
-				lo, hi = math.Min(lo, y), math.Max(hi, y)
-			}
-		}
-	}
+	// The temperature axis runs from the coldest to well past the hottest,
+	// whatever the lines do, so that two revisions with the same
+	// temperatures share their axes; lines beyond it are clipped.
+	lo, hi := d.ColdestK, d.HottestK+2*reachK
 	ch.X.Min, ch.X.Max = LinearRange(mass.FromSI(m.FillKg[0]), mass.FromSI(m.FillKg[len(m.FillKg)-1]))
 	ch.Y.Min, ch.Y.Max = LinearRange(tq.FromSI(lo-5), tq.FromSI(hi+5))
 	ch.Notes = append(ch.Notes, "Each line comes from assessing the design at that fill with everything else unchanged; a fill and temperature below all three lines meet the burst and ullage criteria and stay short of liquid-full.")

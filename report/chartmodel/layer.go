@@ -7,6 +7,8 @@ import (
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
+
+	"ullage/report/display"
 )
 
 // layer draws everything of a chart inside the plot area: bars, boxes,
@@ -386,7 +388,7 @@ func (l *layer) ranked(c draw.Canvas, trX, trY func(float64) vg.Length) {
 		pts := []vg.Point{{X: x0, Y: y0}, {X: x1, Y: y0}, {X: x1, Y: y1}, {X: x0, Y: y1}}
 		c.FillPolygon(fill, pts)
 		c.StrokeLines(draw.LineStyle{Color: l.o.fg(), Width: vg.Points(0.3)}, append(pts, pts[0]))
-		txt := signed(b.Value)
+		txt := display.Correlation(b.Value)
 		if b.Value < 0 {
 			ts.XAlign = draw.XLeft
 			c.FillText(ts, vg.Point{X: x0 + 3, Y: (y0 + y1) / 2}, txt)
@@ -396,19 +398,6 @@ func (l *layer) ranked(c draw.Canvas, trX, trY func(float64) vg.Length) {
 		}
 	}
 	c.StrokeLine2(draw.LineStyle{Color: l.o.fg(), Width: vg.Points(0.5)}, trX(0), c.Min.Y, trX(0), c.Max.Y)
-}
-
-// signed writes a correlation with its sign and two decimals, and a
-// correlation that rounds to zero as "0.00".
-func signed(v float64) string {
-	if math.Abs(v) < 0.005 {
-		return "0.00"
-	}
-	s := fixed(v, 2)
-	if v > 0 {
-		s = "+" + s
-	}
-	return s
 }
 
 func clampL(v, lo, hi vg.Length) vg.Length { return max(lo, min(hi, v)) }

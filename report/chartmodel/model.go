@@ -10,6 +10,9 @@ type Axis struct {
 	Min, Max float64
 	// Log draws the axis on a logarithmic scale (Min > 0).
 	Log bool
+	// Whole marks an axis of counts: a linear one steps in whole numbers
+	// (never "2.5 units").
+	Whole bool
 }
 
 // Dash is a line pattern; each pattern is distinct in black and white.

@@ -35,7 +35,9 @@ const ceilingFactor = 20
 // for one design or for two revisions on shared axes. The pressure axis is
 // always logarithmic, for every design, so that any two records compare
 // side by side; its range covers the curves, the allowable and the outside
-// pressure, up to a ceiling the chart names when a curve runs past it.
+// pressure, and always reaches a ceiling (ceilingFactor times the higher
+// of the allowable and the outside pressure), which the chart names when
+// a curve runs past it.
 func Pressure(title string, sides []Side, u Units) Chart {
 	ch := Chart{
 		Title:  title,
@@ -118,7 +120,10 @@ func Pressure(title string, sides []Side, u Units) Chart {
 	if pmax > ceiling {
 		ch.Notes = append(ch.Notes, "The curve runs off the top of the chart past "+pq.Format(ceiling)+": a liquid-full vessel's pressure climbs steeply.")
 	}
-	ylo, yhi := LogRange(pq.FromSI(math.Min(pmin, amb)/1.5), pq.FromSI(math.Max(math.Min(pmax, ceiling), top)*1.5))
+	// The axis always reaches the ceiling, whatever the curve does, so
+	// that the charts of two revisions with like glass and temperatures
+	// share their axes and read side by side.
+	ylo, yhi := LogRange(pq.FromSI(math.Min(pmin, amb)/1.5), pq.FromSI(ceiling*1.5))
 	ch.X.Min, ch.X.Max = tq.FromSI(lo), tq.FromSI(hi)
 	ch.Y.Min, ch.Y.Max = ylo, yhi
 	return ch

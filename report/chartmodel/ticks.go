@@ -2,8 +2,8 @@ package chartmodel
 
 import (
 	"math"
-	"strconv"
-	"strings"
+
+	"ullage/report/display"
 )
 
 // Tick is a tick mark; a labelled tick also carries a grid line.
@@ -14,12 +14,13 @@ type Tick struct {
 
 // Ticks returns the ticks of an axis. A linear axis gets steps of 1, 2 or
 // 5 times a power of ten, about eight of them, labelled with as many
-// decimals as the step needs. A logarithmic axis gets a labelled tick at
+// decimals as the step needs; an axis of counts (Whole) steps by at least
+// one, with no tick between whole numbers. A logarithmic axis gets a labelled tick at
 // each decade (every second or third decade on a long axis), with 2 and 5
 // labelled too on an axis shorter than two and a half decades, and
 // unlabelled ticks between. The labels of one axis are all written the
 // same way: all as plain numbers when every one of them is between 0.001
-// and 99 999, otherwise all as powers of ten (2×10⁴, 10⁵), never a mix.
+// and 99 999, otherwise all as powers of ten (2 × 10⁴, 10⁵), never a mix.
 func Ticks(a Axis) []Tick {
 	if !(a.Max > a.Min) || !finite(a.Min) || !finite(a.Max) || (a.Log && !(a.Min > 0)) {
 		return nil
@@ -27,23 +28,29 @@ func Ticks(a Axis) []Tick {
 	if a.Log {
 		return logTicks(a.Min, a.Max)
 	}
-	return linearTicks(a.Min, a.Max)
+	return linearTicks(a.Min, a.Max, a.Whole)
 }
 
-func linearTicks(lo, hi float64) []Tick {
+func linearTicks(lo, hi float64, whole bool) []Tick {
 	step := NiceStep((hi - lo) / 8)
-	dec := max(0, int(-math.Floor(math.Log10(step)+1e-9)))
 	minor := step / 5
 	if m := step / math.Pow(10, math.Floor(math.Log10(step)+1e-9)); math.Abs(m-2) < 1e-9 {
 		minor = step / 4
 	}
+	if whole {
+		step, minor = max(step, 1), max(minor, 1)
+		if math.Mod(step, minor) != 0 {
+			minor = step
+		}
+	}
+	dec := max(0, int(-math.Floor(math.Log10(step)+1e-9)))
 	var out []Tick
 	first := math.Ceil(lo/minor - 1e-9)
 	for i := first; i*minor <= hi+minor*1e-6; i++ {
 		v := i * minor
 		r := math.Round(v/step) * step
 		if math.Abs(v-r) < minor*1e-3 {
-			out = append(out, Tick{Value: r, Label: fixed(r, dec)})
+			out = append(out, Tick{Value: r, Label: display.Fixed(r, dec)})
 		} else {
 			out = append(out, Tick{Value: v})
 		}
@@ -157,34 +164,11 @@ func stepUp(v float64) float64 {
 	return 10 * p
 }
 
-var superscripts = map[rune]rune{
-	'-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴',
-	'5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹',
-}
-
-// powerLabel writes m × 10^e as "10⁵" or "2×10⁵".
-func powerLabel(m, e int) string {
-	var b strings.Builder
-	if m != 1 {
-		b.WriteString(strconv.Itoa(m) + "×")
-	}
-	b.WriteString("10")
-	for _, r := range strconv.Itoa(e) {
-		b.WriteRune(superscripts[r])
-	}
-	return b.String()
-}
+// powerLabel writes m × 10^e as "10⁵" or "2 × 10⁵", by the display
+// package's notation.
+func powerLabel(m, e int) string { return display.PowerOfTen(m, e) }
 
 // plain writes a tick value of decade e as a plain decimal number.
-func plain(v float64, e int) string { return fixed(v, max(0, -e)) }
-
-// fixed writes v with dec decimals and a true minus sign.
-func fixed(v float64, dec int) string {
-	s := strconv.FormatFloat(v, 'f', dec, 64)
-	if strings.Trim(s, "-0.") == "" {
-		s = strings.TrimPrefix(s, "-")
-	}
-	return strings.Replace(s, "-", "−", 1)
-}
+func plain(v float64, e int) string { return display.Fixed(v, max(0, -e)) }
 
 func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }

@@ -15,7 +15,7 @@ func Histogram(title string, h tolerance.Histogram) Chart {
 	ch := Chart{
 		Title: title,
 		X:     Axis{Label: "Unit safety factor (strength over stress)"},
-		Y:     Axis{Label: "Units"},
+		Y:     Axis{Label: "Units", Whole: true},
 	}
 	total := h.Below + h.Above + h.NoLoad
 	for _, c := range h.Counts {
@@ -36,6 +36,7 @@ func Histogram(title string, h tolerance.Histogram) Chart {
 	}
 	ch.X.Min, ch.X.Max = h.Edges[0], h.Edges[len(h.Edges)-1]
 	ch.Y.Min, ch.Y.Max = LinearRange(0, float64(maxC)*1.1)
+	ch.Y.Max = math.Max(math.Ceil(ch.Y.Max), 1)
 	if ch.X.Min < 1 && ch.X.Max > 1 {
 		ch.Lines = append(ch.Lines, Line{Label: "Bursts below a factor of 1", Value: 1, Vertical: true, Style: Style{Dashed, 1, Red}})
 	}

@@ -289,21 +289,26 @@ func factQuantity(k hazards.FactKind) Quantity {
 	return Plain
 }
 
+// StressPerDegree formats a stress per kelvin of temperature change
+// (Pa/K): "0.787 MPa per K", or in psi per °F.
+func (s System) StressPerDegree(paPerK float64) string {
+	if s == US {
+		return Number(paPerK*5/9/psiPa, ValueFigures) + " psi per °F"
+	}
+	return Number(paPerK/1e6, ValueFigures) + " MPa per K"
+}
+
 // FactText words one fact in the system's units: "hottest temperature:
 // 76.0 °C", "glass: soda-lime-silica glass", "liquid-full temperature:
 // not reached".
 func FactText(f hazards.Fact, s System) string {
 	if f.Text != "" {
-		return f.Name + ": " + f.Text
+		return f.Name + ": " + Warning(f.Text, s)
 	}
 	var v string
 	switch f.Kind {
 	case hazards.FactStressPerKelvin:
-		if s == US {
-			v = Number(f.Value*5/9/psiPa, ValueFigures) + " psi per °F"
-		} else {
-			v = Number(f.Value/1e6, ValueFigures) + " MPa per K"
-		}
+		v = s.StressPerDegree(f.Value)
 	case hazards.FactMinutes:
 		v = Number(f.Value, ValueFigures) + " min"
 	case hazards.FactHours:

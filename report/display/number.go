@@ -76,6 +76,40 @@ func Fixed(x float64, decimals int) string {
 	return strings.Replace(s, "-", "−", 1)
 }
 
+// StatedFigures is the most significant figures [Stated] prints.
+const StatedFigures = 4
+
+// Stated formats a number a person stated rather than one the engine
+// computed (a criterion, a service life, an air-change rate): with as few
+// significant figures as give it back exactly, at most StatedFigures and
+// never fewer than its integer digits, by [Number]'s rule otherwise
+// (10 years, 480 min, 0.45, 1 × 10⁻⁴).
+func Stated(x float64) string {
+	if math.IsNaN(x) || math.IsInf(x, 0) || x == 0 {
+		return Number(x, 1)
+	}
+	n := 1
+	for ; n < StatedFigures; n++ {
+		r, _ := strconv.ParseFloat(strconv.FormatFloat(x, 'e', n-1, 64), 64)
+		if math.Abs(r-x) <= 1e-9*math.Abs(x) {
+			break
+		}
+	}
+	if ax := math.Abs(x); ax >= 1 && ax < plainHigh {
+		n = max(n, int(math.Floor(math.Log10(ax)))+1)
+	}
+	return Number(x, n)
+}
+
+// PowerOfTen writes m × 10^e in [Number]'s notation: "10⁵" when m is 1,
+// "2 × 10⁵" otherwise (a chart's tick labels).
+func PowerOfTen(m, e int) string {
+	if m == 1 {
+		return "10" + superscript(e)
+	}
+	return strconv.Itoa(m) + " × 10" + superscript(e)
+}
+
 // trimZeros removes trailing zeros after a decimal point.
 func trimZeros(s string) string {
 	if !strings.Contains(s, ".") {

@@ -32,6 +32,22 @@ func TestNumber(t *testing.T) {
 	}
 }
 
+// The expected strings follow Stated's doc comment: the figures the
+// number has, at most four, never fewer than its integer digits.
+func TestStated(t *testing.T) {
+	for _, tc := range []struct {
+		x    float64
+		want string
+	}{
+		{1000, "1000"}, {0.45, "0.45"}, {4, "4"}, {1e-4, "1 × 10⁻⁴"}, {2.123456, "2.123"},
+		{23581.4, "23581"}, {0, "0"}, {-29, "−29"}, {280000, "280000"},
+	} {
+		if got := Stated(tc.x); got != tc.want {
+			t.Errorf("Stated(%g) = %q, want %q", tc.x, got, tc.want)
+		}
+	}
+}
+
 func TestFixed(t *testing.T) {
 	for _, tc := range []struct {
 		x    float64

@@ -1,0 +1,106 @@
+package display
+
+import (
+	"math"
+	"strconv"
+	"strings"
+
+	"ullage/hazards/tolerance"
+)
+
+// PlusMinusNote says what the ± of a tolerance study stands for, in the
+// words the window, the record and the command line share.
+const PlusMinusNote = "A ± tolerance is read as three standard deviations (3σ) of a normal distribution, so about 99.7 % of units lie within it; for a uniform or triangular distribution it is the half-width."
+
+// WallVolumeNote explains in one line why a thicker wall can lower the
+// margin: the parts are given by their outside size, so the wall takes
+// its thickness from the inside.
+const WallVolumeNote = "A thicker wall can lower the margin: the outside size is fixed, so a thicker wall shrinks the internal volume and the same fill leaves less free space (ullage), and the vessel goes liquid-full sooner."
+
+// noDriverWords says that no varied input moves the margin.
+const noDriverWords = "none: no varied input moves the safety factor (every rank correlation rounds to zero)"
+
+// driverFloor is the smallest rank correlation that prints as other than
+// +0.00: below it an input does not move the margin at two decimals.
+const driverFloor = 0.005
+
+// DistributionWords names a study's distribution and what its ± stands
+// for: "normal, ± is 3σ", "uniform, ± is the half-width", "triangular,
+// peak at the design, ± is the half-width", "Weibull".
+func DistributionWords(dist string) string {
+	switch dist {
+	case tolerance.Normal:
+		return "normal, ± is 3σ"
+	case tolerance.Uniform:
+		return "uniform, ± is the half-width"
+	case tolerance.Triangle:
+		return "triangular, peak at the design, ± is the half-width"
+	case tolerance.Weibull:
+		return "Weibull"
+	}
+	return dist
+}
+
+// Share formats a fraction of units (0.507) as a percentage ("50.7 %") by
+// [Number]'s rule.
+func Share(fraction float64) string {
+	return Number(100*fraction, ValueFigures) + " %"
+}
+
+// Proportion words a counted fraction of the sampled units with its 95 %
+// interval: "441 of 2000 (22.1 %, 95 % interval 20.3 – 23.9 %)".
+func Proportion(p tolerance.Proportion) string {
+	return strconv.Itoa(p.Count) + " of " + strconv.Itoa(p.Total) + " (" + Share(p.Estimate) +
+		", 95 % interval " + Number(100*p.Low, ValueFigures) + " – " + Share(p.High) + ")"
+}
+
+// Spread formats three percentiles with the given formatter: "a / b / c".
+func Spread(p1, p50, p99 float64, format func(float64) string) string {
+	return format(p1) + " / " + format(p50) + " / " + format(p99)
+}
+
+// Correlation formats a rank correlation with its sign and two decimals
+// ("−0.71", "+0.15"), and one that rounds to zero as "0.00".
+func Correlation(r float64) string {
+	s := Fixed(r, 2)
+	if s == NoValue || s == "0.00" || strings.HasPrefix(s, "−") {
+		return s
+	}
+	return "+" + s
+}
+
+// StrongestDriver words the input that moves the units' safety factor
+// most, with its rank correlation, or says in words that none does.
+func StrongestDriver(ds []tolerance.Driver) string {
+	if len(ds) == 0 || !(math.Abs(ds[0].RankCorrelation) >= driverFloor) {
+		return noDriverWords
+	}
+	d := ds[0]
+	way := "a larger value raises the margin"
+	if d.RankCorrelation < 0 {
+		way = "a larger value lowers the margin"
+	}
+	return d.Label + " (rank correlation " + Correlation(d.RankCorrelation) + ": " + way + ")"
+}
+
+// DriversMoved reports whether any varied input moves the safety factor
+// at two decimals of rank correlation.
+func DriversMoved(ds []tolerance.Driver) bool {
+	for _, d := range ds {
+		if math.Abs(d.RankCorrelation) >= driverFloor {
+			return true
+		}
+	}
+	return false
+}
+
+// WallLowersMargin reports whether a wall thickness is among the drivers
+// that lower the margin as they grow, the case [WallVolumeNote] explains.
+func WallLowersMargin(ds []tolerance.Driver) bool {
+	for _, d := range ds {
+		if strings.HasSuffix(d.Key, "wall_thickness_m") && d.RankCorrelation <= -driverFloor {
+			return true
+		}
+	}
+	return false
+}
