@@ -187,7 +187,7 @@ func (c *comparePanel) render() {
 
 	only := c.onlyChanged.Checked
 	rows := []fyne.CanvasObject{compareHeader("Input", cmp.A.Label, cmp.B.Label)}
-	for _, r := range inputRows(c.s.form, &cmp.A.Design, &cmp.B.Design, c.s.lib, u) {
+	for _, r := range inputRows(&cmp.A.Design, &cmp.B.Design, c.s.lib, u) {
 		if only && !r.Changed {
 			continue
 		}

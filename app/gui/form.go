@@ -1,7 +1,9 @@
 package gui
 
 import (
+	"cmp"
 	"fmt"
+	"slices"
 	"strings"
 
 	"fyne.io/fyne/v2"
@@ -59,6 +61,9 @@ func newDesignForm(s *session) *designForm {
 		newRoomSection(f),
 		newCriteriaSection(f),
 	}
+	// The form table decides the order of the fields, whatever the order
+	// the sections made them in.
+	slices.SortStableFunc(f.fields, func(a, b *numField) int { return cmp.Compare(fieldRank(a.path), fieldRank(b.path)) })
 	f.scroll = container.NewVScroll(container.NewVBox(f.sections...))
 	f.object = container.NewBorder(f.generalRow, nil, nil, nil, f.scroll)
 	return f
@@ -74,11 +79,11 @@ func (f *designForm) reveal(p *problem) {
 	var focus fyne.Focusable
 	if nf, ok := f.byPath[p.Path]; ok {
 		target, focus = nf.object, nf.entry
-	} else if p.Path == "fluid" {
+	} else if p.Path == hazards.FieldFluid {
 		target, focus = f.fluid.choose, f.fluid.choose
-	} else if strings.HasPrefix(p.Path, "glass") {
+	} else if strings.HasPrefix(p.Path, hazards.FieldGlass) {
 		target, focus = f.vessel.glass, f.vessel.glass
-	} else if strings.HasPrefix(p.Path, "vessel.") {
+	} else if strings.HasPrefix(p.Path, hazards.FieldVessel+".") {
 		target = f.vessel.parts
 	}
 	if target == nil {
@@ -102,9 +107,14 @@ func (f *designForm) scrollTo(i int) {
 	f.scroll.ScrollToOffset(fyne.NewPos(0, f.sections[i].Position().Y))
 }
 
-// field creates a number field of the form and registers it.
-func (f *designForm) field(path, label string, q quantity, get func(*hazards.Design) float64, set func(*hazards.Design, float64)) *numField {
-	nf := newNumField(path, label, q, get, set, f.edited)
+// field creates the number field of the form at path (one of
+// formFields) and registers it.
+func (f *designForm) field(path string) *numField {
+	ff, ok := formFieldAt(path)
+	if !ok {
+		panic("gui: no form field " + path)
+	}
+	nf := newNumField(ff, f.edited)
 	f.fields = append(f.fields, nf)
 	f.byPath[path] = nf
 	return nf
@@ -127,13 +137,13 @@ func (f *designForm) edited(nf *numField) {
 // afterNumber keeps the preset selectors in step with typed values.
 func (f *designForm) afterNumber(path string) {
 	switch {
-	case path == "hottest_k" || path == "coldest_k":
+	case path == hazards.FieldHottest || path == hazards.FieldColdest:
 		f.temps.syncPresets()
-	case strings.HasPrefix(path, "room."):
+	case strings.HasPrefix(path, hazards.FieldRoom+"."):
 		f.room.typed()
-	case strings.HasPrefix(path, "vessel."):
+	case strings.HasPrefix(path, hazards.FieldVessel+"."):
 		f.vessel.updateVolume()
-	case strings.HasPrefix(path, "thermal_shock."):
+	case strings.HasPrefix(path, hazards.FieldThermalShock+"."):
 		f.shock.syncPresets()
 	}
 }
@@ -163,18 +173,6 @@ func (f *designForm) load() {
 	}
 	f.applyUnset()
 	f.showProblems(f.s.problem)
-}
-
-// requiredOnNew reports whether the field at path starts empty on a new
-// design: the fill, the hottest and coldest temperatures and every
-// dimension of the vessel, which no default can stand for. The room, the
-// shocks and the criteria start from the reviewer's usual values.
-func requiredOnNew(path string) bool {
-	switch path {
-	case "fill_mass_kg", "hottest_k", "coldest_k":
-		return true
-	}
-	return strings.HasPrefix(path, "vessel.parts[")
 }
 
 // applyUnset empties the required fields of a new design not typed yet
@@ -222,36 +220,6 @@ func (f *designForm) firstParseProblem() *numField {
 	return nil
 }
 
-// quantityOf returns the quantity of the field at a JSON path.
-func (f *designForm) quantityOf(path string) (quantity, bool) {
-	if nf, ok := f.byPath[path]; ok {
-		return nf.q, true
-	}
-	return qNumber, false
-}
-
-// labelOf names the field at a JSON path for messages.
-func (f *designForm) labelOf(path string) string {
-	if nf, ok := f.byPath[path]; ok {
-		return nf.label
-	}
-	switch {
-	case path == "fluid":
-		return "Fluid"
-	case strings.HasPrefix(path, "glass"):
-		return "Glass"
-	case path == "vessel.parts":
-		return "Parts of the vessel"
-	case strings.HasPrefix(path, "criteria.limit_bodies"):
-		return "Bodies whose limits apply"
-	case path == "temperature":
-		return "Temperature"
-	case path == "seal_stress.part":
-		return "Part carrying the seal"
-	}
-	return path
-}
-
 // showProblems marks every field: its own parse problem first, then the
 // engine's problem when it names this field. A problem that names no
 // field of the form is shown at the top of the form.
@@ -275,7 +243,7 @@ func (f *designForm) showProblems(p *problem) {
 	}
 	text := p.Text
 	if p.Path != "" {
-		text = f.labelOf(p.Path) + ": " + text
+		text = labelOf(p.Path) + ": " + text
 	}
 	f.general.SetText(text)
 	f.generalRow.Show()

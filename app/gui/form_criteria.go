@@ -16,35 +16,15 @@ type criteriaSection struct {
 	sets   *widget.CheckGroup
 }
 
-// criterionField describes one criterion on screen.
-type criterionField struct {
-	key   string
-	label string
-	q     quantity
-}
-
-// criterionFields lists the criteria in the order they are shown.
-var criterionFields = []criterionField{
-	{"min_burst_safety_factor", "Least burst safety factor", qNumber},
-	{"min_implosion_safety_factor", "Least implosion safety factor", qNumber},
-	{"max_failure_probability", "Highest failure probability", qProbability},
-	{"min_ullage_percent", "Least ullage at the hottest", qPercent},
-	{"max_fraction_of_limit", "Highest fraction of a limit", qNumber},
-	{"max_percent_lfl", "Highest share of the LFL", qPercent},
-}
-
 // newCriteriaSection builds the "Review criteria" group.
 func newCriteriaSection(f *designForm) fyne.CanvasObject {
 	c := &criteriaSection{f: f}
 	f.criteria = c
 	var objs []fyne.CanvasObject
-	for _, cf := range criterionFields {
-		get := criterionGetter(cf.key)
-		nf := f.field("criteria."+cf.key, cf.label, cf.q,
-			func(d *hazards.Design) float64 { return *get(&d.Criteria) },
-			func(d *hazards.Design, x float64) { *get(&d.Criteria) = x })
+	for _, cp := range criterionPrefs {
+		nf := f.field(criterionPath(cp.key))
 		c.fields = append(c.fields, nf)
-		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cf.key])))
+		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cp.key])))
 	}
 	c.sets = widget.NewCheckGroup(limitSetNames(), func(sel []string) {
 		if f.s.loading {
@@ -59,6 +39,9 @@ func newCriteriaSection(f *designForm) fyne.CanvasObject {
 	objs = append(objs, indented(container.NewHBox(reset)))
 	return section("Review criteria", objs...)
 }
+
+// criterionPath is the field path of the numeric criterion key.
+func criterionPath(key string) string { return hazards.FieldCriteria + "." + key }
 
 // criterionGetter returns the accessor of a criterion by its JSON key.
 func criterionGetter(key string) func(*hazards.Criteria) *float64 {

@@ -60,12 +60,8 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 		}
 	}
 	add := widget.NewButtonWithIcon("Add a fluid from a file…", theme.ContentAddIcon(), f.s.askUserFluid)
-	mass := f.field("fill_mass_kg", "Fill", qMass,
-		func(d *hazards.Design) float64 { return d.FillMassKg },
-		func(d *hazards.Design, x float64) { d.FillMassKg = x })
-	tol := f.field("fill_mass_tolerance_kg", "Fill tolerance (±)", qMass,
-		func(d *hazards.Design) float64 { return d.FillMassToleranceKg },
-		func(d *hazards.Design, x float64) { d.FillMassToleranceKg = x })
+	mass := f.field(hazards.FieldFillMass)
+	tol := f.field(hazards.FieldFillMassTolerance)
 	return section("Fluid and fill",
 		labelled("Fluid", container.NewBorder(nil, nil, nil, add, fs.choose)),
 		labelled("", fs.find),
@@ -138,7 +134,7 @@ func fluidSummary(sub *fluids.Substance, u unitSystem) string {
 // showProblem shows an engine problem about the fluid; it reports
 // whether the problem was placed here.
 func (fs *fluidSection) showProblem(p *problem) bool {
-	if p == nil || p.Path != "fluid" {
+	if p == nil || p.Path != hazards.FieldFluid {
 		fs.problem.Hide()
 		return false
 	}

@@ -8,7 +8,6 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
-	"ullage/report"
 )
 
 // customRoom is the preset choice for a room described by the reviewer.
@@ -57,19 +56,17 @@ func newRoomSection(f *designForm) fyne.CanvasObject {
 		f.showProblems(f.s.problem)
 		f.s.edited()
 	})
-	rf := func(path, label string, q quantity, get func(*hazards.Room) float64, set func(*hazards.Room, float64)) *numField {
-		nf := f.field(path, label, q,
-			func(d *hazards.Design) float64 { return get(&d.Room) },
-			func(d *hazards.Design, x float64) { set(&d.Room, x) })
+	rf := func(path string) *numField {
+		nf := f.field(path)
 		r.fields = append(r.fields, nf)
 		return nf
 	}
-	vol := rf("room.volume_m3", "Room volume", qRoomVolume, func(r *hazards.Room) float64 { return r.VolumeM3 }, func(r *hazards.Room, x float64) { r.VolumeM3 = x })
-	ach := rf("room.air_changes_per_hour", "Air changes", qPerHour, func(r *hazards.Room) float64 { return r.AirChangesPerHour }, func(r *hazards.Room, x float64) { r.AirChangesPerHour = x })
-	mix := rf("room.mixing_factor", "Mixing factor", qNumber, func(r *hazards.Room) float64 { return r.MixingFactor }, func(r *hazards.Room, x float64) { r.MixingFactor = x })
-	nfr := rf("room.near_field_radius_m", "Near-field radius", qRoomLength, func(r *hazards.Room) float64 { return r.NearFieldRadiusM }, func(r *hazards.Room, x float64) { r.NearFieldRadiusM = x })
-	nfs := rf("room.near_field_air_speed_m_s", "Air speed near the breakage", qAirSpeed, func(r *hazards.Room) float64 { return r.NearFieldAirSpeed }, func(r *hazards.Room, x float64) { r.NearFieldAirSpeed = x })
-	exp := rf("room.exposure_minutes", report.LabelExposureTime, qMinutes, func(r *hazards.Room) float64 { return r.ExposureMinutes }, func(r *hazards.Room, x float64) { r.ExposureMinutes = x })
+	vol := rf(hazards.FieldRoomVolume)
+	ach := rf(hazards.FieldAirChanges)
+	mix := rf(hazards.FieldMixingFactor)
+	nfr := rf(hazards.FieldNearFieldRadius)
+	nfs := rf(hazards.FieldNearFieldAirSpeed)
+	exp := rf(hazards.FieldExposureMinutes)
 	r.bodies = widget.NewCheckGroup(limitBodies, func(sel []string) {
 		if f.s.loading {
 			return

@@ -29,12 +29,8 @@ func newShockSection(f *designForm) fyne.CanvasObject {
 	s := &shockSection{f: f}
 	f.shock = s
 	s.presets, _ = hazards.ShockPresets()
-	s.hot = f.field("thermal_shock.hot_to_cold_k", "Sudden drop, hot to cold", qTempDiff,
-		func(d *hazards.Design) float64 { return d.ThermalShock.HotToColdK },
-		func(d *hazards.Design, x float64) { d.ThermalShock.HotToColdK = x })
-	s.cold = f.field("thermal_shock.cold_to_hot_k", "Sudden rise, cold to hot", qTempDiff,
-		func(d *hazards.Design) float64 { return d.ThermalShock.ColdToHotK },
-		func(d *hazards.Design, x float64) { d.ThermalShock.ColdToHotK = x })
+	s.hot = f.field(hazards.FieldHotToCold)
+	s.cold = f.field(hazards.FieldColdToHot)
 	s.hotPick, s.hotSource = s.picker(hazards.ShockHotToCold, s.hot)
 	s.coldPick, s.coldSource = s.picker(hazards.ShockColdToHot, s.cold)
 
@@ -48,15 +44,9 @@ func newShockSection(f *designForm) fyne.CanvasObject {
 		f.showProblems(f.s.problem)
 		f.s.edited()
 	}
-	stress := f.field("seal_stress.residual_stress_pa", "Residual stress at the seal", qStress,
-		func(d *hazards.Design) float64 { return d.SealStress.ResidualStressPa },
-		func(d *hazards.Design, x float64) { d.SealStress.ResidualStressPa = x })
-	retard := f.field("seal_stress.retardation_m", "or: retardation measured", qRetardation,
-		func(d *hazards.Design) float64 { return d.SealStress.RetardationM },
-		func(d *hazards.Design, x float64) { d.SealStress.RetardationM = x })
-	path := f.field("seal_stress.path_length_m", "through a glass path of", qLength,
-		func(d *hazards.Design) float64 { return d.SealStress.PathLengthM },
-		func(d *hazards.Design, x float64) { d.SealStress.PathLengthM = x })
+	stress := f.field(hazards.FieldResidualStress)
+	retard := f.field(hazards.FieldRetardation)
+	path := f.field(hazards.FieldSealPathLength)
 	return section("Sudden temperature changes and seal",
 		labelled("Hot to cold", s.hotPick), s.hot.object, indented(s.hotSource),
 		labelled("Cold to hot", s.coldPick), s.cold.object, indented(s.coldSource),

@@ -52,12 +52,8 @@ func newVesselSection(f *designForm) fyne.CanvasObject {
 	addTube := widget.NewButtonWithIcon("Add a tube", theme.ContentAddIcon(), func() {
 		v.addPart(hazards.Part{Name: "tube", Shape: hazards.ShapeTube, OuterDiameterM: 0.008, WallThicknessM: 0.0012, WallToleranceM: 0.0002, LengthM: newTubeLength})
 	})
-	vol := f.field("vessel.internal_volume_m3", "Measured internal volume", qVesselVolume,
-		func(d *hazards.Design) float64 { return d.Vessel.InternalVolumeM3 },
-		func(d *hazards.Design, x float64) { d.Vessel.InternalVolumeM3 = x })
-	volTol := f.field("vessel.volume_tolerance_m3", "Volume tolerance (±)", qVesselVolume,
-		func(d *hazards.Design) float64 { return d.Vessel.VolumeToleranceM3 },
-		func(d *hazards.Design, x float64) { d.Vessel.VolumeToleranceM3 = x })
+	vol := f.field(hazards.FieldInternalVolume)
+	volTol := f.field(hazards.FieldVolumeTolerance)
 
 	v.glass = widget.NewSelect(nil, func(opt string) {
 		if f.s.loading {
@@ -212,11 +208,8 @@ func (v *vesselSection) rebuildParts() {
 func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.CanvasObject {
 	f := v.f
 	part := func(d *hazards.Design) *hazards.Part { return &d.Vessel.Parts[i] }
-	path := fmt.Sprintf("vessel.parts[%d].", i)
-	pf := func(key, label string, get func(*hazards.Part) float64, set func(*hazards.Part, float64)) *numField {
-		nf := newNumField(path+key, label, qLength,
-			func(d *hazards.Design) float64 { return get(part(d)) },
-			func(d *hazards.Design, x float64) { set(part(d), x) }, f.edited)
+	pf := func(spec partFieldSpec) *numField {
+		nf := newNumField(partFormField(i, spec), f.edited)
 		f.partFields = append(f.partFields, nf)
 		f.byPath[nf.path] = nf
 		nf.show(d, u)
@@ -258,16 +251,14 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 	if len(d.Vessel.Parts) == 1 {
 		remove.Disable()
 	}
-	od := pf("outer_diameter_m", "Outer diameter", func(p *hazards.Part) float64 { return p.OuterDiameterM }, func(p *hazards.Part, x float64) { p.OuterDiameterM = x })
-	wall := pf("wall_thickness_m", "Wall thickness", func(p *hazards.Part) float64 { return p.WallThicknessM }, func(p *hazards.Part, x float64) { p.WallThicknessM = x })
-	wtol := pf("wall_tolerance_m", "Wall tolerance (±)", func(p *hazards.Part) float64 { return p.WallToleranceM }, func(p *hazards.Part, x float64) { p.WallToleranceM = x })
 	rows := []fyne.CanvasObject{
 		labelled(fmt.Sprintf("Part %d", i+1), container.NewBorder(nil, nil, nil, container.NewHBox(shape, remove), name)),
-		od.object, wall.object, wtol.object,
 	}
-	if d.Vessel.Parts[i].Shape == hazards.ShapeTube {
-		length := pf("length_m", "Length", func(p *hazards.Part) float64 { return p.LengthM }, func(p *hazards.Part, x float64) { p.LengthM = x })
-		rows = append(rows, length.object)
+	for _, spec := range partFieldSpecs {
+		if spec.key == hazards.PartLength && d.Vessel.Parts[i].Shape != hazards.ShapeTube {
+			continue
+		}
+		rows = append(rows, pf(spec).object)
 	}
 	return container.NewVBox(rows...)
 }
@@ -281,11 +272,11 @@ func (v *vesselSection) showProblem(p *problem) bool {
 		return false
 	}
 	switch {
-	case p.Path == "vessel.parts" || (strings.HasPrefix(p.Path, "vessel.parts[") && v.f.byPath[p.Path] == nil):
+	case p.Path == hazards.FieldParts || (hazards.IsPartField(p.Path) && v.f.byPath[p.Path] == nil):
 		v.partsProblem.SetText(p.Text)
 		v.partsProblem.Show()
 		return true
-	case strings.HasPrefix(p.Path, "glass"):
+	case strings.HasPrefix(p.Path, hazards.FieldGlass):
 		v.glassProblem.SetText(p.Text)
 		v.glassProblem.Show()
 		return true

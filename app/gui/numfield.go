@@ -43,10 +43,10 @@ type numField struct {
 	parseProblem string
 }
 
-// newNumField builds a field; onEdit is called with the field after the
-// reviewer changes its text.
-func newNumField(path, label string, q quantity, get func(*hazards.Design) float64, set func(*hazards.Design, float64), onEdit func(*numField)) *numField {
-	f := &numField{path: path, label: label, q: q, get: get, set: set}
+// newNumField builds the entry of a form field; onEdit is called with
+// the field after the reviewer changes its text.
+func newNumField(ff formField, onEdit func(*numField)) *numField {
+	f := &numField{path: ff.path, label: ff.label, q: ff.q, get: ff.get, set: ff.set}
 	f.entry = widget.NewEntry()
 	f.entry.OnChanged = func(string) { onEdit(f) }
 	f.unit = widget.NewLabel("")
@@ -57,7 +57,7 @@ func newNumField(path, label string, q quantity, get func(*hazards.Design) float
 	f.msgIcon = widget.NewIcon(theme.ErrorIcon())
 	f.msgRow = container.NewBorder(nil, nil, container.NewCenter(f.msgIcon), nil, f.msg)
 	f.msgRow.Hide()
-	lbl := widget.NewLabel(label)
+	lbl := widget.NewLabel(ff.label)
 	lbl.Truncation = fyne.TextTruncateEllipsis
 	row := container.NewBorder(nil, nil,
 		container.New(fixedWidth{labelWidth}, lbl),

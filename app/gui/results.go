@@ -100,7 +100,7 @@ func (r *resultsPanel) draw() {
 	if s.problem != nil {
 		where := ""
 		if s.problem.Path != "" {
-			where = s.form.labelOf(s.problem.Path) + ": "
+			where = labelOf(s.problem.Path) + ": "
 		}
 		if o.assessment == nil {
 			r.staleText.SetText("No results yet. Fix the marked input — " + where + s.problem.Text)

@@ -301,7 +301,7 @@ func (r *revisionsPanel) askNewRevision(then func()) {
 		}
 		rev := s.doc.newRevision(strings.TrimSpace(label.Text), strings.TrimSpace(author.Text), strings.TrimSpace(note.Text), s.opts.now())
 		if err := s.keepRevision(rev); err != nil {
-			problem.SetText(problemOf(err, s.units(), s.form.quantityOf).Text)
+			problem.SetText(problemOf(err, s.units(), quantityOf).Text)
 			return
 		}
 		dlg.Hide()

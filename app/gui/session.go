@@ -154,7 +154,7 @@ func (s *session) reassess(now bool) {
 // applyOutcome shows a finished assessment; on the UI goroutine.
 func (s *session) applyOutcome(o outcome) {
 	if o.err != nil {
-		p := problemOf(o.err, s.units(), s.form.quantityOf)
+		p := problemOf(o.err, s.units(), quantityOf)
 		s.problem = &p
 	} else {
 		s.problem = nil

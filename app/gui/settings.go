@@ -26,12 +26,12 @@ type criterionPref struct {
 
 // criterionPrefs lists the numeric criteria kept in preferences.
 var criterionPrefs = []criterionPref{
-	{"min_burst_safety_factor", func(c *hazards.Criteria) *float64 { return &c.MinBurstSafetyFactor }},
-	{"min_implosion_safety_factor", func(c *hazards.Criteria) *float64 { return &c.MinImplosionSafetyFactor }},
-	{"max_failure_probability", func(c *hazards.Criteria) *float64 { return &c.MaxFailureProbability }},
-	{"min_ullage_percent", func(c *hazards.Criteria) *float64 { return &c.MinUllagePercent }},
-	{"max_fraction_of_limit", func(c *hazards.Criteria) *float64 { return &c.MaxFractionOfLimit }},
-	{"max_percent_lfl", func(c *hazards.Criteria) *float64 { return &c.MaxPercentLFL }},
+	{hazards.CriterionMinBurstSafetyFactor, func(c *hazards.Criteria) *float64 { return &c.MinBurstSafetyFactor }},
+	{hazards.CriterionMinImplosionSafetyFactor, func(c *hazards.Criteria) *float64 { return &c.MinImplosionSafetyFactor }},
+	{hazards.CriterionMaxFailureProbability, func(c *hazards.Criteria) *float64 { return &c.MaxFailureProbability }},
+	{hazards.CriterionMinUllagePercent, func(c *hazards.Criteria) *float64 { return &c.MinUllagePercent }},
+	{hazards.CriterionMaxFractionOfLimit, func(c *hazards.Criteria) *float64 { return &c.MaxFractionOfLimit }},
+	{hazards.CriterionMaxPercentLFL, func(c *hazards.Criteria) *float64 { return &c.MaxPercentLFL }},
 }
 
 // loadSettings reads the preferences, falling back to the defaults for

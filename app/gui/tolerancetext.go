@@ -59,7 +59,7 @@ func studyInputValue(key string, v float64, u unitSystem) string {
 		return u.show(qTemperature, v, 4)
 	case key == tolerance.KeyGlassStrength:
 		return stressText(v, u)
-	case strings.HasSuffix(key, "wall_thickness_m"):
+	case hazards.IsPartField(key) && strings.HasSuffix(key, "."+hazards.PartWallThickness):
 		return u.show(qLength, v, 3)
 	}
 	return sigFigures(v, 4)
