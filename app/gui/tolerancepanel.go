@@ -16,6 +16,7 @@ import (
 	"ullage/hazards"
 	"ullage/hazards/tolerance"
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // Defaults of the study's settings.
@@ -346,12 +347,7 @@ func (tp *tolerancePanel) showSpread(r *tolerance.Result, u unitSystem) {
 		}
 	}
 	row("Pressure, "+u.unit(qPressure)+" abs.", r.PressurePa, func(x float64) string { return sigFigures(u.fromSI(qPressure, x), 4) })
-	row("Unit safety factor", r.SafetyFactor, func(x float64) string {
-		if x >= hazards.SafetyFactorCap {
-			return "over " + sigFigures(hazards.SafetyFactorCap, 4)
-		}
-		return sigFigures(x, 3)
-	})
+	row("Unit safety factor", r.SafetyFactor, display.SafetyFactor)
 	tp.spreadTab.Objects = []fyne.CanvasObject{container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[:6]...),
 		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[6:12]...),
 		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[12:]...)}
