@@ -9,7 +9,6 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
-	"ullage/fluids/units"
 	"ullage/hazards"
 )
 
@@ -131,11 +130,7 @@ func (v *vesselSection) describeGlass() {
 			return
 		}
 	}
-	u := v.f.s.units()
-	strength := sigFigures(g.CharacteristicStrength.Value/1e6, 3) + " MPa"
-	if u == unitsUS {
-		strength = sigFigures(g.CharacteristicStrength.Value/units.PsiPa, 3) + " psi"
-	}
+	strength := stressText(g.CharacteristicStrength.Value, v.f.s.units())
 	v.glassInfo.SetText(fmt.Sprintf("Characteristic strength %s, Weibull modulus %s, stress-corrosion exponent %s. %s",
 		strength, sigFigures(g.WeibullModulus.Value, 3), sigFigures(g.StressCorrosionExponent.Value, 3), g.Note))
 }

@@ -2,7 +2,6 @@ package gui
 
 import (
 	"fmt"
-	"strconv"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
@@ -10,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // Widths of the label and unit columns of the form.
@@ -69,15 +69,7 @@ func newNumField(ff formField, onEdit func(*numField)) *numField {
 // show fills the entry from the design in the given units.
 func (f *numField) show(d *hazards.Design, u unitSystem) {
 	f.unit.SetText(u.unit(f.q))
-	x := u.fromSI(f.q, f.get(d))
-	if u == unitsUS {
-		// A converted value carries the conversion's digits ("0.0629921
-		// in"): show four significant figures, which keep any value
-		// typed in US units to four figures.
-		f.entry.SetText(roundedEntryText(x, usFigures))
-	} else {
-		f.entry.SetText(entryText(x))
-	}
+	f.entry.SetText(display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
 	f.parseProblem = ""
 }
 
@@ -89,7 +81,7 @@ func (f *numField) read(d *hazards.Design, u unitSystem) bool {
 		if unit != "" {
 			unit = " in " + unit
 		}
-		f.parseProblem = fmt.Sprintf("%q is not a number: type a number%s, such as %s", f.entry.Text, unit, entryText(u.fromSI(f.q, f.get(d))))
+		f.parseProblem = fmt.Sprintf("%q is not a number: type a number%s, such as %s", f.entry.Text, unit, display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
 		return false
 	}
 	f.parseProblem = ""
@@ -110,17 +102,4 @@ func (f *numField) setProblem(msg string) {
 		f.msg.SetText(msg)
 	}
 	f.msgRow.Show()
-}
-
-// usFigures is how many significant figures a field shows in US units.
-const usFigures = 4
-
-// roundedEntryText writes x for an entry to n significant figures, in
-// plain notation without trailing zeros.
-func roundedEntryText(x float64, n int) string {
-	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', n, 64), 64)
-	if err != nil || x == 0 {
-		return entryText(x)
-	}
-	return entryText(r)
 }

@@ -25,6 +25,10 @@ const (
 	defaultStudySeed  = 1
 )
 
+// maxStudySpreadK is the largest ± spread of the hottest temperature a
+// study takes, in kelvin.
+const maxStudySpreadK = 100
+
 // tolerancePanel is the tolerance study screen: the study's settings and
 // Run and Cancel on the left, the fractions of units that fail with their
 // intervals, the spread of pressure and safety factor, a histogram and
@@ -189,9 +193,9 @@ func readStudySeed(t string) (uint64, error) {
 // °F, and returns it in kelvin.
 func readStudySpread(t string, u unitSystem) (float64, error) {
 	x, ok := parseNumber(t)
-	k := x * spreadScale(u)
-	if !ok || k < 0 || k > 100 {
-		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s %s", strings.TrimSpace(t), sigFigures(100/spreadScale(u), 3), spreadUnit(u))
+	k := u.toSI(qTempDiff, x)
+	if !ok || k < 0 || k > maxStudySpreadK {
+		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s", strings.TrimSpace(t), spreadText(maxStudySpreadK, u))
 	}
 	return k, nil
 }
@@ -260,7 +264,7 @@ func (tp *tolerancePanel) refresh() {
 	u := s.units()
 	if u != tp.shownUnits {
 		tp.shownUnits = u
-		tp.spread.SetText(entryText(tp.spreadK / spreadScale(u)))
+		tp.spread.SetText(entryText(u.fromSI(qTempDiff, tp.spreadK)))
 		tp.spreadUnit.SetText(spreadUnit(u))
 	}
 	tp.showVaries()
@@ -301,8 +305,8 @@ func (tp *tolerancePanel) refresh() {
 	if !current {
 		in = "It is out of date and stays out of the exported record."
 	}
-	tp.about.SetText(fmt.Sprintf("%s units of %s, seed %d, hottest temperature ± %s %s (%s), fill, volume and walls %s. %s",
-		groupDigits(r.Samples), st.of, r.Seed, sigFigures(r.HottestSpreadK/spreadScale(u), 3), spreadUnit(u), r.HottestDistribution, r.DimensionDistribution, in))
+	tp.about.SetText(fmt.Sprintf("%s units of %s, seed %d, hottest temperature ± %s (%s), fill, volume and walls %s. %s",
+		groupDigits(r.Samples), st.of, r.Seed, spreadText(r.HottestSpreadK, u), r.HottestDistribution, r.DimensionDistribution, in))
 	tp.showFractions(r)
 	tp.showSpread(r, u)
 	hist := chartmodel.Histogram("", r.Histogram)
