@@ -2,7 +2,6 @@ package gui
 
 import (
 	"cmp"
-	"fmt"
 	"slices"
 	"strings"
 
@@ -47,6 +46,7 @@ type designForm struct {
 func newDesignForm(s *session) *designForm {
 	f := &designForm{s: s, byPath: map[string]*numField{}}
 	s.form = f
+	s.changes.subscribe(f.update)
 	f.general = widget.NewLabel("")
 	f.general.Wrapping = fyne.TextWrapWord
 	f.general.Importance = widget.DangerImportance
@@ -114,37 +114,84 @@ func (f *designForm) field(path string) *numField {
 	if !ok {
 		panic("gui: no form field " + path)
 	}
-	nf := newNumField(ff, f.edited)
+	nf := newNumField(ff, f.typed)
 	f.fields = append(f.fields, nf)
 	f.byPath[path] = nf
 	return nf
 }
 
-// edited handles a keystroke in a number field.
-func (f *designForm) edited(nf *numField) {
-	if f.s.loading {
-		return
+// typed handles a keystroke in a number field: the number goes into the
+// document, or the document notes that the text is not one.
+func (f *designForm) typed(nf *numField) {
+	doc := f.s.doc
+	if x, ok := parseNumber(nf.entry.Text); ok {
+		doc.typeNumber(nf.path, f.s.units().toSI(nf.q, x))
+	} else {
+		doc.typeUnreadable(nf.path, nf.entry.Text)
 	}
-	ok := nf.read(&f.s.doc.Work, f.s.units())
-	if ok {
-		delete(f.s.doc.unset, nf.path)
-		f.afterNumber(nf.path)
-	}
-	f.showProblems(f.s.problem)
-	f.s.edited()
 }
 
-// afterNumber keeps the preset selectors in step with typed values.
-func (f *designForm) afterNumber(path string) {
+// update shows a change of the review on the form. A field the reviewer
+// typed in shows the text already; what follows from it (presets, the
+// volume of the parts, the revision line) is brought in step.
+func (f *designForm) update(c change) {
+	switch {
+	case c.cause.reload():
+		f.load()
+	case c.cause == causeLibrary:
+		f.fluid.load()
+	case c.cause == causeTyped:
+		if _, unread := f.s.doc.unread[c.field]; !unread {
+			f.follow(c.field)
+		}
+		f.updateHeader()
+	case c.cause == causeChosen:
+		f.showChosen(c.field)
+		f.updateHeader()
+	case c.cause == causeKept:
+		f.updateHeader()
+	}
+	f.showProblems(f.s.problem)
+}
+
+// follow keeps the preset selectors and the volume of the parts in step
+// with a value typed at path.
+func (f *designForm) follow(path string) {
 	switch {
 	case path == hazards.FieldHottest || path == hazards.FieldColdest:
 		f.temps.syncPresets()
 	case strings.HasPrefix(path, hazards.FieldRoom+"."):
-		f.room.typed()
+		f.room.syncPick()
 	case strings.HasPrefix(path, hazards.FieldVessel+"."):
 		f.vessel.updateVolume()
 	case strings.HasPrefix(path, hazards.FieldThermalShock+"."):
 		f.shock.syncPresets()
+	}
+}
+
+// showChosen redraws what a choice at path changed: the number fields at
+// or below it, and the notes that describe the choice.
+func (f *designForm) showChosen(path string) {
+	d, u := &f.s.doc.Work, f.s.units()
+	for _, nf := range f.fields {
+		if below(nf.path, path) {
+			nf.show(d, u)
+		}
+	}
+	switch path {
+	case hazards.FieldFluid:
+		f.fluid.describe()
+	case hazards.FieldGlass:
+		f.vessel.describeGlass()
+	case hazards.FieldParts:
+		f.vessel.rebuildParts()
+		f.vessel.updateVolume()
+	case hazards.FieldHottest, hazards.FieldColdest:
+		f.temps.describeAll()
+	case hazards.FieldHotToCold, hazards.FieldColdToHot:
+		f.shock.describeAll()
+	case hazards.FieldRoom, hazards.FieldRoomPreset:
+		f.room.describe()
 	}
 }
 
@@ -162,40 +209,23 @@ func (f *designForm) load() {
 	f.shock.syncPresets()
 	f.room.load()
 	f.criteria.load()
-	if doc := f.s.doc; doc.fresh {
-		doc.fresh = false
-		doc.unset = map[string]bool{}
-		for _, nf := range f.all() {
-			if requiredOnNew(nf.path) {
-				doc.unset[nf.path] = true
-			}
-		}
-	}
-	f.applyUnset()
+	f.showUnread()
 	f.showProblems(f.s.problem)
 }
 
-// applyUnset empties the required fields of a new design not typed yet
-// and marks each as required, which holds the assessment back.
-func (f *designForm) applyUnset() {
-	unset := f.s.doc.unset
-	if len(unset) == 0 {
+// showUnread empties the entries of the required fields of a new design
+// not typed yet; showProblems marks each as required, which holds the
+// assessment back.
+func (f *designForm) showUnread() {
+	unread := f.s.doc.unread
+	if len(unread) == 0 {
 		return
 	}
-	was := f.s.loading
-	f.s.loading = true
 	for _, nf := range f.all() {
-		if !unset[nf.path] {
-			continue
+		if e, ok := unread[nf.path]; ok && !e.typed {
+			showText(nf.entry, "")
 		}
-		nf.entry.SetText("")
-		unit := nf.unit.Text
-		if unit != "" {
-			unit = " in " + unit
-		}
-		nf.parseProblem = fmt.Sprintf("%s is needed for a new design: type a number%s", nf.label, unit)
 	}
-	f.s.loading = was
 }
 
 // updateHeader refreshes the line saying which revision is being edited.
@@ -210,23 +240,17 @@ func (f *designForm) all() []*numField {
 	return append(out, f.partFields...)
 }
 
-// firstParseProblem returns the first field whose text is not a number.
-func (f *designForm) firstParseProblem() *numField {
-	for _, nf := range f.all() {
-		if nf.parseProblem != "" {
-			return nf
-		}
-	}
-	return nil
-}
-
-// showProblems marks every field: its own parse problem first, then the
-// engine's problem when it names this field. A problem that names no
-// field of the form is shown at the top of the form.
+// showProblems marks every field: an entry that holds no number first,
+// then the engine's problem when it names this field. A problem that
+// names no field of the form is shown at the top of the form.
 func (f *designForm) showProblems(p *problem) {
 	placed := false
+	doc, u := f.s.doc, f.s.units()
 	for _, nf := range f.all() {
-		msg := nf.parseProblem
+		msg := ""
+		if e, ok := doc.unread[nf.path]; ok {
+			msg = e.message(nf.formField, &doc.Work, u)
+		}
 		if msg == "" && p != nil && p.Path == nf.path {
 			msg = p.Text
 		}

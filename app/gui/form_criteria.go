@@ -27,11 +27,7 @@ func newCriteriaSection(f *designForm) fyne.CanvasObject {
 		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cp.key])))
 	}
 	c.sets = widget.NewCheckGroup(limitSetNames(), func(sel []string) {
-		if f.s.loading {
-			return
-		}
-		f.s.doc.Work.Criteria.LimitSets = limitSetsOf(sel)
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldLimitSets, func(d *hazards.Design) { d.Criteria.LimitSets = limitSetsOf(sel) })
 	})
 	objs = append(objs, labelled("Limit sets that apply", c.sets),
 		indented(hint("Default for a consumer product (none ticked, or exactly these two): US occupational and US public acute. Each set's limits are averaged over their own periods; within each kind the largest share of its limit governs.")))
@@ -60,7 +56,7 @@ func (c *criteriaSection) load() {
 	for _, id := range c.f.s.doc.Work.Criteria.AppliedLimitSets() {
 		names = append(names, hazards.LimitSetName(id))
 	}
-	c.sets.SetSelected(names)
+	showChecked(c.sets, names)
 }
 
 // limitSetNames lists the limit sets by name, in their usual order.
@@ -98,15 +94,10 @@ func limitSetsOf(names []string) []string {
 
 // useDefaults replaces the criteria by the reviewer's defaults.
 func (c *criteriaSection) useDefaults() {
-	s := c.f.s
-	bodies, sets := s.doc.Work.Criteria.LimitBodies, s.doc.Work.Criteria.LimitSets
-	s.doc.Work.Criteria = s.settings.Criteria
-	s.doc.Work.Criteria.LimitBodies, s.doc.Work.Criteria.LimitSets = bodies, sets
-	s.loading = true
-	for _, nf := range c.fields {
-		nf.show(&s.doc.Work, s.units())
-	}
-	s.loading = false
-	c.f.showProblems(s.problem)
-	s.edited()
+	defaults := c.f.s.settings.Criteria
+	c.f.s.doc.choose(hazards.FieldCriteria, func(d *hazards.Design) {
+		bodies, sets := d.Criteria.LimitBodies, d.Criteria.LimitSets
+		d.Criteria = defaults
+		d.Criteria.LimitBodies, d.Criteria.LimitSets = bodies, sets
+	})
 }

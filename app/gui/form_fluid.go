@@ -30,16 +30,11 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 	fs := &fluidSection{f: f}
 	f.fluid = fs
 	fs.choose = widget.NewSelect(nil, func(opt string) {
-		if f.s.loading {
-			return
-		}
 		id, ok := fs.ids[opt]
 		if !ok {
 			return
 		}
-		f.s.doc.Work.Fluid = id
-		fs.describe()
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldFluid, func(d *hazards.Design) { d.Fluid = id })
 	})
 	fs.choose.PlaceHolder = "Choose a fluid"
 	fs.info = hint("")
@@ -50,9 +45,7 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 	fs.find = widget.NewEntry()
 	fs.find.SetPlaceHolder("Find: name, synonym or CAS (R-134a, methylene chloride …)")
 	fs.find.OnChanged = func(text string) {
-		if f.s.loading {
-			return
-		}
+		// A fluid found is chosen in the selector, as if picked there.
 		if sub := findFluid(f.s.lib, text); sub != nil {
 			if o := fluidOption(sub.Fluid()); fs.choose.Selected != o {
 				fs.choose.SetSelected(o)
@@ -92,9 +85,9 @@ func (fs *fluidSection) load() {
 	sortFluidOptions(opts)
 	fs.choose.Options = opts
 	if sub, err := lib.Lookup(fs.f.s.doc.Work.Fluid); err == nil {
-		fs.choose.SetSelected(fluidOption(sub.Fluid()))
+		showSelected(fs.choose, fluidOption(sub.Fluid()))
 	} else {
-		fs.choose.ClearSelected()
+		showSelected(fs.choose, "")
 	}
 	fs.choose.Refresh()
 	fs.describe()

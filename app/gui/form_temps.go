@@ -58,23 +58,21 @@ func (t *temperatureSection) picker(kind string, field *numField) (*widget.Selec
 	source := hint("")
 	var sel *widget.Select
 	sel = widget.NewSelect(opts, func(opt string) {
-		if t.f.s.loading {
-			return
-		}
 		p, ok := t.byName(opt)
 		if !ok {
+			// The reviewer's own value: the number stays as typed.
 			t.describe(sel, source)
 			return
 		}
-		field.set(&t.f.s.doc.Work, p.Temperature.Value)
-		t.f.s.loading = true
-		field.show(&t.f.s.doc.Work, t.f.s.units())
-		t.f.s.loading = false
-		t.describe(sel, source)
-		t.f.showProblems(t.f.s.problem)
-		t.f.s.edited()
+		t.f.s.doc.choose(field.path, func(d *hazards.Design) { field.set(d, p.Temperature.Value) })
 	})
 	return sel, source
+}
+
+// describeAll shows the source and note of both selected presets.
+func (t *temperatureSection) describeAll() {
+	t.describe(t.hotPick, t.hotSource)
+	t.describe(t.coldPick, t.coldSource)
 }
 
 func (t *temperatureSection) byName(name string) (hazards.TemperaturePreset, bool) {
@@ -100,9 +98,6 @@ func (t *temperatureSection) describe(sel *widget.Select, source *widget.Label) 
 // "your own value".
 func (t *temperatureSection) syncPresets() {
 	d := &t.f.s.doc.Work
-	was := t.f.s.loading
-	t.f.s.loading = true
-	defer func() { t.f.s.loading = was }()
 	for _, x := range []struct {
 		sel    *widget.Select
 		source *widget.Label
@@ -117,7 +112,7 @@ func (t *temperatureSection) syncPresets() {
 			}
 		}
 		if x.sel.Selected != choice {
-			x.sel.SetSelected(choice)
+			showSelected(x.sel, choice)
 		}
 		t.describe(x.sel, x.source)
 	}

@@ -55,16 +55,11 @@ func newVesselSection(f *designForm) fyne.CanvasObject {
 	volTol := f.field(hazards.FieldVolumeTolerance)
 
 	v.glass = widget.NewSelect(nil, func(opt string) {
-		if f.s.loading {
-			return
-		}
 		id, ok := v.glassIDs[opt]
 		if !ok {
 			return
 		}
-		f.s.doc.Work.Glass = hazards.GlassChoice{ID: id}
-		v.describeGlass()
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldGlass, func(d *hazards.Design) { d.Glass = hazards.GlassChoice{ID: id} })
 	})
 	v.glass.PlaceHolder = "Choose a glass"
 	v.glassInfo = hint("")
@@ -102,13 +97,13 @@ func (v *vesselSection) load() {
 		name := "Custom glass from the file: " + d.Glass.Custom.Name
 		opts = append(opts, name)
 		v.glass.Options = opts
-		v.glass.SetSelected(name)
+		showSelected(v.glass, name)
 	} else {
 		v.glass.Options = opts
-		v.glass.ClearSelected()
+		showSelected(v.glass, "")
 		for name, id := range v.glassIDs {
 			if id == d.Glass.ID {
-				v.glass.SetSelected(name)
+				showSelected(v.glass, name)
 			}
 		}
 	}
@@ -147,26 +142,22 @@ func (v *vesselSection) updateVolume() {
 	}
 }
 
-// addPart appends a part and rebuilds the list.
+// addPart appends a part to the vessel.
 func (v *vesselSection) addPart(p hazards.Part) {
-	d := &v.f.s.doc.Work
-	p.Name = fmt.Sprintf("%s %d", p.Name, len(d.Vessel.Parts)+1)
-	d.Vessel.Parts = append(d.Vessel.Parts, p)
-	v.rebuildParts()
-	v.updateVolume()
-	v.f.s.edited()
+	v.f.s.doc.reshapeParts(func(ves *hazards.Vessel) {
+		p.Name = fmt.Sprintf("%s %d", p.Name, len(ves.Parts)+1)
+		ves.Parts = append(ves.Parts, p)
+	})
 }
 
-// removePart deletes part i and rebuilds the list.
+// removePart deletes part i, unless it is the only one.
 func (v *vesselSection) removePart(i int) {
-	d := &v.f.s.doc.Work
-	if i < 0 || i >= len(d.Vessel.Parts) || len(d.Vessel.Parts) == 1 {
+	if n := len(v.f.s.doc.Work.Vessel.Parts); i < 0 || i >= n || n == 1 {
 		return
 	}
-	d.Vessel.Parts = append(d.Vessel.Parts[:i:i], d.Vessel.Parts[i+1:]...)
-	v.rebuildParts()
-	v.updateVolume()
-	v.f.s.edited()
+	v.f.s.doc.reshapeParts(func(ves *hazards.Vessel) {
+		ves.Parts = append(ves.Parts[:i:i], ves.Parts[i+1:]...)
+	})
 }
 
 // rebuildParts recreates one block per part with its own fields.
@@ -179,16 +170,13 @@ func (v *vesselSection) rebuildParts() {
 	d := &f.s.doc.Work
 	u := f.s.units()
 	var blocks []fyne.CanvasObject
-	wasLoading := f.s.loading
-	f.s.loading = true
 	for i := range d.Vessel.Parts {
 		if i > 0 {
 			blocks = append(blocks, indented(widget.NewSeparator()))
 		}
 		blocks = append(blocks, v.partBlock(i, d, u))
 	}
-	f.applyUnset()
-	f.s.loading = wasLoading
+	f.showUnread()
 	v.parts.Objects = blocks
 	v.parts.Refresh()
 	if f.scroll != nil {
@@ -204,7 +192,7 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 	f := v.f
 	part := func(d *hazards.Design) *hazards.Part { return &d.Vessel.Parts[i] }
 	pf := func(spec partFieldSpec) *numField {
-		nf := newNumField(partFormField(i, spec), f.edited)
+		nf := newNumField(partFormField(i, spec), f.typed)
 		f.partFields = append(f.partFields, nf)
 		f.byPath[nf.path] = nf
 		nf.show(d, u)
@@ -213,11 +201,7 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 	name := widget.NewEntry()
 	name.SetText(d.Vessel.Parts[i].Name)
 	name.OnChanged = func(t string) {
-		if f.s.loading {
-			return
-		}
-		part(&f.s.doc.Work).Name = t
-		f.s.edited()
+		f.s.doc.typeText(hazards.PartField(i, hazards.PartName), func(d *hazards.Design) { part(d).Name = t })
 	}
 	shape := widget.NewSelect([]string{shapeSphereText, shapeTubeText}, nil)
 	if d.Vessel.Parts[i].Shape == hazards.ShapeTube {
@@ -226,21 +210,17 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 		shape.SetSelected(shapeSphereText)
 	}
 	shape.OnChanged = func(opt string) {
-		if f.s.loading {
-			return
-		}
-		p := part(&f.s.doc.Work)
-		if opt == shapeTubeText {
-			p.Shape = hazards.ShapeTube
-			if p.LengthM == 0 {
-				p.LengthM = newTubeLength
+		f.s.doc.reshapeParts(func(ves *hazards.Vessel) {
+			p := &ves.Parts[i]
+			if opt == shapeTubeText {
+				p.Shape = hazards.ShapeTube
+				if p.LengthM == 0 {
+					p.LengthM = newTubeLength
+				}
+			} else {
+				p.Shape, p.LengthM = hazards.ShapeSphere, 0
 			}
-		} else {
-			p.Shape, p.LengthM = hazards.ShapeSphere, 0
-		}
-		v.rebuildParts()
-		v.updateVolume()
-		f.s.edited()
+		})
 	}
 	remove := widget.NewButtonWithIcon("Remove", theme.DeleteIcon(), func() { v.removePart(i) })
 	if len(d.Vessel.Parts) == 1 {

@@ -130,6 +130,22 @@ func partFormField(i int, spec partFieldSpec) formField {
 		func(d *hazards.Design, x float64) { spec.set(part(d), x) }}
 }
 
+// designFields returns the form fields of a design in the order of the
+// form: formFields, then the numbers of each part (a tube's length, and
+// no sphere's).
+func designFields(d *hazards.Design) []formField {
+	out := append([]formField(nil), formFields...)
+	for i, p := range d.Vessel.Parts {
+		for _, spec := range partFieldSpecs {
+			if spec.key == hazards.PartLength && p.Shape != hazards.ShapeTube {
+				continue
+			}
+			out = append(out, partFormField(i, spec))
+		}
+	}
+	return out
+}
+
 // formFieldAt returns the form field at a path, the parts' numbers
 // included, for any part index.
 func formFieldAt(path string) (formField, bool) {

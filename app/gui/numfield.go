@@ -20,16 +20,10 @@ const (
 
 // numField is one number of the design on the form: a label, an entry in
 // the chosen units, the unit, and a message under it when the entry is not
-// acceptable.
+// acceptable. Its formField gives the path (the name the engine's
+// InputError uses), label, quantity and accessors.
 type numField struct {
-	// path is the field's JSON path in hazards.Design
-	// (fill_mass_kg, vessel.parts[0].wall_thickness_m …), the name the
-	// engine's InputError uses.
-	path  string
-	label string
-	q     quantity
-	get   func(*hazards.Design) float64
-	set   func(*hazards.Design, float64)
+	formField
 
 	entry   *widget.Entry
 	unit    *widget.Label
@@ -37,16 +31,12 @@ type numField struct {
 	msgIcon *widget.Icon
 	msgRow  *fyne.Container
 	object  fyne.CanvasObject
-
-	// parseProblem is the message for text that is not a number, "" when
-	// the text reads.
-	parseProblem string
 }
 
 // newNumField builds the entry of a form field; onEdit is called with
 // the field after the reviewer changes its text.
 func newNumField(ff formField, onEdit func(*numField)) *numField {
-	f := &numField{path: ff.path, label: ff.label, q: ff.q, get: ff.get, set: ff.set}
+	f := &numField{formField: ff}
 	f.entry = widget.NewEntry()
 	f.entry.OnChanged = func(string) { onEdit(f) }
 	f.unit = widget.NewLabel("")
@@ -66,27 +56,25 @@ func newNumField(ff formField, onEdit func(*numField)) *numField {
 	return f
 }
 
-// show fills the entry from the design in the given units.
+// show fills the entry from the design in the given units, without
+// counting as an edit.
 func (f *numField) show(d *hazards.Design, u unitSystem) {
 	f.unit.SetText(u.unit(f.q))
-	f.entry.SetText(display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
-	f.parseProblem = ""
+	showText(f.entry, display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
 }
 
-// read parses the entry; on success it stores the SI value in d.
-func (f *numField) read(d *hazards.Design, u unitSystem) bool {
-	x, ok := parseNumber(f.entry.Text)
-	if !ok {
-		unit := u.unit(f.q)
-		if unit != "" {
-			unit = " in " + unit
-		}
-		f.parseProblem = fmt.Sprintf("%q is not a number: type a number%s, such as %s", f.entry.Text, unit, display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
-		return false
+// message says what is wrong with the entry of ff, in the units on
+// screen: the text typed is not a number (with the working copy's value
+// as an example), or a new design needs the value.
+func (e unreadable) message(ff formField, d *hazards.Design, u unitSystem) string {
+	unit := u.unit(ff.q)
+	if unit != "" {
+		unit = " in " + unit
 	}
-	f.parseProblem = ""
-	f.set(d, u.toSI(f.q, x))
-	return true
+	if e.typed {
+		return fmt.Sprintf("%q is not a number: type a number%s, such as %s", e.text, unit, display.Entry(u.fromSI(ff.q, ff.get(d)), u.display()))
+	}
+	return fmt.Sprintf("%s is needed for a new design: type a number%s", ff.label, unit)
 }
 
 // setProblem shows or hides the message under the field.

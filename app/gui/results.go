@@ -38,6 +38,10 @@ type resultsPanel struct {
 	// again when the number of findings changes.
 	area *fyne.Container
 
+	// showField, set by the window, brings the design form back and puts
+	// the cursor in the field the problem names.
+	showField func()
+
 	object fyne.CanvasObject
 }
 
@@ -45,14 +49,16 @@ type resultsPanel struct {
 func newResultsPanel(s *session) *resultsPanel {
 	r := &resultsPanel{s: s}
 	s.results = r
+	s.changes.subscribe(r.update)
 	r.verdict = newVerdictBanner()
 	r.staleText = widget.NewLabel("")
 	r.staleText.Wrapping = fyne.TextWrapWord
 	r.staleText.TextStyle = fyne.TextStyle{Bold: true}
 	staleBg := canvas.NewRectangle(tint(statusColour(hazards.StatusCaution), 70))
 	show := widget.NewButton("Show the field", func() {
-		s.shell.hideWorking()
-		s.form.reveal(s.problem)
+		if r.showField != nil {
+			r.showField()
+		}
 	})
 	r.stale = container.NewStack(staleBg, container.NewBorder(nil, nil,
 		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText))
@@ -83,13 +89,12 @@ func newResultsPanel(s *session) *resultsPanel {
 	return r
 }
 
-// show redraws everything from the session's last outcome and problem,
-// and the panels that follow them: the working and the tolerance study,
-// which is out of date once the design differs from the one it ran on.
-func (r *resultsPanel) show() {
-	r.draw()
-	r.s.working.refresh()
-	r.s.tol.refresh()
+// update redraws the panel when the results or the units changed, or a
+// document was opened.
+func (r *resultsPanel) update(c change) {
+	if c.cause.reload() || c.cause == causeResults {
+		r.draw()
+	}
 }
 
 // draw redraws the results panel itself.

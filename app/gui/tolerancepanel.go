@@ -73,6 +73,7 @@ type tolerancePanel struct {
 func newTolerancePanel(s *session) *tolerancePanel {
 	tp := &tolerancePanel{s: s, shownUnits: s.units()}
 	s.tol = tp
+	s.changes.subscribe(tp.update)
 	tp.units = widget.NewEntry()
 	tp.units.SetText(fmt.Sprint(defaultStudyUnits))
 	tp.units.Validator = func(t string) error { _, err := readStudyUnits(t); return err }
@@ -225,7 +226,7 @@ func (tp *tolerancePanel) settings() (tolerance.Settings, error) {
 func (tp *tolerancePanel) run() {
 	s := tp.s
 	set, err := tp.settings()
-	if err == nil && s.form.firstParseProblem() != nil {
+	if _, _, unread := s.doc.firstUnread(); err == nil && unread {
 		err = errors.New("a field on the design form is not a number: fix the marked input first")
 	}
 	if err != nil {
@@ -234,7 +235,7 @@ func (tp *tolerancePanel) run() {
 		return
 	}
 	tp.problem.Hide()
-	s.startStudy(set, func() {
+	tp.startStudy(set, func() {
 		tp.refresh()
 		if f := tp.afterRun; f != nil {
 			tp.afterRun = nil
@@ -256,6 +257,15 @@ func (tp *tolerancePanel) showVaries() {
 	}
 	tp.spreadK = k
 	tp.varies.SetText("• " + strings.Join(variedInputs(&tp.s.doc.Work, k, tp.s.units()), "\n• "))
+}
+
+// update redraws the panel when the results or the units changed, or a
+// document was opened: a study is out of date once the design differs
+// from the one it ran on.
+func (tp *tolerancePanel) update(c change) {
+	if c.cause.reload() || c.cause == causeResults {
+		tp.refresh()
+	}
 }
 
 // refresh redraws the panel from the study's state.
@@ -295,7 +305,7 @@ func (tp *tolerancePanel) refresh() {
 		return
 	}
 	tp.empty.Hide()
-	current := s.studyCurrent()
+	current := tp.current()
 	if current {
 		tp.staleBox.Hide()
 	} else {
