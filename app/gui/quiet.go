@@ -2,7 +2,7 @@ package gui
 
 import "fyne.io/fyne/v2/widget"
 
-// A panel that shows the document sets its widgets with these helpers:
+// A panel that shows the document sets its widgets with these functions:
 // each sets the value with the widget's change callback detached, so that
 // showing the document never counts as an edit of it. Only the
 // reviewer's own typing, ticking and choosing reach the callbacks.
