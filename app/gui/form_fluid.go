@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/fluidfind"
 	"ullage/fluids"
 	"ullage/hazards"
 )
@@ -46,7 +47,7 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 	fs.find.SetPlaceHolder("Find: name, synonym or CAS (R-134a, methylene chloride …)")
 	fs.find.OnChanged = func(text string) {
 		// A fluid found is chosen in the selector, as if picked there.
-		if sub := findFluid(f.s.lib, text); sub != nil {
+		if sub := fluidfind.Find(f.s.lib, text); sub != nil {
 			if o := fluidOption(sub.Fluid()); fs.choose.Selected != o {
 				fs.choose.SetSelected(o)
 			}
@@ -82,7 +83,7 @@ func (fs *fluidSection) load() {
 		fs.ids[o] = sub.Fluid().ID
 		opts = append(opts, o)
 	}
-	sortFluidOptions(opts)
+	fluidfind.Sort(opts)
 	fs.choose.Options = opts
 	if sub, err := lib.Lookup(fs.f.s.doc.Work.Fluid); err == nil {
 		showSelected(fs.choose, fluidOption(sub.Fluid()))
