@@ -19,7 +19,7 @@ const (
 	// prefUserFluids holds the paths of the fluid files the reviewer
 	// added, reloaded at start.
 	prefUserFluids = "user_fluid_files"
-	// prefLook holds the window's look, lookLight or lookDark.
+	// prefLook holds the window's look, look.Light or look.Dark.
 	prefLook = "look"
 	// prefLastFolder holds the folder of the last file opened or saved.
 	prefLastFolder = "last_folder"

@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -56,7 +57,7 @@ func newPreferencesPanel(s *session) *preferencesPanel {
 	p.look.Horizontal = true
 	p.look.Required = true
 	p.look.SetSelected(lookLightText)
-	if s.settings.Look == lookDark {
+	if s.settings.Look == look.Dark {
 		p.look.SetSelected(lookDarkText)
 	}
 	p.reviewer = widget.NewEntry()
@@ -105,9 +106,9 @@ func (p *preferencesPanel) read() (settings, error) {
 	if p.paper.Selected == paperLetterText {
 		st.Paper = report.PaperLetter
 	}
-	st.Look = lookLight
+	st.Look = look.Light
 	if p.look.Selected == lookDarkText {
-		st.Look = lookDark
+		st.Look = look.Dark
 	}
 	st.Reviewer = p.reviewer.Text
 	c := st.Criteria
@@ -155,5 +156,5 @@ func (s *session) showPreferences() {
 
 // applyLook sets the window's look from the settings.
 func (s *session) applyLook() {
-	s.app.Settings().SetTheme(newLook(s.settings.Look))
+	s.app.Settings().SetTheme(look.New(s.settings.Look))
 }

@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report/chartmodel"
 )
@@ -82,7 +83,7 @@ func newResultsPanel(s *session) *resultsPanel {
 	}
 	// Every finding is shown without scrolling; the charts take what
 	// height is left.
-	findings := container.NewThemeOverride(r.list.object, denseTheme{})
+	findings := container.NewThemeOverride(r.list.object, look.Dense{})
 	split := container.New(findingsFirst{want: r.list.wantedHeight}, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
 	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)

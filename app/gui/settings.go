@@ -3,6 +3,7 @@ package gui
 import (
 	"fyne.io/fyne/v2"
 
+	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -12,7 +13,7 @@ type settings struct {
 	Units    unitSystem
 	Paper    string
 	Reviewer string
-	// Look is the window's look, lookLight or lookDark.
+	// Look is the window's look, look.Light or look.Dark.
 	Look string
 	// Criteria are the pass marks a new design starts with.
 	Criteria hazards.Criteria
@@ -41,11 +42,11 @@ func loadSettings(p fyne.Preferences) settings {
 		Units:    parseUnitSystem(p.StringWithFallback(prefUnits, string(unitsSI))),
 		Paper:    p.StringWithFallback(prefPaper, report.PaperA4),
 		Reviewer: p.String(prefReviewer),
-		Look:     p.StringWithFallback(prefLook, lookLight),
+		Look:     p.StringWithFallback(prefLook, look.Light),
 		Criteria: hazards.DefaultCriteria(),
 	}
-	if s.Look != lookDark {
-		s.Look = lookLight
+	if s.Look != look.Dark {
+		s.Look = look.Light
 	}
 	if s.Paper != report.PaperA4 && s.Paper != report.PaperLetter {
 		s.Paper = report.PaperA4

@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
 	"ullage/hazards"
 )
 
@@ -103,7 +104,7 @@ func newWorkingPanel(s *session) *workingPanel {
 	wp.mode.Required = true
 	wp.mode.SetSelected(workingBehind)
 	wp.steps = container.NewVBox()
-	wp.compact = container.NewThemeOverride(wp.steps, compactTheme{})
+	wp.compact = container.NewThemeOverride(wp.steps, look.Compact{})
 	wp.scroll = container.NewVScroll(container.NewPadded(wp.compact))
 	bar := container.NewBorder(nil, nil, back, wp.copyBtn)
 	head := container.NewVBox(bar, wp.title, wp.summary, wp.mode, wp.stale, widget.NewSeparator())
