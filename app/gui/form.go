@@ -10,6 +10,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/parse"
 	"ullage/hazards"
 )
 
@@ -124,7 +125,7 @@ func (f *designForm) field(path string) *numField {
 // document, or the document notes that the text is not one.
 func (f *designForm) typed(nf *numField) {
 	doc := f.s.doc
-	if x, ok := parseNumber(nf.entry.Text); ok {
+	if x, ok := parse.Number(nf.entry.Text); ok {
 		doc.typeNumber(nf.path, f.s.units().toSI(nf.q, x))
 	} else {
 		doc.typeUnreadable(nf.path, nf.entry.Text)

@@ -10,6 +10,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/app/look"
+	"ullage/app/parse"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -113,7 +114,7 @@ func (p *preferencesPanel) read() (settings, error) {
 	st.Reviewer = p.reviewer.Text
 	c := st.Criteria
 	for _, cp := range criterionPrefs {
-		x, ok := parseNumber(p.criteria[cp.key].Text)
+		x, ok := parse.Number(p.criteria[cp.key].Text)
 		if !ok {
 			return st, fmt.Errorf("%s: %q is not a number", labelOf(criterionPath(cp.key)), p.criteria[cp.key].Text)
 		}

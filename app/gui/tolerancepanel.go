@@ -13,6 +13,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/parse"
 	"ullage/hazards"
 	"ullage/hazards/tolerance"
 	"ullage/report/chartmodel"
@@ -174,7 +175,7 @@ func caption(s string) *widget.Label {
 
 // readStudyUnits reads the number of units.
 func readStudyUnits(t string) (int, error) {
-	n, ok := parseCount(t)
+	n, ok := parse.Count(t)
 	if !ok || n < 1 || n > tolerance.MaxSamples {
 		return 0, fmt.Errorf("units to draw %q: give a whole number from 1 to %s", strings.TrimSpace(t), groupDigits(tolerance.MaxSamples))
 	}
@@ -183,7 +184,7 @@ func readStudyUnits(t string) (int, error) {
 
 // readStudySeed reads the seed.
 func readStudySeed(t string) (uint64, error) {
-	n, ok := parseCount(t)
+	n, ok := parse.Count(t)
 	if !ok {
 		return 0, fmt.Errorf("seed %q: give a whole number, 0 or more", strings.TrimSpace(t))
 	}
@@ -193,7 +194,7 @@ func readStudySeed(t string) (uint64, error) {
 // readStudySpread reads the hottest temperature's spread, typed in K or
 // °F, and returns it in kelvin.
 func readStudySpread(t string, u unitSystem) (float64, error) {
-	x, ok := parseNumber(t)
+	x, ok := parse.Number(t)
 	k := u.toSI(qTempDiff, x)
 	if !ok || k < 0 || k > maxStudySpreadK {
 		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s", strings.TrimSpace(t), spreadText(maxStudySpreadK, u))

@@ -126,20 +126,3 @@ func variedInputs(d *hazards.Design, spreadK float64, u unitSystem) []string {
 	}
 	return append(out, "glass strength (Weibull, from the glass chosen)")
 }
-
-// parseCount reads a whole number typed by a person; blanks and
-// underscores between digit groups are ignored.
-func parseCount(s string) (uint64, bool) {
-	s = strings.Map(func(r rune) rune {
-		switch r {
-		case ' ', '_', '\u202f', '\u2009', '\u00a0':
-			return -1
-		}
-		return r
-	}, s)
-	if s == "" {
-		return 0, false
-	}
-	n, err := strconv.ParseUint(s, 10, 64)
-	return n, err == nil
-}

@@ -1,12 +1,6 @@
 package gui
 
-import (
-	"math"
-	"strconv"
-	"strings"
-
-	"ullage/report/display"
-)
+import "ullage/report/display"
 
 // unitSystem is the set of units the form and results are shown in.
 type unitSystem string
@@ -86,20 +80,3 @@ func entryText(x float64) string { return display.Entry(x, display.SI) }
 
 // sigFigures formats x to n significant digits by the display rule.
 func sigFigures(x float64, n int) string { return display.Number(x, n) }
-
-// parseNumber reads a number typed by a person: surrounding blanks are
-// ignored and a single decimal comma is accepted in place of a point.
-func parseNumber(s string) (float64, bool) {
-	s = strings.TrimSpace(s)
-	if s == "" {
-		return 0, false
-	}
-	if strings.Count(s, ",") == 1 && !strings.Contains(s, ".") {
-		s = strings.Replace(s, ",", ".", 1)
-	}
-	x, err := strconv.ParseFloat(s, 64)
-	if err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
-		return 0, false
-	}
-	return x, true
-}
