@@ -166,6 +166,9 @@ func (c *comparePanel) compute() {
 		c.refusePair(msg)
 		return
 	}
+	// Until both sides are assessed, nothing of the pair before can be
+	// exported under the new pair's names.
+	c.s.compared = nil
 	c.gen++
 	gen := c.gen
 	lib := c.s.lib
