@@ -32,6 +32,7 @@ func (c *comparePanel) pairProblem() string {
 func (c *comparePanel) refusePair(msg string) {
 	c.gen++
 	c.cmp = nil
+	c.s.compared = nil
 	l := widget.NewLabel(msg)
 	l.Wrapping = fyne.TextWrapWord
 	l.Importance = widget.DangerImportance

@@ -18,34 +18,34 @@ type compareRow struct {
 
 // inputRows lists every input of two designs in the order of the form,
 // in the display units, marking those that differ.
-func inputRows(f *designForm, a, b *hazards.Design, lib *fluids.Library, u unitSystem) []compareRow {
+func inputRows(a, b *hazards.Design, lib *fluids.Library, u unitSystem) []compareRow {
 	var rows []compareRow
 	text := func(label string, get func(*hazards.Design) string) {
 		x, y := get(a), get(b)
 		rows = append(rows, compareRow{label, x, y, x != y})
 	}
-	num := func(nf *numField) {
-		x, y := nf.get(a), nf.get(b)
-		rows = append(rows, compareRow{nf.label, u.show(nf.q, x, 5), u.show(nf.q, y, 5), x != y})
+	num := func(ff formField) {
+		x, y := ff.get(a), ff.get(b)
+		rows = append(rows, compareRow{ff.label, u.show(ff.q, x, 5), u.show(ff.q, y, 5), x != y})
 	}
 	text("Fluid", func(d *hazards.Design) string { return fluidName(d.Fluid, lib) })
-	for _, nf := range f.fields {
-		switch nf.path {
-		case "vessel.internal_volume_m3":
+	for _, ff := range formFields {
+		switch ff.path {
+		case hazards.FieldInternalVolume:
 			rows = append(rows, partRows(a, b, u)...)
-		case "hottest_k":
+		case hazards.FieldHottest:
 			text("Glass", glassName)
-		case "room.volume_m3":
+		case hazards.FieldRoomVolume:
 			text("Room", func(d *hazards.Design) string { return roomName(d.Room.PresetID) })
-		case "thermal_shock.hot_to_cold_k":
+		case hazards.FieldHotToCold:
 			text("Sudden drop from", func(d *hazards.Design) string { return shockPresetName(d.ThermalShock.HotToColdPresetID) })
-		case "thermal_shock.cold_to_hot_k":
+		case hazards.FieldColdToHot:
 			text("Sudden rise from", func(d *hazards.Design) string { return shockPresetName(d.ThermalShock.ColdToHotPresetID) })
-		case "seal_stress.residual_stress_pa":
+		case hazards.FieldResidualStress:
 			text("Part carrying the seal", func(d *hazards.Design) string { return firstNonEmpty(d.SealStress.Part, "none given") })
 		}
-		num(nf)
-		if nf.path == "room.exposure_minutes" {
+		num(ff)
+		if ff.path == hazards.FieldExposureMinutes {
 			text("Limits from", func(d *hazards.Design) string {
 				if len(d.Criteria.LimitBodies) == 0 {
 					return "every body"

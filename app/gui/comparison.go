@@ -43,6 +43,7 @@ var compareColumns = columns{fractions: []float32{0.38, 0.25, 0.25, 0.12}}
 func newComparePanel(s *session) *comparePanel {
 	c := &comparePanel{s: s, options: map[string]string{}}
 	s.cmp = c
+	s.changes.subscribe(c.update)
 	c.pickA = widget.NewSelect(nil, func(string) { c.compute() })
 	c.pickB = widget.NewSelect(nil, func(string) { c.compute() })
 	c.onlyChanged = widget.NewCheck("Show only what changed", func(bool) { c.render() })
@@ -75,6 +76,14 @@ func sectionHeading(t string) fyne.CanvasObject {
 	return container.NewVBox(h, widget.NewSeparator())
 }
 
+// update compares again when the revisions, the working copy as a whole
+// or the units changed.
+func (c *comparePanel) update(ch change) {
+	if ch.cause.reload() || ch.cause == causeKept {
+		c.refresh()
+	}
+}
+
 // refresh rebuilds the choice of revisions and compares again.
 func (c *comparePanel) refresh() {
 	doc := c.s.doc
@@ -91,8 +100,6 @@ func (c *comparePanel) refresh() {
 	c.options[workingCopyLabel] = ""
 	opts = append(opts, workingCopyLabel)
 	keepA, keepB := c.pickA.Selected, c.pickB.Selected
-	wasLoading := c.s.loading
-	c.s.loading = true
 	c.pickA.Options, c.pickB.Options = opts, opts
 	if _, ok := c.options[keepA]; !ok || keepA == "" {
 		keepA = opts[max(len(opts)-3, 0)]
@@ -103,9 +110,8 @@ func (c *comparePanel) refresh() {
 	if keepA == keepB && len(opts) > 1 {
 		keepA, keepB = opts[len(opts)-2], opts[len(opts)-1]
 	}
-	c.pickA.SetSelected(keepA)
-	c.pickB.SetSelected(keepB)
-	c.s.loading = wasLoading
+	showSelected(c.pickA, keepA)
+	showSelected(c.pickB, keepB)
 	c.compute()
 }
 
@@ -119,10 +125,14 @@ func (c *comparePanel) pickTwo(a, b string) {
 		}
 		return ""
 	}
-	c.s.loading = true
-	c.pickA.SetSelected(find(a))
-	c.pickB.SetSelected(find(b))
-	c.s.loading = false
+	for _, x := range []struct {
+		pick  *widget.Select
+		label string
+	}{{c.pickA, a}, {c.pickB, b}} {
+		if o := find(x.label); o != "" {
+			showSelected(x.pick, o)
+		}
+	}
 	c.compute()
 }
 
@@ -144,7 +154,7 @@ func (c *comparePanel) side(opt string) (hazards.Design, string, bool) {
 
 // compute assesses both sides off the UI goroutine and shows them.
 func (c *comparePanel) compute() {
-	if c.s.loading || c.s.doc == nil {
+	if c.s.doc == nil {
 		return
 	}
 	da, la, okA := c.side(c.pickA.Selected)
@@ -156,9 +166,13 @@ func (c *comparePanel) compute() {
 		c.refusePair(msg)
 		return
 	}
+	// Until both sides are assessed, nothing of the pair before can be
+	// exported under the new pair's names.
+	c.s.compared = nil
 	c.gen++
 	gen := c.gen
 	lib := c.s.lib
+	labelA, labelB := c.options[c.pickA.Selected], c.options[c.pickB.Selected]
 	background(c.s.assess, func() [2]outcome {
 		return [2]outcome{evaluate(da, lib), evaluate(db, lib)}
 	}, func(o [2]outcome) {
@@ -170,6 +184,10 @@ func (c *comparePanel) compute() {
 			compare.Side{Label: la, Design: da, Assessment: o[0].assessment},
 			compare.Side{Label: lb, Design: db, Assessment: o[1].assessment})
 		c.cmp = &cmp
+		c.s.compared = nil
+		if o[0].assessment != nil && o[1].assessment != nil {
+			c.s.compared = &comparedPair{cmp: &cmp, labelA: labelA, labelB: labelB}
+		}
 		c.render()
 	})
 }
@@ -187,7 +205,7 @@ func (c *comparePanel) render() {
 
 	only := c.onlyChanged.Checked
 	rows := []fyne.CanvasObject{compareHeader("Input", cmp.A.Label, cmp.B.Label)}
-	for _, r := range inputRows(c.s.form, &cmp.A.Design, &cmp.B.Design, c.s.lib, u) {
+	for _, r := range inputRows(&cmp.A.Design, &cmp.B.Design, c.s.lib, u) {
 		if only && !r.Changed {
 			continue
 		}
@@ -284,17 +302,19 @@ func compareLine(name, a, b, mark string, changed bool) fyne.CanvasObject {
 	return container.New(compareColumns, cell(name, false), cell(a, false), cell(b, changed), m)
 }
 
+// comparedPair is a comparison on the compare screen with both sides
+// assessed, as the comparison record is made from it: the comparison and
+// the revision labels of its sides ("" for the working copy).
+type comparedPair struct {
+	cmp            *compare.Comparison
+	labelA, labelB string
+}
+
 // current returns the comparison shown, for export, when both sides
 // were assessed.
 func (c *comparePanel) current() (*compare.Comparison, bool) {
-	if c.cmp == nil || c.outA.assessment == nil || c.outB.assessment == nil {
-		return nil, false
+	if p := c.s.compared; p != nil {
+		return p.cmp, true
 	}
-	return c.cmp, true
-}
-
-// sideLabels returns the revision labels behind the two choices ("" for
-// the working copy).
-func (c *comparePanel) sideLabels() (string, string) {
-	return c.options[c.pickA.Selected], c.options[c.pickB.Selected]
+	return nil, false
 }

@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"path/filepath"
 	"slices"
+	"strings"
 	"time"
 
 	"ullage/assets"
@@ -16,6 +17,11 @@ import (
 // document is the plain state of what the reviewer is working on: the
 // design file (product and revision history), where it lives, and the
 // working copy of the design being edited.
+//
+// Once opened in the window, every change goes through its methods,
+// which tell the window's panels what changed and why (a file opened, a
+// keystroke, a choice, a revision kept) through its feed; the panels
+// show the document and never write into each other.
 type document struct {
 	// File is the product and its revisions as they will be saved.
 	File *designfile.File
@@ -34,11 +40,27 @@ type document struct {
 	// stamp is the file on disk as it was at the last load or save, to
 	// tell whether another window or program changed it since.
 	stamp designfile.Stamp
-	// fresh is set on a new design until the form has marked its
-	// required fields; unset holds the JSON paths of the required fields
-	// of a new design that have not been typed yet, shown empty.
-	fresh bool
-	unset map[string]bool
+	// unread holds, by field path, the entries of the form that hold no
+	// number the working copy can take: text typed that is not a number,
+	// or a required field of a new design not typed yet (shown empty).
+	// The working copy keeps its last value of each, and is not assessed
+	// until every entry reads.
+	unread map[string]unreadable
+	// feed tells the window's panels of every change; nil until the
+	// document is opened in a window.
+	feed *feed
+}
+
+// unreadable is an entry of the form with no number in it.
+type unreadable struct {
+	// typed is true for text typed that is not a number, text; false for
+	// a required field of a new design not typed yet.
+	typed bool
+	text  string
+	// needed is true for a required field of a new design: once typed
+	// text is forgotten, the entry is empty again rather than showing the
+	// working copy's value.
+	needed bool
 }
 
 // newDocument wraps a loaded file, taking the newest revision as the
@@ -76,7 +98,13 @@ func newBlankDocument(criteria hazards.Criteria) (*document, error) {
 	work.Criteria = criteria
 	work.Criteria.LimitBodies = nil
 	f := &designfile.File{Format: designfile.FormatCurrent}
-	return &document{File: f, Name: "new design", Work: work, fresh: true}, nil
+	d := &document{File: f, Name: "new design", Work: work, unread: map[string]unreadable{}}
+	for _, ff := range designFields(&d.Work) {
+		if requiredOnNew(ff.path) {
+			d.unread[ff.path] = unreadable{needed: true}
+		}
+	}
+	return d, nil
 }
 
 // loadDocument opens a design file from disk.
@@ -173,7 +201,8 @@ func (d *document) newRevision(label, author, note string, now time.Time) design
 
 // addRevision appends the working copy as a new revision and makes it the
 // base of the working copy. The file is checked as it would be on saving,
-// and left unchanged when the revision is refused.
+// and left unchanged when the revision is refused; a revision kept is
+// published as causeKept.
 func (d *document) addRevision(r designfile.Revision) error {
 	trial := *d.File
 	trial.Revisions = slices.Clone(d.File.Revisions)
@@ -185,7 +214,150 @@ func (d *document) addRevision(r designfile.Revision) error {
 	}
 	d.File.Revisions = trial.Revisions
 	d.Base = r.Label
+	d.publish(change{cause: causeKept})
 	return nil
+}
+
+// openIn opens the document in a window whose panels listen on f: the
+// sudden-change presets are brought in step with their values, and the
+// opening is published.
+func (d *document) openIn(f *feed) {
+	d.feed = f
+	matchShockPresets(&d.Work)
+	d.publish(change{cause: causeOpened})
+}
+
+// publish tells the panels of a change.
+func (d *document) publish(c change) { d.feed.publish(c) }
+
+// openRevision makes a copy of revision r the working copy, forgetting
+// every entry that did not read.
+func (d *document) openRevision(r *designfile.Revision) {
+	d.setWork(r)
+	matchShockPresets(&d.Work)
+	d.unread = nil
+	d.publish(change{cause: causeRevision})
+}
+
+// typeNumber stores x, typed by the reviewer, in the number at path
+// (one of the form's fields) and keeps the presets in step with it.
+func (d *document) typeNumber(path string, x float64) {
+	ff, ok := formFieldAt(path)
+	if !ok {
+		return
+	}
+	ff.set(&d.Work, x)
+	delete(d.unread, path)
+	followPresets(&d.Work, path)
+	d.publish(change{cause: causeTyped, field: path})
+}
+
+// followPresets keeps the presets a design names in step with a value
+// typed at path: a room that no longer matches its preset becomes the
+// reviewer's own, and a sudden change names the preset it matches.
+func followPresets(d *hazards.Design, path string) {
+	switch {
+	case strings.HasPrefix(path, hazards.FieldRoom+"."):
+		roomFollowsPreset(d)
+	case strings.HasPrefix(path, hazards.FieldThermalShock+"."):
+		matchShockPresets(d)
+	}
+}
+
+// typeUnreadable notes text typed at path that is not a number; the
+// working copy keeps its value.
+func (d *document) typeUnreadable(path, text string) {
+	if d.unread == nil {
+		d.unread = map[string]unreadable{}
+	}
+	e := d.unread[path]
+	e.typed, e.text = true, text
+	d.unread[path] = e
+	d.publish(change{cause: causeTyped, field: path})
+}
+
+// typeText stores text typed by the reviewer in the design (a part's
+// name, the part carrying the seal); set writes it at path.
+func (d *document) typeText(path string, set func(*hazards.Design)) {
+	set(&d.Work)
+	d.publish(change{cause: causeTyped, field: path})
+}
+
+// typeProduct stores what the reviewer typed about the product.
+func (d *document) typeProduct(set func(*designfile.Product)) {
+	set(&d.File.Product)
+	d.publish(change{cause: causeTyped, field: fieldProduct})
+}
+
+// choose applies a choice of the reviewer: set changes the input at
+// path, or every input below it (a preset fills a group, the default
+// criteria replace the criteria), whose entries then all read.
+func (d *document) choose(path string, set func(*hazards.Design)) {
+	set(&d.Work)
+	for p := range d.unread {
+		if below(p, path) {
+			delete(d.unread, p)
+		}
+	}
+	d.publish(change{cause: causeChosen, field: path})
+}
+
+// reshapeParts adds, removes or reshapes parts of the vessel. The parts'
+// entries are made again: text typed in them that was not a number is
+// forgotten, and a required dimension of a new design stays required.
+func (d *document) reshapeParts(set func(*hazards.Vessel)) {
+	set(&d.Work.Vessel)
+	d.forgetTyped(hazards.IsPartField)
+	d.publish(change{cause: causeChosen, field: hazards.FieldParts})
+}
+
+// forgetTyped forgets the text typed that was not a number in the
+// entries at the paths which selects (every entry when which is nil), as
+// when the entries show the working copy again in other units.
+func (d *document) forgetTyped(which func(path string) bool) {
+	for p, e := range d.unread {
+		if !e.typed || (which != nil && !which(p)) {
+			continue
+		}
+		if e.needed {
+			d.unread[p] = unreadable{needed: true}
+		} else {
+			delete(d.unread, p)
+		}
+	}
+}
+
+// firstUnread returns the first entry of the working copy's fields, in
+// the order of the form, that holds no number.
+func (d *document) firstUnread() (formField, unreadable, bool) {
+	if len(d.unread) == 0 {
+		return formField{}, unreadable{}, false
+	}
+	for _, ff := range designFields(&d.Work) {
+		if e, ok := d.unread[ff.path]; ok {
+			return ff, e, true
+		}
+	}
+	return formField{}, unreadable{}, false
+}
+
+// savedAt records that the file was saved at path with the given stamp.
+func (d *document) savedAt(path string, stamp designfile.Stamp) {
+	d.stamp = stamp
+	d.Path = path
+	d.Name = filepath.Base(path)
+	d.markSaved()
+	d.publish(change{cause: causeSaved})
+}
+
+// below reports whether path is at or below the field or group at top
+// ("room.volume_m3" is below "room", "vessel.parts[0].length_m" below
+// "vessel.parts").
+func below(path, top string) bool {
+	if path == top {
+		return true
+	}
+	return strings.HasPrefix(path, top) && (path[len(top)] == '.' || path[len(top)] == '[')
 }
 
 // snapshot is what autosave keeps of a document, enough to restore it

@@ -20,6 +20,9 @@ import (
 // errNoResults: there are no current results to export.
 var errNoResults = errors.New("there are no current results to export: fix the marked inputs first")
 
+// errNotCompared: the compare screen shows no comparison to export.
+var errNotCompared = errors.New("both sides of the comparison must be assessed before it can be exported")
+
 // recordMeta describes the working copy for a record: the revision it
 // is, or the revision it was changed from.
 func (s *session) recordMeta() report.Meta {
@@ -84,13 +87,12 @@ func (s *session) writeAssessment(w io.Writer, appendix bool) error {
 // writeComparisonPDF writes the comparison record shown on the compare
 // screen.
 func (s *session) writeComparisonPDF(w io.Writer) error {
-	c, ok := s.cmp.current()
-	if !ok {
-		return errors.New("both sides of the comparison must be assessed before it can be exported")
+	c := s.compared
+	if c == nil {
+		return errNotCompared
 	}
-	la, lb := s.cmp.sideLabels()
 	var buf bytes.Buffer
-	if err := report.WriteComparison(&buf, s.revisionMeta(la), s.revisionMeta(lb), *c, s.settings.reportOptions()); err != nil {
+	if err := report.WriteComparison(&buf, s.revisionMeta(c.labelA), s.revisionMeta(c.labelB), *c.cmp, s.settings.reportOptions()); err != nil {
 		return fmt.Errorf("the comparison record could not be written: %w", err)
 	}
 	_, err := w.Write(buf.Bytes())
@@ -134,12 +136,12 @@ func (s *session) assessmentPDFName() string {
 
 // exportComparisonDialog asks where to write the comparison record.
 func (s *session) exportComparisonDialog() {
-	if _, ok := s.cmp.current(); !ok {
-		s.showError(errors.New("both sides of the comparison must be assessed before it can be exported"))
+	c := s.compared
+	if c == nil {
+		s.showError(errNotCompared)
 		return
 	}
-	la, lb := s.cmp.sideLabels()
-	name := suggestedName(s.doc.File.Product.Name, "-rev-"+labelPart(la)+"-to-"+labelPart(lb), ".pdf")
+	name := suggestedName(s.doc.File.Product.Name, "-rev-"+labelPart(c.labelA)+"-to-"+labelPart(c.labelB), ".pdf")
 	s.exportDialog(name, s.writeComparisonPDF)
 }
 

@@ -90,8 +90,8 @@ func (s *session) openPath(path string) bool {
 		s.showFileProblem("The design file cannot be opened", err)
 		return false
 	}
-	s.open(doc)
 	s.rememberFile(path)
+	s.open(doc)
 	return true
 }
 
@@ -111,7 +111,8 @@ func (s *session) showFileProblem(title string, err error) {
 
 // rememberFile puts path at the top of the recent files, as an absolute
 // path so that it opens from any working folder. Entries an older version
-// kept without their folder are dropped.
+// kept without their folder are dropped. The menu shows them once the
+// file is opened or saved.
 func (s *session) rememberFile(path string) {
 	if abs, err := filepath.Abs(path); err == nil {
 		path = abs
@@ -124,7 +125,6 @@ func (s *session) rememberFile(path string) {
 	}
 	p.SetStringList(prefRecent, recent)
 	p.SetString(prefLastFolder, filepath.Dir(path))
-	s.shell.rebuildMenu()
 }
 
 // recentFiles returns the recent files that still exist, newest first.
@@ -148,7 +148,7 @@ func (s *session) save(then func()) {
 		return
 	}
 	if s.doc.workChanged() {
-		s.revs.askNewRevision(func() { s.save(then) })
+		s.askNewRevision(func() { s.save(then) })
 		return
 	}
 	if s.doc.Path == "" {
@@ -188,7 +188,7 @@ func (s *session) saveAs(then func()) {
 		return
 	}
 	if s.doc.workChanged() {
-		s.revs.askNewRevision(func() { s.saveAs(then) })
+		s.askNewRevision(func() { s.saveAs(then) })
 		return
 	}
 	// The toolkit's save chooser would empty an existing file before
@@ -220,13 +220,9 @@ func (s *session) writeFile(path string) error {
 	if err != nil {
 		return err
 	}
-	s.doc.stamp = stamp
-	s.doc.Path = path
-	s.doc.Name = filepath.Base(path)
-	s.doc.markSaved()
-	s.clearAutosave()
 	s.rememberFile(path)
-	s.updateTitle()
+	s.doc.savedAt(path, stamp)
+	s.clearAutosave()
 	return nil
 }
 

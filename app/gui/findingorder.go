@@ -6,6 +6,7 @@ import (
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/theme"
 
+	"ullage/app/look"
 	"ullage/hazards"
 )
 
@@ -37,11 +38,11 @@ func orderFindings(fs []hazards.Finding) []hazards.Finding {
 func (fl *findingsList) wantedHeight() float32 {
 	row := fl.rowHeight()
 	n := float32(max(len(fl.rows), 1))
-	pad := compactTheme{}.Size(theme.SizeNamePadding)
+	pad := look.Compact{}.Size(theme.SizeNamePadding)
 	return fl.object.MinSize().Height - fl.list.MinSize().Height + n*(row+pad)
 }
 
 // rowHeight is the height of one findings row in the compact theme.
 func (fl *findingsList) rowHeight() float32 {
-	return container.NewThemeOverride(fl.list.CreateItem(), denseTheme{}).MinSize().Height
+	return container.NewThemeOverride(fl.list.CreateItem(), look.Dense{}).MinSize().Height
 }

@@ -10,6 +10,7 @@ import (
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/theme"
 
+	"ullage/app/look"
 	"ullage/hazards"
 )
 
@@ -62,7 +63,7 @@ func TestEveryFindingVisibleAt1280x800(t *testing.T) {
 		// Screenshots in the program's own look.
 		set := testApp().Settings()
 		was := set.Theme()
-		set.SetTheme(newLook(lookLight))
+		set.SetTheme(look.New(look.Light))
 		defer set.SetTheme(was)
 	}
 	for _, size := range []fyne.Size{{Width: 1280, Height: 800}, {Width: 1920, Height: 1080}} {
@@ -93,7 +94,7 @@ func (h *harness) checkAllRowsVisible(t *testing.T, size fyne.Size, tag string) 
 		t.Fatalf("%d findings; the example has at least 8", n)
 	}
 	row := fl.rowHeight()
-	need := float32(n)*row + float32(n-1)*denseTheme{}.Size(theme.SizeNamePadding)
+	need := float32(n)*row + float32(n-1)*look.Dense{}.Size(theme.SizeNamePadding)
 	if got := fl.list.Size().Height; got+0.5 < need {
 		t.Errorf("at %.0f×%.0f%s the findings list is %.0f high, %d rows need %.0f", size.Width, size.Height, tag, got, n, need)
 	}

@@ -1,7 +1,8 @@
 package gui
 
 import (
-	"fmt"
+	"cmp"
+	"slices"
 	"strings"
 
 	"fyne.io/fyne/v2"
@@ -9,6 +10,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/parse"
 	"ullage/hazards"
 )
 
@@ -45,6 +47,7 @@ type designForm struct {
 func newDesignForm(s *session) *designForm {
 	f := &designForm{s: s, byPath: map[string]*numField{}}
 	s.form = f
+	s.changes.subscribe(f.update)
 	f.general = widget.NewLabel("")
 	f.general.Wrapping = fyne.TextWrapWord
 	f.general.Importance = widget.DangerImportance
@@ -59,6 +62,9 @@ func newDesignForm(s *session) *designForm {
 		newRoomSection(f),
 		newCriteriaSection(f),
 	}
+	// The form table decides the order of the fields, whatever the order
+	// the sections made them in.
+	slices.SortStableFunc(f.fields, func(a, b *numField) int { return cmp.Compare(fieldRank(a.path), fieldRank(b.path)) })
 	f.scroll = container.NewVScroll(container.NewVBox(f.sections...))
 	f.object = container.NewBorder(f.generalRow, nil, nil, nil, f.scroll)
 	return f
@@ -74,11 +80,11 @@ func (f *designForm) reveal(p *problem) {
 	var focus fyne.Focusable
 	if nf, ok := f.byPath[p.Path]; ok {
 		target, focus = nf.object, nf.entry
-	} else if p.Path == "fluid" {
+	} else if p.Path == hazards.FieldFluid {
 		target, focus = f.fluid.choose, f.fluid.choose
-	} else if strings.HasPrefix(p.Path, "glass") {
+	} else if strings.HasPrefix(p.Path, hazards.FieldGlass) {
 		target, focus = f.vessel.glass, f.vessel.glass
-	} else if strings.HasPrefix(p.Path, "vessel.") {
+	} else if strings.HasPrefix(p.Path, hazards.FieldVessel+".") {
 		target = f.vessel.parts
 	}
 	if target == nil {
@@ -102,39 +108,91 @@ func (f *designForm) scrollTo(i int) {
 	f.scroll.ScrollToOffset(fyne.NewPos(0, f.sections[i].Position().Y))
 }
 
-// field creates a number field of the form and registers it.
-func (f *designForm) field(path, label string, q quantity, get func(*hazards.Design) float64, set func(*hazards.Design, float64)) *numField {
-	nf := newNumField(path, label, q, get, set, f.edited)
+// field creates the number field of the form at path (one of
+// formFields) and registers it.
+func (f *designForm) field(path string) *numField {
+	ff, ok := formFieldAt(path)
+	if !ok {
+		panic("gui: no form field " + path)
+	}
+	nf := newNumField(ff, f.typed)
 	f.fields = append(f.fields, nf)
 	f.byPath[path] = nf
 	return nf
 }
 
-// edited handles a keystroke in a number field.
-func (f *designForm) edited(nf *numField) {
-	if f.s.loading {
-		return
+// typed handles a keystroke in a number field: the number goes into the
+// document, or the document notes that the text is not one.
+func (f *designForm) typed(nf *numField) {
+	doc := f.s.doc
+	if x, ok := parse.Number(nf.entry.Text); ok {
+		doc.typeNumber(nf.path, f.s.units().toSI(nf.q, x))
+	} else {
+		doc.typeUnreadable(nf.path, nf.entry.Text)
 	}
-	ok := nf.read(&f.s.doc.Work, f.s.units())
-	if ok {
-		delete(f.s.doc.unset, nf.path)
-		f.afterNumber(nf.path)
-	}
-	f.showProblems(f.s.problem)
-	f.s.edited()
 }
 
-// afterNumber keeps the preset selectors in step with typed values.
-func (f *designForm) afterNumber(path string) {
+// update shows a change of the review on the form. A field the reviewer
+// typed in shows the text already; what follows from it (presets, the
+// volume of the parts, the revision line) is brought in step.
+func (f *designForm) update(c change) {
 	switch {
-	case path == "hottest_k" || path == "coldest_k":
+	case c.cause.reload():
+		f.load()
+	case c.cause == causeLibrary:
+		f.fluid.load()
+	case c.cause == causeTyped:
+		if _, unread := f.s.doc.unread[c.field]; !unread {
+			f.follow(c.field)
+		}
+		f.updateHeader()
+	case c.cause == causeChosen:
+		f.showChosen(c.field)
+		f.updateHeader()
+	case c.cause == causeKept:
+		f.updateHeader()
+	}
+	f.showProblems(f.s.problem)
+}
+
+// follow keeps the preset selectors and the volume of the parts in step
+// with a value typed at path.
+func (f *designForm) follow(path string) {
+	switch {
+	case path == hazards.FieldHottest || path == hazards.FieldColdest:
 		f.temps.syncPresets()
-	case strings.HasPrefix(path, "room."):
-		f.room.typed()
-	case strings.HasPrefix(path, "vessel."):
+	case strings.HasPrefix(path, hazards.FieldRoom+"."):
+		f.room.syncPick()
+	case strings.HasPrefix(path, hazards.FieldVessel+"."):
 		f.vessel.updateVolume()
-	case strings.HasPrefix(path, "thermal_shock."):
+	case strings.HasPrefix(path, hazards.FieldThermalShock+"."):
 		f.shock.syncPresets()
+	}
+}
+
+// showChosen redraws what a choice at path changed: the number fields at
+// or below it, and the notes that describe the choice.
+func (f *designForm) showChosen(path string) {
+	d, u := &f.s.doc.Work, f.s.units()
+	for _, nf := range f.fields {
+		if below(nf.path, path) {
+			nf.show(d, u)
+		}
+	}
+	switch path {
+	case hazards.FieldFluid:
+		f.fluid.describe()
+	case hazards.FieldGlass:
+		f.vessel.describeGlass()
+	case hazards.FieldParts:
+		f.vessel.rebuildParts()
+		f.vessel.updateVolume()
+	case hazards.FieldHottest, hazards.FieldColdest:
+		f.temps.describeAll()
+	case hazards.FieldHotToCold, hazards.FieldColdToHot:
+		f.shock.describeAll()
+	case hazards.FieldRoom, hazards.FieldRoomPreset:
+		f.room.describe()
 	}
 }
 
@@ -152,52 +210,23 @@ func (f *designForm) load() {
 	f.shock.syncPresets()
 	f.room.load()
 	f.criteria.load()
-	if doc := f.s.doc; doc.fresh {
-		doc.fresh = false
-		doc.unset = map[string]bool{}
-		for _, nf := range f.all() {
-			if requiredOnNew(nf.path) {
-				doc.unset[nf.path] = true
-			}
-		}
-	}
-	f.applyUnset()
+	f.showUnread()
 	f.showProblems(f.s.problem)
 }
 
-// requiredOnNew reports whether the field at path starts empty on a new
-// design: the fill, the hottest and coldest temperatures and every
-// dimension of the vessel, which no default can stand for. The room, the
-// shocks and the criteria start from the reviewer's usual values.
-func requiredOnNew(path string) bool {
-	switch path {
-	case "fill_mass_kg", "hottest_k", "coldest_k":
-		return true
-	}
-	return strings.HasPrefix(path, "vessel.parts[")
-}
-
-// applyUnset empties the required fields of a new design not typed yet
-// and marks each as required, which holds the assessment back.
-func (f *designForm) applyUnset() {
-	unset := f.s.doc.unset
-	if len(unset) == 0 {
+// showUnread empties the entries of the required fields of a new design
+// not typed yet; showProblems marks each as required, which holds the
+// assessment back.
+func (f *designForm) showUnread() {
+	unread := f.s.doc.unread
+	if len(unread) == 0 {
 		return
 	}
-	was := f.s.loading
-	f.s.loading = true
 	for _, nf := range f.all() {
-		if !unset[nf.path] {
-			continue
+		if e, ok := unread[nf.path]; ok && !e.typed {
+			showText(nf.entry, "")
 		}
-		nf.entry.SetText("")
-		unit := nf.unit.Text
-		if unit != "" {
-			unit = " in " + unit
-		}
-		nf.parseProblem = fmt.Sprintf("%s is needed for a new design: type a number%s", nf.label, unit)
 	}
-	f.s.loading = was
 }
 
 // updateHeader refreshes the line saying which revision is being edited.
@@ -212,53 +241,17 @@ func (f *designForm) all() []*numField {
 	return append(out, f.partFields...)
 }
 
-// firstParseProblem returns the first field whose text is not a number.
-func (f *designForm) firstParseProblem() *numField {
-	for _, nf := range f.all() {
-		if nf.parseProblem != "" {
-			return nf
-		}
-	}
-	return nil
-}
-
-// quantityOf returns the quantity of the field at a JSON path.
-func (f *designForm) quantityOf(path string) (quantity, bool) {
-	if nf, ok := f.byPath[path]; ok {
-		return nf.q, true
-	}
-	return qNumber, false
-}
-
-// labelOf names the field at a JSON path for messages.
-func (f *designForm) labelOf(path string) string {
-	if nf, ok := f.byPath[path]; ok {
-		return nf.label
-	}
-	switch {
-	case path == "fluid":
-		return "Fluid"
-	case strings.HasPrefix(path, "glass"):
-		return "Glass"
-	case path == "vessel.parts":
-		return "Parts of the vessel"
-	case strings.HasPrefix(path, "criteria.limit_bodies"):
-		return "Bodies whose limits apply"
-	case path == "temperature":
-		return "Temperature"
-	case path == "seal_stress.part":
-		return "Part carrying the seal"
-	}
-	return path
-}
-
-// showProblems marks every field: its own parse problem first, then the
-// engine's problem when it names this field. A problem that names no
-// field of the form is shown at the top of the form.
+// showProblems marks every field: an entry that holds no number first,
+// then the engine's problem when it names this field. A problem that
+// names no field of the form is shown at the top of the form.
 func (f *designForm) showProblems(p *problem) {
 	placed := false
+	doc, u := f.s.doc, f.s.units()
 	for _, nf := range f.all() {
-		msg := nf.parseProblem
+		msg := ""
+		if e, ok := doc.unread[nf.path]; ok {
+			msg = e.message(nf.formField, &doc.Work, u)
+		}
 		if msg == "" && p != nil && p.Path == nf.path {
 			msg = p.Text
 		}
@@ -275,7 +268,7 @@ func (f *designForm) showProblems(p *problem) {
 	}
 	text := p.Text
 	if p.Path != "" {
-		text = f.labelOf(p.Path) + ": " + text
+		text = labelOf(p.Path) + ": " + text
 	}
 	f.general.SetText(text)
 	f.generalRow.Show()

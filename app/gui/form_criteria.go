@@ -16,42 +16,18 @@ type criteriaSection struct {
 	sets   *widget.CheckGroup
 }
 
-// criterionField describes one criterion on screen.
-type criterionField struct {
-	key   string
-	label string
-	q     quantity
-}
-
-// criterionFields lists the criteria in the order they are shown.
-var criterionFields = []criterionField{
-	{"min_burst_safety_factor", "Least burst safety factor", qNumber},
-	{"min_implosion_safety_factor", "Least implosion safety factor", qNumber},
-	{"max_failure_probability", "Highest failure probability", qProbability},
-	{"min_ullage_percent", "Least ullage at the hottest", qPercent},
-	{"max_fraction_of_limit", "Highest fraction of a limit", qNumber},
-	{"max_percent_lfl", "Highest share of the LFL", qPercent},
-}
-
 // newCriteriaSection builds the "Review criteria" group.
 func newCriteriaSection(f *designForm) fyne.CanvasObject {
 	c := &criteriaSection{f: f}
 	f.criteria = c
 	var objs []fyne.CanvasObject
-	for _, cf := range criterionFields {
-		get := criterionGetter(cf.key)
-		nf := f.field("criteria."+cf.key, cf.label, cf.q,
-			func(d *hazards.Design) float64 { return *get(&d.Criteria) },
-			func(d *hazards.Design, x float64) { *get(&d.Criteria) = x })
+	for _, cp := range criterionPrefs {
+		nf := f.field(criterionPath(cp.key))
 		c.fields = append(c.fields, nf)
-		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cf.key])))
+		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cp.key])))
 	}
 	c.sets = widget.NewCheckGroup(limitSetNames(), func(sel []string) {
-		if f.s.loading {
-			return
-		}
-		f.s.doc.Work.Criteria.LimitSets = limitSetsOf(sel)
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldLimitSets, func(d *hazards.Design) { d.Criteria.LimitSets = limitSetsOf(sel) })
 	})
 	objs = append(objs, labelled("Limit sets that apply", c.sets),
 		indented(hint("Default for a consumer product (none ticked, or exactly these two): US occupational and US public acute. Each set's limits are averaged over their own periods; within each kind the largest share of its limit governs.")))
@@ -59,6 +35,9 @@ func newCriteriaSection(f *designForm) fyne.CanvasObject {
 	objs = append(objs, indented(container.NewHBox(reset)))
 	return section("Review criteria", objs...)
 }
+
+// criterionPath is the field path of the numeric criterion key.
+func criterionPath(key string) string { return hazards.FieldCriteria + "." + key }
 
 // criterionGetter returns the accessor of a criterion by its JSON key.
 func criterionGetter(key string) func(*hazards.Criteria) *float64 {
@@ -77,7 +56,7 @@ func (c *criteriaSection) load() {
 	for _, id := range c.f.s.doc.Work.Criteria.AppliedLimitSets() {
 		names = append(names, hazards.LimitSetName(id))
 	}
-	c.sets.SetSelected(names)
+	showChecked(c.sets, names)
 }
 
 // limitSetNames lists the limit sets by name, in their usual order.
@@ -115,15 +94,10 @@ func limitSetsOf(names []string) []string {
 
 // useDefaults replaces the criteria by the reviewer's defaults.
 func (c *criteriaSection) useDefaults() {
-	s := c.f.s
-	bodies, sets := s.doc.Work.Criteria.LimitBodies, s.doc.Work.Criteria.LimitSets
-	s.doc.Work.Criteria = s.settings.Criteria
-	s.doc.Work.Criteria.LimitBodies, s.doc.Work.Criteria.LimitSets = bodies, sets
-	s.loading = true
-	for _, nf := range c.fields {
-		nf.show(&s.doc.Work, s.units())
-	}
-	s.loading = false
-	c.f.showProblems(s.problem)
-	s.edited()
+	defaults := c.f.s.settings.Criteria
+	c.f.s.doc.choose(hazards.FieldCriteria, func(d *hazards.Design) {
+		bodies, sets := d.Criteria.LimitBodies, d.Criteria.LimitSets
+		d.Criteria = defaults
+		d.Criteria.LimitBodies, d.Criteria.LimitSets = bodies, sets
+	})
 }

@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/fluidfind"
 	"ullage/fluids"
 	"ullage/hazards"
 )
@@ -30,16 +31,11 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 	fs := &fluidSection{f: f}
 	f.fluid = fs
 	fs.choose = widget.NewSelect(nil, func(opt string) {
-		if f.s.loading {
-			return
-		}
 		id, ok := fs.ids[opt]
 		if !ok {
 			return
 		}
-		f.s.doc.Work.Fluid = id
-		fs.describe()
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldFluid, func(d *hazards.Design) { d.Fluid = id })
 	})
 	fs.choose.PlaceHolder = "Choose a fluid"
 	fs.info = hint("")
@@ -50,22 +46,16 @@ func newFluidSection(f *designForm) fyne.CanvasObject {
 	fs.find = widget.NewEntry()
 	fs.find.SetPlaceHolder("Find: name, synonym or CAS (R-134a, methylene chloride …)")
 	fs.find.OnChanged = func(text string) {
-		if f.s.loading {
-			return
-		}
-		if sub := findFluid(f.s.lib, text); sub != nil {
+		// A fluid found is chosen in the selector, as if picked there.
+		if sub := fluidfind.Find(f.s.lib, text); sub != nil {
 			if o := fluidOption(sub.Fluid()); fs.choose.Selected != o {
 				fs.choose.SetSelected(o)
 			}
 		}
 	}
 	add := widget.NewButtonWithIcon("Add a fluid from a file…", theme.ContentAddIcon(), f.s.askUserFluid)
-	mass := f.field("fill_mass_kg", "Fill", qMass,
-		func(d *hazards.Design) float64 { return d.FillMassKg },
-		func(d *hazards.Design, x float64) { d.FillMassKg = x })
-	tol := f.field("fill_mass_tolerance_kg", "Fill tolerance (±)", qMass,
-		func(d *hazards.Design) float64 { return d.FillMassToleranceKg },
-		func(d *hazards.Design, x float64) { d.FillMassToleranceKg = x })
+	mass := f.field(hazards.FieldFillMass)
+	tol := f.field(hazards.FieldFillMassTolerance)
 	return section("Fluid and fill",
 		labelled("Fluid", container.NewBorder(nil, nil, nil, add, fs.choose)),
 		labelled("", fs.find),
@@ -93,12 +83,12 @@ func (fs *fluidSection) load() {
 		fs.ids[o] = sub.Fluid().ID
 		opts = append(opts, o)
 	}
-	sortFluidOptions(opts)
+	fluidfind.Sort(opts)
 	fs.choose.Options = opts
 	if sub, err := lib.Lookup(fs.f.s.doc.Work.Fluid); err == nil {
-		fs.choose.SetSelected(fluidOption(sub.Fluid()))
+		showSelected(fs.choose, fluidOption(sub.Fluid()))
 	} else {
-		fs.choose.ClearSelected()
+		showSelected(fs.choose, "")
 	}
 	fs.choose.Refresh()
 	fs.describe()
@@ -138,7 +128,7 @@ func fluidSummary(sub *fluids.Substance, u unitSystem) string {
 // showProblem shows an engine problem about the fluid; it reports
 // whether the problem was placed here.
 func (fs *fluidSection) showProblem(p *problem) bool {
-	if p == nil || p.Path != "fluid" {
+	if p == nil || p.Path != hazards.FieldFluid {
 		fs.problem.Hide()
 		return false
 	}

@@ -27,23 +27,18 @@ type productSection struct {
 func newProductSection(f *designForm) fyne.CanvasObject {
 	p := &productSection{f: f}
 	f.product = p
-	entryOf := func(e *widget.Entry, set func(string)) *widget.Entry {
+	entryOf := func(e *widget.Entry, set func(*designfile.Product, string)) *widget.Entry {
 		e.OnChanged = func(t string) {
-			if f.s.loading {
-				return
-			}
-			set(t)
-			f.s.edited()
+			f.s.doc.typeProduct(func(pr *designfile.Product) { set(pr, t) })
 		}
 		return e
 	}
-	entry := func(set func(string)) *widget.Entry { return entryOf(widget.NewEntry(), set) }
-	prod := func() *designfile.Product { return &f.s.doc.File.Product }
-	p.name = entry(func(t string) { prod().Name = t })
-	p.partNo = entry(func(t string) { prod().PartNumber = t })
-	p.company = entry(func(t string) { prod().Company = t })
+	entry := func(set func(*designfile.Product, string)) *widget.Entry { return entryOf(widget.NewEntry(), set) }
+	p.name = entry(func(pr *designfile.Product, t string) { pr.Name = t })
+	p.partNo = entry(func(pr *designfile.Product, t string) { pr.PartNumber = t })
+	p.company = entry(func(pr *designfile.Product, t string) { pr.Company = t })
 	p.descrBox = newNoTabEntry()
-	p.descr = entryOf(&p.descrBox.Entry, func(t string) { prod().Description = t })
+	p.descr = entryOf(&p.descrBox.Entry, func(pr *designfile.Product, t string) { pr.Description = t })
 	p.descr.MultiLine = true
 	p.descr.Wrapping = fyne.TextWrapWord
 	p.descr.SetMinRowsVisible(2)
@@ -51,7 +46,7 @@ func newProductSection(f *designForm) fyne.CanvasObject {
 	p.header.Wrapping = fyne.TextWrapWord
 	p.changed = widget.NewLabel("")
 	p.changed.TextStyle = fyne.TextStyle{Bold: true}
-	keep := widget.NewButtonWithIcon("Keep as a new revision…", theme.DocumentSaveIcon(), func() { f.s.revs.askNewRevision(nil) })
+	keep := widget.NewButtonWithIcon("Keep as a new revision…", theme.DocumentSaveIcon(), func() { f.s.askNewRevision(nil) })
 	return section("Product and revision",
 		labelled("Product", p.name),
 		labelled("Part number", p.partNo),
@@ -65,10 +60,10 @@ func newProductSection(f *designForm) fyne.CanvasObject {
 // load fills the product entries.
 func (p *productSection) load() {
 	pr := p.f.s.doc.File.Product
-	p.name.SetText(pr.Name)
-	p.partNo.SetText(pr.PartNumber)
-	p.company.SetText(pr.Company)
-	p.descr.SetText(pr.Description)
+	showText(p.name, pr.Name)
+	showText(p.partNo, pr.PartNumber)
+	showText(p.company, pr.Company)
+	showText(p.descr, pr.Description)
 	p.updateHeader()
 }
 

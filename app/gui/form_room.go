@@ -8,7 +8,6 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
-	"ullage/report"
 )
 
 // customRoom is the preset choice for a room described by the reviewer.
@@ -39,41 +38,25 @@ func newRoomSection(f *designForm) fyne.CanvasObject {
 	}
 	r.source = hint("")
 	r.pick = widget.NewSelect(opts, func(opt string) {
-		if f.s.loading {
-			return
-		}
-		d := &f.s.doc.Work
+		doc := f.s.doc
 		if p, ok := r.byName(opt); ok {
-			d.Room = p.Room(d.Room.ExposureMinutes)
-			f.s.loading = true
-			for _, nf := range r.fields {
-				nf.show(d, f.s.units())
-			}
-			f.s.loading = false
+			doc.choose(hazards.FieldRoom, func(d *hazards.Design) { d.Room = p.Room(d.Room.ExposureMinutes) })
 		} else {
-			d.Room.PresetID = ""
+			doc.choose(hazards.FieldRoomPreset, func(d *hazards.Design) { d.Room.PresetID = "" })
 		}
-		r.describe()
-		f.showProblems(f.s.problem)
-		f.s.edited()
 	})
-	rf := func(path, label string, q quantity, get func(*hazards.Room) float64, set func(*hazards.Room, float64)) *numField {
-		nf := f.field(path, label, q,
-			func(d *hazards.Design) float64 { return get(&d.Room) },
-			func(d *hazards.Design, x float64) { set(&d.Room, x) })
+	rf := func(path string) *numField {
+		nf := f.field(path)
 		r.fields = append(r.fields, nf)
 		return nf
 	}
-	vol := rf("room.volume_m3", "Room volume", qRoomVolume, func(r *hazards.Room) float64 { return r.VolumeM3 }, func(r *hazards.Room, x float64) { r.VolumeM3 = x })
-	ach := rf("room.air_changes_per_hour", "Air changes", qPerHour, func(r *hazards.Room) float64 { return r.AirChangesPerHour }, func(r *hazards.Room, x float64) { r.AirChangesPerHour = x })
-	mix := rf("room.mixing_factor", "Mixing factor", qNumber, func(r *hazards.Room) float64 { return r.MixingFactor }, func(r *hazards.Room, x float64) { r.MixingFactor = x })
-	nfr := rf("room.near_field_radius_m", "Near-field radius", qRoomLength, func(r *hazards.Room) float64 { return r.NearFieldRadiusM }, func(r *hazards.Room, x float64) { r.NearFieldRadiusM = x })
-	nfs := rf("room.near_field_air_speed_m_s", "Air speed near the breakage", qAirSpeed, func(r *hazards.Room) float64 { return r.NearFieldAirSpeed }, func(r *hazards.Room, x float64) { r.NearFieldAirSpeed = x })
-	exp := rf("room.exposure_minutes", report.LabelExposureTime, qMinutes, func(r *hazards.Room) float64 { return r.ExposureMinutes }, func(r *hazards.Room, x float64) { r.ExposureMinutes = x })
+	vol := rf(hazards.FieldRoomVolume)
+	ach := rf(hazards.FieldAirChanges)
+	mix := rf(hazards.FieldMixingFactor)
+	nfr := rf(hazards.FieldNearFieldRadius)
+	nfs := rf(hazards.FieldNearFieldAirSpeed)
+	exp := rf(hazards.FieldExposureMinutes)
 	r.bodies = widget.NewCheckGroup(limitBodies, func(sel []string) {
-		if f.s.loading {
-			return
-		}
 		// keep the bodies in their usual order
 		var out []string
 		for _, b := range limitBodies {
@@ -83,8 +66,7 @@ func newRoomSection(f *designForm) fyne.CanvasObject {
 				}
 			}
 		}
-		f.s.doc.Work.Criteria.LimitBodies = out
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldLimitBodies, func(d *hazards.Design) { d.Criteria.LimitBodies = out })
 	})
 	r.bodies.Horizontal = true
 	return section("Release into a room",
@@ -122,17 +104,17 @@ func (r *roomSection) load() {
 	if p, ok := r.byID(d.Room.PresetID); ok {
 		choice = p.Name
 	}
-	r.pick.SetSelected(choice)
-	r.bodies.SetSelected(append([]string(nil), d.Criteria.LimitBodies...))
+	showSelected(r.pick, choice)
+	showChecked(r.bodies, append([]string(nil), d.Criteria.LimitBodies...))
 	r.describe()
 }
 
-// typed is called after a room value was typed: a room that no longer
-// matches its preset becomes the reviewer's own.
-func (r *roomSection) typed() {
-	d := &r.f.s.doc.Work
-	p, ok := r.byID(d.Room.PresetID)
-	if !ok {
+// roomFollowsPreset makes the room the reviewer's own once a value typed
+// no longer matches its preset (the exposure time is not part of a
+// preset).
+func roomFollowsPreset(d *hazards.Design) {
+	p, err := hazards.LookupRoomPreset(d.Room.PresetID)
+	if d.Room.PresetID == "" || err != nil {
 		return
 	}
 	want := p.Room(d.Room.ExposureMinutes)
@@ -143,10 +125,19 @@ func (r *roomSection) typed() {
 		return
 	}
 	d.Room.PresetID = ""
-	r.f.s.loading = true
-	r.pick.SetSelected(customRoom)
-	r.f.s.loading = false
-	r.describe()
+}
+
+// syncPick selects the room's preset as the document names it, or "your
+// own room".
+func (r *roomSection) syncPick() {
+	choice := customRoom
+	if p, ok := r.byID(r.f.s.doc.Work.Room.PresetID); ok {
+		choice = p.Name
+	}
+	if r.pick.Selected != choice {
+		showSelected(r.pick, choice)
+		r.describe()
+	}
 }
 
 // describe shows the preset's note and the source of each value.

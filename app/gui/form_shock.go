@@ -29,34 +29,19 @@ func newShockSection(f *designForm) fyne.CanvasObject {
 	s := &shockSection{f: f}
 	f.shock = s
 	s.presets, _ = hazards.ShockPresets()
-	s.hot = f.field("thermal_shock.hot_to_cold_k", "Sudden drop, hot to cold", qTempDiff,
-		func(d *hazards.Design) float64 { return d.ThermalShock.HotToColdK },
-		func(d *hazards.Design, x float64) { d.ThermalShock.HotToColdK = x })
-	s.cold = f.field("thermal_shock.cold_to_hot_k", "Sudden rise, cold to hot", qTempDiff,
-		func(d *hazards.Design) float64 { return d.ThermalShock.ColdToHotK },
-		func(d *hazards.Design, x float64) { d.ThermalShock.ColdToHotK = x })
+	s.hot = f.field(hazards.FieldHotToCold)
+	s.cold = f.field(hazards.FieldColdToHot)
 	s.hotPick, s.hotSource = s.picker(hazards.ShockHotToCold, s.hot)
 	s.coldPick, s.coldSource = s.picker(hazards.ShockColdToHot, s.cold)
 
 	s.sealPart = widget.NewSelectEntry(nil)
 	s.sealPart.PlaceHolder = "none: no seal stress given"
 	s.sealPart.OnChanged = func(text string) {
-		if f.s.loading {
-			return
-		}
-		f.s.doc.Work.SealStress.Part = text
-		f.showProblems(f.s.problem)
-		f.s.edited()
+		f.s.doc.typeText(hazards.FieldSealPart, func(d *hazards.Design) { d.SealStress.Part = text })
 	}
-	stress := f.field("seal_stress.residual_stress_pa", "Residual stress at the seal", qStress,
-		func(d *hazards.Design) float64 { return d.SealStress.ResidualStressPa },
-		func(d *hazards.Design, x float64) { d.SealStress.ResidualStressPa = x })
-	retard := f.field("seal_stress.retardation_m", "or: retardation measured", qRetardation,
-		func(d *hazards.Design) float64 { return d.SealStress.RetardationM },
-		func(d *hazards.Design, x float64) { d.SealStress.RetardationM = x })
-	path := f.field("seal_stress.path_length_m", "through a glass path of", qLength,
-		func(d *hazards.Design) float64 { return d.SealStress.PathLengthM },
-		func(d *hazards.Design, x float64) { d.SealStress.PathLengthM = x })
+	stress := f.field(hazards.FieldResidualStress)
+	retard := f.field(hazards.FieldRetardation)
+	path := f.field(hazards.FieldSealPathLength)
 	return section("Sudden temperature changes and seal",
 		labelled("Hot to cold", s.hotPick), s.hot.object, indented(s.hotSource),
 		labelled("Cold to hot", s.coldPick), s.cold.object, indented(s.coldSource),
@@ -79,31 +64,30 @@ func (s *shockSection) picker(dir string, field *numField) (*widget.Select, *wid
 	source := hint("")
 	var sel *widget.Select
 	sel = widget.NewSelect(opts, func(opt string) {
-		if s.f.s.loading {
-			return
-		}
-		d := &s.f.s.doc.Work
-		switch p, ok := s.byName(opt); {
-		case ok:
-			field.set(d, p.DeltaK())
-			s.setPreset(d, dir, p.ID)
-		case opt == noShock:
-			field.set(d, 0)
-			s.setPreset(d, dir, "")
-		default:
-			s.setPreset(d, dir, "")
-		}
-		s.f.s.loading = true
-		field.show(d, s.f.s.units())
-		s.f.s.loading = false
-		s.describe(sel, source)
-		s.f.showProblems(s.f.s.problem)
-		s.f.s.edited()
+		s.f.s.doc.choose(field.path, func(d *hazards.Design) {
+			switch p, ok := s.byName(opt); {
+			case ok:
+				field.set(d, p.DeltaK())
+				setShockPreset(d, dir, p.ID)
+			case opt == noShock:
+				field.set(d, 0)
+				setShockPreset(d, dir, "")
+			default:
+				setShockPreset(d, dir, "")
+			}
+		})
 	})
 	return sel, source
 }
 
-func (s *shockSection) setPreset(d *hazards.Design, dir, id string) {
+// describeAll shows the sources and note of both selected presets.
+func (s *shockSection) describeAll() {
+	s.describe(s.hotPick, s.hotSource)
+	s.describe(s.coldPick, s.coldSource)
+}
+
+// setShockPreset names the preset of one direction of sudden change.
+func setShockPreset(d *hazards.Design, dir, id string) {
 	if dir == hazards.ShockColdToHot {
 		d.ThermalShock.ColdToHotPresetID = id
 	} else {
@@ -133,37 +117,55 @@ func (s *shockSection) describe(sel *widget.Select, source *widget.Label) {
 	}
 }
 
-// syncPresets selects the preset matching each typed change (clearing a
-// preset the value no longer matches), "not assessed" for 0, or "your own
-// value"; and offers the parts' names for the seal.
+// matchShockPresets names, for each direction of sudden change, the
+// preset whose change the design's value matches (the one already named
+// when several do), or none; a typed value that no longer matches its
+// preset becomes the reviewer's own.
+func matchShockPresets(d *hazards.Design) {
+	presets, _ := hazards.ShockPresets()
+	for _, x := range []struct {
+		dir string
+		k   float64
+		id  *string
+	}{
+		{hazards.ShockHotToCold, d.ThermalShock.HotToColdK, &d.ThermalShock.HotToColdPresetID},
+		{hazards.ShockColdToHot, d.ThermalShock.ColdToHotK, &d.ThermalShock.ColdToHotPresetID},
+	} {
+		found := ""
+		for _, p := range presets {
+			if p.Direction == x.dir && math.Abs(p.DeltaK()-x.k) < 0.005 && (found == "" || p.ID == *x.id) {
+				found = p.ID
+			}
+		}
+		*x.id = found
+	}
+}
+
+// syncPresets selects each direction's preset as the document names it,
+// "not assessed" for 0, or "your own value"; and offers the parts' names
+// for the seal.
 func (s *shockSection) syncPresets() {
 	d := &s.f.s.doc.Work
-	was := s.f.s.loading
-	s.f.s.loading = true
-	defer func() { s.f.s.loading = was }()
 	for _, x := range []struct {
 		sel    *widget.Select
 		source *widget.Label
-		dir    string
 		k      float64
-		id     *string
+		id     string
 	}{
-		{s.hotPick, s.hotSource, hazards.ShockHotToCold, d.ThermalShock.HotToColdK, &d.ThermalShock.HotToColdPresetID},
-		{s.coldPick, s.coldSource, hazards.ShockColdToHot, d.ThermalShock.ColdToHotK, &d.ThermalShock.ColdToHotPresetID},
+		{s.hotPick, s.hotSource, d.ThermalShock.HotToColdK, d.ThermalShock.HotToColdPresetID},
+		{s.coldPick, s.coldSource, d.ThermalShock.ColdToHotK, d.ThermalShock.ColdToHotPresetID},
 	} {
 		choice := customValue
 		if x.k == 0 {
 			choice = noShock
 		}
-		found := ""
 		for _, p := range s.presets {
-			if p.Direction == x.dir && math.Abs(p.DeltaK()-x.k) < 0.005 && (found == "" || p.ID == *x.id) {
-				choice, found = p.Name, p.ID
+			if p.ID == x.id && x.id != "" {
+				choice = p.Name
 			}
 		}
-		*x.id = found
 		if x.sel.Selected != choice {
-			x.sel.SetSelected(choice)
+			showSelected(x.sel, choice)
 		}
 		s.describe(x.sel, x.source)
 	}
@@ -180,7 +182,7 @@ func (s *shockSection) refreshParts() {
 	}
 	s.sealPart.SetOptions(names)
 	if s.sealPart.Text != d.SealStress.Part {
-		s.sealPart.SetText(d.SealStress.Part)
+		showText(&s.sealPart.Entry, d.SealStress.Part)
 	}
 }
 

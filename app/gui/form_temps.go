@@ -7,7 +7,6 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
-	"ullage/report"
 )
 
 // customValue is the preset choice for a value typed by the reviewer.
@@ -28,29 +27,15 @@ func newTemperatureSection(f *designForm) fyne.CanvasObject {
 	t := &temperatureSection{f: f}
 	f.temps = t
 	t.presets, _ = hazards.TemperaturePresets()
-	t.hot = f.field("hottest_k", "Hottest temperature", qTemperature,
-		func(d *hazards.Design) float64 { return d.HottestK },
-		func(d *hazards.Design, x float64) { d.HottestK = x })
-	t.cold = f.field("coldest_k", "Coldest temperature", qTemperature,
-		func(d *hazards.Design) float64 { return d.ColdestK },
-		func(d *hazards.Design, x float64) { d.ColdestK = x })
+	t.hot = f.field(hazards.FieldHottest)
+	t.cold = f.field(hazards.FieldColdest)
 	t.hotPick, t.hotSource = t.picker("hottest", t.hot)
 	t.coldPick, t.coldSource = t.picker("coldest", t.cold)
-	seal := f.field("sealing_temperature_k", "Sealing temperature", qTemperature,
-		func(d *hazards.Design) float64 { return d.SealingTemperatureK },
-		func(d *hazards.Design, x float64) { d.SealingTemperatureK = x })
-	gas := f.field("residual_gas_pressure_pa", report.LabelResidualGas, qPressure,
-		func(d *hazards.Design) float64 { return d.ResidualGasPressurePa },
-		func(d *hazards.Design, x float64) { d.ResidualGasPressurePa = x })
-	amb := f.field("ambient_pressure_pa", report.LabelAmbientPressure, qPressure,
-		func(d *hazards.Design) float64 { return d.AmbientPressurePa },
-		func(d *hazards.Design, x float64) { d.AmbientPressurePa = x })
-	life := f.field("service_life_years", "Service life", qYears,
-		func(d *hazards.Design) float64 { return d.ServiceLifeYears },
-		func(d *hazards.Design, x float64) { d.ServiceLifeYears = x })
-	hours := f.field("hours_at_hottest", "Time at the hottest, in all", qHours,
-		func(d *hazards.Design) float64 { return d.HoursAtHottest },
-		func(d *hazards.Design, x float64) { d.HoursAtHottest = x })
+	seal := f.field(hazards.FieldSealingTemperature)
+	gas := f.field(hazards.FieldResidualGasPressure)
+	amb := f.field(hazards.FieldAmbientPressure)
+	life := f.field(hazards.FieldServiceLife)
+	hours := f.field(hazards.FieldHoursAtHottest)
 	return section("Temperatures and service",
 		labelled("Hottest it will meet", t.hotPick), t.hot.object, indented(t.hotSource),
 		labelled("Coldest it will meet", t.coldPick), t.cold.object, indented(t.coldSource),
@@ -73,23 +58,21 @@ func (t *temperatureSection) picker(kind string, field *numField) (*widget.Selec
 	source := hint("")
 	var sel *widget.Select
 	sel = widget.NewSelect(opts, func(opt string) {
-		if t.f.s.loading {
-			return
-		}
 		p, ok := t.byName(opt)
 		if !ok {
+			// The reviewer's own value: the number stays as typed.
 			t.describe(sel, source)
 			return
 		}
-		field.set(&t.f.s.doc.Work, p.Temperature.Value)
-		t.f.s.loading = true
-		field.show(&t.f.s.doc.Work, t.f.s.units())
-		t.f.s.loading = false
-		t.describe(sel, source)
-		t.f.showProblems(t.f.s.problem)
-		t.f.s.edited()
+		t.f.s.doc.choose(field.path, func(d *hazards.Design) { field.set(d, p.Temperature.Value) })
 	})
 	return sel, source
+}
+
+// describeAll shows the source and note of both selected presets.
+func (t *temperatureSection) describeAll() {
+	t.describe(t.hotPick, t.hotSource)
+	t.describe(t.coldPick, t.coldSource)
 }
 
 func (t *temperatureSection) byName(name string) (hazards.TemperaturePreset, bool) {
@@ -115,9 +98,6 @@ func (t *temperatureSection) describe(sel *widget.Select, source *widget.Label) 
 // "your own value".
 func (t *temperatureSection) syncPresets() {
 	d := &t.f.s.doc.Work
-	was := t.f.s.loading
-	t.f.s.loading = true
-	defer func() { t.f.s.loading = was }()
 	for _, x := range []struct {
 		sel    *widget.Select
 		source *widget.Label
@@ -132,7 +112,7 @@ func (t *temperatureSection) syncPresets() {
 			}
 		}
 		if x.sel.Selected != choice {
-			x.sel.SetSelected(choice)
+			showSelected(x.sel, choice)
 		}
 		t.describe(x.sel, x.source)
 	}

@@ -9,7 +9,6 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
-	"ullage/fluids/units"
 	"ullage/hazards"
 )
 
@@ -52,24 +51,15 @@ func newVesselSection(f *designForm) fyne.CanvasObject {
 	addTube := widget.NewButtonWithIcon("Add a tube", theme.ContentAddIcon(), func() {
 		v.addPart(hazards.Part{Name: "tube", Shape: hazards.ShapeTube, OuterDiameterM: 0.008, WallThicknessM: 0.0012, WallToleranceM: 0.0002, LengthM: newTubeLength})
 	})
-	vol := f.field("vessel.internal_volume_m3", "Measured internal volume", qVesselVolume,
-		func(d *hazards.Design) float64 { return d.Vessel.InternalVolumeM3 },
-		func(d *hazards.Design, x float64) { d.Vessel.InternalVolumeM3 = x })
-	volTol := f.field("vessel.volume_tolerance_m3", "Volume tolerance (±)", qVesselVolume,
-		func(d *hazards.Design) float64 { return d.Vessel.VolumeToleranceM3 },
-		func(d *hazards.Design, x float64) { d.Vessel.VolumeToleranceM3 = x })
+	vol := f.field(hazards.FieldInternalVolume)
+	volTol := f.field(hazards.FieldVolumeTolerance)
 
 	v.glass = widget.NewSelect(nil, func(opt string) {
-		if f.s.loading {
-			return
-		}
 		id, ok := v.glassIDs[opt]
 		if !ok {
 			return
 		}
-		f.s.doc.Work.Glass = hazards.GlassChoice{ID: id}
-		v.describeGlass()
-		f.s.edited()
+		f.s.doc.choose(hazards.FieldGlass, func(d *hazards.Design) { d.Glass = hazards.GlassChoice{ID: id} })
 	})
 	v.glass.PlaceHolder = "Choose a glass"
 	v.glassInfo = hint("")
@@ -107,13 +97,13 @@ func (v *vesselSection) load() {
 		name := "Custom glass from the file: " + d.Glass.Custom.Name
 		opts = append(opts, name)
 		v.glass.Options = opts
-		v.glass.SetSelected(name)
+		showSelected(v.glass, name)
 	} else {
 		v.glass.Options = opts
-		v.glass.ClearSelected()
+		showSelected(v.glass, "")
 		for name, id := range v.glassIDs {
 			if id == d.Glass.ID {
-				v.glass.SetSelected(name)
+				showSelected(v.glass, name)
 			}
 		}
 	}
@@ -135,11 +125,7 @@ func (v *vesselSection) describeGlass() {
 			return
 		}
 	}
-	u := v.f.s.units()
-	strength := sigFigures(g.CharacteristicStrength.Value/1e6, 3) + " MPa"
-	if u == unitsUS {
-		strength = sigFigures(g.CharacteristicStrength.Value/units.PsiPa, 3) + " psi"
-	}
+	strength := stressText(g.CharacteristicStrength.Value, v.f.s.units())
 	v.glassInfo.SetText(fmt.Sprintf("Characteristic strength %s, Weibull modulus %s, stress-corrosion exponent %s. %s",
 		strength, sigFigures(g.WeibullModulus.Value, 3), sigFigures(g.StressCorrosionExponent.Value, 3), g.Note))
 }
@@ -156,26 +142,22 @@ func (v *vesselSection) updateVolume() {
 	}
 }
 
-// addPart appends a part and rebuilds the list.
+// addPart appends a part to the vessel.
 func (v *vesselSection) addPart(p hazards.Part) {
-	d := &v.f.s.doc.Work
-	p.Name = fmt.Sprintf("%s %d", p.Name, len(d.Vessel.Parts)+1)
-	d.Vessel.Parts = append(d.Vessel.Parts, p)
-	v.rebuildParts()
-	v.updateVolume()
-	v.f.s.edited()
+	v.f.s.doc.reshapeParts(func(ves *hazards.Vessel) {
+		p.Name = fmt.Sprintf("%s %d", p.Name, len(ves.Parts)+1)
+		ves.Parts = append(ves.Parts, p)
+	})
 }
 
-// removePart deletes part i and rebuilds the list.
+// removePart deletes part i, unless it is the only one.
 func (v *vesselSection) removePart(i int) {
-	d := &v.f.s.doc.Work
-	if i < 0 || i >= len(d.Vessel.Parts) || len(d.Vessel.Parts) == 1 {
+	if n := len(v.f.s.doc.Work.Vessel.Parts); i < 0 || i >= n || n == 1 {
 		return
 	}
-	d.Vessel.Parts = append(d.Vessel.Parts[:i:i], d.Vessel.Parts[i+1:]...)
-	v.rebuildParts()
-	v.updateVolume()
-	v.f.s.edited()
+	v.f.s.doc.reshapeParts(func(ves *hazards.Vessel) {
+		ves.Parts = append(ves.Parts[:i:i], ves.Parts[i+1:]...)
+	})
 }
 
 // rebuildParts recreates one block per part with its own fields.
@@ -188,16 +170,13 @@ func (v *vesselSection) rebuildParts() {
 	d := &f.s.doc.Work
 	u := f.s.units()
 	var blocks []fyne.CanvasObject
-	wasLoading := f.s.loading
-	f.s.loading = true
 	for i := range d.Vessel.Parts {
 		if i > 0 {
 			blocks = append(blocks, indented(widget.NewSeparator()))
 		}
 		blocks = append(blocks, v.partBlock(i, d, u))
 	}
-	f.applyUnset()
-	f.s.loading = wasLoading
+	f.showUnread()
 	v.parts.Objects = blocks
 	v.parts.Refresh()
 	if f.scroll != nil {
@@ -212,11 +191,8 @@ func (v *vesselSection) rebuildParts() {
 func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.CanvasObject {
 	f := v.f
 	part := func(d *hazards.Design) *hazards.Part { return &d.Vessel.Parts[i] }
-	path := fmt.Sprintf("vessel.parts[%d].", i)
-	pf := func(key, label string, get func(*hazards.Part) float64, set func(*hazards.Part, float64)) *numField {
-		nf := newNumField(path+key, label, qLength,
-			func(d *hazards.Design) float64 { return get(part(d)) },
-			func(d *hazards.Design, x float64) { set(part(d), x) }, f.edited)
+	pf := func(spec partFieldSpec) *numField {
+		nf := newNumField(partFormField(i, spec), f.typed)
 		f.partFields = append(f.partFields, nf)
 		f.byPath[nf.path] = nf
 		nf.show(d, u)
@@ -225,11 +201,7 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 	name := widget.NewEntry()
 	name.SetText(d.Vessel.Parts[i].Name)
 	name.OnChanged = func(t string) {
-		if f.s.loading {
-			return
-		}
-		part(&f.s.doc.Work).Name = t
-		f.s.edited()
+		f.s.doc.typeText(hazards.PartField(i, hazards.PartName), func(d *hazards.Design) { part(d).Name = t })
 	}
 	shape := widget.NewSelect([]string{shapeSphereText, shapeTubeText}, nil)
 	if d.Vessel.Parts[i].Shape == hazards.ShapeTube {
@@ -238,36 +210,30 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 		shape.SetSelected(shapeSphereText)
 	}
 	shape.OnChanged = func(opt string) {
-		if f.s.loading {
-			return
-		}
-		p := part(&f.s.doc.Work)
-		if opt == shapeTubeText {
-			p.Shape = hazards.ShapeTube
-			if p.LengthM == 0 {
-				p.LengthM = newTubeLength
+		f.s.doc.reshapeParts(func(ves *hazards.Vessel) {
+			p := &ves.Parts[i]
+			if opt == shapeTubeText {
+				p.Shape = hazards.ShapeTube
+				if p.LengthM == 0 {
+					p.LengthM = newTubeLength
+				}
+			} else {
+				p.Shape, p.LengthM = hazards.ShapeSphere, 0
 			}
-		} else {
-			p.Shape, p.LengthM = hazards.ShapeSphere, 0
-		}
-		v.rebuildParts()
-		v.updateVolume()
-		f.s.edited()
+		})
 	}
 	remove := widget.NewButtonWithIcon("Remove", theme.DeleteIcon(), func() { v.removePart(i) })
 	if len(d.Vessel.Parts) == 1 {
 		remove.Disable()
 	}
-	od := pf("outer_diameter_m", "Outer diameter", func(p *hazards.Part) float64 { return p.OuterDiameterM }, func(p *hazards.Part, x float64) { p.OuterDiameterM = x })
-	wall := pf("wall_thickness_m", "Wall thickness", func(p *hazards.Part) float64 { return p.WallThicknessM }, func(p *hazards.Part, x float64) { p.WallThicknessM = x })
-	wtol := pf("wall_tolerance_m", "Wall tolerance (±)", func(p *hazards.Part) float64 { return p.WallToleranceM }, func(p *hazards.Part, x float64) { p.WallToleranceM = x })
 	rows := []fyne.CanvasObject{
 		labelled(fmt.Sprintf("Part %d", i+1), container.NewBorder(nil, nil, nil, container.NewHBox(shape, remove), name)),
-		od.object, wall.object, wtol.object,
 	}
-	if d.Vessel.Parts[i].Shape == hazards.ShapeTube {
-		length := pf("length_m", "Length", func(p *hazards.Part) float64 { return p.LengthM }, func(p *hazards.Part, x float64) { p.LengthM = x })
-		rows = append(rows, length.object)
+	for _, spec := range partFieldSpecs {
+		if spec.key == hazards.PartLength && d.Vessel.Parts[i].Shape != hazards.ShapeTube {
+			continue
+		}
+		rows = append(rows, pf(spec).object)
 	}
 	return container.NewVBox(rows...)
 }
@@ -281,11 +247,11 @@ func (v *vesselSection) showProblem(p *problem) bool {
 		return false
 	}
 	switch {
-	case p.Path == "vessel.parts" || (strings.HasPrefix(p.Path, "vessel.parts[") && v.f.byPath[p.Path] == nil):
+	case p.Path == hazards.FieldParts || (hazards.IsPartField(p.Path) && v.f.byPath[p.Path] == nil):
 		v.partsProblem.SetText(p.Text)
 		v.partsProblem.Show()
 		return true
-	case strings.HasPrefix(p.Path, "glass"):
+	case strings.HasPrefix(p.Path, hazards.FieldGlass):
 		v.glassProblem.SetText(p.Text)
 		v.glassProblem.Show()
 		return true

@@ -8,6 +8,7 @@ import (
 
 	"fyne.io/fyne/v2/test"
 
+	"ullage/app/parse"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -62,7 +63,7 @@ func FuzzParseNumber(f *testing.F) {
 	}
 	base := exampleDesignForChecks()
 	f.Fuzz(func(t *testing.T, s string, q uint8) {
-		x, ok := parseNumber(s)
+		x, ok := parse.Number(s)
 		if !ok {
 			if x != 0 {
 				t.Errorf("%q refused but gave %g", s, x)

@@ -110,12 +110,7 @@ func (r keyRow) steps(a *hazards.Assessment) []int {
 }
 
 // stressText shows a stress in MPa or psi.
-func stressText(pa float64, u unitSystem) string {
-	if u == unitsUS {
-		return u.show(qPressure, pa, 3)
-	}
-	return sigFigures(pa/1e6, 3) + " MPa"
-}
+func stressText(pa float64, u unitSystem) string { return u.show(qStress, pa, 3) }
 
 // zoneName names a release-model zone.
 func zoneName(z hazards.Zone) string {

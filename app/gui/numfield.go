@@ -2,7 +2,6 @@ package gui
 
 import (
 	"fmt"
-	"strconv"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
@@ -10,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/widget"
 
 	"ullage/hazards"
+	"ullage/report/display"
 )
 
 // Widths of the label and unit columns of the form.
@@ -20,16 +20,10 @@ const (
 
 // numField is one number of the design on the form: a label, an entry in
 // the chosen units, the unit, and a message under it when the entry is not
-// acceptable.
+// acceptable. Its formField gives the path (the name the engine's
+// InputError uses), label, quantity and accessors.
 type numField struct {
-	// path is the field's JSON path in hazards.Design
-	// (fill_mass_kg, vessel.parts[0].wall_thickness_m …), the name the
-	// engine's InputError uses.
-	path  string
-	label string
-	q     quantity
-	get   func(*hazards.Design) float64
-	set   func(*hazards.Design, float64)
+	formField
 
 	entry   *widget.Entry
 	unit    *widget.Label
@@ -37,16 +31,12 @@ type numField struct {
 	msgIcon *widget.Icon
 	msgRow  *fyne.Container
 	object  fyne.CanvasObject
-
-	// parseProblem is the message for text that is not a number, "" when
-	// the text reads.
-	parseProblem string
 }
 
-// newNumField builds a field; onEdit is called with the field after the
-// reviewer changes its text.
-func newNumField(path, label string, q quantity, get func(*hazards.Design) float64, set func(*hazards.Design, float64), onEdit func(*numField)) *numField {
-	f := &numField{path: path, label: label, q: q, get: get, set: set}
+// newNumField builds the entry of a form field; onEdit is called with
+// the field after the reviewer changes its text.
+func newNumField(ff formField, onEdit func(*numField)) *numField {
+	f := &numField{formField: ff}
 	f.entry = widget.NewEntry()
 	f.entry.OnChanged = func(string) { onEdit(f) }
 	f.unit = widget.NewLabel("")
@@ -57,7 +47,7 @@ func newNumField(path, label string, q quantity, get func(*hazards.Design) float
 	f.msgIcon = widget.NewIcon(theme.ErrorIcon())
 	f.msgRow = container.NewBorder(nil, nil, container.NewCenter(f.msgIcon), nil, f.msg)
 	f.msgRow.Hide()
-	lbl := widget.NewLabel(label)
+	lbl := widget.NewLabel(ff.label)
 	lbl.Truncation = fyne.TextTruncateEllipsis
 	row := container.NewBorder(nil, nil,
 		container.New(fixedWidth{labelWidth}, lbl),
@@ -66,35 +56,25 @@ func newNumField(path, label string, q quantity, get func(*hazards.Design) float
 	return f
 }
 
-// show fills the entry from the design in the given units.
+// show fills the entry from the design in the given units, without
+// counting as an edit.
 func (f *numField) show(d *hazards.Design, u unitSystem) {
 	f.unit.SetText(u.unit(f.q))
-	x := u.fromSI(f.q, f.get(d))
-	if u == unitsUS {
-		// A converted value carries the conversion's digits ("0.0629921
-		// in"): show four significant figures, which keep any value
-		// typed in US units to four figures.
-		f.entry.SetText(roundedEntryText(x, usFigures))
-	} else {
-		f.entry.SetText(entryText(x))
-	}
-	f.parseProblem = ""
+	showText(f.entry, display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
 }
 
-// read parses the entry; on success it stores the SI value in d.
-func (f *numField) read(d *hazards.Design, u unitSystem) bool {
-	x, ok := parseNumber(f.entry.Text)
-	if !ok {
-		unit := u.unit(f.q)
-		if unit != "" {
-			unit = " in " + unit
-		}
-		f.parseProblem = fmt.Sprintf("%q is not a number: type a number%s, such as %s", f.entry.Text, unit, entryText(u.fromSI(f.q, f.get(d))))
-		return false
+// message says what is wrong with the entry of ff, in the units on
+// screen: the text typed is not a number (with the working copy's value
+// as an example), or a new design needs the value.
+func (e unreadable) message(ff formField, d *hazards.Design, u unitSystem) string {
+	unit := u.unit(ff.q)
+	if unit != "" {
+		unit = " in " + unit
 	}
-	f.parseProblem = ""
-	f.set(d, u.toSI(f.q, x))
-	return true
+	if e.typed {
+		return fmt.Sprintf("%q is not a number: type a number%s, such as %s", e.text, unit, display.Entry(u.fromSI(ff.q, ff.get(d)), u.display()))
+	}
+	return fmt.Sprintf("%s is needed for a new design: type a number%s", ff.label, unit)
 }
 
 // setProblem shows or hides the message under the field.
@@ -110,17 +90,4 @@ func (f *numField) setProblem(msg string) {
 		f.msg.SetText(msg)
 	}
 	f.msgRow.Show()
-}
-
-// usFigures is how many significant figures a field shows in US units.
-const usFigures = 4
-
-// roundedEntryText writes x for an entry to n significant figures, in
-// plain notation without trailing zeros.
-func roundedEntryText(x float64, n int) string {
-	r, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', n, 64), 64)
-	if err != nil || x == 0 {
-		return entryText(x)
-	}
-	return entryText(r)
 }

@@ -1,5 +1,7 @@
 package gui
 
+import "ullage/hazards"
+
 // Preference keys. Every value the program keeps between runs is stored
 // under one of these names in the app's preferences.
 const (
@@ -13,11 +15,11 @@ const (
 	prefRecent = "recent_files"
 	// prefCriteriaPrefix prefixes the default criteria, one key per
 	// criterion named by its JSON field (criteria.min_burst_safety_factor …).
-	prefCriteriaPrefix = "criteria."
+	prefCriteriaPrefix = hazards.FieldCriteria + "."
 	// prefUserFluids holds the paths of the fluid files the reviewer
 	// added, reloaded at start.
 	prefUserFluids = "user_fluid_files"
-	// prefLook holds the window's look, lookLight or lookDark.
+	// prefLook holds the window's look, look.Light or look.Dark.
 	prefLook = "look"
 	// prefLastFolder holds the folder of the last file opened or saved.
 	prefLastFolder = "last_folder"

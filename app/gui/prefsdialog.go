@@ -9,6 +9,8 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
+	"ullage/app/parse"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -56,7 +58,7 @@ func newPreferencesPanel(s *session) *preferencesPanel {
 	p.look.Horizontal = true
 	p.look.Required = true
 	p.look.SetSelected(lookLightText)
-	if s.settings.Look == lookDark {
+	if s.settings.Look == look.Dark {
 		p.look.SetSelected(lookDarkText)
 	}
 	p.reviewer = widget.NewEntry()
@@ -70,19 +72,20 @@ func newPreferencesPanel(s *session) *preferencesPanel {
 		sectionHeading("Default review criteria for new designs"),
 	}
 	c := s.settings.Criteria
-	for _, cf := range criterionFields {
+	for _, cp := range criterionPrefs {
+		cf, _ := formFieldAt(criterionPath(cp.key))
 		e := widget.NewEntry()
-		e.SetText(entryText(*criterionGetter(cf.key)(&c)))
-		p.criteria[cf.key] = e
+		e.SetText(entryText(*cp.get(&c)))
+		p.criteria[cp.key] = e
 		unit := widget.NewLabel(unitsSI.unit(cf.q))
 		items = append(items,
 			container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}, widget.NewLabel(cf.label)), container.New(fixedWidth{unitWidth}, unit), e),
-			indented(hint(hazards.DefaultCriteriaGrounds[cf.key])))
+			indented(hint(hazards.DefaultCriteriaGrounds[cp.key])))
 	}
 	reset := widget.NewButtonWithIcon("Restore the built-in criteria", theme.HistoryIcon(), func() {
 		d := hazards.DefaultCriteria()
-		for _, cf := range criterionFields {
-			p.criteria[cf.key].SetText(entryText(*criterionGetter(cf.key)(&d)))
+		for _, cp := range criterionPrefs {
+			p.criteria[cp.key].SetText(entryText(*cp.get(&d)))
 		}
 	})
 	p.problem = widget.NewLabel("")
@@ -104,23 +107,23 @@ func (p *preferencesPanel) read() (settings, error) {
 	if p.paper.Selected == paperLetterText {
 		st.Paper = report.PaperLetter
 	}
-	st.Look = lookLight
+	st.Look = look.Light
 	if p.look.Selected == lookDarkText {
-		st.Look = lookDark
+		st.Look = look.Dark
 	}
 	st.Reviewer = p.reviewer.Text
 	c := st.Criteria
-	for _, cf := range criterionFields {
-		x, ok := parseNumber(p.criteria[cf.key].Text)
+	for _, cp := range criterionPrefs {
+		x, ok := parse.Number(p.criteria[cp.key].Text)
 		if !ok {
-			return st, fmt.Errorf("%s: %q is not a number", cf.label, p.criteria[cf.key].Text)
+			return st, fmt.Errorf("%s: %q is not a number", labelOf(criterionPath(cp.key)), p.criteria[cp.key].Text)
 		}
-		*criterionGetter(cf.key)(&c) = x
+		*cp.get(&c) = x
 	}
 	probe := hazards.Design{Criteria: c}
 	if err := criteriaError(&probe); err != nil {
 		pr := problemOf(err, unitsSI, func(string) (quantity, bool) { return qNumber, false })
-		return st, fmt.Errorf("%s: %s", p.s.form.labelOf(pr.Path), pr.Text)
+		return st, fmt.Errorf("%s: %s", labelOf(pr.Path), pr.Text)
 	}
 	st.Criteria = c
 	return st, nil
@@ -154,5 +157,5 @@ func (s *session) showPreferences() {
 
 // applyLook sets the window's look from the settings.
 func (s *session) applyLook() {
-	s.app.Settings().SetTheme(newLook(s.settings.Look))
+	s.app.Settings().SetTheme(look.New(s.settings.Look))
 }

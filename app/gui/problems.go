@@ -84,8 +84,8 @@ func siQuantity(unit string, field quantity) quantity {
 // fieldLabels names the design's top-level fields the engine mentions in
 // its messages.
 var fieldLabels = map[string]string{
-	"hottest_k":             "the hottest temperature",
-	"coldest_k":             "the coldest temperature",
-	"sealing_temperature_k": "the sealing temperature",
-	"fill_mass_kg":          "the fill",
+	hazards.FieldHottest:            "the hottest temperature",
+	hazards.FieldColdest:            "the coldest temperature",
+	hazards.FieldSealingTemperature: "the sealing temperature",
+	hazards.FieldFillMass:           "the fill",
 }

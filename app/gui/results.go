@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report/chartmodel"
 )
@@ -38,6 +39,10 @@ type resultsPanel struct {
 	// again when the number of findings changes.
 	area *fyne.Container
 
+	// showField, set by the window, brings the design form back and puts
+	// the cursor in the field the problem names.
+	showField func()
+
 	object fyne.CanvasObject
 }
 
@@ -45,14 +50,16 @@ type resultsPanel struct {
 func newResultsPanel(s *session) *resultsPanel {
 	r := &resultsPanel{s: s}
 	s.results = r
+	s.changes.subscribe(r.update)
 	r.verdict = newVerdictBanner()
 	r.staleText = widget.NewLabel("")
 	r.staleText.Wrapping = fyne.TextWrapWord
 	r.staleText.TextStyle = fyne.TextStyle{Bold: true}
 	staleBg := canvas.NewRectangle(tint(statusColour(hazards.StatusCaution), 70))
 	show := widget.NewButton("Show the field", func() {
-		s.shell.hideWorking()
-		s.form.reveal(s.problem)
+		if r.showField != nil {
+			r.showField()
+		}
 	})
 	r.stale = container.NewStack(staleBg, container.NewBorder(nil, nil,
 		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText))
@@ -76,20 +83,19 @@ func newResultsPanel(s *session) *resultsPanel {
 	}
 	// Every finding is shown without scrolling; the charts take what
 	// height is left.
-	findings := container.NewThemeOverride(r.list.object, denseTheme{})
+	findings := container.NewThemeOverride(r.list.object, look.Dense{})
 	split := container.New(findingsFirst{want: r.list.wantedHeight}, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
 	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)
 	return r
 }
 
-// show redraws everything from the session's last outcome and problem,
-// and the panels that follow them: the working and the tolerance study,
-// which is out of date once the design differs from the one it ran on.
-func (r *resultsPanel) show() {
-	r.draw()
-	r.s.working.refresh()
-	r.s.tol.refresh()
+// update redraws the panel when the results or the units changed, or a
+// document was opened.
+func (r *resultsPanel) update(c change) {
+	if c.cause.reload() || c.cause == causeResults {
+		r.draw()
+	}
 }
 
 // draw redraws the results panel itself.
@@ -100,7 +106,7 @@ func (r *resultsPanel) draw() {
 	if s.problem != nil {
 		where := ""
 		if s.problem.Path != "" {
-			where = s.form.labelOf(s.problem.Path) + ": "
+			where = labelOf(s.problem.Path) + ": "
 		}
 		if o.assessment == nil {
 			r.staleText.SetText("No results yet. Fix the marked input — " + where + s.problem.Text)

@@ -31,6 +31,10 @@ type revisionsPanel struct {
 	open   *widget.Button
 	detail *widget.Label
 	object fyne.CanvasObject
+
+	// compareTwo shows the comparison of two revisions by label ("" for
+	// the working copy); the window sets it to its compare screen.
+	compareTwo func(earlier, later string)
 }
 
 // Columns of the revision list: label, date, author, verdict, change note.
@@ -43,6 +47,7 @@ const workingCopyLabel = "Working copy"
 func newRevisionsPanel(s *session) *revisionsPanel {
 	r := &revisionsPanel{s: s, verdicts: map[string]hazards.Status{}, selected: -1}
 	s.revs = r
+	s.changes.subscribe(r.update)
 	r.list = widget.NewList(
 		func() int { return len(r.rows) },
 		func() fyne.CanvasObject {
@@ -91,7 +96,7 @@ func newRevisionsPanel(s *session) *revisionsPanel {
 		}
 	})
 	r.open.Disable()
-	keep := widget.NewButtonWithIcon("Keep the working copy as a new revision…", theme.DocumentSaveIcon(), func() { r.askNewRevision(nil) })
+	keep := widget.NewButtonWithIcon("Keep the working copy as a new revision…", theme.DocumentSaveIcon(), func() { s.askNewRevision(nil) })
 	cmp := widget.NewButtonWithIcon("Compare with the one before", theme.ContentCopyIcon(), func() { r.compareSelected() })
 	r.detail = widget.NewLabel("Select a revision to see its change note.")
 	r.detail.Wrapping = fyne.TextWrapWord
@@ -121,6 +126,19 @@ func (r *revisionsPanel) describeRow(id int) (label, date, author, note string, 
 
 // oneLine joins the lines of a note.
 func oneLine(s string) string { return strings.Join(strings.Fields(s), " ") }
+
+// update follows the revisions of the document, and the working copy's
+// verdict after each good assessment.
+func (r *revisionsPanel) update(c change) {
+	switch {
+	case c.cause == causeOpened || c.cause == causeRevision || c.cause == causeKept:
+		r.refresh()
+	case c.cause == causeResults:
+		if r.s.problem == nil && r.s.last.assessment != nil {
+			r.workingVerdict(r.s.last.assessment.Verdict)
+		}
+	}
+}
 
 // refresh rebuilds the list from the document and assesses any revision
 // whose verdict is not known yet.
@@ -214,8 +232,9 @@ func (r *revisionsPanel) compareSelected() {
 			}
 		}
 	}
-	r.s.cmp.pickTwo(earlier, later)
-	r.s.shell.showCompare()
+	if r.compareTwo != nil {
+		r.compareTwo(earlier, later)
+	}
 }
 
 // describe shows the selected revision's details.
@@ -244,12 +263,7 @@ func (r *revisionsPanel) openRevision(label string) {
 		s.showError(err)
 		return
 	}
-	load := func() {
-		s.doc.setWork(rev)
-		s.refreshAll()
-		s.reassess(true)
-		s.shell.showReview()
-	}
+	load := func() { s.doc.openRevision(rev) }
 	if !s.doc.workChanged() {
 		load()
 		return
@@ -263,10 +277,13 @@ func (r *revisionsPanel) openRevision(label string) {
 		})
 }
 
+// askNewRevision is the session's command of the same name, for callers
+// that hold the panel.
+func (r *revisionsPanel) askNewRevision(then func()) { r.s.askNewRevision(then) }
+
 // askNewRevision asks for a label and change note and keeps the working
 // copy as a new revision; then runs after it is kept.
-func (r *revisionsPanel) askNewRevision(then func()) {
-	s := r.s
+func (s *session) askNewRevision(then func()) {
 	if s.stale() {
 		s.showInfo("Fix the inputs first",
 			"The form holds an input that is not acceptable. Fix the marked field before keeping a revision.")
@@ -301,7 +318,7 @@ func (r *revisionsPanel) askNewRevision(then func()) {
 		}
 		rev := s.doc.newRevision(strings.TrimSpace(label.Text), strings.TrimSpace(author.Text), strings.TrimSpace(note.Text), s.opts.now())
 		if err := s.keepRevision(rev); err != nil {
-			problem.SetText(problemOf(err, s.units(), s.form.quantityOf).Text)
+			problem.SetText(problemOf(err, s.units(), quantityOf).Text)
 			return
 		}
 		dlg.Hide()
@@ -329,14 +346,5 @@ func (r *revisionsPanel) askNewRevision(then func()) {
 	s.win.Canvas().Focus(note)
 }
 
-// keepRevision adds a revision to the document and refreshes the screens.
-func (s *session) keepRevision(rev designfile.Revision) error {
-	if err := s.doc.addRevision(rev); err != nil {
-		return err
-	}
-	s.form.updateHeader()
-	s.revs.refresh()
-	s.cmp.refresh()
-	s.updateTitle()
-	return nil
-}
+// keepRevision adds a revision to the document, which tells the panels.
+func (s *session) keepRevision(rev designfile.Revision) error { return s.doc.addRevision(rev) }

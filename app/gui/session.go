@@ -52,12 +52,17 @@ type session struct {
 	// last is the newest good outcome; its assessment is nil before the
 	// first one arrives.
 	last outcome
-	// problem is the input the engine refused, nil when the inputs are
-	// good; parseProblems counts fields whose text is not a number.
+	// problem is the input refused, by the engine or because an entry
+	// holds no number; nil when the inputs are good.
 	problem *problem
-	// loading is true while the widgets are filled from the document, so
-	// that their change callbacks do not count as edits.
-	loading bool
+	// compared is the comparison the compare screen shows, nil while it
+	// shows none that can be exported.
+	compared *comparedPair
+
+	// changes tells the panels of every change of the document, its
+	// results and the units shown; the panels subscribe as they are
+	// built, the session itself last.
+	changes *feed
 
 	form    *designForm
 	results *resultsPanel
@@ -91,7 +96,7 @@ func newSession(a fyne.App, w fyne.Window, o options) (*session, error) {
 	if err != nil {
 		return nil, fmt.Errorf("the fluid library does not load: %w", err)
 	}
-	s := &session{app: a, win: w, opts: o, builtin: lib, lib: lib}
+	s := &session{app: a, win: w, opts: o, builtin: lib, lib: lib, changes: &feed{}}
 	s.settings = loadSettings(a.Preferences())
 	s.assess = &assessor{delay: o.delay, post: o.post}
 	s.loadUserFluidsFromPrefs()
@@ -101,46 +106,49 @@ func newSession(a fyne.App, w fyne.Window, o options) (*session, error) {
 // units returns the unit system in use.
 func (s *session) units() unitSystem { return s.settings.Units }
 
-// open makes doc the document of the window and shows it everywhere.
+// open makes doc the document of the window; its opening is published
+// to every panel.
 func (s *session) open(doc *document) {
 	s.assess.cancel()
+	if s.doc != nil {
+		s.doc.feed = nil
+	}
 	s.doc = doc
 	s.last = outcome{}
 	s.problem = nil
-	s.refreshAll()
-	s.reassess(true)
+	doc.openIn(s.changes)
 }
 
-// refreshAll fills every panel from the document.
-func (s *session) refreshAll() {
-	s.loading = true
-	s.form.load()
-	s.loading = false
-	s.results.show()
-	s.revs.refresh()
-	s.cmp.refresh()
-	s.updateTitle()
-}
-
-// edited is called after any change to the working copy or the product.
-func (s *session) edited() {
-	if s.loading {
-		return
+// follow is the session's own part in a change, after every panel has
+// shown it: the title, and an assessment of the working copy when its
+// inputs changed.
+func (s *session) follow(c change) {
+	switch {
+	case c.cause == causeOpened || c.cause == causeRevision:
+		s.updateTitle()
+		s.reassess(true)
+	case c.cause.edit():
+		s.updateTitle()
+		s.reassess(false)
+	case c.cause == causeKept || c.cause == causeSaved:
+		s.updateTitle()
+	case c.cause == causeUnits:
+		if s.problem != nil {
+			s.reassess(true)
+		}
+	case c.cause == causeLibrary:
+		s.reassess(true)
 	}
-	s.updateTitle()
-	s.form.updateHeader()
-	s.reassess(false)
 }
 
-// reassess schedules an assessment of the working copy, unless a field
-// holds text that is not a number, in which case the results are marked
-// out of date until it is fixed.
+// reassess schedules an assessment of the working copy, unless an entry
+// of the form holds no number, in which case the results are marked out
+// of date until it is fixed.
 func (s *session) reassess(now bool) {
-	if f := s.form.firstParseProblem(); f != nil {
+	if ff, e, ok := s.doc.firstUnread(); ok {
 		s.assess.cancel()
-		s.problem = &problem{Path: f.path, Text: f.parseProblem}
-		s.form.showProblems(s.problem)
-		s.results.show()
+		s.problem = &problem{Path: ff.path, Text: e.message(ff, &s.doc.Work, s.units())}
+		s.changes.publish(change{cause: causeResults})
 		return
 	}
 	delay := s.assess.delay
@@ -154,39 +162,32 @@ func (s *session) reassess(now bool) {
 // applyOutcome shows a finished assessment; on the UI goroutine.
 func (s *session) applyOutcome(o outcome) {
 	if o.err != nil {
-		p := problemOf(o.err, s.units(), s.form.quantityOf)
+		p := problemOf(o.err, s.units(), quantityOf)
 		s.problem = &p
 	} else {
 		s.problem = nil
 		s.last = o
 	}
-	s.form.showProblems(s.problem)
-	s.results.show()
-	if o.err == nil {
-		s.revs.workingVerdict(o.assessment.Verdict)
-	}
+	s.changes.publish(change{cause: causeResults})
 }
 
 // stale reports whether the results on screen are older than the inputs.
 func (s *session) stale() bool { return s.problem != nil }
 
-// setUnits switches the unit system everywhere.
+// setUnits switches the unit system everywhere. The entries show the
+// working copy afresh in the new units: text typed that was not a
+// number is forgotten.
 func (s *session) setUnits(u unitSystem) {
 	if s.settings.Units == u {
 		return
 	}
 	s.settings.Units = u
 	s.settings.save(s.app.Preferences())
-	s.loading = true
-	s.form.load()
-	s.loading = false
-	if s.problem != nil {
-		s.reassess(true)
+	if s.doc == nil {
+		return
 	}
-	s.form.showProblems(s.problem)
-	s.results.show()
-	s.cmp.refresh()
-	s.shell.syncUnits()
+	s.doc.forgetTyped(nil)
+	s.changes.publish(change{cause: causeUnits})
 }
 
 // updateTitle names the file, the revision and unsaved changes in the

@@ -3,6 +3,7 @@ package gui
 import (
 	"fyne.io/fyne/v2"
 
+	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -12,7 +13,7 @@ type settings struct {
 	Units    unitSystem
 	Paper    string
 	Reviewer string
-	// Look is the window's look, lookLight or lookDark.
+	// Look is the window's look, look.Light or look.Dark.
 	Look string
 	// Criteria are the pass marks a new design starts with.
 	Criteria hazards.Criteria
@@ -26,12 +27,12 @@ type criterionPref struct {
 
 // criterionPrefs lists the numeric criteria kept in preferences.
 var criterionPrefs = []criterionPref{
-	{"min_burst_safety_factor", func(c *hazards.Criteria) *float64 { return &c.MinBurstSafetyFactor }},
-	{"min_implosion_safety_factor", func(c *hazards.Criteria) *float64 { return &c.MinImplosionSafetyFactor }},
-	{"max_failure_probability", func(c *hazards.Criteria) *float64 { return &c.MaxFailureProbability }},
-	{"min_ullage_percent", func(c *hazards.Criteria) *float64 { return &c.MinUllagePercent }},
-	{"max_fraction_of_limit", func(c *hazards.Criteria) *float64 { return &c.MaxFractionOfLimit }},
-	{"max_percent_lfl", func(c *hazards.Criteria) *float64 { return &c.MaxPercentLFL }},
+	{hazards.CriterionMinBurstSafetyFactor, func(c *hazards.Criteria) *float64 { return &c.MinBurstSafetyFactor }},
+	{hazards.CriterionMinImplosionSafetyFactor, func(c *hazards.Criteria) *float64 { return &c.MinImplosionSafetyFactor }},
+	{hazards.CriterionMaxFailureProbability, func(c *hazards.Criteria) *float64 { return &c.MaxFailureProbability }},
+	{hazards.CriterionMinUllagePercent, func(c *hazards.Criteria) *float64 { return &c.MinUllagePercent }},
+	{hazards.CriterionMaxFractionOfLimit, func(c *hazards.Criteria) *float64 { return &c.MaxFractionOfLimit }},
+	{hazards.CriterionMaxPercentLFL, func(c *hazards.Criteria) *float64 { return &c.MaxPercentLFL }},
 }
 
 // loadSettings reads the preferences, falling back to the defaults for
@@ -41,11 +42,11 @@ func loadSettings(p fyne.Preferences) settings {
 		Units:    parseUnitSystem(p.StringWithFallback(prefUnits, string(unitsSI))),
 		Paper:    p.StringWithFallback(prefPaper, report.PaperA4),
 		Reviewer: p.String(prefReviewer),
-		Look:     p.StringWithFallback(prefLook, lookLight),
+		Look:     p.StringWithFallback(prefLook, look.Light),
 		Criteria: hazards.DefaultCriteria(),
 	}
-	if s.Look != lookDark {
-		s.Look = lookLight
+	if s.Look != look.Dark {
+		s.Look = look.Light
 	}
 	if s.Paper != report.PaperA4 && s.Paper != report.PaperLetter {
 		s.Paper = report.PaperA4

@@ -12,8 +12,10 @@ import (
 	"ullage/hazards"
 )
 
-// shell is the window's frame: menus, tool bar, the three screens and
-// the caution footer.
+// shell is the window's frame: menus, tool bar, the screens and the
+// caution footer. It builds the panels and wires the few requests one
+// panel makes of another (show this working, compare these two, show
+// that field); everything else they learn from the document.
 type shell struct {
 	s       *session
 	tabs    *container.AppTabs
@@ -22,6 +24,7 @@ type shell struct {
 	compare *container.TabItem
 	study   *container.TabItem
 	form    fyne.CanvasObject
+	working *workingPanel
 	units   *widget.RadioGroup
 	object  fyne.CanvasObject
 }
@@ -56,6 +59,19 @@ func buildWindow(s *session) *shell {
 	revs := newRevisionsPanel(s)
 	cmp := newComparePanel(s)
 	study := newTolerancePanel(s)
+	sh.working = working
+	working.present = sh.showWorking
+	working.back = sh.hideWorking
+	working.selectFinding = results.list.selectCriterion
+	working.markKey = results.keys.mark
+	results.showField = func() {
+		sh.hideWorking()
+		form.reveal(s.problem)
+	}
+	revs.compareTwo = func(earlier, later string) {
+		cmp.pickTwo(earlier, later)
+		sh.showCompare()
+	}
 	results.list.onPick = func(f hazards.Finding) { working.show(workSubject{criterion: f.Criterion}) }
 	// Selecting a finding keeps the design form in place; its working
 	// opens with "Show the working", and follows the selection once open.
@@ -76,9 +92,6 @@ func buildWindow(s *session) *shell {
 	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare, sh.study)
 
 	sh.units = widget.NewRadioGroup([]string{unitsBarSI, unitsBarUS}, func(opt string) {
-		if s.loading {
-			return
-		}
 		if opt == unitsBarUS {
 			s.setUnits(unitsUS)
 		} else if opt == unitsBarSI {
@@ -91,7 +104,7 @@ func buildWindow(s *session) *shell {
 	bar := container.NewHBox(
 		widget.NewButtonWithIcon("Open…", theme.FolderOpenIcon(), s.openDialog),
 		widget.NewButtonWithIcon("Save", theme.DocumentSaveIcon(), func() { s.save(nil) }),
-		widget.NewButtonWithIcon("Keep as revision…", theme.ContentAddIcon(), func() { s.revs.askNewRevision(nil) }),
+		widget.NewButtonWithIcon("Keep as revision…", theme.ContentAddIcon(), func() { s.askNewRevision(nil) }),
 		widget.NewButtonWithIcon("Export assessment PDF…", theme.DocumentPrintIcon(), s.exportAssessmentDialog),
 		widget.NewSeparator(),
 		widget.NewLabel("Units:"), sh.units,
@@ -99,11 +112,14 @@ func buildWindow(s *session) *shell {
 	footer := newCautionFooter()
 	sh.object = container.NewBorder(container.NewVBox(bar, widget.NewSeparator()), footer, nil, nil, sh.tabs)
 	sh.rebuildMenu()
+	s.changes.subscribe(sh.update)
+	// The session follows each change last, once every panel shows it.
+	s.changes.subscribe(s.follow)
 	for _, sc := range []struct {
 		sc desktop.CustomShortcut
 		do func()
 	}{
-		{*shortcutNew, s.newDesign},
+		{*shortcutNew, sh.newDesign},
 		{*shortcutQuit, s.requestClose},
 		{*shortcutOpen, s.openDialog},
 		{*shortcutSave, func() { s.save(nil) }},
@@ -132,10 +148,21 @@ func (sh *shell) syncUnits() {
 		want = unitsBarUS
 	}
 	if sh.units.Selected != want {
-		was := sh.s.loading
-		sh.s.loading = true
-		sh.units.SetSelected(want)
-		sh.s.loading = was
+		showChoice(sh.units, want)
+	}
+}
+
+// update follows the units shown and the recent files (which change
+// when a file is opened or saved), and brings the design review to the
+// front when a revision is opened in the form.
+func (sh *shell) update(c change) {
+	switch c.cause {
+	case causeUnits:
+		sh.syncUnits()
+	case causeOpened, causeSaved:
+		sh.rebuildMenu()
+	case causeRevision:
+		sh.showReview()
 	}
 }
 
@@ -169,7 +196,7 @@ func (sh *shell) rebuildMenu() {
 			}
 		})
 	})
-	newDesign := item("New design", shortcutNew, s.newDesign)
+	newDesign := item("New design", shortcutNew, sh.newDesign)
 	quit := item("Quit", shortcutQuit, s.requestClose)
 	quit.IsQuit = true
 	file := fyne.NewMenu("File",
@@ -189,7 +216,7 @@ func (sh *shell) rebuildMenu() {
 		quit,
 	)
 	revision := fyne.NewMenu("Revision",
-		fyne.NewMenuItem("Keep the working copy as a new revision…", func() { s.revs.askNewRevision(nil) }),
+		fyne.NewMenuItem("Keep the working copy as a new revision…", func() { s.askNewRevision(nil) }),
 		fyne.NewMenuItem("List revisions", sh.showRevisions),
 		fyne.NewMenuItem("Compare revisions", sh.showCompare),
 	)
@@ -204,7 +231,7 @@ func (sh *shell) showStudy()     { sh.tabs.Select(sh.study) }
 
 // showWorking puts the working panel in the design form's place.
 func (sh *shell) showWorking() {
-	wp := sh.s.working
+	wp := sh.working
 	wp.open = true
 	sh.form.Hide()
 	wp.object.Show()
@@ -213,7 +240,7 @@ func (sh *shell) showWorking() {
 
 // hideWorking brings the design form back.
 func (sh *shell) hideWorking() {
-	wp := sh.s.working
+	wp := sh.working
 	if !wp.open {
 		return
 	}
@@ -223,13 +250,14 @@ func (sh *shell) hideWorking() {
 	wp.refresh()
 }
 
-// newDesign starts a new, blank design, asking first when work would be
-// lost.
-func (s *session) newDesign() {
+// newDesign starts a new, blank design on the design review screen,
+// asking first when work would be lost.
+func (sh *shell) newDesign() {
+	s := sh.s
 	s.confirmLeave("start a new design", func() {
 		if doc, err := newBlankDocument(s.settings.Criteria); err == nil {
 			s.open(doc)
-			s.shell.showReview()
+			sh.showReview()
 		}
 	})
 }

@@ -35,23 +35,6 @@ func TestProblemsShowBoundsInScreenUnits(t *testing.T) {
 	}
 }
 
-func TestParseNumber(t *testing.T) {
-	tests := []struct {
-		in   string
-		want float64
-		ok   bool
-	}{
-		{"21", 21, true}, {" 21.5 ", 21.5, true}, {"21,5", 21.5, true}, {"1e-4", 1e-4, true},
-		{"", 0, false}, {"7O", 0, false}, {"1,000.5", 0, false}, {"NaN", 0, false}, {"Inf", 0, false},
-	}
-	for _, tc := range tests {
-		got, ok := parseNumber(tc.in)
-		if ok != tc.ok || (ok && got != tc.want) {
-			t.Errorf("parseNumber(%q) = %g, %v; want %g, %v", tc.in, got, ok, tc.want, tc.ok)
-		}
-	}
-}
-
 func TestUnitConversionsRoundTrip(t *testing.T) {
 	for _, u := range []unitSystem{unitsSI, unitsUS} {
 		for q := qNumber; q <= qProbability; q++ {

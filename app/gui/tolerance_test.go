@@ -186,20 +186,3 @@ func TestGroupDigits(t *testing.T) {
 		}
 	}
 }
-
-func TestParseCount(t *testing.T) {
-	tests := []struct {
-		in   string
-		want uint64
-		ok   bool
-	}{
-		{"100000", 100000, true}, {"100 000", 100000, true}, {"100_000", 100000, true}, {" 7 ", 7, true},
-		{"", 0, false}, {"1e5", 0, false}, {"-3", 0, false}, {"1,5", 0, false}, {"2.5", 0, false},
-	}
-	for _, tc := range tests {
-		got, ok := parseCount(tc.in)
-		if ok != tc.ok || got != tc.want {
-			t.Errorf("parseCount(%q) = %d, %v; want %d, %v", tc.in, got, ok, tc.want, tc.ok)
-		}
-	}
-}

@@ -13,9 +13,11 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/parse"
 	"ullage/hazards"
 	"ullage/hazards/tolerance"
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // Defaults of the study's settings.
@@ -23,6 +25,10 @@ const (
 	defaultStudyUnits = 100_000
 	defaultStudySeed  = 1
 )
+
+// maxStudySpreadK is the largest ± spread of the hottest temperature a
+// study takes, in kelvin.
+const maxStudySpreadK = 100
 
 // tolerancePanel is the tolerance study screen: the study's settings and
 // Run and Cancel on the left, the fractions of units that fail with their
@@ -68,6 +74,7 @@ type tolerancePanel struct {
 func newTolerancePanel(s *session) *tolerancePanel {
 	tp := &tolerancePanel{s: s, shownUnits: s.units()}
 	s.tol = tp
+	s.changes.subscribe(tp.update)
 	tp.units = widget.NewEntry()
 	tp.units.SetText(fmt.Sprint(defaultStudyUnits))
 	tp.units.Validator = func(t string) error { _, err := readStudyUnits(t); return err }
@@ -168,7 +175,7 @@ func caption(s string) *widget.Label {
 
 // readStudyUnits reads the number of units.
 func readStudyUnits(t string) (int, error) {
-	n, ok := parseCount(t)
+	n, ok := parse.Count(t)
 	if !ok || n < 1 || n > tolerance.MaxSamples {
 		return 0, fmt.Errorf("units to draw %q: give a whole number from 1 to %s", strings.TrimSpace(t), groupDigits(tolerance.MaxSamples))
 	}
@@ -177,7 +184,7 @@ func readStudyUnits(t string) (int, error) {
 
 // readStudySeed reads the seed.
 func readStudySeed(t string) (uint64, error) {
-	n, ok := parseCount(t)
+	n, ok := parse.Count(t)
 	if !ok {
 		return 0, fmt.Errorf("seed %q: give a whole number, 0 or more", strings.TrimSpace(t))
 	}
@@ -187,10 +194,10 @@ func readStudySeed(t string) (uint64, error) {
 // readStudySpread reads the hottest temperature's spread, typed in K or
 // °F, and returns it in kelvin.
 func readStudySpread(t string, u unitSystem) (float64, error) {
-	x, ok := parseNumber(t)
-	k := x * spreadScale(u)
-	if !ok || k < 0 || k > 100 {
-		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s %s", strings.TrimSpace(t), sigFigures(100/spreadScale(u), 3), spreadUnit(u))
+	x, ok := parse.Number(t)
+	k := u.toSI(qTempDiff, x)
+	if !ok || k < 0 || k > maxStudySpreadK {
+		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s", strings.TrimSpace(t), spreadText(maxStudySpreadK, u))
 	}
 	return k, nil
 }
@@ -220,7 +227,7 @@ func (tp *tolerancePanel) settings() (tolerance.Settings, error) {
 func (tp *tolerancePanel) run() {
 	s := tp.s
 	set, err := tp.settings()
-	if err == nil && s.form.firstParseProblem() != nil {
+	if _, _, unread := s.doc.firstUnread(); err == nil && unread {
 		err = errors.New("a field on the design form is not a number: fix the marked input first")
 	}
 	if err != nil {
@@ -229,7 +236,7 @@ func (tp *tolerancePanel) run() {
 		return
 	}
 	tp.problem.Hide()
-	s.startStudy(set, func() {
+	tp.startStudy(set, func() {
 		tp.refresh()
 		if f := tp.afterRun; f != nil {
 			tp.afterRun = nil
@@ -253,13 +260,22 @@ func (tp *tolerancePanel) showVaries() {
 	tp.varies.SetText("• " + strings.Join(variedInputs(&tp.s.doc.Work, k, tp.s.units()), "\n• "))
 }
 
+// update redraws the panel when the results or the units changed, or a
+// document was opened: a study is out of date once the design differs
+// from the one it ran on.
+func (tp *tolerancePanel) update(c change) {
+	if c.cause.reload() || c.cause == causeResults {
+		tp.refresh()
+	}
+}
+
 // refresh redraws the panel from the study's state.
 func (tp *tolerancePanel) refresh() {
 	s, st := tp.s, &tp.st
 	u := s.units()
 	if u != tp.shownUnits {
 		tp.shownUnits = u
-		tp.spread.SetText(entryText(tp.spreadK / spreadScale(u)))
+		tp.spread.SetText(entryText(u.fromSI(qTempDiff, tp.spreadK)))
 		tp.spreadUnit.SetText(spreadUnit(u))
 	}
 	tp.showVaries()
@@ -290,7 +306,7 @@ func (tp *tolerancePanel) refresh() {
 		return
 	}
 	tp.empty.Hide()
-	current := s.studyCurrent()
+	current := tp.current()
 	if current {
 		tp.staleBox.Hide()
 	} else {
@@ -300,8 +316,8 @@ func (tp *tolerancePanel) refresh() {
 	if !current {
 		in = "It is out of date and stays out of the exported record."
 	}
-	tp.about.SetText(fmt.Sprintf("%s units of %s, seed %d, hottest temperature ± %s %s (%s), fill, volume and walls %s. %s",
-		groupDigits(r.Samples), st.of, r.Seed, sigFigures(r.HottestSpreadK/spreadScale(u), 3), spreadUnit(u), r.HottestDistribution, r.DimensionDistribution, in))
+	tp.about.SetText(fmt.Sprintf("%s units of %s, seed %d, hottest temperature ± %s (%s), fill, volume and walls %s. %s",
+		groupDigits(r.Samples), st.of, r.Seed, spreadText(r.HottestSpreadK, u), r.HottestDistribution, r.DimensionDistribution, in))
 	tp.showFractions(r)
 	tp.showSpread(r, u)
 	hist := chartmodel.Histogram("", r.Histogram)
@@ -346,12 +362,7 @@ func (tp *tolerancePanel) showSpread(r *tolerance.Result, u unitSystem) {
 		}
 	}
 	row("Pressure, "+u.unit(qPressure)+" abs.", r.PressurePa, func(x float64) string { return sigFigures(u.fromSI(qPressure, x), 4) })
-	row("Unit safety factor", r.SafetyFactor, func(x float64) string {
-		if x >= hazards.SafetyFactorCap {
-			return "over " + sigFigures(hazards.SafetyFactorCap, 4)
-		}
-		return sigFigures(x, 3)
-	})
+	row("Unit safety factor", r.SafetyFactor, display.SafetyFactor)
 	tp.spreadTab.Objects = []fyne.CanvasObject{container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[:6]...),
 		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[6:12]...),
 		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[12:]...)}

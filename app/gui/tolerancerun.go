@@ -69,8 +69,8 @@ func runStudy(ctx context.Context, d hazards.Design, lib *fluids.Library, set to
 // startStudy runs a study of the working copy off the UI goroutine;
 // done runs on the UI goroutine when it ends, unless a later run
 // replaced it. It counts as pending work meanwhile, like an assessment.
-func (s *session) startStudy(set tolerance.Settings, done func()) {
-	st := &s.tol.st
+func (tp *tolerancePanel) startStudy(set tolerance.Settings, done func()) {
+	s, st := tp.s, &tp.st
 	if st.cancel != nil {
 		st.cancel()
 	}
@@ -102,26 +102,31 @@ func (s *session) startStudy(set tolerance.Settings, done func()) {
 	}()
 }
 
-// stopStudy cancels the run in progress, if any.
-func (s *session) stopStudy() {
-	st := &s.tol.st
-	if st.cancel != nil {
-		st.cancel()
+// stop cancels the run in progress, if any.
+func (tp *tolerancePanel) stop() {
+	if tp.st.cancel != nil {
+		tp.st.cancel()
 	}
 }
 
-// studyCurrent reports whether the last study is of the working copy as
-// it is now, with the same fluid library.
-func (s *session) studyCurrent() bool {
-	st := &s.tol.st
+// current reports whether the last study is of the working copy as it
+// is now, with the same fluid library.
+func (tp *tolerancePanel) current() bool {
+	st, s := &tp.st, tp.s
 	return st.result != nil && s.doc != nil && st.lib == s.lib && st.design == designFingerprint(s.doc.Work)
 }
 
-// currentStudy returns the study to put in the assessment record: the
-// last one, when it is of the working copy as it is now; nil otherwise.
-func (s *session) currentStudy() *tolerance.Result {
-	if !s.studyCurrent() {
+// stopStudy cancels the tolerance study in progress, if any.
+func (s *session) stopStudy() { s.tol.stop() }
+
+// forRecord returns the study to put in the assessment record: the last
+// one, when it is of the working copy as it is now; nil otherwise.
+func (tp *tolerancePanel) forRecord() *tolerance.Result {
+	if !tp.current() {
 		return nil
 	}
-	return s.tol.st.result
+	return tp.st.result
 }
+
+// currentStudy returns the study the assessment record takes, if any.
+func (s *session) currentStudy() *tolerance.Result { return s.tol.forRecord() }

@@ -59,7 +59,7 @@ func studyInputValue(key string, v float64, u unitSystem) string {
 		return u.show(qTemperature, v, 4)
 	case key == tolerance.KeyGlassStrength:
 		return stressText(v, u)
-	case strings.HasSuffix(key, "wall_thickness_m"):
+	case hazards.IsPartField(key) && strings.HasSuffix(key, "."+hazards.PartWallThickness):
 		return u.show(qLength, v, 3)
 	}
 	return sigFigures(v, 4)
@@ -72,26 +72,17 @@ func studyInputSpread(in tolerance.Input, u unitSystem) string {
 	case in.Distribution == tolerance.Weibull:
 		return "Weibull modulus " + sigFigures(in.Shape, 3)
 	case in.Key == tolerance.KeyHottest:
-		return "± " + sigFigures(in.PlusMinus/spreadScale(u), 3) + " " + spreadUnit(u)
+		return "± " + spreadText(in.PlusMinus, u)
 	}
 	return "± " + studyInputValue(in.Key, in.PlusMinus, u)
 }
 
 // spreadUnit is the unit of a temperature difference: K or °F.
-func spreadUnit(u unitSystem) string {
-	if u == unitsUS {
-		return "°F"
-	}
-	return "K"
-}
+func spreadUnit(u unitSystem) string { return u.unit(qTempDiff) }
 
-// spreadScale is the size of one unit of temperature difference in K.
-func spreadScale(u unitSystem) float64 {
-	if u == unitsUS {
-		return 5.0 / 9.0
-	}
-	return 1
-}
+// spreadText writes a temperature difference in K or °F to three
+// significant figures, with its unit.
+func spreadText(k float64, u unitSystem) string { return u.show(qTempDiff, k, 3) }
 
 // distributionNames are the distributions as the panel names them.
 var distributionNames = map[string]string{
@@ -131,24 +122,7 @@ func variedInputs(d *hazards.Design, spreadK float64, u unitSystem) []string {
 		}
 	}
 	if spreadK > 0 {
-		out = append(out, "hottest temperature "+u.show(qTemperature, d.HottestK, 4)+" ± "+sigFigures(spreadK/spreadScale(u), 3)+" "+spreadUnit(u))
+		out = append(out, "hottest temperature "+u.show(qTemperature, d.HottestK, 4)+" ± "+spreadText(spreadK, u))
 	}
 	return append(out, "glass strength (Weibull, from the glass chosen)")
-}
-
-// parseCount reads a whole number typed by a person; blanks and
-// underscores between digit groups are ignored.
-func parseCount(s string) (uint64, bool) {
-	s = strings.Map(func(r rune) rune {
-		switch r {
-		case ' ', '_', '\u202f', '\u2009', '\u00a0':
-			return -1
-		}
-		return r
-	}, s)
-	if s == "" {
-		return 0, false
-	}
-	n, err := strconv.ParseUint(s, 10, 64)
-	return n, err == nil
 }

@@ -97,8 +97,8 @@ func (s *session) confirmUserFluids(path string, subs []*fluids.Substance) {
 	d.Show()
 }
 
-// addUserFluids puts fluids in the library, remembers their file and
-// refreshes the fluid selector.
+// addUserFluids puts fluids in the library and remembers their file; the
+// panels are told the library changed.
 func (s *session) addUserFluids(path string, subs []*fluids.Substance) {
 	ids := map[string]bool{}
 	for _, sub := range subs {
@@ -112,10 +112,7 @@ func (s *session) addUserFluids(path string, subs []*fluids.Substance) {
 		files := slices.DeleteFunc(p.StringList(prefUserFluids), func(x string) bool { return x == path })
 		p.SetStringList(prefUserFluids, append(files, path))
 	}
-	s.loading = true
-	s.form.fluid.load()
-	s.loading = false
-	s.reassess(true)
+	s.changes.publish(change{cause: causeLibrary})
 }
 
 // loadUserFluidsFromPrefs reloads the fluid files added earlier. A file

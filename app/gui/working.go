@@ -9,6 +9,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
 	"ullage/hazards"
 )
 
@@ -59,13 +60,26 @@ type workingPanel struct {
 	shownStale   bool
 	numbers      []int
 	heading      string
+
+	// The window sets these: present puts the panel in the design form's
+	// place and back brings the form again; selectFinding selects a
+	// finding in the results, markKey marks a row of the key numbers (""
+	// for none).
+	present, back func()
+	selectFinding func(criterion string)
+	markKey       func(label string)
 }
 
 // newWorkingPanel builds the panel, hidden.
 func newWorkingPanel(s *session) *workingPanel {
 	wp := &workingPanel{s: s}
 	s.working = wp
-	back := widget.NewButtonWithIcon("Back to the design form", theme.NavigateBackIcon(), func() { s.shell.hideWorking() })
+	s.changes.subscribe(wp.update)
+	back := widget.NewButtonWithIcon("Back to the design form", theme.NavigateBackIcon(), func() {
+		if wp.back != nil {
+			wp.back()
+		}
+	})
 	wp.copyBtn = widget.NewButtonWithIcon("Copy as text", theme.ContentCopyIcon(), wp.copyText)
 	wp.title = widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
 	wp.title.Wrapping = fyne.TextWrapWord
@@ -90,7 +104,7 @@ func newWorkingPanel(s *session) *workingPanel {
 	wp.mode.Required = true
 	wp.mode.SetSelected(workingBehind)
 	wp.steps = container.NewVBox()
-	wp.compact = container.NewThemeOverride(wp.steps, compactTheme{})
+	wp.compact = container.NewThemeOverride(wp.steps, look.Compact{})
 	wp.scroll = container.NewVScroll(container.NewPadded(wp.compact))
 	bar := container.NewBorder(nil, nil, back, wp.copyBtn)
 	head := container.NewVBox(bar, wp.title, wp.summary, wp.mode, wp.stale, widget.NewSeparator())
@@ -102,13 +116,15 @@ func newWorkingPanel(s *session) *workingPanel {
 // show opens the working of a subject.
 func (wp *workingPanel) show(sub workSubject) {
 	wp.subject = sub
-	if sub.criterion != "" {
-		wp.s.results.list.selectCriterion(sub.criterion)
+	if sub.criterion != "" && wp.selectFinding != nil {
+		wp.selectFinding(sub.criterion)
 	}
 	if wp.whole {
 		wp.mode.SetSelected(workingBehind)
 	}
-	wp.s.shell.showWorking()
+	if wp.present != nil {
+		wp.present()
+	}
 	wp.refresh()
 	wp.scroll.ScrollToTop()
 }
@@ -133,13 +149,24 @@ func (wp *workingPanel) resolve(a *hazards.Assessment) (heading string, numbers 
 	return "", nil, false
 }
 
+// update redraws the panel when the results or the units changed, or a
+// document was opened.
+func (wp *workingPanel) update(c change) {
+	if c.cause.reload() || c.cause == causeResults {
+		wp.refresh()
+	}
+}
+
 // refresh redraws the panel from the session's last results, when it is
 // open and something changed.
 func (wp *workingPanel) refresh() {
 	s := wp.s
-	wp.s.results.keys.mark("")
-	if wp.open && !wp.whole {
-		wp.s.results.keys.mark(wp.subject.keyLabel)
+	if wp.markKey != nil {
+		mark := ""
+		if wp.open && !wp.whole {
+			mark = wp.subject.keyLabel
+		}
+		wp.markKey(mark)
 	}
 	if !wp.open {
 		return

@@ -52,6 +52,12 @@ const (
 	Area                           // m² → cm² / in² (a glass surface)
 	Surface                        // m² → m² / ft² (a room surface)
 	Density                        // kg/m³ → kg/m³ / lb/ft³
+	Minutes                        // min
+	Hours                          // h
+	Years                          // years
+	AirChanges                     // air changes per hour: per h
+	Retardation                    // m → nm (optical retardation)
+	Probability                    // a probability, no unit
 )
 
 // Unit returns the unit label of q in the system, "" for plain numbers.
@@ -99,6 +105,16 @@ func labels(q Quantity) (si, us string) {
 		return "m²", "ft²"
 	case Density:
 		return "kg/m³", "lb/ft³"
+	case Minutes:
+		return "min", "min"
+	case Hours:
+		return "h", "h"
+	case Years:
+		return "years", "years"
+	case AirChanges:
+		return "per h", "per h"
+	case Retardation:
+		return "nm", "nm"
 	}
 	return "", ""
 }
@@ -170,6 +186,85 @@ func (s System) FromSI(q Quantity, x float64) float64 {
 		if us {
 			return x / (units.PoundKg / units.CubicFootM3)
 		}
+	case Retardation:
+		return x * 1e9
+	}
+	return x
+}
+
+// ToSI converts a value of q typed in the system's unit to the engine's
+// SI value: the inverse of FromSI. A metric unit smaller than the SI one
+// (g, mL, mm, cm², nm) divides by its power of ten, so that a value typed
+// as 1.4 mm is the SI value 0.0014 its digits name; a US customary value
+// is multiplied by its factor from fluids/units.
+func (s System) ToSI(q Quantity, x float64) float64 {
+	us := s == US
+	switch q {
+	case Temperature:
+		if us {
+			return units.FahrenheitToKelvin(x)
+		}
+		return units.CelsiusToKelvin(x)
+	case TempDifference:
+		if us {
+			return x * 5 / 9
+		}
+	case Pressure:
+		if us {
+			return x * units.PsiPa
+		}
+		return x * 1e3
+	case Stress:
+		if us {
+			return x * units.PsiPa
+		}
+		return x * 1e6
+	case Mass:
+		if us {
+			return x * units.OunceKg
+		}
+		return x / 1e3
+	case VesselVolume:
+		if us {
+			return x * units.CubicInchM3
+		}
+		return x / 1e6
+	case Length:
+		if us {
+			return x * units.InchM
+		}
+		return x / 1e3
+	case RoomVolume:
+		if us {
+			return x * units.CubicFootM3
+		}
+	case RoomLength:
+		if us {
+			return x * units.FootM
+		}
+	case Speed:
+		if us {
+			return x * units.FootPerMinuteMS
+		}
+	case Energy:
+		if us {
+			return x * footPoundJ
+		}
+	case Area:
+		if us {
+			return x * (units.InchM * units.InchM)
+		}
+		return x / 1e4
+	case Surface:
+		if us {
+			return x * (units.FootM * units.FootM)
+		}
+	case Density:
+		if us {
+			return x * (units.PoundKg / units.CubicFootM3)
+		}
+	case Retardation:
+		return x / 1e9
 	}
 	return x
 }

@@ -1,4 +1,4 @@
-package gui
+package fluidfind
 
 import (
 	"regexp"
@@ -14,18 +14,18 @@ import (
 // "iso-", "sec-", "tert-", "cis-", "trans-", "o-", "m-", "p-".
 var namePrefix = regexp.MustCompile(`^(?i)((\d+(,\d+)*|n|o|m|p|iso|sec|tert|cis|trans)-)+`)
 
-// sortKey is the part of a fluid's name it sorts by: lower case,
+// SortKey is the part of a fluid's name it sorts by: lower case,
 // without leading locants and prefixes ("n-Butane" sorts as "butane",
 // "1,2-Dichloroethane" as "dichloroethane").
-func sortKey(name string) string {
+func SortKey(name string) string {
 	return strings.ToLower(namePrefix.ReplaceAllString(strings.TrimSpace(name), ""))
 }
 
-// sortFluidOptions sorts selector texts by their names' sort keys, the
-// full text breaking ties.
-func sortFluidOptions(opts []string) {
+// Sort sorts names (or selector texts that begin with a name) by their
+// SortKey, the full text breaking ties.
+func Sort(opts []string) {
 	sort.SliceStable(opts, func(i, j int) bool {
-		a, b := sortKey(opts[i]), sortKey(opts[j])
+		a, b := SortKey(opts[i]), SortKey(opts[j])
 		if a != b {
 			return a < b
 		}
@@ -33,11 +33,11 @@ func sortFluidOptions(opts []string) {
 	})
 }
 
-// findFluid returns the fluid a reviewer's typing names: one the
+// Find returns the fluid a reviewer's typing names: one the
 // library knows by that ID, name, synonym or CAS number; otherwise the
 // first, in list order, whose name or a synonym starts with the text
 // (ignoring case, locants and prefixes). nil when none does.
-func findFluid(lib *fluids.Library, typed string) *fluids.Substance {
+func Find(lib *fluids.Library, typed string) *fluids.Substance {
 	typed = strings.TrimSpace(typed)
 	if typed == "" {
 		return nil
@@ -47,7 +47,7 @@ func findFluid(lib *fluids.Library, typed string) *fluids.Substance {
 	}
 	want := looseKey(typed)
 	starts := func(n string) bool {
-		return strings.HasPrefix(looseKey(n), want) || strings.HasPrefix(looseKey(sortKey(n)), want)
+		return strings.HasPrefix(looseKey(n), want) || strings.HasPrefix(looseKey(SortKey(n)), want)
 	}
 	// Names first, then synonyms: "eth" is ethanol before ethyl chloride.
 	for _, bySynonym := range []bool{false, true} {
@@ -60,7 +60,7 @@ func findFluid(lib *fluids.Library, typed string) *fluids.Substance {
 				names = f.Synonyms
 			}
 			if slices.ContainsFunc(names, starts) {
-				if k := sortKey(f.Name); best == nil || k < bestKey {
+				if k := SortKey(f.Name); best == nil || k < bestKey {
 					best, bestKey = sub, k
 				}
 			}

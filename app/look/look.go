@@ -1,4 +1,4 @@
-package gui
+package look
 
 import (
 	"image/color"
@@ -9,10 +9,10 @@ import (
 
 // Looks of the window, as kept in the preferences.
 const (
-	// lookLight is paper-white with dark ink, like the printed record.
-	lookLight = "light"
-	// lookDark is the same accent on a dark ground.
-	lookDark = "dark"
+	// Light is paper-white with dark ink, like the printed record.
+	Light = "light"
+	// Dark is the same accent on a dark ground.
+	Dark = "dark"
 )
 
 // Ullage's own colours: a deep blue-green accent and a warm paper
@@ -31,9 +31,9 @@ var (
 // desktop asks for.
 type look struct{ dark bool }
 
-// newLook returns the look named by a preference value; light for
-// anything but lookDark.
-func newLook(name string) fyne.Theme { return look{dark: name == lookDark} }
+// New returns the look named by a preference value; light for anything
+// but Dark.
+func New(name string) fyne.Theme { return look{dark: name == Dark} }
 
 // Color is Ullage's colour for n, or the toolkit's in the chosen variant.
 func (l look) Color(n fyne.ThemeColorName, _ fyne.ThemeVariant) color.Color {
