@@ -83,13 +83,10 @@ type Assessment struct {
 	// Flags gathers every correlation stretched anywhere in the review.
 	Flags fluids.Flags
 
-	// Trace is the calculation record: numbered steps in the order a hand
-	// check follows. Each finding lists the steps behind it.
-	Trace []Step
-
-	vessel     *sealedVessel
-	release    *releaseModel
-	traceIndex map[string]int
+	vessel  *sealedVessel
+	release *releaseModel
+	// rec is the calculation record, built on first use (Trace).
+	rec *record
 }
 
 // MaxSafe holds the limits found by root-finding. A limit that lies
@@ -207,7 +204,10 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	a.rupture(sub)
 	a.releaseModel(sub)
 	a.findings()
-	a.buildTrace(sub)
+	a.rec = &record{a: a}
+	for i := range a.Findings {
+		a.Findings[i].rec, a.Findings[i].index = a.rec, i
+	}
 	return a, nil
 }
 

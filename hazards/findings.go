@@ -128,9 +128,6 @@ type Finding struct {
 	// Facts are the values behind the finding (temperatures, pressures,
 	// the glass ...), typed, for the detail each output words.
 	Facts []Fact `json:"facts"`
-	// Steps are the numbers of the calculation-record steps behind this
-	// finding, its own comparison step first.
-	Steps []int `json:"steps"`
 	// Direction says which way the limit holds: the value must be at
 	// least the limit, or at most.
 	Direction Direction `json:"direction"`
@@ -147,17 +144,34 @@ type Finding struct {
 	// the governing benchmark protects ("General public, children
 	// included, 30 minutes").
 	Protects string `json:"protects,omitempty"`
+
+	// rec is the calculation record of the assessment the finding is of
+	// and index the finding's place in its Findings (see Steps).
+	rec   *record
+	index int
+}
+
+// Steps returns the numbers of the calculation-record steps behind the
+// finding, its own comparison step first (Assessment.Trace); nil for a
+// finding made outside an assessment. The first call on an assessment
+// builds its record.
+func (f Finding) Steps() []int {
+	if f.rec == nil {
+		return nil
+	}
+	return f.rec.built().findings[f.index]
 }
 
 // MarshalJSON writes a finding with null value and margin when they were
-// not computed (NotApplicable set).
+// not computed (NotApplicable set), and with the steps behind it.
 func (f Finding) MarshalJSON() ([]byte, error) {
 	type plain Finding
 	out := struct {
 		plain
+		Steps  []int    `json:"steps"`
 		Value  *float64 `json:"value"`
 		Margin *float64 `json:"margin"`
-	}{plain: plain(f)}
+	}{plain: plain(f), Steps: f.Steps()}
 	if f.NotApplicable == "" {
 		out.Value, out.Margin = &f.Value, &f.Margin
 	}

@@ -15,7 +15,7 @@ func (w *assessmentWriter) findings() {
 	for _, v := range display.Findings(w.a, w.u.system()) {
 		f := v.Finding
 		source := "Source of the limit: " + v.Source
-		if steps := stepList(f.Steps); steps != "" {
+		if steps := stepList(f.Steps()); steps != "" {
 			source += ".  " + steps + "."
 		}
 		d.findingBlock(f.Status, v.Title, v.Numbers(), v.Text(), source)

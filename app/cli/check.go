@@ -401,7 +401,7 @@ func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {
 		}
 		d := checkJSON(c)
 		if trace {
-			d.Trace = c.assessment.Trace
+			d.Trace = c.assessment.Trace()
 		}
 		return d
 	}
