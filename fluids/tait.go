@@ -43,7 +43,11 @@ func (t *tait) bParam(temp float64) float64 {
 // density returns the liquid density at (temp, p) from the saturated liquid
 // density rhoSat and saturation pressure ps at temp. p ≥ ps.
 func (t *tait) density(temp, p, rhoSat, ps float64) float64 {
-	b := t.bParam(temp)
+	return t.densityB(t.bParam(temp), p, rhoSat, ps)
+}
+
+// densityB is density with B(temp) given.
+func (t *tait) densityB(b, p, rhoSat, ps float64) float64 {
 	return rhoSat / (1 - t.c*math.Log((b+p)/(b+ps)))
 }
 

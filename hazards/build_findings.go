@@ -8,7 +8,7 @@ func (a *Assessment) findings() {
 	d := &a.Design
 	cr := d.Criteria
 	f := a.Fluid
-	var fs []Finding
+	fs := make([]Finding, 0, 24)
 
 	// Ullage and the liquid-full point.
 	u := atLeast(CriterionUllage, "Ullage at the hottest temperature", "%", a.Hot.UllagePercent, cr.MinUllagePercent, 1,
@@ -114,8 +114,7 @@ func (a *Assessment) findings() {
 	for _, x := range fs {
 		a.Verdict = Worse(a.Verdict, x.Status)
 	}
-	a.Cautions = append(append([]string(nil), StandardCautions...), fluidCautions(f, false)...)
-	a.CautionsUS = append(append([]string(nil), StandardCautions...), fluidCautions(f, true)...)
+	a.Cautions, a.CautionsUS = fluidCautions(f)
 }
 
 // worstCaseFinding judges the worst-case unit's ullage by the same rule as

@@ -18,29 +18,37 @@ var StandardCautions = []string{
 	"The release models assume the whole fill evaporates at once and spreads as the chosen room model describes; real rooms, spills onto fabric and heat sources can give higher local concentrations.",
 }
 
-// fluidCautions returns the warnings the fluid itself calls for, with
-// temperatures in °C, or in °F when us is true.
-func fluidCautions(f *fluids.Fluid, us bool) []string {
-	var out []string
+// fluidCautions returns the standard cautions followed by the warnings
+// the fluid itself calls for, with temperatures in °C (si) and in °F (us):
+// the two lists differ only in the flash point.
+func fluidCautions(f *fluids.Fluid) (si, us []string) {
+	n := len(StandardCautions) + 4 + len(f.Warnings)
+	si = append(make([]string, 0, n), StandardCautions...)
+	us = append(make([]string, 0, n), StandardCautions...)
+	both := func(msg string) {
+		si = append(si, msg)
+		us = append(us, msg)
+	}
 	if f.PotentialCarcinogen.Value {
-		out = append(out, fmt.Sprintf("%s is listed as a potential occupational carcinogen by %s (%s). Keep exposure as low as feasible.", f.Name, f.PotentialCarcinogen.Body, f.PotentialCarcinogen.Source))
+		both(f.Name + " is listed as a potential occupational carcinogen by " + f.PotentialCarcinogen.Body + " (" + f.PotentialCarcinogen.Source + "). Keep exposure as low as feasible.")
 	}
 	if f.Flammability.Flammable {
-		msg := fmt.Sprintf("%s is flammable", f.Name)
+		msgSI, msgUS := f.Name+" is flammable", f.Name+" is flammable"
 		if f.Flammability.LFLPercent != nil {
-			msg += fmt.Sprintf(" (LFL %.3g %% by volume", f.Flammability.LFLPercent.Value)
-			if fp := f.Flammability.FlashPointK; fp != nil && us {
-				msg += fmt.Sprintf(", flash point %.0f °F", units.KelvinToFahrenheit(fp.Value))
-			} else if fp != nil {
-				msg += fmt.Sprintf(", flash point %.0f °C", units.KelvinToCelsius(fp.Value))
+			lfl := fmt.Sprintf(" (LFL %.3g %% by volume", f.Flammability.LFLPercent.Value)
+			msgSI, msgUS = msgSI+lfl, msgUS+lfl
+			if fp := f.Flammability.FlashPointK; fp != nil {
+				msgSI += fmt.Sprintf(", flash point %.0f °C", units.KelvinToCelsius(fp.Value))
+				msgUS += fmt.Sprintf(", flash point %.0f °F", units.KelvinToFahrenheit(fp.Value))
 			}
-			msg += ")"
+			msgSI, msgUS = msgSI+")", msgUS+")"
 		}
-		out = append(out, msg+". Keep broken devices away from flames, sparks and hot surfaces.")
+		const keep = ". Keep broken devices away from flames, sparks and hot surfaces."
+		si, us = append(si, msgSI+keep), append(us, msgUS+keep)
 	}
 	for _, l := range f.ExposureLimits {
 		if l.Averaging == fluids.AveragingIDLH && l.PPM <= 500 {
-			out = append(out, fmt.Sprintf("%s is toxic at low concentration (IDLH %g ppm, %s).", f.Name, l.PPM, l.Body))
+			both(fmt.Sprintf("%s is toxic at low concentration (IDLH %g ppm, %s).", f.Name, l.PPM, l.Body))
 			break
 		}
 	}
@@ -52,11 +60,11 @@ func fluidCautions(f *fluids.Fluid, us bool) []string {
 			continue
 		}
 		if strings.TrimSpace(w) != "" {
-			out = append(out, w)
+			both(w)
 		}
 	}
 	if f.UserSupplied {
-		out = append(out, fmt.Sprintf("The data for %s were supplied by the user, not taken from the built-in library; check their sources.", f.Name))
+		both("The data for " + f.Name + " were supplied by the user, not taken from the built-in library; check their sources.")
 	}
-	return out
+	return si, us
 }

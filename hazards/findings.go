@@ -4,7 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"math"
-	"sort"
+	"slices"
 
 	"ullage/fluids"
 )
@@ -164,14 +164,29 @@ func (f Finding) Steps() []int {
 
 // MarshalJSON writes a finding with null value and margin when they were
 // not computed (NotApplicable set), and with the steps behind it.
+// The fields are listed here in Finding's order, with the steps where the
+// field of that name used to be; TestFindingJSONHasEveryField keeps the
+// list whole.
 func (f Finding) MarshalJSON() ([]byte, error) {
-	type plain Finding
 	out := struct {
-		plain
-		Steps  []int    `json:"steps"`
-		Value  *float64 `json:"value"`
-		Margin *float64 `json:"margin"`
-	}{plain: plain(f), Steps: f.Steps()}
+		Criterion     string    `json:"criterion"`
+		Title         string    `json:"title"`
+		Status        Status    `json:"status"`
+		Limit         float64   `json:"limit"`
+		Unit          string    `json:"unit"`
+		Source        string    `json:"source"`
+		Facts         []Fact    `json:"facts"`
+		Steps         []int     `json:"steps"`
+		Direction     Direction `json:"direction"`
+		NotApplicable Reason    `json:"not_applicable,omitempty"`
+		ValueBound    Direction `json:"value_bound,omitempty"`
+		Stretched     []string  `json:"stretched,omitempty"`
+		Protects      string    `json:"protects,omitempty"`
+		Value         *float64  `json:"value"`
+		Margin        *float64  `json:"margin"`
+	}{Criterion: f.Criterion, Title: f.Title, Status: f.Status, Limit: f.Limit, Unit: f.Unit, Source: f.Source, Facts: f.Facts,
+		Steps: f.Steps(), Direction: f.Direction, NotApplicable: f.NotApplicable, ValueBound: f.ValueBound, Stretched: f.Stretched,
+		Protects: f.Protects}
 	if f.NotApplicable == "" {
 		out.Value, out.Margin = &f.Value, &f.Margin
 	}
@@ -224,25 +239,18 @@ const (
 // kind with the largest share of its limit governs; a kind with no
 // published limit is listed as not assessed.
 func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
-	var specs []LimitSpec
-	for _, l := range r.Limits {
-		specs = append(specs, l.LimitSpec)
-	}
-	var out []Finding
+	out := make([]Finding, 0, len(AveragingKinds)+len(publicTiers)+1)
 	assessed := 0
-	for _, kind := range kindsOf(specs) {
-		if IsPublicKind(kind) || !cr.appliesOccupational() {
+	occupational := cr.appliesOccupational()
+	for _, kind := range kindsOfLimits(r.Limits) {
+		if IsPublicKind(kind) || !occupational {
 			continue
 		}
 		id, title := exposureCriterion(kind), exposureTitle(kind)
 		gov := -1
-		var names []string
 		for i, l := range r.Limits {
-			if l.Kind == kind {
-				names = append(names, fmt.Sprintf("%s %.0f %%", l.Name, 100*l.Share))
-				if l.Governs {
-					gov = i
-				}
+			if l.Kind == kind && l.Governs {
+				gov = i
 			}
 		}
 		if gov < 0 {
@@ -300,21 +308,41 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 }
 
 func sortFindings(fs []Finding) {
-	order := map[string]int{
-		CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionBurstWorst: 3, CriterionFailure: 4, CriterionImplosion: 5,
-		CriterionIDLH: 6, CriterionCeiling: 7, CriterionSTEL: 8, CriterionTWA: 9, CriterionNoLimit: 11,
-		CriterionFlammability: 12, CriterionCorrelationUse: 13,
-	}
 	rank := func(c string) int {
-		if IsThermalShockCriterion(c) {
-			return order[CriterionImplosion] // kept after the implosion finding by the stable sort
+		switch c {
+		case CriterionUllage:
+			return 0
+		case CriterionUllageWorst:
+			return 1
+		case CriterionBurst:
+			return 2
+		case CriterionBurstWorst:
+			return 3
+		case CriterionFailure:
+			return 4
+		case CriterionImplosion:
+			return 5
+		case CriterionIDLH:
+			return 6
+		case CriterionCeiling:
+			return 7
+		case CriterionSTEL:
+			return 8
+		case CriterionTWA:
+			return 9
+		case CriterionNoLimit:
+			return 11
+		case CriterionFlammability:
+			return 12
+		case CriterionCorrelationUse:
+			return 13
 		}
-		if n, ok := order[c]; ok {
-			return n
+		if IsThermalShockCriterion(c) {
+			return 5 // the implosion finding's: kept after it by the stable sort
 		}
 		return 10 // a further exposure kind, after the TWA
 	}
-	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i].Criterion) < rank(fs[j].Criterion) })
+	slices.SortStableFunc(fs, func(a, b Finding) int { return rank(a.Criterion) - rank(b.Criterion) })
 }
 
 // finiteOr replaces a non-finite number by a fallback so that no NaN or

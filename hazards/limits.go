@@ -170,17 +170,32 @@ func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass fl
 // kindsOf returns AveragingKinds followed by any other kind the limits
 // use, in order of first appearance.
 func kindsOf(specs []LimitSpec) []string {
-	kinds := append([]string(nil), AveragingKinds...)
-	for _, s := range specs {
-		found := false
-		for _, k := range kinds {
-			found = found || k == s.Kind
-		}
-		if !found {
-			kinds = append(kinds, s.Kind)
-		}
+	kinds := make([]string, len(AveragingKinds), len(AveragingKinds)+8)
+	copy(kinds, AveragingKinds)
+	for i := range specs {
+		kinds = addKind(kinds, specs[i].Kind)
 	}
 	return kinds
+}
+
+// kindsOfLimits is kindsOf for evaluated limits.
+func kindsOfLimits(limits []LimitResult) []string {
+	kinds := make([]string, len(AveragingKinds), len(AveragingKinds)+8)
+	copy(kinds, AveragingKinds)
+	for i := range limits {
+		kinds = addKind(kinds, limits[i].Kind)
+	}
+	return kinds
+}
+
+// addKind appends kind to kinds unless it is there already.
+func addKind(kinds []string, kind string) []string {
+	for _, k := range kinds {
+		if k == kind {
+			return kinds
+		}
+	}
+	return append(kinds, kind)
 }
 
 // exposureCriterion returns the criterion identifier of an averaging kind.

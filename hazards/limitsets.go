@@ -70,21 +70,29 @@ func (cr Criteria) AppliedLimitSets() []string {
 	return out
 }
 
-// Applies reports whether the criteria apply the given limit set.
+// Applies reports whether the criteria apply the given limit set: it is
+// one of LimitSetIDs and among those AppliedLimitSets returns.
 func (cr Criteria) Applies(set string) bool {
-	for _, id := range cr.AppliedLimitSets() {
-		if id == set {
+	if !knownLimitSet(set) {
+		return false
+	}
+	chosen := cr.LimitSets
+	if len(chosen) == 0 {
+		chosen = DefaultLimitSets
+	}
+	for _, c := range chosen {
+		if c == set {
 			return true
 		}
 	}
 	return false
 }
 
+// knownLimitSet reports whether id is one of LimitSetIDs.
 func knownLimitSet(id string) bool {
-	for _, k := range LimitSetIDs() {
-		if k == id {
-			return true
-		}
+	switch id {
+	case LimitSetUSOccupational, LimitSetUSPublicAcute, LimitSetEUOccupational, LimitSetUKWEL, LimitSetDEAGW:
+		return true
 	}
 	return false
 }
