@@ -163,7 +163,7 @@ type LimitEntry struct {
 // "EU IOELV STEL", "HSE WEL TWA", "AGS AGW short-term".
 func (e LimitEntry) Label() string {
 	if e.Averaging == AveragingAcute {
-		return fmt.Sprintf("%s %s min", e.Kind, strconv.FormatFloat(e.Minutes, 'f', -1, 64))
+		return e.Kind + " " + strconv.FormatFloat(e.Minutes, 'f', -1, 64) + " min"
 	}
 	if strings.HasSuffix(e.Kind, "short-term") {
 		return e.Body + " " + e.Kind

@@ -106,3 +106,71 @@ func name(s *Substance) string {
 	}
 	return s.Fluid().ID
 }
+
+// The dew-temperature search's vapour density is Saturation's, bit for
+// bit, over the whole saturation curve (both sides of the near-critical
+// blend) and NaN where Saturation fails.
+func TestSaturatedVapourDensityMatchesSaturation(t *testing.T) {
+	lib, err := Builtin()
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, s := range lib.All() {
+		for i := -1; i <= 201; i++ {
+			temp := s.MinTemperature() + (s.CriticalTemperature()-s.MinTemperature())*float64(i)/200
+			got := s.saturatedVapourDensity(temp)
+			sat, err := s.Saturation(temp)
+			if err != nil {
+				if !math.IsNaN(got) {
+					t.Errorf("%s at %.3f K: %g, want NaN (Saturation: %v)", s.Fluid().ID, temp, got, err)
+				}
+				continue
+			}
+			if math.Float64bits(got) != math.Float64bits(sat.VapourDensity) {
+				t.Errorf("%s at %.3f K: %.17g, Saturation gives %.17g", s.Fluid().ID, temp, got, sat.VapourDensity)
+			}
+		}
+	}
+}
+
+// The quick check of a strongly compressed liquid (LiquidIsotherm.density)
+// gives what the full check through SinglePhasePressure gives, bit for
+// bit, on every fluid of the correlation route, from the freezing point to
+// Tc and from the vapour pressure to far past any glass; and it is used
+// (the comparison would prove nothing if no isotherm took it).
+func TestLiquidIsothermQuickCheck(t *testing.T) {
+	lib, err := Builtin()
+	if err != nil {
+		t.Fatal(err)
+	}
+	quick := 0
+	for _, s := range lib.All() {
+		if s.ref != nil {
+			continue
+		}
+		for i := 0; i <= 80; i++ {
+			temp := s.MinTemperature() + (s.CriticalTemperature()-s.MinTemperature())*float64(i)/80
+			var li LiquidIsotherm
+			s.PrepareLiquidIsotherm(temp, &li)
+			if li.quick {
+				quick++
+			}
+			ps, _, err := s.SaturationPressure(temp)
+			if err != nil {
+				continue
+			}
+			for j := 0; j <= 60; j++ {
+				p := ps + math.Pow(10, 3+6*float64(j)/60) // 1 kPa to 1 GPa above Psat
+				r1, f1, e1 := li.density(p, li.quick)
+				r2, f2, e2 := li.density(p, false)
+				if !sameResult(r1, f1, e1, r2, f2, e2) {
+					t.Fatalf("%s at %.3f K, %.6g Pa: quick %v %v %v, full %v %v %v", s.Fluid().ID, temp, p, r1, f1, e1, r2, f2, e2)
+				}
+			}
+		}
+	}
+	if quick == 0 {
+		t.Fatal("no isotherm takes the quick check")
+	}
+	t.Logf("%d isotherms with the quick check", quick)
+}

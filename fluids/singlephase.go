@@ -29,12 +29,27 @@ func (s *Substance) bubbleTemperature(rho float64) (float64, bool) {
 	return s.liquid.temperature(rho, s.tMin)
 }
 
+// saturatedVapourDensity is Saturation(t).VapourDensity (NaN where
+// Saturation fails), without the values of Saturation it does not need:
+// the dew-temperature search calls it at every step.
 func (s *Substance) saturatedVapourDensity(t float64) float64 {
-	sat, err := s.Saturation(t)
+	if s.ref != nil {
+		sat, err := s.Saturation(t)
+		if err != nil {
+			return math.NaN()
+		}
+		return sat.VapourDensity
+	}
+	p, _, err := s.SaturationPressure(t)
 	if err != nil {
 		return math.NaN()
 	}
-	return sat.VapourDensity
+	if t <= s.blendT {
+		return s.eos.vapourDensity(t, p)
+	}
+	rhoL, _ := s.liquid.density(t)
+	d := s.diameterAtBlend + (s.rhoC-s.diameterAtBlend)*(t-s.blendT)/(s.tc-s.blendT)
+	return 2*d - rhoL
 }
 
 // dewTemperature returns the temperature at which the saturated vapour
@@ -243,6 +258,9 @@ type LiquidIsotherm struct {
 	// err is the vapour pressure's error at t, returned by every Density.
 	err       error
 	rhoSat, b float64
+	// quick says Density may check a strongly compressed state without
+	// SinglePhasePressure's bubble-temperature search (see quickCheck).
+	quick bool
 }
 
 // PrepareLiquidIsotherm prepares li for temperature t (K).
@@ -257,11 +275,31 @@ func (s *Substance) PrepareLiquidIsotherm(t float64, li *LiquidIsotherm) {
 	}
 	li.rhoSat = s.liquidDensity(t)
 	li.b = s.compressed.bParam(t)
+	li.quick = s.liquid.decreasing() && t <= s.liquid.tJoin && t < taitMaxTr*s.tc-1e-6
 }
 
 // Density returns the density (kg/m³) of the liquid at the isotherm's
 // temperature and pressure p (Pa): CompressedLiquidDensity(t, p).
 func (li *LiquidIsotherm) Density(p float64) (float64, Flags, error) {
+	return li.density(p, li.quick)
+}
+
+// density is Density, with SinglePhasePressure's check of a strongly
+// compressed state made in full unless quick.
+//
+// That check asks SinglePhasePressure(t, ρ) for the pressure of the Tait
+// density ρ and keeps ρ when it gives p back. SinglePhasePressure first
+// finds the bubble temperature T_s of ρ (a search) and uses T_s only to
+// decide that the state is not two-phase (t ≥ T_s(1 − 10⁻⁹)) and not past
+// the Tait range (T_s < 0.95 Tc). When the saturated liquid density is
+// strictly decreasing on the search range [T_min, T_join] (decreasing) and
+// t ≤ T_join, ρ ≥ ρ_sat(t) puts the one root of ρ_sat(T) = ρ at or below t,
+// and the search returns it within 2·10⁻⁹ K (or fails, which decides the
+// same way): with t more than 10⁻⁶ K below 0.95 Tc both decisions come out
+// as above whatever the search returns, so quick skips it and takes the
+// Tait pressure at t directly, the same numbers SinglePhasePressure takes.
+// TestLiquidIsothermQuickCheck compares the two bit for bit.
+func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error) {
 	s, t := li.s, li.t
 	if s.ref != nil {
 		return s.refCompressedLiquidDensityAt(t, p)
@@ -289,7 +327,13 @@ func (li *LiquidIsotherm) Density(p float64) (float64, Flags, error) {
 	if b := li.b; p-ps < 0.01*(b+ps) {
 		return rho, fl, nil
 	}
-	if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && s.taitSlope(t, rho) > 0 {
+		// SinglePhasePressure(t, ρ) is the Tait pressure at t (taitPressure
+		// with this isotherm's values) and its flags are fl.
+		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+			return rho, fl, nil
+		}
+	} else if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
 		return rho, fl | f2, nil
 	}
 	if inv, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity()); err == nil {

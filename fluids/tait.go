@@ -54,6 +54,10 @@ func (t *tait) densityB(b, p, rhoSat, ps float64) float64 {
 // pressure inverts the Tait equation: the pressure at which the liquid at
 // temp has density rho (≥ rhoSat).
 func (t *tait) pressure(temp, rho, rhoSat, ps float64) float64 {
-	b := t.bParam(temp)
+	return t.pressureB(t.bParam(temp), rho, rhoSat, ps)
+}
+
+// pressureB is pressure with B(temp) given.
+func (t *tait) pressureB(b, rho, rhoSat, ps float64) float64 {
 	return (b+ps)*math.Exp((1-rhoSat/rho)/t.c) - b
 }

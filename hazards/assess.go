@@ -324,9 +324,9 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		return err
 	}
 	mMax := sat.LiquidDensity * a.VolumeM3 * (1 - 1e-9)
+	var v sealedVessel // each step's vessel, sealed in the same memory
 	fillGap := func(mass float64) float64 {
-		v, err := newSharedVessel(sub, mass, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats)
-		if err != nil {
+		if err := v.seal(sub, mass, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats); err != nil {
 			return math.NaN()
 		}
 		st, err := v.state(d.HottestK)

@@ -56,7 +56,7 @@ func fluidCautions(f *fluids.Fluid) (si, us []string) {
 	for _, w := range f.Warnings {
 		// The caution above states the flash point from the typed value;
 		// a warning of the data that repeats it is left out.
-		if flashStated && strings.Contains(strings.ToLower(w), "flash point") && !strings.Contains(strings.ToLower(w), "autoignition") {
+		if flashStated && containsLower(w, "flash point") && !containsLower(w, "autoignition") {
 			continue
 		}
 		if strings.TrimSpace(w) != "" {
@@ -67,4 +67,30 @@ func fluidCautions(f *fluids.Fluid) (si, us []string) {
 		both("The data for " + f.Name + " were supplied by the user, not taken from the built-in library; check their sources.")
 	}
 	return si, us
+}
+
+// containsLower reports strings.Contains(strings.ToLower(s), sub) for a
+// lower-case ASCII sub, without the copy when s is ASCII.
+func containsLower(s, sub string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] >= 0x80 {
+			return strings.Contains(strings.ToLower(s), sub)
+		}
+	}
+	for i := 0; i+len(sub) <= len(s); i++ {
+		j := 0
+		for ; j < len(sub); j++ {
+			c := s[i+j]
+			if 'A' <= c && c <= 'Z' {
+				c += 'a' - 'A'
+			}
+			if c != sub[j] {
+				break
+			}
+		}
+		if j == len(sub) {
+			return true
+		}
+	}
+	return false
 }

@@ -2,7 +2,6 @@ package hazards
 
 import (
 	"encoding/json"
-	"fmt"
 	"math"
 	"slices"
 
@@ -263,7 +262,7 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		lim := r.Limits[gov]
 		e := lim.Exposure
 		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
-			fmt.Sprintf("%s %g ppm: %s", lim.Name, lim.PPM, lim.Source))
+			limitSource(lim.Name, lim.PPM, "", lim.Source))
 		if e.Bounded {
 			fd.ValueBound = AtMost
 		}

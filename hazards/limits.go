@@ -88,7 +88,7 @@ var averagingDefinitions = map[string]struct {
 // chosen bodies (all when bodies is empty), each with its averaging period
 // as its body defines it, in library order.
 func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
-	var out []LimitSpec
+	out := make([]LimitSpec, 0, len(f.ExposureLimits))
 	for _, l := range f.ExposureLimits {
 		if !bodyChosen(l.Body, bodies) {
 			continue
@@ -116,7 +116,12 @@ func AppliedLimitSpecs(f *fluids.Fluid, cr Criteria) ([]LimitSpec, []LimitNote) 
 	var notes []LimitNote
 	for _, set := range cr.AppliedLimitSets() {
 		if set == LimitSetUSOccupational {
-			specs = append(specs, LimitSpecs(f, cr.LimitBodies)...)
+			own := LimitSpecs(f, cr.LimitBodies)
+			if specs == nil {
+				specs = own // most often the first set: no copy
+				continue
+			}
+			specs = append(specs, own...)
 			continue
 		}
 		s, n := tableLimits(f, set)
@@ -145,13 +150,24 @@ type LimitResult struct {
 // listed on a tie).
 func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass float64) []LimitResult {
 	out := make([]LimitResult, len(specs))
-	for i, s := range specs {
+	for i := range specs {
+		s := &specs[i]
 		present, key := presentS, exposureStepKey
 		if s.WholePeriod {
 			present, key = math.Max(s.PeriodS, PeakAveragingS), publicStepKey
 		}
 		e := rel.exposure(s.AveragingS(present), present, molarMass)
-		out[i] = LimitResult{LimitSpec: s, Exposure: e, Share: e.PPM / s.PPM, StepKey: key(e.AveragingS)}
+		out[i] = LimitResult{LimitSpec: *s, Exposure: e, Share: e.PPM / s.PPM}
+		// Limits of one period share their step and so its key.
+		for j := range i {
+			if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == e.AveragingS {
+				out[i].StepKey = out[j].StepKey
+				break
+			}
+		}
+		if out[i].StepKey == "" {
+			out[i].StepKey = key(e.AveragingS)
+		}
 	}
 	for _, k := range kindsOf(specs) {
 		best := -1

@@ -2,7 +2,6 @@ package hazards
 
 import (
 	"errors"
-	"fmt"
 	"math"
 	"strconv"
 	"strings"
@@ -199,7 +198,7 @@ func publicLimits(sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
 			l, _ := e.ExposureLimit()
 			s := LimitSpec{Set: LimitSetUSPublicAcute, Body: l.Body, Name: e.Label(), Kind: e.Kind, PPM: l.PPM, Source: l.Source,
 				PeriodS: e.Minutes * 60, WholePeriod: true, Standing: string(e.Status), Date: e.Date,
-				Protects:   fmt.Sprintf("%s, %s", publicPopulation, durationWords(e.Minutes)),
+				Protects:   publicPopulation + ", " + durationWords(e.Minutes),
 				Definition: "AEGL and PAC: the airborne concentration above which the general public, including susceptible individuals, could experience the tier's effects for a single exposure of the stated duration (US EPA AEGL program; US DOE PAC, from memory); averaged over that duration for a person present throughout"}
 			if tier == 3 {
 				s.PeriodS = 0

@@ -2,6 +2,7 @@ package hazards
 
 import (
 	"fmt"
+	"strconv"
 
 	"ullage/fluids"
 )
@@ -71,7 +72,7 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 	}
 	var out []Finding
 	for _, tier := range publicTiers {
-		id := fmt.Sprintf("exposure-public-%d", tier)
+		id := "exposure-public-" + strconv.Itoa(tier)
 		gov := -1
 		for i, l := range r.Limits {
 			if l.Set == LimitSetUSPublicAcute && publicTier(l.Kind) == tier && l.Governs {
@@ -101,10 +102,7 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		} else {
 			standing = ""
 		}
-		src := fmt.Sprintf("%s %g ppm: %s", lim.Name, lim.PPM, lim.Source)
-		if standing != "" {
-			src = fmt.Sprintf("%s %g ppm (%s): %s", lim.Name, lim.PPM, standing, lim.Source)
-		}
+		src := limitSource(lim.Name, lim.PPM, standing, lim.Source)
 		fd := atMost(id, publicTitles[tier], "ppm", e.PPM, limit, 1, src)
 		if tier == 1 && fd.Status == StatusFail {
 			fd.Status = StatusCaution
@@ -121,6 +119,17 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		out = append(out, fd)
 	}
 	return out
+}
+
+// limitSource words a finding's source: "NIOSH REL TWA 100 ppm: source",
+// with the value's standing in brackets when given ("AEGL-2 10 min 220 ppm
+// (interim value): source"); the number as %g prints it.
+func limitSource(name string, ppm float64, standing, source string) string {
+	n := name + " " + strconv.FormatFloat(ppm, 'g', -1, 64) + " ppm"
+	if standing != "" {
+		n += " (" + standing + ")"
+	}
+	return n + ": " + source
 }
 
 // kindOfLabel returns the kind of an acute entry's label ("AEGL-1 10

@@ -154,25 +154,35 @@ func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambie
 // newSharedVessel is newSealedVessel with the saturated states of sats
 // (nil for none) at hand.
 func newSharedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambientPa float64, sats *satMemo) (*sealedVessel, error) {
-	v := &sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa, sats: sats}
+	v := new(sealedVessel)
+	if err := v.seal(s, mass, volume, sealK, residualPa, ambientPa, sats); err != nil {
+		return nil, err
+	}
+	return v, nil
+}
+
+// seal makes v the vessel newSharedVessel makes, reusing its memory (for
+// a search that seals vessel after vessel); v must not be in use.
+func (v *sealedVessel) seal(s *fluids.Substance, mass, volume, sealK, residualPa, ambientPa float64, sats *satMemo) error {
+	*v = sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa, sats: sats}
 	s.PrepareIsochore(v.density, &v.iso)
 	if sealK > s.CriticalTemperature() {
-		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
+		return &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
 			Want: fmt.Sprintf("must be below the critical temperature of %s (%.2f K) so that the fill can be sealed as a liquid", s.Fluid().Name, s.CriticalTemperature()),
 			Rule: RuleBelow, Max: s.CriticalTemperature(), Unit: "K", Subject: "the critical temperature of " + s.Fluid().Name}
 	}
 	sat, err := sats.saturation(s, sealK)
 	if err != nil {
-		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
+		return &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
 	}
 	if v.density >= sat.LiquidDensity {
 		maxFill := sat.LiquidDensity * volume
-		return nil, fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
+		return fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
 			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume),
 			Rule: RuleBelow, Max: maxFill, Unit: "kg", Subject: "the mass of " + s.Fluid().Name + " that, as liquid, fills the whole vessel at the sealing temperature"}, ErrOverfilled)
 	}
 	v.sealGas(sat, residualPa, sealK)
-	return v, nil
+	return nil
 }
 
 // sealGas sets the moles of residual gas sealed in at residualPa and
