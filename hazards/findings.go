@@ -238,10 +238,16 @@ const (
 // kind with the largest share of its limit governs; a kind with no
 // published limit is listed as not assessed.
 func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
-	out := make([]Finding, 0, len(AveragingKinds)+len(publicTiers)+1)
+	return appendExposureFindings(nil, f, r, cr, &factArena{})
+}
+
+// appendExposureFindings appends the findings of exposureFindings to out,
+// their facts from ar.
+func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	assessed := 0
 	occupational := cr.appliesOccupational()
-	for _, kind := range kindsOfLimits(r.Limits) {
+	var kb [8]string
+	for _, kind := range appendKindsOfLimits(kb[:0], r.Limits) {
 		if IsPublicKind(kind) || !occupational {
 			continue
 		}
@@ -255,7 +261,7 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if gov < 0 {
 			out = append(out, Finding{Criterion: id, Title: title, Status: StatusNotAssessed, Unit: "ppm", Direction: AtMost,
 				NotApplicable: ReasonNoPublishedLimit, Source: "none in the library for the chosen bodies",
-				Facts: []Fact{named("kind of limit", kind), named("fluid", f.Name)}})
+				Facts: ar.keep(named("kind of limit", kind), named("fluid", f.Name))})
 			continue
 		}
 		assessed++
@@ -274,32 +280,32 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if e.AveragingS <= PeakAveragingS {
 			avg = named("averaging period", "the peak (highest one-minute average)")
 		}
-		fd.Facts = []Fact{avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share)}
+		fd.Facts = ar.keep(avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share))
 		for _, l := range r.Limits {
 			if l.Kind == kind && l.Name != lim.Name {
-				fd.Facts = append(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
+				fd.Facts = ar.extend(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
 			}
 		}
 		if e.Bounded {
-			fd.Facts = append(fd.Facts, named("held to the physical bound", r.Bound.By))
+			fd.Facts = ar.extend(fd.Facts, named("held to the physical bound", r.Bound.By))
 		}
 		out = append(out, fd)
 	}
 	if cr.Applies(LimitSetUSPublicAcute) {
-		pub := publicFindings(f, r, cr)
-		for _, p := range pub {
+		n := len(out)
+		out = appendPublicFindings(out, f, r, cr, ar)
+		for _, p := range out[n:] {
 			if p.NotApplicable == "" {
 				assessed++
 			}
 		}
-		out = append(out, pub...)
 	}
 	if assessed == 0 {
 		fd := Finding{Criterion: CriterionNoLimit, Title: "Published exposure limit", Status: StatusCaution, Unit: "ppm",
 			Source: "none found in the library for the chosen bodies", Direction: AtMost, Value: r.Peak.PPM}
-		fd.Facts = []Fact{named("fluid", f.Name), fact("peak concentration", FactConcentration, r.Peak.PPM)}
+		fd.Facts = ar.keep(named("fluid", f.Name), fact("peak concentration", FactConcentration, r.Peak.PPM))
 		for _, n := range f.NoNumericLimit {
-			fd.Facts = append(fd.Facts, named(n.Body+" "+n.Kind, n.Note))
+			fd.Facts = ar.extend(fd.Facts, named(n.Body+" "+n.Kind, n.Note))
 		}
 		out = append(out, fd)
 	}

@@ -2,6 +2,7 @@ package hazards
 
 import (
 	"math"
+	"slices"
 	"strings"
 
 	"ullage/fluids"
@@ -88,7 +89,11 @@ var averagingDefinitions = map[string]struct {
 // chosen bodies (all when bodies is empty), each with its averaging period
 // as its body defines it, in library order.
 func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
-	out := make([]LimitSpec, 0, len(f.ExposureLimits))
+	return appendLimitSpecs(nil, f, bodies)
+}
+
+// appendLimitSpecs appends LimitSpecs(f, bodies) to out.
+func appendLimitSpecs(out []LimitSpec, f *fluids.Fluid, bodies []string) []LimitSpec {
 	for _, l := range f.ExposureLimits {
 		if !bodyChosen(l.Body, bodies) {
 			continue
@@ -112,20 +117,20 @@ func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
 // notes of the sets that give no number (none published, not checked,
 // not recommended). LimitBodies narrows the US occupational set only.
 func AppliedLimitSpecs(f *fluids.Fluid, cr Criteria) ([]LimitSpec, []LimitNote) {
-	var specs []LimitSpec
+	return appendAppliedLimitSpecs(nil, f, cr)
+}
+
+// appendAppliedLimitSpecs appends the limits of AppliedLimitSpecs to specs
+// and returns them with the notes.
+func appendAppliedLimitSpecs(specs []LimitSpec, f *fluids.Fluid, cr Criteria) ([]LimitSpec, []LimitNote) {
 	var notes []LimitNote
 	for _, set := range cr.AppliedLimitSets() {
 		if set == LimitSetUSOccupational {
-			own := LimitSpecs(f, cr.LimitBodies)
-			if specs == nil {
-				specs = own // most often the first set: no copy
-				continue
-			}
-			specs = append(specs, own...)
+			specs = appendLimitSpecs(specs, f, cr.LimitBodies)
 			continue
 		}
-		s, n := tableLimits(f, set)
-		specs = append(specs, s...)
+		var n []LimitNote
+		specs, n = appendTableLimits(specs, f, set)
 		notes = append(notes, n...)
 	}
 	return specs, notes
@@ -169,7 +174,8 @@ func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass fl
 			out[i].StepKey = key(e.AveragingS)
 		}
 	}
-	for _, k := range kindsOf(specs) {
+	var kb [8]string
+	for _, k := range appendKinds(kb[:0], specs) {
 		best := -1
 		for i := range out {
 			if out[i].Kind == k && (best < 0 || out[i].Share > out[best].Share) {
@@ -185,19 +191,20 @@ func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass fl
 
 // kindsOf returns AveragingKinds followed by any other kind the limits
 // use, in order of first appearance.
-func kindsOf(specs []LimitSpec) []string {
-	kinds := make([]string, len(AveragingKinds), len(AveragingKinds)+8)
-	copy(kinds, AveragingKinds)
+func kindsOf(specs []LimitSpec) []string { return appendKinds(nil, specs) }
+
+// appendKinds appends kindsOf(specs) to kinds.
+func appendKinds(kinds []string, specs []LimitSpec) []string {
+	kinds = append(kinds, AveragingKinds...)
 	for i := range specs {
 		kinds = addKind(kinds, specs[i].Kind)
 	}
 	return kinds
 }
 
-// kindsOfLimits is kindsOf for evaluated limits.
-func kindsOfLimits(limits []LimitResult) []string {
-	kinds := make([]string, len(AveragingKinds), len(AveragingKinds)+8)
-	copy(kinds, AveragingKinds)
+// appendKindsOfLimits is appendKinds for evaluated limits.
+func appendKindsOfLimits(kinds []string, limits []LimitResult) []string {
+	kinds = append(kinds, AveragingKinds...)
 	for i := range limits {
 		kinds = addKind(kinds, limits[i].Kind)
 	}
@@ -254,4 +261,16 @@ func bodyChosen(body string, bodies []string) bool {
 		}
 	}
 	return false
+}
+
+// countOtherKinds bounds the number of occupational averaging kinds of the
+// limits beyond AveragingKinds: each limit of such a kind counts.
+func countOtherKinds(limits []LimitResult) int {
+	n := 0
+	for i := range limits {
+		if !IsPublicKind(limits[i].Kind) && !slices.Contains(AveragingKinds, limits[i].Kind) {
+			n++
+		}
+	}
+	return n
 }

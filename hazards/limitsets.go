@@ -126,21 +126,25 @@ const publicPopulation = "General public, children included"
 // AEGL values (the PAC where the tier has no AEGL value: the DOE's own
 // order of precedence, AEGL before ERPG and TEEL).
 func tableLimits(f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
+	return appendTableLimits(nil, f, set)
+}
+
+// appendTableLimits appends the limits of tableLimits to specs.
+func appendTableLimits(specs []LimitSpec, f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
 	sub, err := fluids.LimitsFor(f.ID, fluids.LimitSetID(set))
 	if err != nil {
 		if errors.Is(err, fluids.ErrUnknownFluid) {
-			return nil, []LimitNote{{Set: set, Reason: ReasonNotListed, Statement: "the table does not list " + f.Name + " (a fluid of your own is in no built-in table)"}}
+			return specs, []LimitNote{{Set: set, Reason: ReasonNotListed, Statement: "the table does not list " + f.Name + " (a fluid of your own is in no built-in table)"}}
 		}
-		return nil, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: err.Error()}}
+		return specs, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: err.Error()}}
 	}
 	switch sub.Coverage {
 	case fluids.CoverageNonePublished:
-		return nil, []LimitNote{{Set: set, Reason: ReasonNonePublished, Statement: sub.Statement}}
+		return specs, []LimitNote{{Set: set, Reason: ReasonNonePublished, Statement: sub.Statement}}
 	case fluids.CoverageNotChecked:
-		return nil, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: sub.Statement}}
+		return specs, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: sub.Statement}}
 	}
 	if set != LimitSetUSPublicAcute {
-		var specs []LimitSpec
 		for _, e := range sub.Entries {
 			l, ok := e.ExposureLimit()
 			if !ok {
@@ -155,7 +159,7 @@ func tableLimits(f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
 		}
 		return specs, nil
 	}
-	return publicLimits(sub)
+	return appendPublicLimits(specs, sub)
 }
 
 // publicLimits turns the public acute entries into limits: tiers 1 and 2
@@ -164,7 +168,11 @@ func tableLimits(f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
 // AEGL-3 of the shortest published duration (or the PAC-3). NR cells
 // become notes.
 func publicLimits(sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
-	var specs []LimitSpec
+	return appendPublicLimits(nil, sub)
+}
+
+// appendPublicLimits appends the limits of publicLimits to specs.
+func appendPublicLimits(specs []LimitSpec, sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
 	var notes []LimitNote
 	for _, tier := range publicTiers {
 		var aegl, pac []fluids.LimitEntry

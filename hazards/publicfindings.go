@@ -55,6 +55,12 @@ func (cr Criteria) appliesOccupational() bool {
 // or PAC-3. A tier with no value says why in words; a fluid with none at
 // all gets one not-assessed finding.
 func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
+	return appendPublicFindings(nil, f, r, cr, &factArena{})
+}
+
+// appendPublicFindings appends the findings of publicFindings to out, their
+// facts from ar.
+func appendPublicFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	any := false
 	for _, l := range r.Limits {
 		any = any || l.Set == LimitSetUSPublicAcute
@@ -66,11 +72,10 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 				reason, src = n.Reason, n.Statement
 			}
 		}
-		return []Finding{{Criterion: CriterionPublicNone, Title: "Public acute benchmarks (AEGL, PAC)", Status: StatusNotAssessed,
+		return append(out, Finding{Criterion: CriterionPublicNone, Title: "Public acute benchmarks (AEGL, PAC)", Status: StatusNotAssessed,
 			Unit: "ppm", Direction: AtMost, NotApplicable: reason, Source: src, Protects: publicPopulation + ", 10 minutes to 8 hours",
-			Facts: []Fact{named("fluid", f.Name)}}}
+			Facts: ar.keep(named("fluid", f.Name))})
 	}
-	var out []Finding
 	for _, tier := range publicTiers {
 		id := "exposure-public-" + strconv.Itoa(tier)
 		gov := -1
@@ -115,7 +120,7 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if tier == 3 {
 			measured = "peak (highest one-minute average)"
 		}
-		fd.Facts = []Fact{named("benchmark", lim.Name), fact(measured, FactConcentration, e.PPM), fact("benchmark value", FactConcentration, lim.PPM)}
+		fd.Facts = ar.keep(named("benchmark", lim.Name), fact(measured, FactConcentration, e.PPM), fact("benchmark value", FactConcentration, lim.PPM))
 		out = append(out, fd)
 	}
 	return out
