@@ -38,7 +38,7 @@ type tolerancePanel struct {
 	varies              *widget.Label
 	problem             *widget.Label
 	runBtn, cancelBtn   *widget.Button
-	busy                *widget.ProgressBarInfinite
+	busy                *widget.ProgressBar
 	status              *widget.Label
 
 	// spreadK is the ± spread of the hottest temperature in kelvin, as
@@ -104,8 +104,7 @@ func newTolerancePanel(s *session) *tolerancePanel {
 	tp.runBtn.Importance = widget.HighImportance
 	tp.cancelBtn = widget.NewButtonWithIcon("Cancel", theme.CancelIcon(), s.stopStudy)
 	tp.cancelBtn.Disable()
-	tp.busy = widget.NewProgressBarInfinite()
-	tp.busy.Stop()
+	tp.busy = widget.NewProgressBar()
 	tp.busy.Hide()
 	tp.status = widget.NewLabel("")
 	tp.status.Wrapping = fyne.TextWrapWord
@@ -229,6 +228,7 @@ func (tp *tolerancePanel) run() {
 		return
 	}
 	tp.problem.Hide()
+	tp.busy.SetValue(0)
 	s.startStudy(set, func() {
 		tp.refresh()
 		if f := tp.afterRun; f != nil {
@@ -267,11 +267,9 @@ func (tp *tolerancePanel) refresh() {
 		tp.runBtn.Disable()
 		tp.cancelBtn.Enable()
 		tp.busy.Show()
-		tp.busy.Start()
 	} else {
 		tp.runBtn.Enable()
 		tp.cancelBtn.Disable()
-		tp.busy.Stop()
 		tp.busy.Hide()
 		switch {
 		case errors.Is(st.err, context.Canceled):
