@@ -1,6 +1,8 @@
 package fluids
 
 import (
+	"bytes"
+	"os"
 	"testing"
 
 	"ullage/fluids/units"
@@ -66,5 +68,20 @@ func BenchmarkDensityAtTP(b *testing.B) {
 				}
 			}
 		})
+	}
+}
+
+// BenchmarkLoadUserFluids times reading, checking and preparing a user's
+// fluid file (testdata/user/good_single.json), the fuzz target's work.
+func BenchmarkLoadUserFluids(b *testing.B) {
+	data, err := os.ReadFile("testdata/user/good_single.json")
+	if err != nil {
+		b.Fatal(err)
+	}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := LoadUserFluids(bytes.NewReader(data)); err != nil {
+			b.Fatal(err)
+		}
 	}
 }

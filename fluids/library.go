@@ -29,6 +29,10 @@ const DataVersion = "2026.12-1"
 // Library is an immutable, validated set of fluids.
 type Library struct {
 	substances []*Substance
+	// byKey maps every normalised ID, name, CAS number and synonym to
+	// the first substance (in library order) that has it, so that Lookup
+	// need not normalise every key of every fluid.
+	byKey map[string]*Substance
 }
 
 var builtin = sync.OnceValues(loadBuiltin)
@@ -93,8 +97,18 @@ func DecodeEquationOfState(b []byte) (*EquationOfState, error) {
 	return &e, nil
 }
 
+// sort puts the substances in name order and indexes their keys.
 func (l *Library) sort() {
 	sort.Slice(l.substances, func(i, j int) bool { return l.substances[i].fluid.Name < l.substances[j].fluid.Name })
+	l.byKey = make(map[string]*Substance, 4*len(l.substances))
+	for _, s := range l.substances {
+		f := s.fluid
+		for _, k := range append([]string{f.ID, f.Name, f.CAS}, f.Synonyms...) {
+			if n := normaliseKey(k); n != "" && l.byKey[n] == nil {
+				l.byKey[n] = s
+			}
+		}
+	}
 }
 
 // All returns the library's substances sorted by name.
@@ -107,6 +121,13 @@ func (l *Library) All() []*Substance {
 // Lookup finds a fluid by ID, name, synonym or CAS number. It returns an
 // error wrapping ErrUnknownFluid when nothing matches.
 func (l *Library) Lookup(key string) (*Substance, error) {
+	if l.byKey != nil {
+		// The first substance that Matches the key, from the index.
+		if s := l.byKey[normaliseKey(key)]; s != nil {
+			return s, nil
+		}
+		return nil, fmt.Errorf("%q: %w (try the id, name, a synonym or the CAS number)", key, ErrUnknownFluid)
+	}
 	for _, s := range l.substances {
 		if s.fluid.Matches(key) {
 			return s, nil

@@ -163,7 +163,7 @@ type LimitEntry struct {
 // "EU IOELV STEL", "HSE WEL TWA", "AGS AGW short-term".
 func (e LimitEntry) Label() string {
 	if e.Averaging == AveragingAcute {
-		return fmt.Sprintf("%s %s min", e.Kind, strconv.FormatFloat(e.Minutes, 'f', -1, 64))
+		return e.Kind + " " + strconv.FormatFloat(e.Minutes, 'f', -1, 64) + " min"
 	}
 	if strings.HasSuffix(e.Kind, "short-term") {
 		return e.Body + " " + e.Kind
@@ -238,16 +238,24 @@ func LookupLimitSet(id LimitSetID) (LimitSet, error) {
 // built-in ID. A fluid the table does not list (a user fluid) gives an
 // error wrapping ErrUnknownFluid; an unknown set, ErrUnknownLimitSet.
 func LimitsFor(fluidID string, set LimitSetID) (SubstanceLimits, error) {
-	s, err := LookupLimitSet(set)
+	sets, err := builtinLimitSets()
 	if err != nil {
 		return SubstanceLimits{}, err
 	}
-	for _, sub := range s.Substances {
-		if sub.FluidID == fluidID {
-			return sub, nil
+	for i := range sets {
+		if sets[i].ID != set {
+			continue
 		}
+		// Only the one substance is copied, not the whole table.
+		for _, sub := range sets[i].Substances {
+			if sub.FluidID == fluidID {
+				sub.Entries = append([]LimitEntry(nil), sub.Entries...)
+				return sub, nil
+			}
+		}
+		return SubstanceLimits{}, fmt.Errorf("fluid %q in limit set %s: %w", fluidID, set, ErrUnknownFluid)
 	}
-	return SubstanceLimits{}, fmt.Errorf("fluid %q in limit set %s: %w", fluidID, set, ErrUnknownFluid)
+	return SubstanceLimits{}, fmt.Errorf("limit set %q: %w", set, ErrUnknownLimitSet)
 }
 
 func (s LimitSet) clone() LimitSet {

@@ -61,3 +61,18 @@ func (c *liquidDensityCurve) temperature(rho, tMin float64) (float64, bool) {
 	}
 	return r.X, true
 }
+
+// decreasing reports whether the published correlation's density falls
+// strictly with temperature over the whole range temperature searches,
+// [tMin, tJoin], by the form's derivative: DIPPR 105, ln ρ = ln A −
+// (1 + x^D) ln B with x = 1 − T/C, has d ln ρ/dT = D·x^(D−1)·ln B / C,
+// negative for every x > 0 when A, B, C > 0 and D·ln B < 0, and x > 0 on the
+// range when tJoin < C. Any other form (DIPPR 116, for water, whose liquid
+// is densest near 4 °C) or no correlation: false.
+func (c *liquidDensityCurve) decreasing() bool {
+	k := c.corr
+	if k == nil || k.Form == FormDIPPR116 {
+		return false
+	}
+	return k.A > 0 && k.B > 0 && k.C > 0 && !math.IsNaN(k.D) && !math.IsInf(k.D, 0) && k.D*math.Log(k.B) < 0 && c.tJoin < k.C
+}

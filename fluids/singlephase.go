@@ -3,6 +3,7 @@ package fluids
 import (
 	"fmt"
 	"math"
+	"sync"
 
 	"ullage/fluids/solve"
 )
@@ -28,12 +29,27 @@ func (s *Substance) bubbleTemperature(rho float64) (float64, bool) {
 	return s.liquid.temperature(rho, s.tMin)
 }
 
+// saturatedVapourDensity is Saturation(t).VapourDensity (NaN where
+// Saturation fails), without the values of Saturation it does not need:
+// the dew-temperature search calls it at every step.
 func (s *Substance) saturatedVapourDensity(t float64) float64 {
-	sat, err := s.Saturation(t)
+	if s.ref != nil {
+		sat, err := s.Saturation(t)
+		if err != nil {
+			return math.NaN()
+		}
+		return sat.VapourDensity
+	}
+	p, _, err := s.SaturationPressure(t)
 	if err != nil {
 		return math.NaN()
 	}
-	return sat.VapourDensity
+	if t <= s.blendT {
+		return s.eos.vapourDensity(t, p)
+	}
+	rhoL, _ := s.liquid.density(t)
+	d := s.diameterAtBlend + (s.rhoC-s.diameterAtBlend)*(t-s.blendT)/(s.tc-s.blendT)
+	return 2*d - rhoL
 }
 
 // dewTemperature returns the temperature at which the saturated vapour
@@ -62,6 +78,12 @@ func (s *Substance) dewTemperature(rho float64) (float64, bool) {
 // ErrTwoPhase when (t, rho) lies between the saturated vapour and liquid
 // densities below Tc.
 func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) {
+	return s.singlePhasePressure(t, rho, nil)
+}
+
+// singlePhasePressure is SinglePhasePressure, taking the dew or bubble
+// temperature of rho from c when c is not nil.
+func (s *Substance) singlePhasePressure(t, rho float64, c *Isochore) (float64, Flags, error) {
 	if err := s.checkTemperature(t); err != nil {
 		return 0, 0, err
 	}
@@ -76,7 +98,7 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 		fl |= SupercriticalState
 	}
 	if rho <= s.rhoC {
-		ts, found := s.dewTemperature(rho)
+		ts, found := c.boundary(s, rho)
 		if !found {
 			// Thinner than the saturated vapour even at the freezing
 			// point: a gas at every temperature, on the equation of
@@ -95,7 +117,7 @@ func (s *Substance) SinglePhasePressure(t, rho float64) (float64, Flags, error) 
 		p, err := s.isochoricRise(t, ts, rho, ps)
 		return p, fl, err
 	}
-	ts, ok := s.bubbleTemperature(rho)
+	ts, ok := c.boundary(s, rho)
 	if ok && t < ts*(1-boundaryTolerance) {
 		return 0, 0, fmt.Errorf("%s: %.2f K at %.4g kg/m³ is below the liquid-full temperature %.2f K: %w", s.fluid.Name, t, rho, ts, ErrTwoPhase)
 	}
@@ -149,6 +171,51 @@ func (s *Substance) taitSlope(t, rho float64) float64 {
 	return b - a
 }
 
+// Isochore is the fluid at one density, prepared for single-phase
+// pressures at many temperatures: the temperature at which that density
+// meets the saturation curve (the dew or bubble temperature), which
+// SinglePhasePressure searches for on every call on the correlation route,
+// is found once, on first need. Pressure gives exactly what
+// SinglePhasePressure gives. It is safe for concurrent use; the zero value
+// is unusable (see Substance.PrepareIsochore).
+type Isochore struct {
+	s    *Substance
+	rho  float64
+	once sync.Once
+	// ts and found are the dew temperature (rho ≤ ρc) or the bubble
+	// temperature (rho > ρc) of rho and whether the curve reaches it.
+	ts    float64
+	found bool
+}
+
+// PrepareIsochore prepares c for density rho (kg/m³). Nothing is
+// computed until the first Pressure.
+func (s *Substance) PrepareIsochore(rho float64, c *Isochore) {
+	*c = Isochore{s: s, rho: rho}
+}
+
+// Pressure returns SinglePhasePressure(t, rho) for the isochore's density.
+func (c *Isochore) Pressure(t float64) (float64, Flags, error) {
+	return c.s.singlePhasePressure(t, c.rho, c)
+}
+
+// boundary returns the dew temperature (rho ≤ ρc) or the bubble
+// temperature (rho > ρc) of rho, from c when c is not nil (which must be
+// rho's isochore).
+func (c *Isochore) boundary(s *Substance, rho float64) (float64, bool) {
+	find := func() (float64, bool) {
+		if rho <= s.rhoC {
+			return s.dewTemperature(rho)
+		}
+		return s.bubbleTemperature(rho)
+	}
+	if c == nil {
+		return find()
+	}
+	c.once.Do(func() { c.ts, c.found = find() })
+	return c.ts, c.found
+}
+
 // boundaryTolerance is the relative distance inside a phase boundary still
 // treated as on it, so that rounding in an inverted correlation does not
 // turn a boundary state into a two-phase error.
@@ -172,9 +239,74 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 	if s.ref != nil {
 		return s.refCompressedLiquidDensityAt(t, p)
 	}
-	ps, fl, err := s.SaturationPressure(t)
-	if err != nil {
-		return 0, 0, err
+	var li LiquidIsotherm
+	s.PrepareLiquidIsotherm(t, &li)
+	return li.Density(p)
+}
+
+// LiquidIsotherm is the compressed liquid at one temperature, prepared
+// for densities at many pressures (a solver's steps): on the correlation
+// route the vapour pressure, the saturated liquid density and the Tait
+// parameter B of that temperature are worked out once. Density gives
+// exactly what CompressedLiquidDensity gives. The zero value is unusable;
+// see Substance.PrepareLiquidIsotherm.
+type LiquidIsotherm struct {
+	s  *Substance
+	t  float64
+	ps float64
+	fl Flags
+	// err is the vapour pressure's error at t, returned by every Density.
+	err       error
+	rhoSat, b float64
+	// quick says Density may check a strongly compressed state without
+	// SinglePhasePressure's bubble-temperature search (see quickCheck).
+	quick bool
+}
+
+// PrepareLiquidIsotherm prepares li for temperature t (K).
+func (s *Substance) PrepareLiquidIsotherm(t float64, li *LiquidIsotherm) {
+	*li = LiquidIsotherm{s: s, t: t}
+	if s.ref != nil {
+		return
+	}
+	li.ps, li.fl, li.err = s.SaturationPressure(t)
+	if li.err != nil {
+		return
+	}
+	li.rhoSat = s.liquidDensity(t)
+	li.b = s.compressed.bParam(t)
+	li.quick = s.liquid.decreasing() && t <= s.liquid.tJoin && t < taitMaxTr*s.tc-1e-6
+}
+
+// Density returns the density (kg/m³) of the liquid at the isotherm's
+// temperature and pressure p (Pa): CompressedLiquidDensity(t, p).
+func (li *LiquidIsotherm) Density(p float64) (float64, Flags, error) {
+	return li.density(p, li.quick)
+}
+
+// density is Density, with SinglePhasePressure's check of a strongly
+// compressed state made in full unless quick.
+//
+// That check asks SinglePhasePressure(t, ρ) for the pressure of the Tait
+// density ρ and keeps ρ when it gives p back. SinglePhasePressure first
+// finds the bubble temperature T_s of ρ (a search) and uses T_s only to
+// decide that the state is not two-phase (t ≥ T_s(1 − 10⁻⁹)) and not past
+// the Tait range (T_s < 0.95 Tc). When the saturated liquid density is
+// strictly decreasing on the search range [T_min, T_join] (decreasing) and
+// t ≤ T_join, ρ ≥ ρ_sat(t) puts the one root of ρ_sat(T) = ρ at or below t,
+// and the search returns it within 2·10⁻⁹ K (or fails, which decides the
+// same way): with t more than 10⁻⁶ K below 0.95 Tc both decisions come out
+// as above whatever the search returns, so quick skips it and takes the
+// Tait pressure at t directly, the same numbers SinglePhasePressure takes.
+// TestLiquidIsothermQuickCheck compares the two bit for bit.
+func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error) {
+	s, t := li.s, li.t
+	if s.ref != nil {
+		return s.refCompressedLiquidDensityAt(t, p)
+	}
+	ps, fl := li.ps, li.fl
+	if li.err != nil {
+		return 0, 0, li.err
 	}
 	if math.IsNaN(p) || math.IsInf(p, 0) {
 		return 0, 0, fmt.Errorf("%s: pressure %v Pa: %w", s.fluid.Name, p, ErrNotFinite)
@@ -182,20 +314,26 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 	if p < ps*(1-1e-12) {
 		return 0, 0, fmt.Errorf("%s: pressure %.4g Pa is below the vapour pressure %.4g Pa at %.2f K, where the liquid boils: %w", s.fluid.Name, p, ps, t, ErrOutOfDomain)
 	}
-	rhoSat := s.liquidDensity(t)
+	rhoSat := li.rhoSat
 	if t > taitMaxTr*s.tc {
 		rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
 		return rho, fl | f2, err
 	}
-	rho := s.compressed.density(t, math.Max(p, ps), rhoSat, ps)
+	rho := s.compressed.densityB(li.b, math.Max(p, ps), rhoSat, ps)
 	// The closed form holds wherever SinglePhasePressure uses Tait; where
 	// that has handed over to the equation of state, invert it instead.
 	// Within 1 % of (B + Ps) above saturation the liquid is compressed by
 	// under 0.1 %, far from any bend in the isochores: no check needed.
-	if b := s.compressed.bParam(t); p-ps < 0.01*(b+ps) {
+	if b := li.b; p-ps < 0.01*(b+ps) {
 		return rho, fl, nil
 	}
-	if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && s.taitSlope(t, rho) > 0 {
+		// SinglePhasePressure(t, ρ) is the Tait pressure at t (taitPressure
+		// with this isotherm's values) and its flags are fl.
+		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+			return rho, fl, nil
+		}
+	} else if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
 		return rho, fl | f2, nil
 	}
 	if inv, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity()); err == nil {

@@ -43,13 +43,21 @@ func (t *tait) bParam(temp float64) float64 {
 // density returns the liquid density at (temp, p) from the saturated liquid
 // density rhoSat and saturation pressure ps at temp. p ≥ ps.
 func (t *tait) density(temp, p, rhoSat, ps float64) float64 {
-	b := t.bParam(temp)
+	return t.densityB(t.bParam(temp), p, rhoSat, ps)
+}
+
+// densityB is density with B(temp) given.
+func (t *tait) densityB(b, p, rhoSat, ps float64) float64 {
 	return rhoSat / (1 - t.c*math.Log((b+p)/(b+ps)))
 }
 
 // pressure inverts the Tait equation: the pressure at which the liquid at
 // temp has density rho (≥ rhoSat).
 func (t *tait) pressure(temp, rho, rhoSat, ps float64) float64 {
-	b := t.bParam(temp)
+	return t.pressureB(t.bParam(temp), rho, rhoSat, ps)
+}
+
+// pressureB is pressure with B(temp) given.
+func (t *tait) pressureB(b, rho, rhoSat, ps float64) float64 {
 	return (b+ps)*math.Exp((1-rhoSat/rho)/t.c) - b
 }

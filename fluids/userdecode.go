@@ -60,7 +60,7 @@ func duplicateKeys(b []byte) error {
 	type frame struct {
 		object bool
 		path   string
-		seen   map[string]int
+		seen   map[string]int64 // offset of each key
 		index  int
 		key    string // the key whose value comes next, in an object
 	}
@@ -98,15 +98,18 @@ func duplicateKeys(b []byte) error {
 				continue
 			}
 			key, _ := tok.(string)
-			line := lineOf(b, dec.InputOffset())
+			// Offsets are kept and turned into lines only for the error:
+			// counting lines at every key would read the file again each
+			// time.
+			off := dec.InputOffset()
 			if first, dup := top.seen[key]; dup {
 				path := key
 				if top.path != "" {
 					path = top.path + "." + key
 				}
-				return fmt.Errorf("line %d: field %s appears twice in the same object (first on line %d); give each field once: %w", line, path, first, ErrInvalidFluid)
+				return fmt.Errorf("line %d: field %s appears twice in the same object (first on line %d); give each field once: %w", lineOf(b, off), path, lineOf(b, first), ErrInvalidFluid)
 			}
-			top.seen[key] = line
+			top.seen[key] = off
 			top.key = key
 			continue
 		}
@@ -118,7 +121,7 @@ func duplicateKeys(b []byte) error {
 				if top != nil && top.object {
 					top.key = ""
 				}
-				stack = append(stack, &frame{object: true, path: p, seen: map[string]int{}})
+				stack = append(stack, &frame{object: true, path: p, seen: map[string]int64{}})
 			case '[':
 				p := child()
 				if top != nil && top.object {

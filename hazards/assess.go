@@ -79,13 +79,10 @@ type Assessment struct {
 	// Flags gathers every correlation stretched anywhere in the review.
 	Flags fluids.Flags
 
-	// Trace is the calculation record: numbered steps in the order a hand
-	// check follows. Each finding lists the steps behind it.
-	Trace []Step
-
-	vessel     *sealedVessel
-	release    *releaseModel
-	traceIndex map[string]int
+	vessel  *sealedVessel
+	release *releaseModel
+	// rec is the calculation record, built on first use (Trace).
+	rec *record
 }
 
 // MaxSafe holds the limits found by root-finding. A limit that lies
@@ -156,12 +153,13 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	}
 	a.VolumeM3 = d.Vessel.Volume()
 	a.FillDensity = d.FillMassKg / a.VolumeM3
-	v, err := newSealedVessel(sub, d.FillMassKg, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
+	sats := newSatMemo(sub, d.ResidualGasPressurePa > 0, d.SealingTemperatureK, d.HottestK, d.ColdestK)
+	v, err := newSharedVessel(sub, d.FillMassKg, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats)
 	if err != nil {
 		return nil, err
 	}
 	a.vessel = v
-	if sat, err := sub.Saturation(d.SealingTemperatureK); err == nil {
+	if sat, err := sats.saturation(sub, d.SealingTemperatureK); err == nil {
 		a.LiquidFractionAtSealing = math.Max(0, (a.FillDensity-sat.VapourDensity)/(sat.LiquidDensity-sat.VapourDensity))
 	}
 	if a.Hot, err = v.state(d.HottestK); err != nil {
@@ -171,7 +169,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 		return nil, fmt.Errorf("state at the coldest temperature: %w", err)
 	}
 	a.Flags = a.Hot.Flags | a.Cold.Flags
-	a.Worst = worstCase(d, sub)
+	a.Worst = worstCase(d, sub, sats)
 	if a.Worst != nil && a.Worst.Sealable {
 		a.Flags |= a.Worst.Hot.Flags
 	}
@@ -203,7 +201,10 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	a.rupture(sub)
 	a.releaseModel(sub)
 	a.findings()
-	a.buildTrace(sub)
+	a.rec = &record{a: a}
+	for i := range a.Findings {
+		a.Findings[i].rec, a.Findings[i].index = a.rec, i
+	}
 	return a, nil
 }
 
@@ -260,8 +261,19 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 	d := &a.Design
 	lo, hi := d.ColdestK, a.searchTopK(sub)
 	allow := a.AllowablePressurePa()
+	// The states at the coldest and hottest temperatures are already
+	// known; any other comes from the vessel.
+	state := func(t float64) (VesselState, error) {
+		switch t {
+		case d.ColdestK:
+			return a.Cold, nil
+		case d.HottestK:
+			return a.Hot, nil
+		}
+		return a.vessel.state(t)
+	}
 	pressureGap := func(t float64) float64 {
-		st, err := a.vessel.state(t)
+		st, err := state(t)
 		if err != nil {
 			return math.NaN()
 		}
@@ -269,7 +281,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 	}
 	minU := d.Criteria.MinUllagePercent
 	ullageGap := func(t float64) float64 {
-		st, err := a.vessel.state(t)
+		st, err := state(t)
 		if err != nil {
 			return math.NaN()
 		}
@@ -302,14 +314,15 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 	}
 
 	// Maximum safe fill at the hottest temperature.
-	sat, err := sub.Saturation(d.SealingTemperatureK)
+	sats := a.vessel.sats
+	sat, err := sats.saturation(sub, d.SealingTemperatureK)
 	if err != nil {
 		return err
 	}
 	mMax := sat.LiquidDensity * a.VolumeM3 * (1 - 1e-9)
+	var v sealedVessel // each step's vessel, sealed in the same memory
 	fillGap := func(mass float64) float64 {
-		v, err := newSealedVessel(sub, mass, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
-		if err != nil {
+		if err := v.seal(sub, mass, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats); err != nil {
 			return math.NaN()
 		}
 		st, err := v.state(d.HottestK)
@@ -334,6 +347,18 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *solve.Root, error) {
 	gap = unsafeWhereUnknown(gap)
 	gLo, gHi := gap(lo), gap(hi)
+	// Brent starts from the same two ends: their values are kept (each
+	// gap is a pure function, so only the work changes).
+	known := gap
+	gap = func(x float64) float64 {
+		switch x {
+		case lo:
+			return gLo
+		case hi:
+			return gHi
+		}
+		return known(x)
+	}
 	if math.IsNaN(gLo) || math.IsNaN(gHi) {
 		return 0, "", nil, fmt.Errorf("the model cannot be evaluated at %g or %g", lo, hi)
 	}
@@ -372,7 +397,7 @@ func (a *Assessment) rupture(sub *fluids.Substance) {
 	st := a.Hot
 	satPa, bulk := 0.0, 0.0
 	if st.TemperatureK <= sub.CriticalTemperature() {
-		if sat, err := sub.Saturation(st.TemperatureK); err == nil {
+		if sat, err := a.vessel.sats.saturation(sub, st.TemperatureK); err == nil {
 			satPa = sat.PressurePa
 			if st.VapourDensity == 0 {
 				st.VapourDensity = sat.VapourDensity
@@ -404,12 +429,13 @@ func (a *Assessment) releaseModel(sub *fluids.Substance) {
 	mm := a.Fluid.MolarMass.Value
 	exposureS := d.Room.ExposureMinutes * 60
 	r := Release{Room: d.Room, MassKg: d.FillMassKg}
-	r.Bound = concentrationBound(sub, d, rel)
+	r.Bound = concentrationBound(sub, d, rel, a.vessel.sats)
 	rel.capMgM3 = units.PpmToMgPerM3(r.Bound.PPM, mm)
 	r.Peak = rel.exposure(PeakAveragingS, exposureS, mm)
 	r.STEL = rel.exposure(15*60, exposureS, mm)
 	r.TWA8h = rel.exposure(8*3600, exposureS, mm)
-	specs, notes := AppliedLimitSpecs(a.Fluid, d.Criteria)
+	var buf [32]LimitSpec // the limits before evaluation, on the stack
+	specs, notes := appendAppliedLimitSpecs(buf[:0], a.Fluid, d.Criteria)
 	r.Limits = evaluateLimits(specs, rel, exposureS, mm)
 	r.LimitSets, r.LimitNotes = d.Criteria.AppliedLimitSets(), notes
 	if a.Fluid.Flammability.LFLPercent != nil {
@@ -423,11 +449,11 @@ func (a *Assessment) releaseModel(sub *fluids.Substance) {
 }
 
 // concentrationBound works out the physical ceiling on the concentration.
-func concentrationBound(sub *fluids.Substance, d *Design, rel *releaseModel) ConcentrationBound {
+func concentrationBound(sub *fluids.Substance, d *Design, rel *releaseModel, sats *satMemo) ConcentrationBound {
 	mm := sub.Fluid().MolarMass.Value
 	b := ConcentrationBound{RoomTemperatureK: math.Max(d.HottestK, units.CelsiusToKelvin(25)), SaturatedPPM: 1e6}
 	if b.RoomTemperatureK < sub.CriticalTemperature() {
-		if sat, err := sub.Saturation(b.RoomTemperatureK); err == nil && sat.PressurePa > 0 {
+		if sat, err := sats.saturation(sub, b.RoomTemperatureK); err == nil && sat.PressurePa > 0 {
 			b.SaturatedPPM = math.Min(1e6, sat.PressurePa/d.AmbientPressurePa*1e6)
 		}
 	}

@@ -43,3 +43,21 @@ func BenchmarkVesselState(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkAssessWithRecord is BenchmarkAssess with the calculation
+// record written out (Trace), which only the record and the window's
+// working panel ask for.
+func BenchmarkAssessWithRecord(b *testing.B) {
+	lib := testLibrary(b)
+	d := typicalDesign()
+	b.ReportAllocs()
+	for i := 0; i < b.N; i++ {
+		a, err := Assess(d, lib)
+		if err != nil {
+			b.Fatal(err)
+		}
+		if len(a.Trace()) == 0 {
+			b.Fatal("no record")
+		}
+	}
+}

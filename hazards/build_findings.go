@@ -8,7 +8,10 @@ func (a *Assessment) findings() {
 	d := &a.Design
 	cr := d.Criteria
 	f := a.Fluid
-	var fs []Finding
+	var ar factArena
+	// Room for every finding: the nine below, one per thermal-shock part,
+	// per averaging kind and per public tier.
+	fs := make([]Finding, 0, 9+len(a.Shock.Parts)+len(AveragingKinds)+len(publicTiers)+countOtherKinds(a.Release.Limits))
 
 	// Ullage and the liquid-full point.
 	u := atLeast(CriterionUllage, "Ullage at the hottest temperature", "%", a.Hot.UllagePercent, cr.MinUllagePercent, 1,
@@ -20,10 +23,10 @@ func (a *Assessment) findings() {
 	if a.Hot.Phase == PhaseLiquidFull {
 		u.Status = StatusFail
 	}
-	u.Facts = append([]Fact{fact("hottest temperature", FactTemperature, d.HottestK)}, liquidFullFact(a.LiquidFullReached || a.Hot.Phase == PhaseLiquidFull, a.LiquidFullK))
+	u.Facts = ar.keep(fact("hottest temperature", FactTemperature, d.HottestK), liquidFullFact(a.LiquidFullReached || a.Hot.Phase == PhaseLiquidFull, a.LiquidFullK))
 	fs = append(fs, u)
 	if w := a.Worst; w != nil {
-		fs = append(fs, worstCaseFinding(a, w))
+		fs = append(fs, worstCaseFinding(a, w, &ar))
 	}
 
 	// Burst.
@@ -31,10 +34,10 @@ func (a *Assessment) findings() {
 		safetyFactorCautionBand, DefaultCriteriaGrounds["min_burst_safety_factor"])
 	b.ValueBound = a.BurstSafetyFactorBound
 	over := a.Hot.PressurePa - d.AmbientPressurePa
-	b.Facts = []Fact{fact("hottest temperature", FactTemperature, d.HottestK), fact("pressure inside", FactPressure, a.Hot.PressurePa),
-		fact("ambient pressure", FactPressure, d.AmbientPressurePa)}
+	b.Facts = ar.keep(fact("hottest temperature", FactTemperature, d.HottestK), fact("pressure inside", FactPressure, a.Hot.PressurePa),
+		fact("ambient pressure", FactPressure, d.AmbientPressurePa))
 	if over > 0 {
-		b.Facts = append(b.Facts, fact("overpressure", FactPressure, over), fact("long-term burst overpressure", FactPressure, a.Strength.LongTermBurstPa),
+		b.Facts = ar.extend(b.Facts, fact("overpressure", FactPressure, over), fact("long-term burst overpressure", FactPressure, a.Strength.LongTermBurstPa),
 			named("glass", a.Glass.Name), named("governing part", a.Parts[a.Strength.GoverningPart].Name))
 	}
 	if over <= 0 {
@@ -42,13 +45,13 @@ func (a *Assessment) findings() {
 	}
 	fs = append(fs, b)
 	if ws := a.WorstStrength; ws != nil {
-		fs = append(fs, worstStrengthFinding(a, ws))
+		fs = append(fs, worstStrengthFinding(a, ws, &ar))
 	}
 
 	p := atMost(CriterionFailure, "Failure probability over the service life", "", a.FailureProbability, cr.MaxFailureProbability, probabilityCautionFactor,
 		DefaultCriteriaGrounds["max_failure_probability"])
 	p.ValueBound = a.FailureProbabilityBound
-	p.Facts = []Fact{fact("hours at the hottest temperature", FactHours, d.HoursAtHottest), fact("service life", FactYears, d.ServiceLifeYears)}
+	p.Facts = ar.keep(fact("hours at the hottest temperature", FactHours, d.HoursAtHottest), fact("service life", FactYears, d.ServiceLifeYears))
 	if over <= 0 {
 		p.Status, p.NotApplicable, p.Value, p.Margin = StatusPass, ReasonNoBurstLoad, 0, 0
 	}
@@ -56,9 +59,9 @@ func (a *Assessment) findings() {
 
 	im := atLeast(CriterionImplosion, "Implosion safety factor at the coldest temperature", "", a.ImplosionSafetyFactor, cr.MinImplosionSafetyFactor,
 		safetyFactorCautionBand, DefaultCriteriaGrounds["min_implosion_safety_factor"])
-	im.Facts = []Fact{fact("coldest temperature", FactTemperature, d.ColdestK)}
+	im.Facts = ar.keep(fact("coldest temperature", FactTemperature, d.ColdestK))
 	if a.ExternalLoadPa > 0 {
-		im.Facts = append(im.Facts, fact("external pressure", FactPressure, a.ExternalLoadPa),
+		im.Facts = ar.extend(im.Facts, fact("external pressure", FactPressure, a.ExternalLoadPa),
 			fact("knocked-down buckling pressure", FactPressure, a.ImplosionSafetyFactor*a.ExternalLoadPa))
 	}
 	switch {
@@ -68,25 +71,25 @@ func (a *Assessment) findings() {
 		im.ValueBound = AtLeast
 	}
 	fs = append(fs, im)
-	fs = a.withShockAndSeal(fs)
+	fs = a.withShockAndSeal(fs, &ar)
 
-	fs = append(fs, exposureFindings(f, &a.Release, cr)...)
+	fs = appendExposureFindings(fs, f, &a.Release, cr, &ar)
 
 	if f.Flammability.Flammable && f.Flammability.LFLPercent != nil {
 		fl := atMost(CriterionFlammability, "Peak concentration as a percentage of the LFL", "% LFL", a.Release.PercentLFL, cr.MaxPercentLFL, lflCautionFraction,
 			f.Flammability.LFLPercent.Source)
-		fl.Facts = []Fact{fact("peak concentration (highest one-minute average)", FactConcentration, a.Release.Peak.PPM),
-			fact("lower flammable limit, % by volume", FactPercent, f.Flammability.LFLPercent.Value)}
+		fl.Facts = ar.keep(fact("peak concentration (highest one-minute average)", FactConcentration, a.Release.Peak.PPM),
+			fact("lower flammable limit, % by volume", FactPercent, f.Flammability.LFLPercent.Value))
 		if a.Release.Peak.Bounded {
 			fl.ValueBound = AtMost
 			fl.Facts[0].Bound = AtMost
-			fl.Facts = append(fl.Facts, named("held to the physical bound", a.Release.Bound.By))
+			fl.Facts = ar.extend(fl.Facts, named("held to the physical bound", a.Release.Bound.By))
 		}
 		fs = append(fs, fl)
 	} else {
 		fs = append(fs, Finding{Criterion: CriterionFlammability, Title: "Flammability", Status: StatusPass, Unit: "% LFL",
 			Limit: cr.MaxPercentLFL, Direction: AtMost, NotApplicable: ReasonNotFlammable, Source: "library: not flammable",
-			Facts: []Fact{named("fluid", f.Name), named("note", f.Flammability.Note)}})
+			Facts: ar.keep(named("fluid", f.Name), named("note", f.Flammability.Note))})
 	}
 
 	if a.Flags.Extrapolated() {
@@ -118,7 +121,7 @@ func (a *Assessment) findings() {
 
 // worstCaseFinding judges the worst-case unit's ullage by the same rule as
 // the nominal unit's.
-func worstCaseFinding(a *Assessment, w *WorstCase) Finding {
+func worstCaseFinding(a *Assessment, w *WorstCase, ar *factArena) Finding {
 	d := &a.Design
 	cr := d.Criteria
 	f := atLeast(CriterionUllageWorst, "Ullage at the hottest temperature, worst-case unit", "%", w.Hot.UllagePercent, cr.MinUllagePercent, 1,
@@ -130,12 +133,12 @@ func worstCaseFinding(a *Assessment, w *WorstCase) Finding {
 	if !w.Sealable || w.Hot.Phase == PhaseLiquidFull {
 		f.Status = StatusFail
 	}
-	f.Facts = []Fact{fact("fill of the worst-case unit", FactMass, w.FillMassKg), fact("internal volume of the worst-case unit", FactVolume, w.VolumeM3),
-		fact("hottest temperature", FactTemperature, d.HottestK)}
+	f.Facts = ar.keep(fact("fill of the worst-case unit", FactMass, w.FillMassKg), fact("internal volume of the worst-case unit", FactVolume, w.VolumeM3),
+		fact("hottest temperature", FactTemperature, d.HottestK))
 	if !w.Sealable {
-		f.Facts = append(f.Facts, named("sealing", "not possible: the fill, as liquid, does not fit at the sealing temperature"))
+		f.Facts = ar.extend(f.Facts, named("sealing", "not possible: the fill, as liquid, does not fit at the sealing temperature"))
 	} else {
-		f.Facts = append(f.Facts, liquidFullFact(w.LiquidFullReached || w.Hot.Phase == PhaseLiquidFull, w.LiquidFullK))
+		f.Facts = ar.extend(f.Facts, liquidFullFact(w.LiquidFullReached || w.Hot.Phase == PhaseLiquidFull, w.LiquidFullK))
 	}
 	return f
 }
@@ -194,7 +197,7 @@ func (a *Assessment) stretchedValues(uses []stateUse) []string {
 
 // worstStrengthFinding judges the weakest permitted unit's burst safety
 // factor by the same rule as the nominal unit's.
-func worstStrengthFinding(a *Assessment, ws *WorstStrength) Finding {
+func worstStrengthFinding(a *Assessment, ws *WorstStrength, ar *factArena) Finding {
 	d := &a.Design
 	cr := d.Criteria
 	f := atLeast(CriterionBurstWorst, "Burst safety factor at the hottest temperature, weakest permitted unit", "", ws.SafetyFactor, cr.MinBurstSafetyFactor,
@@ -209,11 +212,11 @@ func worstStrengthFinding(a *Assessment, ws *WorstStrength) Finding {
 	} else if a.Worst != nil && !a.Worst.Sealable {
 		whose = "the nominal unit's pressure (the worst-case fill cannot be sealed; see the worst-case ullage)"
 	}
-	f.Facts = []Fact{fact("hottest temperature", FactTemperature, d.HottestK), named("pressure used", whose)}
+	f.Facts = ar.keep(fact("hottest temperature", FactTemperature, d.HottestK), named("pressure used", whose))
 	if ws.OverPa > 0 {
 		pf := fact("failure probability over the life", FactProbability, ws.FailureProbability)
 		pf.Bound = ws.FailureProbabilityBound
-		f.Facts = append(f.Facts, fact("overpressure, walls at their thinnest", FactPressure, ws.OverPa),
+		f.Facts = ar.extend(f.Facts, fact("overpressure, walls at their thinnest", FactPressure, ws.OverPa),
 			fact("long-term burst overpressure, walls at their thinnest", FactPressure, ws.Strength.LongTermBurstPa), pf)
 	}
 	return f

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"strings"
+	"unicode/utf8"
 )
 
 // Design is everything a review needs to know about one revision of a
@@ -222,6 +223,9 @@ func (v *Vessel) validate(c *checker) {
 		c.fail("vessel.parts", len(v.Parts), "at most 50 parts")
 	}
 	for i, p := range v.Parts {
+		if c.err == nil && p.fine() {
+			continue // every check below passes: no field names to build
+		}
 		f := fmt.Sprintf("vessel.parts[%d]", i)
 		c.text(f+".name", p.Name, MaxPartNameLength)
 		if p.Shape != ShapeSphere && p.Shape != ShapeTube {
@@ -249,6 +253,22 @@ func (v *Vessel) validate(c *checker) {
 	}
 }
 
+// fine reports whether the part passes every check Vessel.validate makes
+// of it, each the exact opposite of that check's failure.
+func (p *Part) fine() bool {
+	if utf8.RuneCountInString(p.Name) > MaxPartNameLength || (p.Shape != ShapeSphere && p.Shape != ShapeTube) {
+		return false
+	}
+	if !inRange(p.OuterDiameterM, 1e-3, 2) || !inRange(p.WallThicknessM, 1e-5, 0.1) || p.WallThicknessM >= p.OuterDiameterM/2 ||
+		!inRange(p.WallToleranceM, 0, p.WallThicknessM*0.5) {
+		return false
+	}
+	if p.Shape == ShapeTube {
+		return inRange(p.LengthM, 1e-4, 5)
+	}
+	return inRange(p.LengthM, 0, 0)
+}
+
 // Validate checks a release scenario; field prefixes error field names.
 func (r *Room) Validate(field string) error {
 	if r.PresetID != "" {
@@ -265,12 +285,25 @@ func (r *Room) Validate(field string) error {
 // themselves.
 func (r *Room) validateRanges(field string) error {
 	c := &checker{}
-	c.number(field+".volume_m3", r.VolumeM3, 0.01, 1e6, "m³")
-	c.number(field+".air_changes_per_hour", r.AirChangesPerHour, 0, 100, "per hour")
-	c.number(field+".mixing_factor", r.MixingFactor, 1, 20, "(1 = perfectly mixed)")
-	c.number(field+".near_field_radius_m", r.NearFieldRadiusM, 0.01, 5, "m")
-	c.number(field+".near_field_air_speed_m_s", r.NearFieldAirSpeed, 0.005, 5, "m/s")
-	c.number(field+".exposure_minutes", r.ExposureMinutes, 1, 1440, "minutes")
+	// Each name is built only for a value that fails its check.
+	if !inRange(r.VolumeM3, 0.01, 1e6) {
+		c.number(field+".volume_m3", r.VolumeM3, 0.01, 1e6, "m³")
+	}
+	if !inRange(r.AirChangesPerHour, 0, 100) {
+		c.number(field+".air_changes_per_hour", r.AirChangesPerHour, 0, 100, "per hour")
+	}
+	if !inRange(r.MixingFactor, 1, 20) {
+		c.number(field+".mixing_factor", r.MixingFactor, 1, 20, "(1 = perfectly mixed)")
+	}
+	if !inRange(r.NearFieldRadiusM, 0.01, 5) {
+		c.number(field+".near_field_radius_m", r.NearFieldRadiusM, 0.01, 5, "m")
+	}
+	if !inRange(r.NearFieldAirSpeed, 0.005, 5) {
+		c.number(field+".near_field_air_speed_m_s", r.NearFieldAirSpeed, 0.005, 5, "m/s")
+	}
+	if !inRange(r.ExposureMinutes, 1, 1440) {
+		c.number(field+".exposure_minutes", r.ExposureMinutes, 1, 1440, "minutes")
+	}
 	if c.err == nil && NearFieldVolume(r.NearFieldRadiusM) >= r.VolumeM3/2 {
 		c.fail(field+".near_field_radius_m", r.NearFieldRadiusM, "the near-field hemisphere must be less than half the room")
 	}

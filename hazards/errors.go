@@ -69,6 +69,10 @@ func (c *checker) fail(field string, value any, want string, args ...any) {
 
 func isFinite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
+// inRange reports whether number(…, x, lo, hi, …) passes: x finite and
+// lo ≤ x ≤ hi.
+func inRange(x, lo, hi float64) bool { return isFinite(x) && x >= lo && x <= hi }
+
 // number requires lo ≤ x ≤ hi and x finite.
 func (c *checker) number(field string, x, lo, hi float64, unit string) {
 	first := c.err

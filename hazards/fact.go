@@ -68,3 +68,33 @@ func (k FactKind) unitOf() string {
 	}
 	return ""
 }
+
+// factArena hands out the fact lists of an assessment's findings from a
+// few shared backing arrays instead of one allocation per finding. Each
+// list is capped at its own length, so an append by anyone but the arena
+// copies it and never overwrites the next finding's facts.
+type factArena struct {
+	buf   []Fact
+	start int // where the list handed out last begins in buf
+}
+
+// keep returns a list holding fs.
+func (ar *factArena) keep(fs ...Fact) []Fact {
+	if len(ar.buf)+len(fs) > cap(ar.buf) {
+		ar.buf = make([]Fact, 0, max(64, len(fs)))
+	}
+	ar.start = len(ar.buf)
+	ar.buf = append(ar.buf, fs...)
+	return ar.buf[ar.start:len(ar.buf):len(ar.buf)]
+}
+
+// extend returns list with more appended, in place when list is the one
+// handed out last and there is room after it.
+func (ar *factArena) extend(list []Fact, more ...Fact) []Fact {
+	n := len(ar.buf)
+	if len(list) > 0 && ar.start+len(list) == n && &list[0] == &ar.buf[ar.start] && n+len(more) <= cap(ar.buf) {
+		ar.buf = append(ar.buf, more...)
+		return ar.buf[ar.start:len(ar.buf):len(ar.buf)]
+	}
+	return append(list, more...)
+}

@@ -2,9 +2,8 @@ package hazards
 
 import (
 	"encoding/json"
-	"fmt"
 	"math"
-	"sort"
+	"slices"
 
 	"ullage/fluids"
 )
@@ -128,9 +127,6 @@ type Finding struct {
 	// Facts are the values behind the finding (temperatures, pressures,
 	// the glass ...), typed, for the detail each output words.
 	Facts []Fact `json:"facts"`
-	// Steps are the numbers of the calculation-record steps behind this
-	// finding, its own comparison step first.
-	Steps []int `json:"steps"`
 	// Direction says which way the limit holds: the value must be at
 	// least the limit, or at most.
 	Direction Direction `json:"direction"`
@@ -147,17 +143,49 @@ type Finding struct {
 	// the governing benchmark protects ("General public, children
 	// included, 30 minutes").
 	Protects string `json:"protects,omitempty"`
+
+	// rec is the calculation record of the assessment the finding is of
+	// and index the finding's place in its Findings (see Steps).
+	rec   *record
+	index int
+}
+
+// Steps returns the numbers of the calculation-record steps behind the
+// finding, its own comparison step first (Assessment.Trace); nil for a
+// finding made outside an assessment. The first call on an assessment
+// builds its record.
+func (f Finding) Steps() []int {
+	if f.rec == nil {
+		return nil
+	}
+	return f.rec.built().findings[f.index]
 }
 
 // MarshalJSON writes a finding with null value and margin when they were
-// not computed (NotApplicable set).
+// not computed (NotApplicable set), and with the steps behind it.
+// The fields are listed here in Finding's order, with the steps where the
+// field of that name used to be; TestFindingJSONHasEveryField keeps the
+// list whole.
 func (f Finding) MarshalJSON() ([]byte, error) {
-	type plain Finding
 	out := struct {
-		plain
-		Value  *float64 `json:"value"`
-		Margin *float64 `json:"margin"`
-	}{plain: plain(f)}
+		Criterion     string    `json:"criterion"`
+		Title         string    `json:"title"`
+		Status        Status    `json:"status"`
+		Limit         float64   `json:"limit"`
+		Unit          string    `json:"unit"`
+		Source        string    `json:"source"`
+		Facts         []Fact    `json:"facts"`
+		Steps         []int     `json:"steps"`
+		Direction     Direction `json:"direction"`
+		NotApplicable Reason    `json:"not_applicable,omitempty"`
+		ValueBound    Direction `json:"value_bound,omitempty"`
+		Stretched     []string  `json:"stretched,omitempty"`
+		Protects      string    `json:"protects,omitempty"`
+		Value         *float64  `json:"value"`
+		Margin        *float64  `json:"margin"`
+	}{Criterion: f.Criterion, Title: f.Title, Status: f.Status, Limit: f.Limit, Unit: f.Unit, Source: f.Source, Facts: f.Facts,
+		Steps: f.Steps(), Direction: f.Direction, NotApplicable: f.NotApplicable, ValueBound: f.ValueBound, Stretched: f.Stretched,
+		Protects: f.Protects}
 	if f.NotApplicable == "" {
 		out.Value, out.Margin = &f.Value, &f.Margin
 	}
@@ -210,38 +238,37 @@ const (
 // kind with the largest share of its limit governs; a kind with no
 // published limit is listed as not assessed.
 func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
-	var specs []LimitSpec
-	for _, l := range r.Limits {
-		specs = append(specs, l.LimitSpec)
-	}
-	var out []Finding
+	return appendExposureFindings(nil, f, r, cr, &factArena{})
+}
+
+// appendExposureFindings appends the findings of exposureFindings to out,
+// their facts from ar.
+func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	assessed := 0
-	for _, kind := range kindsOf(specs) {
-		if IsPublicKind(kind) || !cr.appliesOccupational() {
+	occupational := cr.appliesOccupational()
+	var kb [8]string
+	for _, kind := range appendKindsOfLimits(kb[:0], r.Limits) {
+		if IsPublicKind(kind) || !occupational {
 			continue
 		}
 		id, title := exposureCriterion(kind), exposureTitle(kind)
 		gov := -1
-		var names []string
 		for i, l := range r.Limits {
-			if l.Kind == kind {
-				names = append(names, fmt.Sprintf("%s %.0f %%", l.Name, 100*l.Share))
-				if l.Governs {
-					gov = i
-				}
+			if l.Kind == kind && l.Governs {
+				gov = i
 			}
 		}
 		if gov < 0 {
 			out = append(out, Finding{Criterion: id, Title: title, Status: StatusNotAssessed, Unit: "ppm", Direction: AtMost,
 				NotApplicable: ReasonNoPublishedLimit, Source: "none in the library for the chosen bodies",
-				Facts: []Fact{named("kind of limit", kind), named("fluid", f.Name)}})
+				Facts: ar.keep(named("kind of limit", kind), named("fluid", f.Name))})
 			continue
 		}
 		assessed++
 		lim := r.Limits[gov]
 		e := lim.Exposure
 		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
-			fmt.Sprintf("%s %g ppm: %s", lim.Name, lim.PPM, lim.Source))
+			limitSource(lim.Name, lim.PPM, "", lim.Source))
 		if e.Bounded {
 			fd.ValueBound = AtMost
 		}
@@ -253,32 +280,32 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if e.AveragingS <= PeakAveragingS {
 			avg = named("averaging period", "the peak (highest one-minute average)")
 		}
-		fd.Facts = []Fact{avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share)}
+		fd.Facts = ar.keep(avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share))
 		for _, l := range r.Limits {
 			if l.Kind == kind && l.Name != lim.Name {
-				fd.Facts = append(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
+				fd.Facts = ar.extend(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
 			}
 		}
 		if e.Bounded {
-			fd.Facts = append(fd.Facts, named("held to the physical bound", r.Bound.By))
+			fd.Facts = ar.extend(fd.Facts, named("held to the physical bound", r.Bound.By))
 		}
 		out = append(out, fd)
 	}
 	if cr.Applies(LimitSetUSPublicAcute) {
-		pub := publicFindings(f, r, cr)
-		for _, p := range pub {
+		n := len(out)
+		out = appendPublicFindings(out, f, r, cr, ar)
+		for _, p := range out[n:] {
 			if p.NotApplicable == "" {
 				assessed++
 			}
 		}
-		out = append(out, pub...)
 	}
 	if assessed == 0 {
 		fd := Finding{Criterion: CriterionNoLimit, Title: "Published exposure limit", Status: StatusCaution, Unit: "ppm",
 			Source: "none found in the library for the chosen bodies", Direction: AtMost, Value: r.Peak.PPM}
-		fd.Facts = []Fact{named("fluid", f.Name), fact("peak concentration", FactConcentration, r.Peak.PPM)}
+		fd.Facts = ar.keep(named("fluid", f.Name), fact("peak concentration", FactConcentration, r.Peak.PPM))
 		for _, n := range f.NoNumericLimit {
-			fd.Facts = append(fd.Facts, named(n.Body+" "+n.Kind, n.Note))
+			fd.Facts = ar.extend(fd.Facts, named(n.Body+" "+n.Kind, n.Note))
 		}
 		out = append(out, fd)
 	}
@@ -286,21 +313,41 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 }
 
 func sortFindings(fs []Finding) {
-	order := map[string]int{
-		CriterionUllage: 0, CriterionUllageWorst: 1, CriterionBurst: 2, CriterionBurstWorst: 3, CriterionFailure: 4, CriterionImplosion: 5,
-		CriterionIDLH: 6, CriterionCeiling: 7, CriterionSTEL: 8, CriterionTWA: 9, CriterionNoLimit: 11,
-		CriterionFlammability: 12, CriterionCorrelationUse: 13,
-	}
 	rank := func(c string) int {
-		if IsThermalShockCriterion(c) {
-			return order[CriterionImplosion] // kept after the implosion finding by the stable sort
+		switch c {
+		case CriterionUllage:
+			return 0
+		case CriterionUllageWorst:
+			return 1
+		case CriterionBurst:
+			return 2
+		case CriterionBurstWorst:
+			return 3
+		case CriterionFailure:
+			return 4
+		case CriterionImplosion:
+			return 5
+		case CriterionIDLH:
+			return 6
+		case CriterionCeiling:
+			return 7
+		case CriterionSTEL:
+			return 8
+		case CriterionTWA:
+			return 9
+		case CriterionNoLimit:
+			return 11
+		case CriterionFlammability:
+			return 12
+		case CriterionCorrelationUse:
+			return 13
 		}
-		if n, ok := order[c]; ok {
-			return n
+		if IsThermalShockCriterion(c) {
+			return 5 // the implosion finding's: kept after it by the stable sort
 		}
 		return 10 // a further exposure kind, after the TWA
 	}
-	sort.SliceStable(fs, func(i, j int) bool { return rank(fs[i].Criterion) < rank(fs[j].Criterion) })
+	slices.SortStableFunc(fs, func(a, b Finding) int { return rank(a.Criterion) - rank(b.Criterion) })
 }
 
 // finiteOr replaces a non-finite number by a fallback so that no NaN or

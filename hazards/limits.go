@@ -2,6 +2,7 @@ package hazards
 
 import (
 	"math"
+	"slices"
 	"strings"
 
 	"ullage/fluids"
@@ -88,7 +89,11 @@ var averagingDefinitions = map[string]struct {
 // chosen bodies (all when bodies is empty), each with its averaging period
 // as its body defines it, in library order.
 func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
-	var out []LimitSpec
+	return appendLimitSpecs(nil, f, bodies)
+}
+
+// appendLimitSpecs appends LimitSpecs(f, bodies) to out.
+func appendLimitSpecs(out []LimitSpec, f *fluids.Fluid, bodies []string) []LimitSpec {
 	for _, l := range f.ExposureLimits {
 		if !bodyChosen(l.Body, bodies) {
 			continue
@@ -112,15 +117,20 @@ func LimitSpecs(f *fluids.Fluid, bodies []string) []LimitSpec {
 // notes of the sets that give no number (none published, not checked,
 // not recommended). LimitBodies narrows the US occupational set only.
 func AppliedLimitSpecs(f *fluids.Fluid, cr Criteria) ([]LimitSpec, []LimitNote) {
-	var specs []LimitSpec
+	return appendAppliedLimitSpecs(nil, f, cr)
+}
+
+// appendAppliedLimitSpecs appends the limits of AppliedLimitSpecs to specs
+// and returns them with the notes.
+func appendAppliedLimitSpecs(specs []LimitSpec, f *fluids.Fluid, cr Criteria) ([]LimitSpec, []LimitNote) {
 	var notes []LimitNote
 	for _, set := range cr.AppliedLimitSets() {
 		if set == LimitSetUSOccupational {
-			specs = append(specs, LimitSpecs(f, cr.LimitBodies)...)
+			specs = appendLimitSpecs(specs, f, cr.LimitBodies)
 			continue
 		}
-		s, n := tableLimits(f, set)
-		specs = append(specs, s...)
+		var n []LimitNote
+		specs, n = appendTableLimits(specs, f, set)
 		notes = append(notes, n...)
 	}
 	return specs, notes
@@ -145,15 +155,27 @@ type LimitResult struct {
 // listed on a tie).
 func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass float64) []LimitResult {
 	out := make([]LimitResult, len(specs))
-	for i, s := range specs {
+	for i := range specs {
+		s := &specs[i]
 		present, key := presentS, exposureStepKey
 		if s.WholePeriod {
 			present, key = math.Max(s.PeriodS, PeakAveragingS), publicStepKey
 		}
 		e := rel.exposure(s.AveragingS(present), present, molarMass)
-		out[i] = LimitResult{LimitSpec: s, Exposure: e, Share: e.PPM / s.PPM, StepKey: key(e.AveragingS)}
+		out[i] = LimitResult{LimitSpec: *s, Exposure: e, Share: e.PPM / s.PPM}
+		// Limits of one period share their step and so its key.
+		for j := range i {
+			if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == e.AveragingS {
+				out[i].StepKey = out[j].StepKey
+				break
+			}
+		}
+		if out[i].StepKey == "" {
+			out[i].StepKey = key(e.AveragingS)
+		}
 	}
-	for _, k := range kindsOf(specs) {
+	var kb [8]string
+	for _, k := range appendKinds(kb[:0], specs) {
 		best := -1
 		for i := range out {
 			if out[i].Kind == k && (best < 0 || out[i].Share > out[best].Share) {
@@ -169,18 +191,34 @@ func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass fl
 
 // kindsOf returns AveragingKinds followed by any other kind the limits
 // use, in order of first appearance.
-func kindsOf(specs []LimitSpec) []string {
-	kinds := append([]string(nil), AveragingKinds...)
-	for _, s := range specs {
-		found := false
-		for _, k := range kinds {
-			found = found || k == s.Kind
-		}
-		if !found {
-			kinds = append(kinds, s.Kind)
-		}
+func kindsOf(specs []LimitSpec) []string { return appendKinds(nil, specs) }
+
+// appendKinds appends kindsOf(specs) to kinds.
+func appendKinds(kinds []string, specs []LimitSpec) []string {
+	kinds = append(kinds, AveragingKinds...)
+	for i := range specs {
+		kinds = addKind(kinds, specs[i].Kind)
 	}
 	return kinds
+}
+
+// appendKindsOfLimits is appendKinds for evaluated limits.
+func appendKindsOfLimits(kinds []string, limits []LimitResult) []string {
+	kinds = append(kinds, AveragingKinds...)
+	for i := range limits {
+		kinds = addKind(kinds, limits[i].Kind)
+	}
+	return kinds
+}
+
+// addKind appends kind to kinds unless it is there already.
+func addKind(kinds []string, kind string) []string {
+	for _, k := range kinds {
+		if k == kind {
+			return kinds
+		}
+	}
+	return append(kinds, kind)
 }
 
 // exposureCriterion returns the criterion identifier of an averaging kind.
@@ -223,4 +261,16 @@ func bodyChosen(body string, bodies []string) bool {
 		}
 	}
 	return false
+}
+
+// countOtherKinds bounds the number of occupational averaging kinds of the
+// limits beyond AveragingKinds: each limit of such a kind counts.
+func countOtherKinds(limits []LimitResult) int {
+	n := 0
+	for i := range limits {
+		if !IsPublicKind(limits[i].Kind) && !slices.Contains(AveragingKinds, limits[i].Kind) {
+			n++
+		}
+	}
+	return n
 }

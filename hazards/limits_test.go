@@ -70,7 +70,7 @@ func TestTWAGovernedByLargestShare(t *testing.T) {
 	if gov.Exposure.PPM != f.Value || gov.Exposure.AveragingS != 8*3600 {
 		t.Errorf("governing %s: %.6g ppm over %g s; finding %.6g ppm", gov.Name, gov.Exposure.PPM, gov.Exposure.AveragingS, f.Value)
 	}
-	step := a.Trace[f.Steps[1]-1]
+	step := a.Trace()[f.Steps()[1]-1]
 	if step.Result.Value != f.Value || step.Inputs[0].Value != gov.Exposure.AveragingS {
 		t.Errorf("step %d %q gives %.6g ppm over %g s; finding %.6g ppm", step.Number, step.Title, step.Result.Value, step.Inputs[0].Value, f.Value)
 	}

@@ -2,7 +2,6 @@ package hazards
 
 import (
 	"errors"
-	"fmt"
 	"math"
 	"strconv"
 	"strings"
@@ -70,21 +69,29 @@ func (cr Criteria) AppliedLimitSets() []string {
 	return out
 }
 
-// Applies reports whether the criteria apply the given limit set.
+// Applies reports whether the criteria apply the given limit set: it is
+// one of LimitSetIDs and among those AppliedLimitSets returns.
 func (cr Criteria) Applies(set string) bool {
-	for _, id := range cr.AppliedLimitSets() {
-		if id == set {
+	if !knownLimitSet(set) {
+		return false
+	}
+	chosen := cr.LimitSets
+	if len(chosen) == 0 {
+		chosen = DefaultLimitSets
+	}
+	for _, c := range chosen {
+		if c == set {
 			return true
 		}
 	}
 	return false
 }
 
+// knownLimitSet reports whether id is one of LimitSetIDs.
 func knownLimitSet(id string) bool {
-	for _, k := range LimitSetIDs() {
-		if k == id {
-			return true
-		}
+	switch id {
+	case LimitSetUSOccupational, LimitSetUSPublicAcute, LimitSetEUOccupational, LimitSetUKWEL, LimitSetDEAGW:
+		return true
 	}
 	return false
 }
@@ -119,21 +126,25 @@ const publicPopulation = "General public, children included"
 // AEGL values (the PAC where the tier has no AEGL value: the DOE's own
 // order of precedence, AEGL before ERPG and TEEL).
 func tableLimits(f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
+	return appendTableLimits(nil, f, set)
+}
+
+// appendTableLimits appends the limits of tableLimits to specs.
+func appendTableLimits(specs []LimitSpec, f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
 	sub, err := fluids.LimitsFor(f.ID, fluids.LimitSetID(set))
 	if err != nil {
 		if errors.Is(err, fluids.ErrUnknownFluid) {
-			return nil, []LimitNote{{Set: set, Reason: ReasonNotListed, Statement: "the table does not list " + f.Name + " (a fluid of your own is in no built-in table)"}}
+			return specs, []LimitNote{{Set: set, Reason: ReasonNotListed, Statement: "the table does not list " + f.Name + " (a fluid of your own is in no built-in table)"}}
 		}
-		return nil, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: err.Error()}}
+		return specs, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: err.Error()}}
 	}
 	switch sub.Coverage {
 	case fluids.CoverageNonePublished:
-		return nil, []LimitNote{{Set: set, Reason: ReasonNonePublished, Statement: sub.Statement}}
+		return specs, []LimitNote{{Set: set, Reason: ReasonNonePublished, Statement: sub.Statement}}
 	case fluids.CoverageNotChecked:
-		return nil, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: sub.Statement}}
+		return specs, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: sub.Statement}}
 	}
 	if set != LimitSetUSPublicAcute {
-		var specs []LimitSpec
 		for _, e := range sub.Entries {
 			l, ok := e.ExposureLimit()
 			if !ok {
@@ -148,7 +159,7 @@ func tableLimits(f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
 		}
 		return specs, nil
 	}
-	return publicLimits(sub)
+	return appendPublicLimits(specs, sub)
 }
 
 // publicLimits turns the public acute entries into limits: tiers 1 and 2
@@ -157,7 +168,11 @@ func tableLimits(f *fluids.Fluid, set string) ([]LimitSpec, []LimitNote) {
 // AEGL-3 of the shortest published duration (or the PAC-3). NR cells
 // become notes.
 func publicLimits(sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
-	var specs []LimitSpec
+	return appendPublicLimits(nil, sub)
+}
+
+// appendPublicLimits appends the limits of publicLimits to specs.
+func appendPublicLimits(specs []LimitSpec, sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
 	var notes []LimitNote
 	for _, tier := range publicTiers {
 		var aegl, pac []fluids.LimitEntry
@@ -191,7 +206,7 @@ func publicLimits(sub fluids.SubstanceLimits) ([]LimitSpec, []LimitNote) {
 			l, _ := e.ExposureLimit()
 			s := LimitSpec{Set: LimitSetUSPublicAcute, Body: l.Body, Name: e.Label(), Kind: e.Kind, PPM: l.PPM, Source: l.Source,
 				PeriodS: e.Minutes * 60, WholePeriod: true, Standing: string(e.Status), Date: e.Date,
-				Protects:   fmt.Sprintf("%s, %s", publicPopulation, durationWords(e.Minutes)),
+				Protects:   publicPopulation + ", " + durationWords(e.Minutes),
 				Definition: "AEGL and PAC: the airborne concentration above which the general public, including susceptible individuals, could experience the tier's effects for a single exposure of the stated duration (AEGL tier definitions of the US EPA AEGL program, from memory; PAC tiers and their AEGL → ERPG → TEEL order as described on NOAA's page \"Protective Action Criteria for Chemicals (PACs)\", read in a stored copy); averaged over that duration for a person present throughout"}
 			if tier == 3 {
 				s.PeriodS = 0

@@ -66,7 +66,7 @@ func TestPublicAveragesOverEachAEGLDuration(t *testing.T) {
 		t.Errorf("%d calculation steps for the five AEGL durations; want one each: %v", len(steps), steps)
 	}
 	for k := range steps {
-		if a.traceIndex[k] == 0 {
+		if a.TraceStep(k) == 0 {
 			t.Errorf("no calculation step %s", k)
 		}
 	}

@@ -2,6 +2,7 @@ package hazards
 
 import (
 	"fmt"
+	"strconv"
 
 	"ullage/fluids"
 )
@@ -54,6 +55,12 @@ func (cr Criteria) appliesOccupational() bool {
 // or PAC-3. A tier with no value says why in words; a fluid with none at
 // all gets one not-assessed finding.
 func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
+	return appendPublicFindings(nil, f, r, cr, &factArena{})
+}
+
+// appendPublicFindings appends the findings of publicFindings to out, their
+// facts from ar.
+func appendPublicFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	any := false
 	for _, l := range r.Limits {
 		any = any || l.Set == LimitSetUSPublicAcute
@@ -65,13 +72,12 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 				reason, src = n.Reason, n.Statement
 			}
 		}
-		return []Finding{{Criterion: CriterionPublicNone, Title: "Public acute benchmarks (AEGL, PAC)", Status: StatusNotAssessed,
+		return append(out, Finding{Criterion: CriterionPublicNone, Title: "Public acute benchmarks (AEGL, PAC)", Status: StatusNotAssessed,
 			Unit: "ppm", Direction: AtMost, NotApplicable: reason, Source: src, Protects: publicPopulation + ", 10 minutes to 8 hours",
-			Facts: []Fact{named("fluid", f.Name)}}}
+			Facts: ar.keep(named("fluid", f.Name))})
 	}
-	var out []Finding
 	for _, tier := range publicTiers {
-		id := fmt.Sprintf("exposure-public-%d", tier)
+		id := "exposure-public-" + strconv.Itoa(tier)
 		gov := -1
 		for i, l := range r.Limits {
 			if l.Set == LimitSetUSPublicAcute && publicTier(l.Kind) == tier && l.Governs {
@@ -101,10 +107,7 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		} else {
 			standing = ""
 		}
-		src := fmt.Sprintf("%s %g ppm: %s", lim.Name, lim.PPM, lim.Source)
-		if standing != "" {
-			src = fmt.Sprintf("%s %g ppm (%s): %s", lim.Name, lim.PPM, standing, lim.Source)
-		}
+		src := limitSource(lim.Name, lim.PPM, standing, lim.Source)
 		fd := atMost(id, publicTitles[tier], "ppm", e.PPM, limit, 1, src)
 		if tier == 1 && fd.Status == StatusFail {
 			fd.Status = StatusCaution
@@ -117,10 +120,21 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 		if tier == 3 {
 			measured = "peak (highest one-minute average)"
 		}
-		fd.Facts = []Fact{named("benchmark", lim.Name), fact(measured, FactConcentration, e.PPM), fact("benchmark value", FactConcentration, lim.PPM)}
+		fd.Facts = ar.keep(named("benchmark", lim.Name), fact(measured, FactConcentration, e.PPM), fact("benchmark value", FactConcentration, lim.PPM))
 		out = append(out, fd)
 	}
 	return out
+}
+
+// limitSource words a finding's source: "NIOSH REL TWA 100 ppm: source",
+// with the value's standing in brackets when given ("AEGL-2 10 min 220 ppm
+// (interim value): source"); the number as %g prints it.
+func limitSource(name string, ppm float64, standing, source string) string {
+	n := name + " " + strconv.FormatFloat(ppm, 'g', -1, 64) + " ppm"
+	if standing != "" {
+		n += " (" + standing + ")"
+	}
+	return n + ": " + source
 }
 
 // kindOfLabel returns the kind of an acute entry's label ("AEGL-1 10

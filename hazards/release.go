@@ -1,8 +1,8 @@
 package hazards
 
 import (
-	"fmt"
 	"math"
+	"strconv"
 
 	"ullage/fluids/units"
 )
@@ -212,7 +212,7 @@ type ConcentrationBound struct {
 
 // exposureStepKey names the calculation step of an averaging period.
 func exposureStepKey(periodS float64) string {
-	return fmt.Sprintf("exposure_avg_%gs", periodS)
+	return "exposure_avg_" + strconv.FormatFloat(periodS, 'g', -1, 64) + "s"
 }
 
 // publicStepKey names the calculation step of a public acute duration,
@@ -222,5 +222,5 @@ func publicStepKey(periodS float64) string {
 	if periodS <= PeakAveragingS {
 		return exposureStepKey(PeakAveragingS)
 	}
-	return fmt.Sprintf("exposure_public_avg_%gs", periodS)
+	return "exposure_public_avg_" + strconv.FormatFloat(periodS, 'g', -1, 64) + "s"
 }

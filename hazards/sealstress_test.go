@@ -29,11 +29,11 @@ func TestSealStressFromRetardation(t *testing.T) {
 		if a.Seal == nil || !scalar.EqualWithinAbsOrRel(a.Seal.StressPa, tt.want, 0, 1e-5) || a.Seal.Part != 2 {
 			t.Errorf("%s: seal %+v; want %g Pa on part 2", tt.glass, a.Seal, tt.want)
 		}
-		if lt := a.Trace[a.TraceStep("long_term_burst")-1]; lt.Result.Value != a.Seal.BurstWithoutPa {
+		if lt := a.Trace()[a.TraceStep("long_term_burst")-1]; lt.Result.Value != a.Seal.BurstWithoutPa {
 			t.Errorf("%s: long-term burst step shows %g, want the plain %g", tt.glass, lt.Result.Value, a.Seal.BurstWithoutPa)
 		}
 		n := a.TraceStep("seal_residual_stress")
-		if n == 0 || a.Trace[n-1].Equation != "σ_r = δ / (C·L)" {
+		if n == 0 || a.Trace()[n-1].Equation != "σ_r = δ / (C·L)" {
 			t.Errorf("%s: no conversion step in the record", tt.glass)
 		}
 	}
@@ -74,7 +74,7 @@ func TestSealStressInTheBurstCheck(t *testing.T) {
 		steps := map[int]bool{}
 		for _, f := range a.Findings {
 			if f.Criterion == CriterionBurst {
-				for _, n := range f.Steps {
+				for _, n := range f.Steps() {
 					steps[n] = true
 				}
 			}

@@ -60,31 +60,129 @@ type sealedVessel struct {
 	// only for a liquid-like fill with residual gas).
 	offsetOnce     sync.Once
 	criticalOffset float64
+	// iso is the fluid at the fill density, which finds its dew or bubble
+	// temperature once for every single-phase state of the vessel; sats
+	// the saturated states worked out once for the assessment's fixed
+	// temperatures (nil for none).
+	iso  fluids.Isochore
+	sats *satMemo
+}
+
+// satMemo holds what the vessels of one assessment (or one tolerance
+// study) need again and again at the few temperatures they keep returning
+// to, the sealing, hottest and coldest temperatures: the saturated state,
+// and the compressed liquid prepared for the gas-bubble solve. It is
+// filled once and only read after, so vessels share it across goroutines.
+// Every value is what the direct call gives.
+type satMemo struct {
+	// gas says the compressed liquid is prepared (liq or eos).
+	gas    bool
+	n      int
+	t      [3]float64
+	sat    [3]fluids.Saturation
+	liq    []fluids.LiquidIsotherm // len(t) when gas, else nil
+	eos    []fluids.Isotherm
+	hasEOS [3]bool
+}
+
+// newSatMemo works out the saturated states of s at the given
+// temperatures (SaturationNoHeatCapacity), leaving out those it has none
+// for, and, when gas is true (residual gas), prepares the compressed
+// liquid there.
+func newSatMemo(s *fluids.Substance, gas bool, temps ...float64) *satMemo {
+	m := &satMemo{gas: gas}
+	if gas {
+		m.liq, m.eos = make([]fluids.LiquidIsotherm, len(m.t)), make([]fluids.Isotherm, len(m.t))
+	}
+	for _, t := range temps {
+		if m.n == len(m.t) {
+			break
+		}
+		if _, ok := m.find(t); ok || !(t <= s.CriticalTemperature()) {
+			continue
+		}
+		sat, err := s.SaturationNoHeatCapacity(t)
+		if err != nil {
+			continue
+		}
+		i := m.n
+		m.t[i], m.sat[i] = t, sat
+		if gas {
+			m.hasEOS[i] = s.PrepareIsotherm(t, &m.eos[i])
+			if !m.hasEOS[i] {
+				s.PrepareLiquidIsotherm(t, &m.liq[i])
+			}
+		}
+		m.n++
+	}
+	return m
+}
+
+// find returns the index of temperature t in the memo.
+func (m *satMemo) find(t float64) (int, bool) {
+	if m == nil {
+		return 0, false
+	}
+	for i := 0; i < m.n; i++ {
+		if m.t[i] == t {
+			return i, true
+		}
+	}
+	return 0, false
+}
+
+// saturation returns the saturated state at t from the memo, or as
+// SaturationNoHeatCapacity gives it: every value but the liquid heat
+// capacity, which the vessel never uses.
+func (m *satMemo) saturation(s *fluids.Substance, t float64) (fluids.Saturation, error) {
+	if i, ok := m.find(t); ok {
+		return m.sat[i], nil
+	}
+	return s.SaturationNoHeatCapacity(t)
 }
 
 // ErrOverfilled: the fill would not fit as liquid at the sealing
 // temperature.
 var ErrOverfilled = errors.New("the fill does not fit in the vessel")
 
+// newSealedVessel seals mass kg of fluid s and residual gas at residualPa
+// into volume m³ at sealK.
 func newSealedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambientPa float64) (*sealedVessel, error) {
-	v := &sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa}
+	return newSharedVessel(s, mass, volume, sealK, residualPa, ambientPa, nil)
+}
+
+// newSharedVessel is newSealedVessel with the saturated states of sats
+// (nil for none) at hand.
+func newSharedVessel(s *fluids.Substance, mass, volume, sealK, residualPa, ambientPa float64, sats *satMemo) (*sealedVessel, error) {
+	v := new(sealedVessel)
+	if err := v.seal(s, mass, volume, sealK, residualPa, ambientPa, sats); err != nil {
+		return nil, err
+	}
+	return v, nil
+}
+
+// seal makes v the vessel newSharedVessel makes, reusing its memory (for
+// a search that seals vessel after vessel); v must not be in use.
+func (v *sealedVessel) seal(s *fluids.Substance, mass, volume, sealK, residualPa, ambientPa float64, sats *satMemo) error {
+	*v = sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa, sats: sats}
+	s.PrepareIsochore(v.density, &v.iso)
 	if sealK > s.CriticalTemperature() {
-		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
+		return &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
 			Want: fmt.Sprintf("must be below the critical temperature of %s (%.2f K) so that the fill can be sealed as a liquid", s.Fluid().Name, s.CriticalTemperature()),
 			Rule: RuleBelow, Max: s.CriticalTemperature(), Unit: "K", Subject: "the critical temperature of " + s.Fluid().Name}
 	}
-	sat, err := s.Saturation(sealK)
+	sat, err := sats.saturation(s, sealK)
 	if err != nil {
-		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
+		return &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
 	}
 	if v.density >= sat.LiquidDensity {
 		maxFill := sat.LiquidDensity * volume
-		return nil, fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
+		return fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
 			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume),
 			Rule: RuleBelow, Max: maxFill, Unit: "kg", Subject: "the mass of " + s.Fluid().Name + " that, as liquid, fills the whole vessel at the sealing temperature"}, ErrOverfilled)
 	}
 	v.sealGas(sat, residualPa, sealK)
-	return v, nil
+	return nil
 }
 
 // sealGas sets the moles of residual gas sealed in at residualPa and
@@ -120,7 +218,7 @@ func (v *sealedVessel) state(t float64) (VesselState, error) {
 		st.PressurePa += v.offsetAtCritical()
 		return st, err
 	}
-	sat, err := s.SaturationNoHeatCapacity(t)
+	sat, err := v.sats.saturation(s, t)
 	if err != nil {
 		return st, err
 	}
@@ -193,7 +291,7 @@ func (v *sealedVessel) offsetAtCritical() float64 {
 func (v *sealedVessel) supercritical(t float64) (VesselState, error) {
 	s := v.fluid
 	st := VesselState{TemperatureK: t, Phase: PhaseSupercritical}
-	p, fl, err := s.SinglePhasePressure(t, v.density)
+	p, fl, err := v.iso.Pressure(t)
 	if err != nil {
 		return st, err
 	}
@@ -210,7 +308,7 @@ func (v *sealedVessel) supercritical(t float64) (VesselState, error) {
 // singlePhase evaluates the fluid alone at the fill density, treating a
 // state a rounding error inside the saturation boundary as on it.
 func (v *sealedVessel) singlePhase(t float64, sat fluids.Saturation) (float64, fluids.Flags, error) {
-	p, fl, err := v.fluid.SinglePhasePressure(t, v.density)
+	p, fl, err := v.iso.Pressure(t)
 	if errors.Is(err, fluids.ErrTwoPhase) {
 		return sat.PressurePa, 0, nil
 	}
@@ -233,6 +331,12 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 	if v.mass-sat.VapourDensity*v.volume <= 0 {
 		return st, fmt.Errorf("internal: gas bubble asked for an all-vapour state at %.2f K", t)
 	}
+	if i, ok := v.sats.find(t); ok && v.sats.gas {
+		if v.sats.hasEOS[i] {
+			return v.withGasBubbleEOS(st, sat, nrt, &v.sats.eos[i])
+		}
+		return v.withGasBubbleBrentOn(st, sat, nrt, &v.sats.liq[i])
+	}
 	var iso fluids.Isotherm
 	if s.PrepareIsotherm(t, &iso) {
 		return v.withGasBubbleEOS(st, sat, nrt, &iso)
@@ -244,18 +348,38 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 // step solving for the compressed-liquid density: the correlation route,
 // and the check on the equation-of-state route's own solver.
 func (v *sealedVessel) withGasBubbleBrent(st VesselState, sat fluids.Saturation, nrt float64) (VesselState, error) {
-	s := v.fluid
+	var liq fluids.LiquidIsotherm
+	v.fluid.PrepareLiquidIsotherm(st.TemperatureK, &liq)
+	return v.withGasBubbleBrentOn(st, sat, nrt, &liq)
+}
+
+// withGasBubbleBrentOn is withGasBubbleBrent with the compressed liquid
+// prepared at the state's temperature.
+func (v *sealedVessel) withGasBubbleBrentOn(st VesselState, sat fluids.Saturation, nrt float64, liq *fluids.LiquidIsotherm) (VesselState, error) {
 	t := st.TemperatureK
 	var flags fluids.Flags
+	// Brent evaluates the first bracket's ends again, and the state is
+	// read at a point already evaluated: each value is kept (the residual
+	// is a pure function of ln V_g, so this changes nothing but the work).
+	var seen residualMemo
 	residual := func(lnVg float64) float64 {
+		if r, fl, ok := seen.find(lnVg); ok {
+			if !math.IsNaN(r) {
+				flags = fl
+			}
+			return r
+		}
 		vg := math.Exp(lnVg)
 		p := sat.PressurePa + nrt/vg
-		rhoL, fl, err := s.CompressedLiquidDensity(t, p)
+		rhoL, fl, err := liq.Density(p)
 		if err != nil {
+			seen.add(lnVg, math.NaN(), 0)
 			return math.NaN()
 		}
 		flags = fl
-		return vg + (v.mass-sat.VapourDensity*vg)/rhoL - v.volume
+		r := vg + (v.mass-sat.VapourDensity*vg)/rhoL - v.volume
+		seen.add(lnVg, r, fl)
+		return r
 	}
 	hi := math.Log(v.volume)
 	if v.mass-sat.VapourDensity*v.volume <= 0 {
@@ -449,4 +573,29 @@ func (v *sealedVessel) withoutBubble(st VesselState, sat fluids.Saturation) (Ves
 	st.LiquidDensity = v.density
 	st.Flags |= fl | fluids.CompressedLiquidExtrapolated
 	return st, nil
+}
+
+// residualMemo keeps the values of a residual already evaluated, by the
+// exact argument, with the flags that came with them.
+type residualMemo struct {
+	n  int
+	x  [24]float64
+	r  [24]float64
+	fl [24]fluids.Flags
+}
+
+func (m *residualMemo) find(x float64) (float64, fluids.Flags, bool) {
+	for i := m.n - 1; i >= 0; i-- {
+		if m.x[i] == x {
+			return m.r[i], m.fl[i], true
+		}
+	}
+	return 0, 0, false
+}
+
+func (m *residualMemo) add(x, r float64, fl fluids.Flags) {
+	if m.n < len(m.x) {
+		m.x[m.n], m.r[m.n], m.fl[m.n] = x, r, fl
+		m.n++
+	}
 }

@@ -204,7 +204,7 @@ func shockPresetName(id string) string {
 // thermalShockFindings returns one finding per part, judged by the burst
 // check's rule: the safety factor on the short-term strength must reach
 // the required safety factor, with the same caution band.
-func (a *Assessment) thermalShockFindings() []Finding {
+func (a *Assessment) thermalShockFindings(ar *factArena) []Finding {
 	if !a.Shock.Assessed {
 		return nil
 	}
@@ -228,22 +228,22 @@ func (a *Assessment) thermalShockFindings() []Finding {
 		if c.Direction == ShockColdToHot {
 			where = "the inner surface (bounded by the cooled-surface value)"
 		}
-		f.Facts = []Fact{named("direction", c.Direction+shockPresetName(preset)), fact("sudden change", FactTempDifference, c.DeltaK),
+		f.Facts = ar.keep(named("direction", c.Direction+shockPresetName(preset)), fact("sudden change", FactTempDifference, c.DeltaK),
 			fact("starting temperature", FactTemperature, c.StartK), named("tension on", where),
-			fact("thermal stress", FactStress, c.ThermalStressPa), fact("stress per degree", FactStressPerKelvin, ps.StressPerKelvin)}
+			fact("thermal stress", FactStress, c.ThermalStressPa), fact("stress per degree", FactStressPerKelvin, ps.StressPerKelvin))
 		if c.PressureStressPa > 0 {
-			f.Facts = append(f.Facts, fact("stress from the pressure", FactStress, c.PressureStressPa))
+			f.Facts = ar.extend(f.Facts, fact("stress from the pressure", FactStress, c.PressureStressPa))
 		}
 		if c.ResidualStressPa > 0 {
-			f.Facts = append(f.Facts, fact("residual stress at the seal", FactStress, c.ResidualStressPa))
+			f.Facts = ar.extend(f.Facts, fact("residual stress at the seal", FactStress, c.ResidualStressPa))
 		}
-		f.Facts = append(f.Facts, fact("short-term strength", FactStress, ps.StrengthPa),
+		f.Facts = ar.extend(f.Facts, fact("short-term strength", FactStress, ps.StrengthPa),
 			fact("breakages per event", FactProbability, c.FailureProbability),
 			fact("change withstood at the required safety factor", FactTempDifference, ps.AllowableDeltaK))
 		if g.RatedShockDifference.Value > 0 {
-			f.Facts = append(f.Facts, fact("stated rating for ware of this glass", FactTempDifference, g.RatedShockDifference.Value))
+			f.Facts = ar.extend(f.Facts, fact("stated rating for ware of this glass", FactTempDifference, g.RatedShockDifference.Value))
 		} else {
-			f.Facts = append(f.Facts, named("stated rating for ware of this glass", "none in the library"))
+			f.Facts = ar.extend(f.Facts, named("stated rating for ware of this glass", "none in the library"))
 		}
 		if a.Flags.Extrapolated() && f.Status == StatusPass {
 			f.Status = StatusCaution
@@ -257,16 +257,16 @@ func (a *Assessment) thermalShockFindings() []Finding {
 // withShockAndSeal appends the thermal-shock findings and, when the seal
 // carries a residual stress, says so in the burst and failure-probability
 // findings it changed.
-func (a *Assessment) withShockAndSeal(fs []Finding) []Finding {
+func (a *Assessment) withShockAndSeal(fs []Finding, ar *factArena) []Finding {
 	if s := a.Seal; s != nil {
 		for i := range fs {
 			if fs[i].Criterion != CriterionBurst && fs[i].Criterion != CriterionFailure {
 				continue
 			}
-			fs[i].Facts = append(fs[i].Facts, fact("residual stress at the seal, held for the service life", FactStress, s.StressPa), named("seal", s.Name))
+			fs[i].Facts = ar.extend(fs[i].Facts, fact("residual stress at the seal, held for the service life", FactStress, s.StressPa), named("seal", s.Name))
 		}
 	}
-	return append(fs, a.thermalShockFindings()...)
+	return append(fs, a.thermalShockFindings(ar)...)
 }
 
 // traceThermalShock adds the thermal-shock steps: per part, the stress,

@@ -139,7 +139,7 @@ func TestThermalShockFinding(t *testing.T) {
 		if f == nil {
 			t.Fatalf("no finding for %s", ps.Name)
 		}
-		if f.Value != c.SafetyFactor || f.Limit != a.RequiredSafetyFactor || len(f.Steps) < 3 {
+		if f.Value != c.SafetyFactor || f.Limit != a.RequiredSafetyFactor || len(f.Steps()) < 3 {
 			t.Errorf("finding %+v", f)
 		}
 		perK := false
@@ -252,7 +252,7 @@ func TestShockAndSealTrace(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	for i, s := range a.Trace {
+	for i, s := range a.Trace() {
 		if s.Number != i+1 || s.Title == "" || s.Equation == "" || s.Source == "" || s.Method == "" ||
 			math.IsNaN(s.Result.Value) || math.IsInf(s.Result.Value, 0) {
 			t.Errorf("step %d incomplete: %+v", i+1, s)
@@ -262,13 +262,13 @@ func TestShockAndSealTrace(t *testing.T) {
 	for _, f := range a.Findings {
 		if IsThermalShockCriterion(f.Criterion) {
 			shock++
-			if len(f.Steps) < 4 {
-				t.Errorf("%s: steps %v", f.Criterion, f.Steps)
+			if len(f.Steps()) < 4 {
+				t.Errorf("%s: steps %v", f.Criterion, f.Steps())
 			}
 		}
-		for _, n := range f.Steps {
-			if n < 1 || n > len(a.Trace) {
-				t.Errorf("%s points at step %d of %d", f.Criterion, n, len(a.Trace))
+		for _, n := range f.Steps() {
+			if n < 1 || n > len(a.Trace()) {
+				t.Errorf("%s points at step %d of %d", f.Criterion, n, len(a.Trace()))
 			}
 		}
 	}
@@ -307,7 +307,7 @@ func FuzzShockAndSeal(f *testing.F) {
 				t.Fatalf("finding %s not finite: %+v", fd.Criterion, fd)
 			}
 		}
-		for _, s := range a.Trace {
+		for _, s := range a.Trace() {
 			if math.IsNaN(s.Result.Value) || math.IsInf(s.Result.Value, 0) {
 				t.Fatalf("step %d not finite: %+v", s.Number, s)
 			}

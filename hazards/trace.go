@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"sync"
 
 	"ullage/fluids"
 	"ullage/fluids/solve"
@@ -136,12 +137,62 @@ func rootRecord(eq string, r *solve.Root, b Bound, unit string) *RootRecord {
 	return rr
 }
 
+// record is an assessment's calculation record. No result rests on it, and
+// writing it out is much of the work of an assessment, so it is built from
+// the finished assessment on first use, once, safely from any number of
+// goroutines.
+type record struct {
+	once sync.Once
+	a    *Assessment
+	// steps are the numbered steps, index the step number of each named
+	// result, findings the steps behind each finding by its place in
+	// Assessment.Findings.
+	steps    []Step
+	index    map[string]int
+	findings [][]int
+}
+
+// built returns the record, building it on the first call.
+func (r *record) built() *record {
+	r.once.Do(func() {
+		if r.a != nil {
+			r.a.buildTrace(r)
+		}
+	})
+	return r
+}
+
+// RecordOnly returns an assessment that holds nothing but the given
+// calculation record: for code that lays out records, and its tests.
+func RecordOnly(steps []Step) *Assessment {
+	r := &record{steps: steps, index: map[string]int{}}
+	r.built()
+	return &Assessment{rec: r}
+}
+
+// Trace returns the calculation record: numbered steps in the order a
+// hand check follows (each finding's Steps lists those behind it). The
+// first call builds it; the steps are shared, not to be changed.
+func (a *Assessment) Trace() []Step {
+	if a.rec == nil {
+		return nil
+	}
+	return a.rec.built().steps
+}
+
 // TraceStep returns the number of the step that produced a named result
 // (for example "burst_safety_factor"), or 0.
-func (a *Assessment) TraceStep(key string) int { return a.traceIndex[key] }
+func (a *Assessment) TraceStep(key string) int {
+	if a.rec == nil {
+		return 0
+	}
+	return a.rec.built().index[key]
+}
 
-// buildTrace writes the calculation record from the finished assessment.
-func (a *Assessment) buildTrace(sub *fluids.Substance) {
+// buildTrace writes the calculation record of the finished assessment
+// into rec.
+func (a *Assessment) buildTrace(rec *record) {
+	sub := a.vessel.fluid
 	d := &a.Design
 	f := a.Fluid
 	tr := &tracer{steps: make([]Step, 0, 48), by: make(map[string]int, 48)}
@@ -416,6 +467,7 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 	}
 
 	// Findings.
+	steps := make([][]int, len(a.Findings))
 	for i := range a.Findings {
 		fd := &a.Findings[i]
 		deps := stepNumbers(tr, a.findingDependencies(fd.Criterion))
@@ -424,11 +476,10 @@ func (a *Assessment) buildTrace(sub *fluids.Substance) {
 			Finding: &FindingResult{Criterion: fd.Criterion, Status: fd.Status, Value: fd.Value, Limit: fd.Limit, Unit: fd.Unit,
 				Direction: fd.Direction, Margin: fd.Margin, LimitSource: fd.Source, NotApplicable: fd.NotApplicable},
 			Intermediate: factValues(fd.Facts), Source: fd.Source})
-		fd.Steps = append([]int{n}, deps...)
+		steps[i] = append([]int{n}, deps...)
 	}
 	a.amendSealSteps(tr)
-	a.Trace = tr.steps
-	a.traceIndex = tr.by
+	rec.steps, rec.index, rec.findings = tr.steps, tr.by, steps
 }
 
 var findingDeps = map[string][]string{

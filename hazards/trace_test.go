@@ -26,10 +26,10 @@ func TestEveryFindingHasATrace(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if len(a.Trace) == 0 {
+		if len(a.Trace()) == 0 {
 			t.Fatal("no calculation record")
 		}
-		for i, s := range a.Trace {
+		for i, s := range a.Trace() {
 			if s.Number != i+1 || s.Title == "" || s.Equation == "" || s.Source == "" || s.Method == "" {
 				t.Errorf("step %d incomplete: %+v", i+1, s)
 			}
@@ -38,12 +38,12 @@ func TestEveryFindingHasATrace(t *testing.T) {
 			}
 		}
 		for _, f := range a.Findings {
-			if len(f.Steps) < 2 {
-				t.Errorf("%s: finding %s has steps %v, want its own and the ones behind it", d.Fluid, f.Criterion, f.Steps)
+			if len(f.Steps()) < 2 {
+				t.Errorf("%s: finding %s has steps %v, want its own and the ones behind it", d.Fluid, f.Criterion, f.Steps())
 			}
-			for _, n := range f.Steps {
-				if n < 1 || n > len(a.Trace) {
-					t.Errorf("%s: finding %s points at step %d of %d", d.Fluid, f.Criterion, n, len(a.Trace))
+			for _, n := range f.Steps() {
+				if n < 1 || n > len(a.Trace()) {
+					t.Errorf("%s: finding %s points at step %d of %d", d.Fluid, f.Criterion, n, len(a.Trace()))
 				}
 			}
 		}
@@ -57,7 +57,7 @@ func TestEveryFindingHasATrace(t *testing.T) {
 		}
 		// Root-found results show the bracket, tolerance and residual.
 		for _, key := range []string{"max_safe_temperature", "max_safe_fill"} {
-			s := a.Trace[a.TraceStep(key)-1]
+			s := a.Trace()[a.TraceStep(key)-1]
 			if s.Root == nil || s.Root.Equation == "" {
 				t.Errorf("%s: %s lacks its root record", d.Fluid, key)
 			}
@@ -85,7 +85,7 @@ func TestHandCheckSteps(t *testing.T) {
 	}
 	// 1. Thin-walled sphere, σ = ΔP·r_m/(2t) (Roark's Formulas for Stress
 	// and Strain, 7th ed., Table 13.1 case 3a).
-	s := a.Trace[a.TraceStep("stress_0")-1]
+	s := a.Trace()[a.TraceStep("stress_0")-1]
 	if !strings.Contains(s.Equation, "2t") {
 		t.Fatalf("step %d is not the thin-sphere formula: %s", s.Number, s.Equation)
 	}
@@ -94,14 +94,14 @@ func TestHandCheckSteps(t *testing.T) {
 		t.Errorf("step %d: by hand σ = %.8g Pa, traced %.8g Pa", s.Number, hand, s.Result.Value)
 	}
 	// 2. Burst safety factor, SF = ΔP_bL/ΔP (definition).
-	s = a.Trace[a.TraceStep("burst_safety_factor")-1]
+	s = a.Trace()[a.TraceStep("burst_safety_factor")-1]
 	hand = input(t, s, "ΔP_bL") / input(t, s, "ΔP")
 	if !scalar.EqualWithinRel(hand, s.Result.Value, 1e-12) {
 		t.Errorf("step %d: by hand SF = %.8g, traced %.8g", s.Number, hand, s.Result.Value)
 	}
 	// 3. Well-mixed room, C(0) = M/V, converted to ppm with 24.45 L/mol
 	// (NIOSH Pocket Guide introduction: ppm = mg/m³ × 24.45 / MW).
-	s = a.Trace[a.TraceStep("room_model")-1]
+	s = a.Trace()[a.TraceStep("room_model")-1]
 	mgm3 := input(t, s, "M") / input(t, s, "V_room")
 	hand = mgm3 * 24.45 / (a.Fluid.MolarMass.Value * 1000)
 	if !scalar.EqualWithinRel(hand, s.Result.Value, 1e-12) {
@@ -110,7 +110,7 @@ func TestHandCheckSteps(t *testing.T) {
 	// 4. Vapour pressure at the hottest temperature from the printed
 	// Wagner coefficients (Poling, Prausnitz and O'Connell, 5th ed., eq.
 	// 7-3.3), or Antoine (NIST WebBook form).
-	s = a.Trace[a.TraceStep("psat_hottest")-1]
+	s = a.Trace()[a.TraceStep("psat_hottest")-1]
 	temp := input(t, s, "T")
 	if strings.HasPrefix(s.Method, "Wagner") {
 		tr := temp / input(t, s, "Tc")

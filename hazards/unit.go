@@ -28,6 +28,9 @@ type UnitModel struct {
 	// sealSat is the saturated state at the sealing temperature, which
 	// fixes every unit's residual gas.
 	sealSat fluids.Saturation
+	// sats holds the saturated states at the sealing temperature and the
+	// design's hottest temperature, shared by every unit's vessel.
+	sats *satMemo
 	// vessels recycles the per-unit sealed vessels, which would otherwise
 	// be a million small allocations for a million units.
 	vessels sync.Pool
@@ -91,15 +94,16 @@ func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
 	}
 	// The nominal vessel checks the sealing temperature against the
 	// critical point, with newSealedVessel's own errors.
-	if _, err := newSealedVessel(sub, d.FillMassKg, d.Vessel.Volume(), d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa); err != nil {
+	sats := newSatMemo(sub, d.ResidualGasPressurePa > 0, d.SealingTemperatureK, d.HottestK)
+	if _, err := newSharedVessel(sub, d.FillMassKg, d.Vessel.Volume(), d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats); err != nil {
 		return nil, err
 	}
-	sat, err := sub.Saturation(d.SealingTemperatureK)
+	sat, err := sats.saturation(sub, d.SealingTemperatureK)
 	if err != nil {
 		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", d.SealingTemperatureK), Want: err.Error()}
 	}
 	d.Vessel.Parts = append([]Part(nil), d.Vessel.Parts...)
-	m := &UnitModel{design: d, sub: sub, glass: glass, sealLiquidDensity: sat.LiquidDensity, sealSat: sat}
+	m := &UnitModel{design: d, sub: sub, glass: glass, sealLiquidDensity: sat.LiquidDensity, sealSat: sat, sats: sats}
 	m.durationFactor = glassStrength(analyseParts(d.Vessel.Parts, &glass, 0), &glass, d.HoursAtHottest*3600, 1).DurationFactor
 	m.vessels.New = func() any { return new(sealedVessel) }
 	return m, nil
@@ -207,14 +211,15 @@ func (m *UnitModel) evaluate(u Unit) (UnitResult, *sealedVessel, error) {
 	// sealing temperature (the same for every unit) into a recycled
 	// vessel; one that does not takes newSealedVessel for its error.
 	if !(u.FillMassKg/r.VolumeM3 < m.sealLiquidDensity) {
-		_, err := newSealedVessel(m.sub, u.FillMassKg, r.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
+		_, err := newSharedVessel(m.sub, u.FillMassKg, r.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, m.sats)
 		if err == nil {
 			err = fmt.Errorf("internal: fill density %g kg/m³ at or above the sealing liquid density %g kg/m³ but sealable", u.FillMassKg/r.VolumeM3, m.sealLiquidDensity)
 		}
 		return r, nil, err
 	}
 	v := m.vessels.Get().(*sealedVessel)
-	*v = sealedVessel{fluid: m.sub, mass: u.FillMassKg, volume: r.VolumeM3, density: u.FillMassKg / r.VolumeM3, ambientPa: d.AmbientPressurePa}
+	*v = sealedVessel{fluid: m.sub, mass: u.FillMassKg, volume: r.VolumeM3, density: u.FillMassKg / r.VolumeM3, ambientPa: d.AmbientPressurePa, sats: m.sats}
+	m.sub.PrepareIsochore(v.density, &v.iso)
 	if d.ResidualGasPressurePa != 0 {
 		v.sealGas(m.sealSat, d.ResidualGasPressurePa, d.SealingTemperatureK)
 	}

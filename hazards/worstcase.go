@@ -30,7 +30,7 @@ type WorstCase struct {
 
 // worstCase returns the worst-case unit, or nil when the design states
 // no fill, volume or wall tolerance.
-func worstCase(d Design, sub *fluids.Substance) *WorstCase {
+func worstCase(d Design, sub *fluids.Substance, sats *satMemo) *WorstCase {
 	anyWall := false
 	for _, p := range d.Vessel.Parts {
 		anyWall = anyWall || p.WallToleranceM > 0
@@ -50,7 +50,7 @@ func worstCase(d Design, sub *fluids.Substance) *WorstCase {
 		}
 		w.VolumeM3 = v.PartsVolume() - volumeTol
 	}
-	vessel, err := newSealedVessel(sub, w.FillMassKg, w.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa)
+	vessel, err := newSharedVessel(sub, w.FillMassKg, w.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats)
 	if err != nil {
 		if errors.Is(err, ErrOverfilled) {
 			return w

@@ -45,8 +45,8 @@ func TestWeakestUnitStrength(t *testing.T) {
 		t.Errorf("nominal %.3g (%s), weakest unit %.3g (%s); want the nominal at least 4 and the weakest unit failing below 4",
 			nominal.Value, nominal.Status, worst.Value, worst.Status)
 	}
-	if n := a.TraceStep("burst_safety_factor_worst"); n == 0 || a.Trace[n-1].Result.Value != worst.Value || worst.Steps[1] != n {
-		t.Errorf("weakest-unit finding steps %v; want its own calculation step giving %.6g", worst.Steps, worst.Value)
+	if n := a.TraceStep("burst_safety_factor_worst"); n == 0 || a.Trace()[n-1].Result.Value != worst.Value || worst.Steps()[1] != n {
+		t.Errorf("weakest-unit finding steps %v; want its own calculation step giving %.6g", worst.Steps(), worst.Value)
 	}
 }
 

@@ -22,7 +22,7 @@ func (w *assessmentWriter) findings() {
 			numbers += "   ·   Source " + refs.number(v.Source)
 		}
 		text := v.Text()
-		if steps := stepNumbers(v.Finding.Steps); steps != "" {
+		if steps := stepNumbers(v.Finding.Steps()); steps != "" {
 			text = strings.TrimSpace(text + " " + capitalFirst(steps) + ".")
 		}
 		d.findingBlock(v.Finding.Status, v.Title, numbers, text)

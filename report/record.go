@@ -17,7 +17,7 @@ import (
 // Values are printed in SI, as computed, with six significant figures.
 func (w *assessmentWriter) calculationRecord() {
 	d := w.d
-	if len(w.a.Trace) == 0 {
+	if len(w.a.Trace()) == 0 {
 		return
 	}
 	d.newPage()
@@ -25,7 +25,7 @@ func (w *assessmentWriter) calculationRecord() {
 	d.lead("Every result in this record, step by step: the method by its published name, the equation as written in its source, the values substituted (SI units, as computed) and the result. Root-found results give the equation solved, the bracket searched, the tolerance and the residual. Each finding lists the steps behind it; long sources are cited by number and listed at the end of this annex.")
 	w.refs = &references{index: map[string]int{}}
 	stage := ""
-	for _, s := range w.a.Trace {
+	for _, s := range w.a.Trace() {
 		if s.Stage != stage {
 			stage = s.Stage
 			d.subheading(stage)
@@ -138,8 +138,8 @@ func usesText(a *hazards.Assessment, steps []int) string {
 	var titles []string
 	for i, n := range steps {
 		parts[i] = strconv.Itoa(n)
-		if n >= 1 && n <= len(a.Trace) {
-			titles = append(titles, a.Trace[n-1].Title)
+		if n >= 1 && n <= len(a.Trace()) {
+			titles = append(titles, a.Trace()[n-1].Title)
 		}
 	}
 	text := "steps " + strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]

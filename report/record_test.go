@@ -19,7 +19,7 @@ func TestCalculationRecordReadsBack(t *testing.T) {
 	if !strings.Contains(flat, "Appendix: Calculation record") {
 		t.Fatal("appendix heading missing")
 	}
-	for _, s := range a.Trace {
+	for _, s := range a.Trace() {
 		head := fmt.Sprintf("Step %d.", s.Number)
 		if !strings.Contains(flat, head) {
 			t.Errorf("%q missing", head)
@@ -39,7 +39,7 @@ func TestCalculationRecordReadsBack(t *testing.T) {
 			t.Errorf("%q printed", bad)
 		}
 	}
-	for _, s := range a.Trace {
+	for _, s := range a.Trace() {
 		if len(s.Uses) > 1 && !strings.Contains(flat, usesText(a, s.Uses)[:20]) {
 			t.Errorf("step %d: %q missing", s.Number, usesText(a, s.Uses))
 		}
@@ -61,7 +61,7 @@ func TestReferenceNumbersResolve(t *testing.T) {
 	a := assess(t, "typical_design.json")
 	text := squash(pdfText(t, writeTemp(t, "refs.pdf", render(t, loadMeta(t, "meta_a.json"), a, Options{Appendix: true}))))
 	long := map[string]bool{}
-	for _, s := range a.Trace {
+	for _, s := range a.Trace() {
 		for _, src := range append([]string{s.Source}, valueSources(s)...) {
 			if len([]rune(src)) > shortSource {
 				long[src] = true

@@ -81,7 +81,16 @@ func runCheck(args []string, stdout, stderr io.Writer) int {
 		c := checkOne(p, o.value("rev", ""), lib)
 		if c.err == nil && study != nil {
 			var err error
-			c.tolerance, err = tolerance.Run(context.Background(), c.revision.Design, lib, *study)
+			set := *study
+			var line *progressLine
+			if isTerminal(stderr) {
+				line = &progressLine{w: stderr, label: "ullage check: tolerance study of " + p}
+				set.Progress = line.report
+			}
+			c.tolerance, err = tolerance.Run(context.Background(), c.revision.Design, lib, set)
+			if line != nil {
+				line.clear()
+			}
 			if err != nil {
 				c.err = fmt.Errorf("%s: tolerance study: %w", p, err)
 			}
@@ -389,7 +398,7 @@ func writeCheckJSON(w io.Writer, results []checked, single, trace bool) error {
 		}
 		d := checkJSON(c)
 		if trace {
-			d.Trace = c.assessment.Trace
+			d.Trace = c.assessment.Trace()
 		}
 		return d
 	}

@@ -207,9 +207,9 @@ func (fl *findingsList) describe() {
 		&widget.TextSegment{Text: display.Finding(f, fl.system()).Text(), Style: widget.RichTextStyleParagraph},
 		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
 	}
-	if len(f.Steps) > 0 {
+	if len(f.Steps()) > 0 {
 		fl.detail.Segments = append(fl.detail.Segments, &widget.TextSegment{
-			Text:  "Working: " + stepsPhrase(f.Steps) + " of the calculation record.",
+			Text:  "Working: " + stepsPhrase(f.Steps()) + " of the calculation record.",
 			Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground},
 		})
 	}

@@ -44,7 +44,7 @@ type tolerancePanel struct {
 	varies              *widget.Label
 	problem             *widget.Label
 	runBtn, cancelBtn   *widget.Button
-	busy                *widget.ProgressBarInfinite
+	busy                *widget.ProgressBar
 	status              *widget.Label
 
 	// spreadK is the ± spread of the hottest temperature in kelvin, as
@@ -111,8 +111,7 @@ func newTolerancePanel(s *session) *tolerancePanel {
 	tp.runBtn.Importance = widget.HighImportance
 	tp.cancelBtn = widget.NewButtonWithIcon("Cancel", theme.CancelIcon(), s.stopStudy)
 	tp.cancelBtn.Disable()
-	tp.busy = widget.NewProgressBarInfinite()
-	tp.busy.Stop()
+	tp.busy = widget.NewProgressBar()
 	tp.busy.Hide()
 	tp.status = widget.NewLabel("")
 	tp.status.Wrapping = fyne.TextWrapWord
@@ -236,6 +235,7 @@ func (tp *tolerancePanel) run() {
 		return
 	}
 	tp.problem.Hide()
+	tp.busy.SetValue(0)
 	tp.startStudy(set, func() {
 		tp.refresh()
 		if f := tp.afterRun; f != nil {
@@ -283,11 +283,9 @@ func (tp *tolerancePanel) refresh() {
 		tp.runBtn.Disable()
 		tp.cancelBtn.Enable()
 		tp.busy.Show()
-		tp.busy.Start()
 	} else {
 		tp.runBtn.Enable()
 		tp.cancelBtn.Disable()
-		tp.busy.Stop()
 		tp.busy.Hide()
 		switch {
 		case errors.Is(st.err, context.Canceled):

@@ -82,6 +82,14 @@ func (tp *tolerancePanel) startStudy(set tolerance.Settings, done func()) {
 	st.gen++
 	gen := st.gen
 	st.running, st.cancel, st.err = true, cancel, nil
+	// The panel's bar shows the units done, at most a few times a second.
+	set.Progress = func(done, total int) {
+		s.opts.post(func() {
+			if gen == st.gen && st.running {
+				s.tol.busy.SetValue(float64(done) / float64(total))
+			}
+		})
+	}
 	s.assess.pending.Add(1)
 	go func() {
 		o := runStudy(ctx, d, lib, set)

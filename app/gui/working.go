@@ -136,7 +136,7 @@ func (wp *workingPanel) resolve(a *hazards.Assessment) (heading string, numbers 
 	case wp.subject.criterion != "":
 		for _, f := range a.Findings {
 			if f.Criterion == wp.subject.criterion {
-				return f.Title + " — " + statusWord(f.Status), f.Steps, true
+				return f.Title + " — " + statusWord(f.Status), f.Steps(), true
 			}
 		}
 	case wp.subject.keyLabel != "":

@@ -76,12 +76,12 @@ func TestSelectingAFindingKeepsTheFormAndShowsItsWorkingOnRequest(t *testing.T) 
 			a := h.s.last.assessment
 			f := fl.rows[i]
 			text := shownText(wp.object)
-			for _, n := range f.Steps {
-				if !strings.Contains(text, stepHeading(a.Trace[n-1])) {
+			for _, n := range f.Steps() {
+				if !strings.Contains(text, stepHeading(a.Trace()[n-1])) {
 					t.Errorf("step %d is not shown", n)
 				}
 			}
-			own := a.Trace[a.TraceStep(tc.key)-1]
+			own := a.Trace()[a.TraceStep(tc.key)-1]
 			if !strings.Contains(text, own.Equation) {
 				t.Errorf("the equation of step %d, %q, is not shown", own.Number, own.Equation)
 			}
@@ -92,8 +92,8 @@ func TestSelectingAFindingKeepsTheFormAndShowsItsWorkingOnRequest(t *testing.T) 
 			// The whole record lists every step.
 			if tc.whole {
 				wp.mode.SetSelected(workingWhole)
-				if got := strings.Count(shownText(wp.steps), "Step "); got < len(a.Trace) {
-					t.Errorf("the whole record shows %d steps, want %d", got, len(a.Trace))
+				if got := strings.Count(shownText(wp.steps), "Step "); got < len(a.Trace()) {
+					t.Errorf("the whole record shows %d steps, want %d", got, len(a.Trace()))
 				}
 				wp.mode.SetSelected(workingBehind)
 				if got := shownText(wp.object); got != text {
@@ -141,7 +141,7 @@ func TestKeyNumberRowsOpenTheirWorking(t *testing.T) {
 		}
 		keys.taps[k].Tapped(nil)
 		h.idle()
-		st := a.Trace[a.TraceStep(tc.key)-1]
+		st := a.Trace()[a.TraceStep(tc.key)-1]
 		text := shownText(h.s.working.object)
 		if !h.s.working.open || !strings.Contains(text, stepHeading(st)) || !strings.Contains(text, st.Equation) {
 			t.Errorf("%s: step %d and its equation not shown", tc.label, st.Number)
@@ -160,11 +160,11 @@ func TestCopyAsTextPutsTheWorkingOnTheClipboard(t *testing.T) {
 	got := h.s.app.Clipboard().Content()
 	a := h.s.last.assessment
 	f := h.s.results.list.rows[i]
-	if want := WorkingText(a, f.Title+" — "+statusWord(f.Status), f.Steps); got != want {
+	if want := WorkingText(a, f.Title+" — "+statusWord(f.Status), f.Steps()); got != want {
 		t.Errorf("clipboard holds\n%s\nwant\n%s", got, want)
 	}
-	for _, n := range f.Steps {
-		if !strings.Contains(got, stepHeading(a.Trace[n-1])) {
+	for _, n := range f.Steps() {
+		if !strings.Contains(got, stepHeading(a.Trace()[n-1])) {
 			t.Errorf("the copied text lacks step %d", n)
 		}
 	}

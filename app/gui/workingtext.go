@@ -100,8 +100,8 @@ func stepLines(a *hazards.Assessment, s hazards.Step) []stepLine {
 // stepReference names another step of the record: "step 33, Burst
 // safety factor".
 func stepReference(a *hazards.Assessment, n int) string {
-	if n >= 1 && n <= len(a.Trace) {
-		return fmt.Sprintf("step %d, %s", n, a.Trace[n-1].Title)
+	if n >= 1 && n <= len(a.Trace()) {
+		return fmt.Sprintf("step %d, %s", n, a.Trace()[n-1].Title)
 	}
 	return fmt.Sprintf("step %d", n)
 }
@@ -184,12 +184,12 @@ func stepsPhrase(steps []int) string {
 // numbers it returns the whole record.
 func pickSteps(a *hazards.Assessment, numbers []int) []hazards.Step {
 	if len(numbers) == 0 {
-		return a.Trace
+		return a.Trace()
 	}
 	var out []hazards.Step
 	for _, n := range numbers {
-		if n >= 1 && n <= len(a.Trace) {
-			out = append(out, a.Trace[n-1])
+		if n >= 1 && n <= len(a.Trace()) {
+			out = append(out, a.Trace()[n-1])
 		}
 	}
 	return out
@@ -197,7 +197,7 @@ func pickSteps(a *hazards.Assessment, numbers []int) []hazards.Step {
 
 // workingSummary says which steps are shown and in what units.
 func workingSummary(a *hazards.Assessment, numbers []int) string {
-	total := plural(len(a.Trace), "step")
+	total := plural(len(a.Trace()), "step")
 	if len(numbers) == 0 {
 		return "The whole calculation record, " + total + ", in the order a hand check follows. SI units as computed, six significant figures."
 	}
@@ -215,7 +215,7 @@ func capitalise(s string) string {
 // WorkingText returns the working behind a result of an assessment as
 // plain text, as the "Copy as text" button puts it on the clipboard: the
 // heading, a line saying which steps follow, then each of the numbered
-// steps of a.Trace given in steps, in that order, with its method, the
+// steps of a.Trace() given in steps, in that order, with its method, the
 // equation as written in its source, the values substituted (SI units, as
 // computed, six significant figures) with their sources, the intermediate
 // values, the result, the root-finding record where there is one, the

@@ -10,7 +10,7 @@ import (
 // sampleRecord is a small calculation record made up for the tests: the
 // numbers are arbitrary, chosen to show the six-figure formatting.
 func sampleRecord() *hazards.Assessment {
-	return &hazards.Assessment{Trace: []hazards.Step{
+	return hazards.RecordOnly([]hazards.Step{
 		{Number: 1, Stage: hazards.StageStress, Title: "Hoop stress, bulb", Method: "thin-wall sphere membrane stress",
 			Equation: "σ = ΔP · r_m /(2t)",
 			Inputs: []hazards.Value{
@@ -28,7 +28,7 @@ func sampleRecord() *hazards.Assessment {
 			Uses:    []int{1},
 			Finding: &hazards.FindingResult{Status: hazards.StatusPass, Value: 2.5, Limit: 2, Direction: hazards.AtLeast, Margin: 0.25},
 			Note:    "Passes with room to spare."},
-	}}
+	})
 }
 
 func TestWorkingTextLaysOutEachStep(t *testing.T) {
@@ -94,13 +94,13 @@ func TestWorkingTextOfTheExample(t *testing.T) {
 	h := newHarness(t)
 	a := h.s.last.assessment
 	for _, f := range a.Findings {
-		if len(f.Steps) == 0 {
+		if len(f.Steps()) == 0 {
 			t.Errorf("finding %s names no steps", f.Criterion)
 			continue
 		}
-		text := WorkingText(a, f.Title, f.Steps)
-		for _, n := range f.Steps {
-			st := a.Trace[n-1]
+		text := WorkingText(a, f.Title, f.Steps())
+		for _, n := range f.Steps() {
+			st := a.Trace()[n-1]
 			if !strings.Contains(text, stepHeading(st)) || !strings.Contains(text, st.Equation) {
 				t.Errorf("%s: the text lacks step %d or its equation %q", f.Criterion, n, st.Equation)
 			}
@@ -110,8 +110,8 @@ func TestWorkingTextOfTheExample(t *testing.T) {
 		}
 	}
 	whole := WorkingText(a, "", nil)
-	if got := strings.Count(whole, "\nStep "); got != len(a.Trace) {
-		t.Errorf("the whole record has %d steps, want %d", got, len(a.Trace))
+	if got := strings.Count(whole, "\nStep "); got != len(a.Trace()) {
+		t.Errorf("the whole record has %d steps, want %d", got, len(a.Trace()))
 	}
 }
 

@@ -7,7 +7,6 @@ import (
 	"fmt"
 	"math"
 	"reflect"
-	"sort"
 	"strconv"
 	"unicode/utf8"
 )
@@ -46,8 +45,7 @@ func canonicalJSON(v any) string {
 func writeCanonical(b *bytes.Buffer, v reflect.Value) {
 	switch v.Kind() {
 	case reflect.Struct:
-		fields := jsonFields(v.Type())
-		sort.Slice(fields, func(i, j int) bool { return fields[i].name < fields[j].name })
+		fields := fieldsByName(v.Type())
 		b.WriteByte('{')
 		i := 0
 		for _, f := range fields {

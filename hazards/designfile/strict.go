@@ -5,8 +5,12 @@ import (
 	"fmt"
 	"math"
 	"reflect"
+	"sort"
 	"strconv"
 	"strings"
+	"sync"
+
+	"ullage/hazards"
 )
 
 // strictDecoder fills Go values from a parsed tree, refusing unknown
@@ -92,7 +96,7 @@ func (d *strictDecoder) object(n *node, v reflect.Value, path string) *FileError
 	if n.kind != kindObject {
 		return d.fail(n, path, n.shown(), "must be an object in braces { … }", nil)
 	}
-	fields := jsonFields(v.Type())
+	fields := fieldsOf(v.Type())
 	present := make(map[string]bool, len(n.members))
 	for _, m := range n.members {
 		f, ok := findField(fields, m.key)
@@ -125,6 +129,53 @@ var (
 	errUnknownField = errors.New("unknown field")
 	errMissingField = errors.New("missing field")
 )
+
+// fieldTables holds the JSON fields of every struct type a design file is
+// made of, in declaration order and sorted by name (for the canonical
+// form), read from the types once: a fixed table, never changed after.
+var fieldTables = sync.OnceValue(func() map[reflect.Type][2][]jsonField {
+	m := map[reflect.Type][2][]jsonField{}
+	var walk func(t reflect.Type)
+	walk = func(t reflect.Type) {
+		switch t.Kind() {
+		case reflect.Pointer, reflect.Slice, reflect.Array:
+			walk(t.Elem())
+		case reflect.Struct:
+			if _, ok := m[t]; ok {
+				return
+			}
+			fs := jsonFields(t)
+			byName := append([]jsonField(nil), fs...)
+			sort.Slice(byName, func(i, j int) bool { return byName[i].name < byName[j].name })
+			m[t] = [2][]jsonField{fs, byName}
+			for _, f := range fs {
+				walk(t.FieldByIndex(f.index).Type)
+			}
+		}
+	}
+	walk(reflect.TypeFor[File]())
+	walk(reflect.TypeFor[singleSheet]())
+	walk(reflect.TypeFor[hazards.Design]())
+	return m
+})
+
+// fieldsOf returns jsonFields(t), not to be changed.
+func fieldsOf(t reflect.Type) []jsonField {
+	if fs, ok := fieldTables()[t]; ok {
+		return fs[0]
+	}
+	return jsonFields(t)
+}
+
+// fieldsByName returns jsonFields(t) sorted by name, not to be changed.
+func fieldsByName(t reflect.Type) []jsonField {
+	if fs, ok := fieldTables()[t]; ok {
+		return fs[1]
+	}
+	fs := jsonFields(t)
+	sort.Slice(fs, func(i, j int) bool { return fs[i].name < fs[j].name })
+	return fs
+}
 
 // jsonField is one struct field as named in JSON.
 type jsonField struct {

@@ -4,6 +4,7 @@ import (
 	"context"
 	"fmt"
 	"math"
+	"time"
 
 	"ullage/fluids"
 	"ullage/hazards"
@@ -28,8 +29,15 @@ import (
 // exposure limits; errors from that come back unchanged, bad settings as
 // an *hazards.InputError. Run stops early and returns ctx.Err() when ctx is
 // cancelled. The result depends only on the design and on the settings
-// other than Workers.
+// other than Workers and Progress (see Settings.Progress for the progress
+// reports).
 func Run(ctx context.Context, d hazards.Design, lib *fluids.Library, s Settings) (*Result, error) {
+	return run(ctx, d, lib, s, nil)
+}
+
+// run is Run, reporting progress at every tick of tick instead of every
+// ProgressInterval when tick is not nil.
+func run(ctx context.Context, d hazards.Design, lib *fluids.Library, s Settings, tick <-chan time.Time) (*Result, error) {
 	s, err := s.resolved()
 	if err != nil {
 		return nil, err
@@ -54,7 +62,7 @@ func Run(ctx context.Context, d hazards.Design, lib *fluids.Library, s Settings)
 	p.exposureMassKg = limitKg
 
 	st := newStudy(p)
-	if err := st.run(ctx); err != nil {
+	if err := st.runWith(ctx, tick); err != nil {
 		return nil, err
 	}
 	return st.result(limited), nil

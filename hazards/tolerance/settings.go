@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"runtime"
+	"time"
 
 	"ullage/hazards"
 )
@@ -56,7 +57,18 @@ type Settings struct {
 	// correlations use; 0 means DefaultSensitivityUnits (or Samples when
 	// fewer).
 	SensitivityUnits int `json:"sensitivity_units"`
+
+	// Progress, when not nil, is told how many of the total units are
+	// done while the study runs: at most every ProgressInterval, from one
+	// goroutine at a time, with done never falling, and once with done =
+	// total when every unit is done. Run makes no call after it returns.
+	// It is not an input: it never changes the result.
+	Progress func(done, total int) `json:"-"`
 }
+
+// ProgressInterval is the shortest time between two Settings.Progress
+// calls while a study runs.
+const ProgressInterval = 250 * time.Millisecond
 
 // resolved returns the settings with defaults filled in, or an
 // *hazards.InputError naming the field, the value and what is acceptable.

@@ -7,6 +7,7 @@ import (
 	"math"
 	"sync"
 	"sync/atomic"
+	"time"
 
 	"ullage/hazards"
 )
@@ -45,8 +46,58 @@ func newStudy(p *plan) *study {
 
 // run hands chunks to the workers in increasing order. After an error in
 // chunk c no chunk above c is started, so the error returned is always that
-// of the lowest failing chunk, whatever the number of workers.
-func (st *study) run(ctx context.Context) error {
+// of the lowest failing chunk, whatever the number of workers. It reports
+// progress to the settings' Progress every ProgressInterval.
+func (st *study) run(ctx context.Context) error { return st.runWith(ctx, nil) }
+
+// runWith is run, reporting progress at every tick of tick instead when
+// tick is not nil.
+func (st *study) runWith(ctx context.Context, tick <-chan time.Time) error {
+	if tick == nil && st.p.settings.Progress != nil {
+		t := time.NewTicker(ProgressInterval)
+		defer t.Stop()
+		tick = t.C
+	}
+	return st.runTicking(ctx, tick)
+}
+
+// runTicking is run with progress reported at each tick (none when tick
+// is nil), and once more with the total when every unit is done.
+func (st *study) runTicking(ctx context.Context, tick <-chan time.Time) error {
+	var done atomic.Int64 // units of finished chunks
+	report := st.p.settings.Progress
+	if report == nil {
+		return st.runChunks(ctx, &done)
+	}
+	total := st.p.settings.Samples
+	stopReports := make(chan struct{})
+	reporting := make(chan struct{})
+	last := int64(-1) // the last count reported; read after reporting closes
+	go func() {
+		defer close(reporting)
+		for {
+			select {
+			case <-stopReports:
+				return
+			case <-tick:
+				if n := done.Load(); n != last {
+					last = n
+					report(int(n), total)
+				}
+			}
+		}
+	}()
+	err := st.runChunks(ctx, &done)
+	close(stopReports)
+	<-reporting
+	if err == nil && last != int64(total) {
+		report(total, total)
+	}
+	return err
+}
+
+// runChunks runs the workers, adding each finished chunk's units to done.
+func (st *study) runChunks(ctx context.Context, done *atomic.Int64) error {
 	var next atomic.Int64
 	var stopAt atomic.Int64
 	stopAt.Store(int64(st.chunks))
@@ -71,6 +122,7 @@ func (st *study) run(ctx context.Context) error {
 					}
 					return
 				}
+				done.Add(int64(min(ChunkUnits, st.p.settings.Samples-int(c)*ChunkUnits)))
 			}
 		})
 	}
