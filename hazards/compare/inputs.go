@@ -3,7 +3,9 @@ package compare
 import (
 	"fmt"
 	"reflect"
+	"strconv"
 	"strings"
+	"sync"
 
 	"ullage/hazards"
 )
@@ -13,56 +15,126 @@ import (
 // index, so a part added or removed at the end shows as one change; lists
 // of plain values (limit bodies) are compared as a whole.
 func inputChanges(a, b *hazards.Design) []InputChange {
-	var out []InputChange
-	diff(&out, "", "", reflect.ValueOf(a).Elem(), reflect.ValueOf(b).Elem())
-	return out
+	d := differ{path: make([]byte, 0, 64)}
+	d.diff("", reflect.ValueOf(a).Elem(), reflect.ValueOf(b).Elem())
+	return d.out
 }
 
-// diff compares two values of the same type; name is the JSON name that
-// carries the unit (for a sourced value, its parent's).
-func diff(out *[]InputChange, path, name string, a, b reflect.Value) {
+// designFields holds the JSON fields of every struct type a design is
+// made of, read from the types once: a fixed table, never changed after.
+var designFields = sync.OnceValue(func() map[reflect.Type][]jsonField {
+	m := map[reflect.Type][]jsonField{}
+	var walk func(t reflect.Type)
+	walk = func(t reflect.Type) {
+		switch t.Kind() {
+		case reflect.Pointer, reflect.Slice, reflect.Array:
+			walk(t.Elem())
+		case reflect.Struct:
+			if _, ok := m[t]; ok {
+				return
+			}
+			fs := jsonFields(t)
+			m[t] = fs
+			for _, f := range fs {
+				walk(t.FieldByIndex(f.index).Type)
+			}
+		}
+	}
+	walk(reflect.TypeFor[hazards.Design]())
+	return m
+})
+
+// fieldsOf returns the JSON fields of a struct type.
+func fieldsOf(t reflect.Type) []jsonField {
+	if fs, ok := designFields()[t]; ok {
+		return fs
+	}
+	return jsonFields(t)
+}
+
+// differ walks two designs: the changes found, and the JSON path of the
+// value being compared, written out as a string only for a change.
+type differ struct {
+	out  []InputChange
+	path []byte
+}
+
+// add records a change at the current path.
+func (d *differ) add(name string, oldV, newV InputValue) {
+	d.out = append(d.out, change(string(d.path), name, oldV, newV))
+}
+
+// at returns the current path as a string, for the values of a change.
+func (d *differ) at() string { return string(d.path) }
+
+// diff compares two values of the same type at the current path; name is
+// the JSON name that carries the unit (for a sourced value, its parent's).
+func (d *differ) diff(name string, a, b reflect.Value) {
 	switch a.Kind() {
 	case reflect.Struct:
-		for _, f := range jsonFields(a.Type()) {
+		for _, f := range fieldsOf(a.Type()) {
 			unitName := f.name
 			if f.name == "value" {
 				unitName = name // {"value": …, "source": …} under elastic_modulus_pa
 			}
-			diff(out, join(path, f.name), unitName, a.FieldByIndex(f.index), b.FieldByIndex(f.index))
+			n := len(d.path)
+			if n > 0 {
+				d.path = append(d.path, '.')
+			}
+			d.path = append(d.path, f.name...)
+			d.diff(unitName, a.FieldByIndex(f.index), b.FieldByIndex(f.index))
+			d.path = d.path[:n]
 		}
 	case reflect.Pointer:
 		switch {
 		case a.IsNil() && b.IsNil():
 		case a.IsNil():
-			*out = append(*out, change(path, name, InputValue{Kind: KindAbsent}, read(path, name, b.Elem())))
+			d.add(name, InputValue{Kind: KindAbsent}, read(d.at(), name, b.Elem()))
 		case b.IsNil():
-			*out = append(*out, change(path, name, read(path, name, a.Elem()), InputValue{Kind: KindAbsent}))
+			d.add(name, read(d.at(), name, a.Elem()), InputValue{Kind: KindAbsent})
 		default:
-			diff(out, path, name, a.Elem(), b.Elem())
+			d.diff(name, a.Elem(), b.Elem())
 		}
 	case reflect.Slice:
 		if a.Type().Elem().Kind() != reflect.Struct {
-			if oldV, newV := read(path, name, a), read(path, name, b); !reflect.DeepEqual(oldV, newV) {
-				*out = append(*out, change(path, name, oldV, newV))
+			if !sameList(a, b) {
+				d.add(name, read(d.at(), name, a), read(d.at(), name, b))
 			}
 			return
 		}
 		for i := 0; i < max(a.Len(), b.Len()); i++ {
-			at := fmt.Sprintf("%s[%d]", path, i)
+			n := len(d.path)
+			d.path = append(strconv.AppendInt(append(d.path, '['), int64(i), 10), ']')
 			switch {
 			case i >= a.Len():
-				*out = append(*out, change(at, name, InputValue{Kind: KindAbsent}, read(at, name, b.Index(i))))
+				d.add(name, InputValue{Kind: KindAbsent}, read(d.at(), name, b.Index(i)))
 			case i >= b.Len():
-				*out = append(*out, change(at, name, read(at, name, a.Index(i)), InputValue{Kind: KindAbsent}))
+				d.add(name, read(d.at(), name, a.Index(i)), InputValue{Kind: KindAbsent})
 			default:
-				diff(out, at, name, a.Index(i), b.Index(i))
+				d.diff(name, a.Index(i), b.Index(i))
 			}
+			d.path = d.path[:n]
 		}
 	default:
 		if !sameScalar(a, b) {
-			*out = append(*out, change(path, name, read(path, name, a), read(path, name, b)))
+			d.add(name, read(d.at(), name, a), read(d.at(), name, b))
 		}
 	}
+}
+
+// sameList reports whether two lists of plain values hold the same
+// values in the same order (a nil list and an empty one are the same, as
+// their descriptions are).
+func sameList(a, b reflect.Value) bool {
+	if a.Len() != b.Len() {
+		return false
+	}
+	for i := 0; i < a.Len(); i++ {
+		if !sameScalar(a.Index(i), b.Index(i)) {
+			return false
+		}
+	}
+	return true
 }
 
 // change is one InputChange, its unit the one its values carry.
@@ -73,9 +145,18 @@ func change(path, name string, oldV, newV InputValue) InputChange {
 // sameScalar reports whether two plain values are equal (NaN equal to
 // NaN, so that bad input never reports a change that shows none).
 func sameScalar(a, b reflect.Value) bool {
-	if a.Kind() == reflect.Float64 || a.Kind() == reflect.Float32 {
+	switch a.Kind() {
+	case reflect.Float64, reflect.Float32:
 		x, y := a.Float(), b.Float()
 		return x == y || (x != x && y != y)
+	case reflect.String:
+		return a.String() == b.String()
+	case reflect.Bool:
+		return a.Bool() == b.Bool()
+	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
+		return a.Int() == b.Int()
+	case reflect.Uint, reflect.Uint8, reflect.Uint16, reflect.Uint32, reflect.Uint64, reflect.Uintptr:
+		return a.Uint() == b.Uint()
 	}
 	return a.Interface() == b.Interface()
 }
@@ -87,7 +168,7 @@ func read(path, name string, v reflect.Value) InputValue {
 	switch v.Kind() {
 	case reflect.Struct:
 		g := InputValue{Kind: KindGroup}
-		for _, f := range jsonFields(v.Type()) {
+		for _, f := range fieldsOf(v.Type()) {
 			if f.omitZero && v.FieldByIndex(f.index).IsZero() {
 				continue
 			}
