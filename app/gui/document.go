@@ -2,13 +2,13 @@ package gui
 
 import (
 	"bytes"
-	"encoding/json"
 	"fmt"
 	"path/filepath"
 	"slices"
 	"strings"
 	"time"
 
+	"ullage/app/recovery"
 	"ullage/assets"
 	"ullage/hazards"
 	"ullage/hazards/designfile"
@@ -119,16 +119,6 @@ func loadDocument(path string) (*document, error) {
 	}
 	d.stamp = stamp
 	return d, nil
-}
-
-// exampleDesignForChecks returns a valid design, used to validate a part
-// of a design (the criteria) on its own.
-func exampleDesignForChecks() hazards.Design {
-	doc, err := exampleDocument()
-	if err != nil {
-		return hazards.Design{}
-	}
-	return doc.Work
 }
 
 // setWork makes a copy of a revision's design the working copy.
@@ -360,39 +350,19 @@ func below(path, top string) bool {
 	return strings.HasPrefix(path, top) && (path[len(top)] == '.' || path[len(top)] == '[')
 }
 
-// snapshot is what autosave keeps of a document, enough to restore it
-// after a crash.
-type snapshot struct {
-	Path  string          `json:"path"`
-	Name  string          `json:"name"`
-	Base  string          `json:"base"`
-	Saved time.Time       `json:"saved"`
-	File  json.RawMessage `json:"file"`
-	Work  hazards.Design  `json:"work"`
-}
-
 // snapshotOf captures the document for autosave.
 func (d *document) snapshotOf(now time.Time) ([]byte, error) {
-	s := snapshot{Path: d.Path, Name: d.Name, Base: d.Base, Saved: now, File: d.encoded(), Work: d.Work}
-	return json.MarshalIndent(s, "", "  ")
+	return recovery.Encode(recovery.Snapshot{Path: d.Path, Name: d.Name, Base: d.Base, Saved: now, File: d.encoded(), Work: d.Work})
 }
 
 // restoreSnapshot rebuilds a document from an autosaved snapshot. The
 // restored document counts as changed, so that it is saved on purpose.
 func restoreSnapshot(b []byte) (*document, time.Time, error) {
-	var s snapshot
-	if err := json.Unmarshal(b, &s); err != nil {
-		return nil, time.Time{}, fmt.Errorf("the recovered work cannot be read: %w", err)
-	}
-	f, err := designfile.Decode(bytes.NewReader(s.File), "recovered work")
+	r, err := recovery.Restore(b)
 	if err != nil {
 		return nil, time.Time{}, err
 	}
-	d := &document{File: f, Path: s.Path, Name: s.Name, Base: s.Base, Work: cloneDesign(s.Work)}
-	if d.Name == "" {
-		d.Name = "recovered work"
-	}
-	return d, s.Saved, nil
+	return &document{File: r.File, Path: r.Path, Name: r.Name, Base: r.Base, Work: cloneDesign(r.Work)}, r.Saved, nil
 }
 
 // salvageSnapshot reads what it can of a recovery file that does not
@@ -400,17 +370,17 @@ func restoreSnapshot(b []byte) (*document, time.Time, error) {
 // new document with no path (so that saving it asks where, and nothing on
 // disk is replaced). It returns nil when nothing can be read.
 func salvageSnapshot(b []byte) *document {
-	var s snapshot
-	if json.Unmarshal(b, &s) != nil || s.Work.Validate() != nil {
+	work, path, ok := recovery.Salvage(b)
+	if !ok {
 		return nil
 	}
 	f := &designfile.File{Format: designfile.FormatCurrent, Product: designfile.Product{Name: "Recovered work"}}
-	if s.Path != "" {
-		if g, err := designfile.Load(s.Path); err == nil {
+	if path != "" {
+		if g, err := designfile.Load(path); err == nil {
 			f = g
 		}
 	}
-	d := &document{File: f, Name: "recovered work", Work: cloneDesign(s.Work)}
+	d := &document{File: f, Name: recovery.DefaultName, Work: cloneDesign(work)}
 	if r, err := f.Latest(); err == nil {
 		d.Base = r.Label
 	}

@@ -6,6 +6,7 @@ import (
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/prefs"
 	"ullage/hazards"
 )
 
@@ -21,10 +22,10 @@ func newCriteriaSection(f *designForm) fyne.CanvasObject {
 	c := &criteriaSection{f: f}
 	f.criteria = c
 	var objs []fyne.CanvasObject
-	for _, cp := range criterionPrefs {
-		nf := f.field(criterionPath(cp.key))
+	for _, cp := range prefs.Criteria {
+		nf := f.field(criterionPath(cp.Key))
 		c.fields = append(c.fields, nf)
-		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cp.key])))
+		objs = append(objs, nf.object, indented(hint(hazards.DefaultCriteriaGrounds[cp.Key])))
 	}
 	c.sets = widget.NewCheckGroup(limitSetNames(), func(sel []string) {
 		f.s.doc.choose(hazards.FieldLimitSets, func(d *hazards.Design) { d.Criteria.LimitSets = limitSetsOf(sel) })
@@ -41,9 +42,9 @@ func criterionPath(key string) string { return hazards.FieldCriteria + "." + key
 
 // criterionGetter returns the accessor of a criterion by its JSON key.
 func criterionGetter(key string) func(*hazards.Criteria) *float64 {
-	for _, cp := range criterionPrefs {
-		if cp.key == key {
-			return cp.get
+	for _, cp := range prefs.Criteria {
+		if cp.Key == key {
+			return cp.Get
 		}
 	}
 	panic("gui: unknown criterion " + key)

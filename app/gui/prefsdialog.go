@@ -11,6 +11,7 @@ import (
 
 	"ullage/app/look"
 	"ullage/app/parse"
+	"ullage/app/prefs"
 	"ullage/hazards"
 	"ullage/report"
 )
@@ -72,20 +73,20 @@ func newPreferencesPanel(s *session) *preferencesPanel {
 		sectionHeading("Default review criteria for new designs"),
 	}
 	c := s.settings.Criteria
-	for _, cp := range criterionPrefs {
-		cf, _ := formFieldAt(criterionPath(cp.key))
+	for _, cp := range prefs.Criteria {
+		cf, _ := formFieldAt(criterionPath(cp.Key))
 		e := widget.NewEntry()
-		e.SetText(entryText(*cp.get(&c)))
-		p.criteria[cp.key] = e
+		e.SetText(entryText(*cp.Get(&c)))
+		p.criteria[cp.Key] = e
 		unit := widget.NewLabel(unitsSI.unit(cf.q))
 		items = append(items,
 			container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}, widget.NewLabel(cf.label)), container.New(fixedWidth{unitWidth}, unit), e),
-			indented(hint(hazards.DefaultCriteriaGrounds[cp.key])))
+			indented(hint(hazards.DefaultCriteriaGrounds[cp.Key])))
 	}
 	reset := widget.NewButtonWithIcon("Restore the built-in criteria", theme.HistoryIcon(), func() {
 		d := hazards.DefaultCriteria()
-		for _, cp := range criterionPrefs {
-			p.criteria[cp.key].SetText(entryText(*cp.get(&d)))
+		for _, cp := range prefs.Criteria {
+			p.criteria[cp.Key].SetText(entryText(*cp.Get(&d)))
 		}
 	})
 	p.problem = widget.NewLabel("")
@@ -113,12 +114,12 @@ func (p *preferencesPanel) read() (settings, error) {
 	}
 	st.Reviewer = p.reviewer.Text
 	c := st.Criteria
-	for _, cp := range criterionPrefs {
-		x, ok := parse.Number(p.criteria[cp.key].Text)
+	for _, cp := range prefs.Criteria {
+		x, ok := parse.Number(p.criteria[cp.Key].Text)
 		if !ok {
-			return st, fmt.Errorf("%s: %q is not a number", labelOf(criterionPath(cp.key)), p.criteria[cp.key].Text)
+			return st, fmt.Errorf("%s: %q is not a number", labelOf(criterionPath(cp.Key)), p.criteria[cp.Key].Text)
 		}
-		*cp.get(&c) = x
+		*cp.Get(&c) = x
 	}
 	probe := hazards.Design{Criteria: c}
 	if err := criteriaError(&probe); err != nil {

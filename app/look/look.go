@@ -5,14 +5,16 @@ import (
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/theme"
+
+	"ullage/app/prefs"
 )
 
 // Looks of the window, as kept in the preferences.
 const (
 	// Light is paper-white with dark ink, like the printed record.
-	Light = "light"
+	Light = prefs.LookLight
 	// Dark is the same accent on a dark ground.
-	Dark = "dark"
+	Dark = prefs.LookDark
 )
 
 // Ullage's own colours: a deep blue-green accent and a warm paper
