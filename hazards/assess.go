@@ -277,7 +277,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		if err != nil {
 			return math.NaN()
 		}
-		return (st.PressurePa - allow) / allow
+		return math.Log(st.PressurePa / allow)
 	}
 	minU := d.Criteria.MinUllagePercent
 	ullageGap := func(t float64) float64 {
@@ -287,7 +287,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		}
 		return minU - st.UllagePercent
 	}
-	tP, bP, rP, err := searchRising(pressureGap, lo, hi)
+	tP, bP, rP, err := searchRising(pressureGap, lo, hi, d.HottestK)
 	if err != nil {
 		return fmt.Errorf("maximum safe temperature (pressure): %w", err)
 	}
@@ -297,7 +297,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 	}
 	tU, bU, rU := uHi, BoundAbove, (*solve.Root)(nil)
 	if a.LiquidFullReached && uHi > lo {
-		if tU, bU, rU, err = searchRising(ullageGap, lo, uHi); err != nil {
+		if tU, bU, rU, err = searchRising(ullageGap, lo, uHi, d.HottestK); err != nil {
 			return fmt.Errorf("maximum safe temperature (ullage): %w", err)
 		}
 		if bU == BoundAbove {
@@ -322,6 +322,9 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 	mMax := sat.LiquidDensity * a.VolumeM3 * (1 - 1e-9)
 	var v sealedVessel // each step's vessel, sealed in the same memory
 	fillGap := func(mass float64) float64 {
+		if mass == d.FillMassKg { // the design itself: its hottest state is known
+			return math.Max((a.Hot.PressurePa-allow)/allow, (minU-a.Hot.UllagePercent)/100)
+		}
 		if err := v.seal(sub, mass, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats); err != nil {
 			return math.NaN()
 		}
@@ -332,7 +335,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		return math.Max((st.PressurePa-allow)/allow, (minU-st.UllagePercent)/100)
 	}
 	mLo := mMax * 1e-6
-	mf, bf, rf, err := searchRising(fillGap, mLo, mMax)
+	mf, bf, rf, err := searchRising(fillGap, mLo, mMax, d.FillMassKg)
 	if err != nil {
 		return fmt.Errorf("maximum safe fill: %w", err)
 	}
@@ -343,22 +346,13 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 
 // searchRising finds where a rising gap function crosses zero on [lo, hi]:
 // the largest x with gap(x) ≤ 0. When gap(hi) ≤ 0 it returns hi,
-// BoundAbove; when gap(lo) > 0 it returns lo, BoundBelow.
-func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *solve.Root, error) {
+// BoundAbove; when gap(lo) > 0 it returns lo, BoundBelow. Points inside
+// the range whose gap is already known (the design's own state) narrow
+// the bracket before the root is polished; the root found still names
+// [lo, hi] as the range searched.
+func searchRising(gap func(float64) float64, lo, hi float64, inside ...float64) (float64, Bound, *solve.Root, error) {
 	gap = unsafeWhereUnknown(gap)
 	gLo, gHi := gap(lo), gap(hi)
-	// Brent starts from the same two ends: their values are kept (each
-	// gap is a pure function, so only the work changes).
-	known := gap
-	gap = func(x float64) float64 {
-		switch x {
-		case lo:
-			return gLo
-		case hi:
-			return gHi
-		}
-		return known(x)
-	}
 	if math.IsNaN(gLo) || math.IsNaN(gHi) {
 		return 0, "", nil, fmt.Errorf("the model cannot be evaluated at %g or %g", lo, hi)
 	}
@@ -368,12 +362,35 @@ func searchRising(gap func(float64) float64, lo, hi float64) (float64, Bound, *s
 	if gLo > 0 {
 		return lo, BoundBelow, nil, nil
 	}
-	r, err := solve.Brent(gap, lo, hi, 1e-6*math.Max(math.Abs(hi), 1e-12), 200)
-	if err != nil {
-		if errors.Is(err, solve.ErrNotFinite) {
-			return 0, "", nil, err
+	a, b, gA, gB := lo, hi, gLo, gHi
+	for _, x := range inside {
+		if !(x > a && x < b) {
+			continue
 		}
-		return r.X, BoundFound, &r, nil
+		switch g := gap(x); {
+		case math.IsNaN(g):
+		case g <= 0:
+			a, gA = x, g
+		default:
+			b, gB = x, g
+		}
+	}
+	// Brent starts from the two ends: their values are kept (each gap is
+	// a pure function, so only the work changes).
+	known := gap
+	gap = func(x float64) float64 {
+		switch x {
+		case a:
+			return gA
+		case b:
+			return gB
+		}
+		return known(x)
+	}
+	r, err := solve.Brent(gap, a, b, 1e-6*math.Max(math.Abs(hi), 1e-12), 200)
+	r.Lo, r.Hi = lo, hi
+	if err != nil && errors.Is(err, solve.ErrNotFinite) {
+		return 0, "", nil, err
 	}
 	return r.X, BoundFound, &r, nil
 }
