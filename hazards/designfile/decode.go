@@ -86,12 +86,12 @@ func decodeBytes(data []byte) (*File, *FileError) {
 	fieldInFile := func(path string) string { return path }
 	if format.text == FormatCurrent {
 		f = new(File)
-		if err := d.decode(root, reflect.ValueOf(f).Elem(), ""); err != nil {
+		if err := d.decode(root, reflect.ValueOf(f).Elem()); err != nil {
 			return nil, err
 		}
 	} else {
 		var s singleSheet
-		if err := d.decode(root, reflect.ValueOf(&s).Elem(), ""); err != nil {
+		if err := d.decode(root, reflect.ValueOf(&s).Elem()); err != nil {
 			return nil, err
 		}
 		f = migrateSingleSheet(&s)

@@ -18,38 +18,47 @@ import (
 // required unless its JSON tag says omitempty or omitzero.
 type strictDecoder struct {
 	data []byte
+	// at is the path to the value being filled, per level a key (index
+	// -1) or an index, written out as a field path only for an error.
+	at []pathStep
 }
+
+// path writes the path to the value being filled: "revisions[1].design".
+func (d *strictDecoder) path() string { return writePath(d.at) }
 
 func (d *strictDecoder) fail(n *node, field, value, problem string, err error) *FileError {
 	return &FileError{Line: lineAt(d.data, n.offset), Field: field, Value: value, Problem: problem, Err: err}
 }
 
-// decode fills v (settable) from n; path is n's field path.
-func (d *strictDecoder) decode(n *node, v reflect.Value, path string) *FileError {
+// decode fills v (settable) from n, the value at d.path().
+func (d *strictDecoder) decode(n *node, v reflect.Value) *FileError {
 	switch v.Kind() {
 	case reflect.Struct:
-		return d.object(n, v, path)
+		return d.object(n, v)
 	case reflect.Pointer:
 		if n.kind == kindNull {
 			v.SetZero()
 			return nil
 		}
 		p := reflect.New(v.Type().Elem())
-		if err := d.decode(n, p.Elem(), path); err != nil {
+		if err := d.decode(n, p.Elem()); err != nil {
 			return err
 		}
 		v.Set(p)
 		return nil
 	case reflect.Slice:
 		if n.kind == kindNull {
-			return d.fail(n, path, "null", "must be a list in square brackets [ … ] (write [] for an empty list)", nil)
+			return d.fail(n, d.path(), "null", "must be a list in square brackets [ … ] (write [] for an empty list)", nil)
 		}
 		if n.kind != kindArray {
-			return d.fail(n, path, n.shown(), "must be a list in square brackets [ … ]", nil)
+			return d.fail(n, d.path(), n.shown(), "must be a list in square brackets [ … ]", nil)
 		}
 		s := reflect.MakeSlice(v.Type(), len(n.elems), len(n.elems))
 		for i, e := range n.elems {
-			if err := d.decode(e, s.Index(i), fmt.Sprintf("%s[%d]", path, i)); err != nil {
+			d.at = append(d.at, pathStep{index: i})
+			err := d.decode(e, s.Index(i))
+			d.at = d.at[:len(d.at)-1]
+			if err != nil {
 				return err
 			}
 		}
@@ -57,44 +66,44 @@ func (d *strictDecoder) decode(n *node, v reflect.Value, path string) *FileError
 		return nil
 	case reflect.String:
 		if n.kind != kindString {
-			return d.fail(n, path, n.shown(), "must be text in double quotes", nil)
+			return d.fail(n, d.path(), n.shown(), "must be text in double quotes", nil)
 		}
 		v.SetString(n.text)
 		return nil
 	case reflect.Float64, reflect.Float32:
 		if n.kind != kindNumber {
-			return d.fail(n, path, n.shown(), "must be a number", nil)
+			return d.fail(n, d.path(), n.shown(), "must be a number", nil)
 		}
 		x, err := strconv.ParseFloat(n.text, v.Type().Bits())
 		if err != nil || math.IsInf(x, 0) {
-			return d.fail(n, path, n.shown(), "is too large to be a number this program can hold", err)
+			return d.fail(n, d.path(), n.shown(), "is too large to be a number this program can hold", err)
 		}
 		v.SetFloat(x)
 		return nil
 	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
 		if n.kind != kindNumber {
-			return d.fail(n, path, n.shown(), "must be a whole number", nil)
+			return d.fail(n, d.path(), n.shown(), "must be a whole number", nil)
 		}
 		x, err := strconv.ParseInt(n.text, 10, v.Type().Bits())
 		if err != nil {
-			return d.fail(n, path, n.shown(), "must be a whole number in range", err)
+			return d.fail(n, d.path(), n.shown(), "must be a whole number in range", err)
 		}
 		v.SetInt(x)
 		return nil
 	case reflect.Bool:
 		if n.kind != kindBool {
-			return d.fail(n, path, n.shown(), "must be true or false", nil)
+			return d.fail(n, d.path(), n.shown(), "must be true or false", nil)
 		}
 		v.SetBool(n.boolean)
 		return nil
 	}
-	panic(fmt.Sprintf("designfile: no strict decoding for %s at %s", v.Type(), path))
+	panic(fmt.Sprintf("designfile: no strict decoding for %s at %s", v.Type(), d.path()))
 }
 
 // object fills a struct from a JSON object, field by field.
-func (d *strictDecoder) object(n *node, v reflect.Value, path string) *FileError {
+func (d *strictDecoder) object(n *node, v reflect.Value) *FileError {
 	if n.kind != kindObject {
-		return d.fail(n, path, n.shown(), "must be an object in braces { … }", nil)
+		return d.fail(n, d.path(), n.shown(), "must be an object in braces { … }", nil)
 	}
 	fields := fieldsOf(v.Type())
 	present := make(map[string]bool, len(n.members))
@@ -107,16 +116,19 @@ func (d *strictDecoder) object(n *node, v reflect.Value, path string) *FileError
 					problem = fmt.Sprintf("unknown field (names are lower case: did you mean %q?)", g.name)
 				}
 			}
-			return &FileError{Line: lineAt(d.data, m.offset), Field: joinPath(path, m.key), Problem: problem, Err: errUnknownField}
+			return &FileError{Line: lineAt(d.data, m.offset), Field: joinPath(d.path(), m.key), Problem: problem, Err: errUnknownField}
 		}
 		present[m.key] = true
-		if err := d.decode(m.value, v.FieldByIndex(f.index), joinPath(path, m.key)); err != nil {
+		d.at = append(d.at, pathStep{key: m.key, index: -1})
+		err := d.decode(m.value, v.FieldByIndex(f.index))
+		d.at = d.at[:len(d.at)-1]
+		if err != nil {
 			return err
 		}
 	}
 	for _, f := range fields {
 		if !f.optional && !present[f.name] {
-			return &FileError{Line: lineAt(d.data, n.offset), Field: joinPath(path, f.name),
+			return &FileError{Line: lineAt(d.data, n.offset), Field: joinPath(d.path(), f.name),
 				Problem: `is missing; every field must be given (write 0 or "" where it does not apply)`, Err: errMissingField}
 		}
 	}

@@ -62,14 +62,26 @@ const maxDepth = 32
 type jsonTree struct {
 	data []byte
 	dec  *json.Decoder
+	// at is the path to the value being read, per level a key (index
+	// -1) or an index, written out as a field path only for an error.
+	at []pathStep
 }
 
 // parseTree parses data into a tree. Errors are *FileError with the line
 // set and the file name left for the caller.
 func parseTree(data []byte) (*node, *FileError) {
+	if root, ok := parseFast(data); ok {
+		return root, nil
+	}
+	return parseTreeStrictly(data)
+}
+
+// parseTreeStrictly is parseTree through the standard library's
+// tokenizer, which words every error.
+func parseTreeStrictly(data []byte) (*node, *FileError) {
 	p := &jsonTree{data: data, dec: json.NewDecoder(bytes.NewReader(data))}
 	p.dec.UseNumber()
-	root, err := p.value(0, "")
+	root, err := p.value(0)
 	if err != nil {
 		return nil, err
 	}
@@ -79,7 +91,7 @@ func parseTree(data []byte) (*node, *FileError) {
 	return root, nil
 }
 
-func (p *jsonTree) value(depth int, path string) (*node, *FileError) {
+func (p *jsonTree) value(depth int) (*node, *FileError) {
 	tok, err := p.dec.Token()
 	if err != nil {
 		return nil, p.tokenError(err)
@@ -97,18 +109,18 @@ func (p *jsonTree) value(depth int, path string) (*node, *FileError) {
 	case json.Delim:
 		if depth >= maxDepth {
 			ferr := p.fail(n.offset, fmt.Sprintf("nested more than %d levels deep", maxDepth), nil)
-			ferr.Field = path
+			ferr.Field = p.path()
 			return nil, ferr
 		}
 		if t == '{' {
-			return n, p.object(n, depth, path)
+			return n, p.object(n, depth)
 		}
-		return n, p.array(n, depth, path)
+		return n, p.array(n, depth)
 	}
 	return n, nil
 }
 
-func (p *jsonTree) object(n *node, depth int, path string) *FileError {
+func (p *jsonTree) object(n *node, depth int) *FileError {
 	n.kind = kindObject
 	seen := map[string]int64{}
 	for p.dec.More() {
@@ -119,10 +131,13 @@ func (p *jsonTree) object(n *node, depth int, path string) *FileError {
 		key, _ := tok.(string) // the decoder only yields strings as keys
 		off := p.dec.InputOffset()
 		if first, dup := seen[key]; dup {
-			return &FileError{Line: p.line(off), Field: joinPath(path, key), Problem: fmt.Sprintf("appears twice in the same object (first on line %d)", p.line(first))}
+			p.at = append(p.at, pathStep{key: key, index: -1})
+			return &FileError{Line: p.line(off), Field: p.path(), Problem: fmt.Sprintf("appears twice in the same object (first on line %d)", p.line(first))}
 		}
 		seen[key] = off
-		v, ferr := p.value(depth+1, joinPath(path, key))
+		p.at = append(p.at, pathStep{key: key, index: -1})
+		v, ferr := p.value(depth + 1)
+		p.at = p.at[:len(p.at)-1]
 		if ferr != nil {
 			return ferr
 		}
@@ -134,10 +149,12 @@ func (p *jsonTree) object(n *node, depth int, path string) *FileError {
 	return nil
 }
 
-func (p *jsonTree) array(n *node, depth int, path string) *FileError {
+func (p *jsonTree) array(n *node, depth int) *FileError {
 	n.kind = kindArray
 	for p.dec.More() {
-		v, ferr := p.value(depth+1, fmt.Sprintf("%s[%d]", path, len(n.elems)))
+		p.at = append(p.at, pathStep{index: len(n.elems)})
+		v, ferr := p.value(depth + 1)
+		p.at = p.at[:len(p.at)-1]
 		if ferr != nil {
 			return ferr
 		}
@@ -161,6 +178,25 @@ func (p *jsonTree) tokenError(err error) *FileError {
 		return p.fail(int64(len(p.data)), "the file ends before the JSON object is complete", err)
 	}
 	return p.fail(p.dec.InputOffset(), "not valid JSON: "+err.Error(), err)
+}
+
+// path writes the path to the value being read: "revisions[1].design".
+func (p *jsonTree) path() string { return writePath(p.at) }
+
+// writePath writes a path of keys (index -1) and indexes as a field path.
+func writePath(at []pathStep) string {
+	var b strings.Builder
+	for _, st := range at {
+		if st.index >= 0 {
+			b.WriteString("[" + strconv.Itoa(st.index) + "]")
+			continue
+		}
+		if b.Len() > 0 {
+			b.WriteByte('.')
+		}
+		b.WriteString(st.key)
+	}
+	return b.String()
 }
 
 func (p *jsonTree) fail(offset int64, problem string, err error) *FileError {
