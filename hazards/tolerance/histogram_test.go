@@ -1,6 +1,9 @@
 package tolerance
 
-import "testing"
+import (
+	"math"
+	"testing"
+)
 
 func TestHistogram(t *testing.T) {
 	x := []float64{-1, 0, 0.01, 0.5, 0.99, 1, 2}
@@ -62,5 +65,62 @@ func TestLoadedHistogramRangeFromData(t *testing.T) {
 	}
 	if h.Below+h.Above > 4 {
 		t.Errorf("%d below and %d above: want at most 1 %% each side", h.Below, h.Above)
+	}
+}
+
+// Factors spread over decades are binned on a logarithmic scale, so that
+// the bulk of the units is not squeezed into the first of equal bins.
+func TestLoadedHistogramWideSpreadIsLogarithmic(t *testing.T) {
+	tests := []struct {
+		name    string
+		lo, hi  float64 // factors spread geometrically between
+		log     bool
+		firstLo float64 // the lowest edge, approximately
+	}{
+		{"one decade", 5, 40, false, 4},
+		{"three decades, near bursting", 0.3, 800, true, 0.27},
+		{"from a factor of 1.5", 1.5, 900, true, 0.5},
+		{"high and wide", 20, 900, true, 18},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			x := make([]float64, 1000)
+			for i := range x {
+				x[i] = tt.lo * math.Pow(tt.hi/tt.lo, float64(i)/float64(len(x)-1))
+			}
+			h := loadedHistogram(x)
+			if h.Log != tt.log {
+				t.Fatalf("Log = %v, want %v", h.Log, tt.log)
+			}
+			total := h.Below + h.Above
+			empty := 0
+			for _, c := range h.Counts {
+				total += c
+				if c == 0 {
+					empty++
+				}
+			}
+			if total != len(x) {
+				t.Errorf("counted %d units, want %d", total, len(x))
+			}
+			if got := h.Edges[0]; math.Abs(got-tt.firstLo) > 0.02*tt.firstLo+0.5 {
+				t.Errorf("lowest edge %g, want about %g", got, tt.firstLo)
+			}
+			if !tt.log {
+				return
+			}
+			// Geometric edges: every bin has the same ratio of its edges.
+			r := h.Edges[1] / h.Edges[0]
+			for i := 1; i < HistogramBins; i++ {
+				if q := h.Edges[i+1] / h.Edges[i]; math.Abs(q-r) > 1e-9*r {
+					t.Fatalf("bin %d has edge ratio %g, bin 0 %g", i, q, r)
+				}
+			}
+			// Factors spread evenly in the logarithm fill the bins they
+			// span instead of piling into the first.
+			if empty > HistogramBins/2 {
+				t.Errorf("%d of %d bins are empty", empty, HistogramBins)
+			}
+		})
 	}
 }

@@ -35,6 +35,7 @@ func Histogram(title string, h tolerance.Histogram) Chart {
 		maxC = max(maxC, c)
 	}
 	ch.X.Min, ch.X.Max = h.Edges[0], h.Edges[len(h.Edges)-1]
+	ch.X.Log = h.Log // factors spread over decades: bins equal in the logarithm
 	ch.Y.Min, ch.Y.Max = LinearRange(0, float64(maxC)*1.1)
 	ch.Y.Max = math.Max(math.Ceil(ch.Y.Max), 1)
 	if ch.X.Min < 1 && ch.X.Max > 1 {
