@@ -5,9 +5,9 @@ import (
 	"reflect"
 	"strconv"
 	"strings"
-	"sync"
 
 	"ullage/hazards"
+	"ullage/hazards/jsonfields"
 )
 
 // inputChanges walks both designs field by field under their JSON names
@@ -18,38 +18,6 @@ func inputChanges(a, b *hazards.Design) []InputChange {
 	d := differ{path: make([]byte, 0, 64)}
 	d.diff("", reflect.ValueOf(a).Elem(), reflect.ValueOf(b).Elem())
 	return d.out
-}
-
-// designFields holds the JSON fields of every struct type a design is
-// made of, read from the types once: a fixed table, never changed after.
-var designFields = sync.OnceValue(func() map[reflect.Type][]jsonField {
-	m := map[reflect.Type][]jsonField{}
-	var walk func(t reflect.Type)
-	walk = func(t reflect.Type) {
-		switch t.Kind() {
-		case reflect.Pointer, reflect.Slice, reflect.Array:
-			walk(t.Elem())
-		case reflect.Struct:
-			if _, ok := m[t]; ok {
-				return
-			}
-			fs := jsonFields(t)
-			m[t] = fs
-			for _, f := range fs {
-				walk(t.FieldByIndex(f.index).Type)
-			}
-		}
-	}
-	walk(reflect.TypeFor[hazards.Design]())
-	return m
-})
-
-// fieldsOf returns the JSON fields of a struct type.
-func fieldsOf(t reflect.Type) []jsonField {
-	if fs, ok := designFields()[t]; ok {
-		return fs
-	}
-	return jsonFields(t)
 }
 
 // differ walks two designs: the changes found, and the JSON path of the
@@ -72,17 +40,17 @@ func (d *differ) at() string { return string(d.path) }
 func (d *differ) diff(name string, a, b reflect.Value) {
 	switch a.Kind() {
 	case reflect.Struct:
-		for _, f := range fieldsOf(a.Type()) {
-			unitName := f.name
-			if f.name == "value" {
+		for _, f := range jsonfields.Of(a.Type()) {
+			unitName := f.Name
+			if f.Name == "value" {
 				unitName = name // {"value": …, "source": …} under elastic_modulus_pa
 			}
 			n := len(d.path)
 			if n > 0 {
 				d.path = append(d.path, '.')
 			}
-			d.path = append(d.path, f.name...)
-			d.diff(unitName, a.FieldByIndex(f.index), b.FieldByIndex(f.index))
+			d.path = append(d.path, f.Name...)
+			d.diff(unitName, a.FieldByIndex(f.Index), b.FieldByIndex(f.Index))
 			d.path = d.path[:n]
 		}
 	case reflect.Pointer:
@@ -168,15 +136,15 @@ func read(path, name string, v reflect.Value) InputValue {
 	switch v.Kind() {
 	case reflect.Struct:
 		g := InputValue{Kind: KindGroup}
-		for _, f := range fieldsOf(v.Type()) {
-			if f.omitZero && v.FieldByIndex(f.index).IsZero() {
+		for _, f := range jsonfields.Of(v.Type()) {
+			if f.OmitZero && v.FieldByIndex(f.Index).IsZero() {
 				continue
 			}
-			unitName := f.name
-			if f.name == "value" {
+			unitName := f.Name
+			if f.Name == "value" {
 				unitName = name
 			}
-			g.Fields = append(g.Fields, InputField{Name: f.name, Value: read(join(path, f.name), unitName, v.FieldByIndex(f.index))})
+			g.Fields = append(g.Fields, InputField{Name: f.Name, Value: read(join(path, f.Name), unitName, v.FieldByIndex(f.Index))})
 		}
 		return g
 	case reflect.Pointer:
@@ -251,35 +219,7 @@ func unitOf(path, name string) Unit {
 	return UnitNone
 }
 
-// jsonField is one struct field under its JSON name.
-type jsonField struct {
-	name  string
-	index []int
-	// omitZero: an optional field (tag omitzero), left out of a
-	// description while it holds its zero value.
-	omitZero bool
-}
-
-// jsonFields lists a struct's exported fields under their JSON names.
-func jsonFields(t reflect.Type) []jsonField {
-	var out []jsonField
-	for i := 0; i < t.NumField(); i++ {
-		sf := t.Field(i)
-		if !sf.IsExported() {
-			continue
-		}
-		name, opts, _ := strings.Cut(sf.Tag.Get("json"), ",")
-		if name == "-" {
-			continue
-		}
-		if name == "" {
-			name = sf.Name
-		}
-		out = append(out, jsonField{name: name, index: sf.Index, omitZero: strings.Contains(","+opts+",", ",omitzero,")})
-	}
-	return out
-}
-
+// join appends a key to a field path.
 func join(path, key string) string {
 	if path == "" {
 		return key

@@ -9,6 +9,8 @@ import (
 	"reflect"
 	"strconv"
 	"unicode/utf8"
+
+	"ullage/hazards/jsonfields"
 )
 
 // Fingerprint returns the hex SHA-256 of the canonical JSON of r.Design,
@@ -45,19 +47,19 @@ func canonicalJSON(v any) string {
 func writeCanonical(b *bytes.Buffer, v reflect.Value) {
 	switch v.Kind() {
 	case reflect.Struct:
-		fields := fieldsByName(v.Type())
+		fields := jsonfields.ByName(v.Type())
 		b.WriteByte('{')
 		i := 0
 		for _, f := range fields {
-			fv := v.FieldByIndex(f.index)
-			if f.omitZero && canonicalZero(fv) {
+			fv := v.FieldByIndex(f.Index)
+			if f.OmitZero && canonicalZero(fv) {
 				continue
 			}
 			if i > 0 {
 				b.WriteByte(',')
 			}
 			i++
-			writeString(b, f.name)
+			writeString(b, f.Name)
 			b.WriteByte(':')
 			writeCanonical(b, fv)
 		}

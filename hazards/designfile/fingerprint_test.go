@@ -8,6 +8,8 @@ import (
 	"testing"
 
 	"ullage/hazards"
+
+	"ullage/hazards/jsonfields"
 )
 
 func TestFingerprintStable(t *testing.T) {
@@ -59,8 +61,8 @@ func TestFingerprintSeesEveryInput(t *testing.T) {
 		v := get(&probe)
 		switch v.Kind() {
 		case reflect.Struct:
-			for _, f := range jsonFields(v.Type()) {
-				walk(joinPath(path, f.name), func(d *hazards.Design) reflect.Value { return get(d).FieldByIndex(f.index) })
+			for _, f := range jsonfields.Of(v.Type()) {
+				walk(joinPath(path, f.Name), func(d *hazards.Design) reflect.Value { return get(d).FieldByIndex(f.Index) })
 			}
 			return
 		case reflect.Pointer:

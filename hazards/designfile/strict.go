@@ -5,12 +5,10 @@ import (
 	"fmt"
 	"math"
 	"reflect"
-	"sort"
 	"strconv"
 	"strings"
-	"sync"
 
-	"ullage/hazards"
+	"ullage/hazards/jsonfields"
 )
 
 // strictDecoder fills Go values from a parsed tree, refusing unknown
@@ -105,30 +103,30 @@ func (d *strictDecoder) object(n *node, v reflect.Value) *FileError {
 	if n.kind != kindObject {
 		return d.fail(n, d.path(), n.shown(), "must be an object in braces { … }", nil)
 	}
-	fields := fieldsOf(v.Type())
+	fields := jsonfields.Of(v.Type())
 	present := make(map[string]bool, len(n.members))
 	for _, m := range n.members {
 		f, ok := findField(fields, m.key)
 		if !ok {
 			problem := "unknown field; the fields here are " + fieldNames(fields)
 			for _, g := range fields {
-				if strings.EqualFold(g.name, m.key) {
-					problem = fmt.Sprintf("unknown field (names are lower case: did you mean %q?)", g.name)
+				if strings.EqualFold(g.Name, m.key) {
+					problem = fmt.Sprintf("unknown field (names are lower case: did you mean %q?)", g.Name)
 				}
 			}
 			return &FileError{Line: lineAt(d.data, m.offset), Field: joinPath(d.path(), m.key), Problem: problem, Err: errUnknownField}
 		}
 		present[m.key] = true
 		d.at = append(d.at, pathStep{key: m.key, index: -1})
-		err := d.decode(m.value, v.FieldByIndex(f.index))
+		err := d.decode(m.value, v.FieldByIndex(f.Index))
 		d.at = d.at[:len(d.at)-1]
 		if err != nil {
 			return err
 		}
 	}
 	for _, f := range fields {
-		if !f.optional && !present[f.name] {
-			return &FileError{Line: lineAt(d.data, n.offset), Field: joinPath(d.path(), f.name),
+		if !f.Optional && !present[f.Name] {
+			return &FileError{Line: lineAt(d.data, n.offset), Field: joinPath(d.path(), f.Name),
 				Problem: `is missing; every field must be given (write 0 or "" where it does not apply)`, Err: errMissingField}
 		}
 	}
@@ -142,99 +140,19 @@ var (
 	errMissingField = errors.New("missing field")
 )
 
-// fieldTables holds the JSON fields of every struct type a design file is
-// made of, in declaration order and sorted by name (for the canonical
-// form), read from the types once: a fixed table, never changed after.
-var fieldTables = sync.OnceValue(func() map[reflect.Type][2][]jsonField {
-	m := map[reflect.Type][2][]jsonField{}
-	var walk func(t reflect.Type)
-	walk = func(t reflect.Type) {
-		switch t.Kind() {
-		case reflect.Pointer, reflect.Slice, reflect.Array:
-			walk(t.Elem())
-		case reflect.Struct:
-			if _, ok := m[t]; ok {
-				return
-			}
-			fs := jsonFields(t)
-			byName := append([]jsonField(nil), fs...)
-			sort.Slice(byName, func(i, j int) bool { return byName[i].name < byName[j].name })
-			m[t] = [2][]jsonField{fs, byName}
-			for _, f := range fs {
-				walk(t.FieldByIndex(f.index).Type)
-			}
-		}
-	}
-	walk(reflect.TypeFor[File]())
-	walk(reflect.TypeFor[singleSheet]())
-	walk(reflect.TypeFor[hazards.Design]())
-	return m
-})
-
-// fieldsOf returns jsonFields(t), not to be changed.
-func fieldsOf(t reflect.Type) []jsonField {
-	if fs, ok := fieldTables()[t]; ok {
-		return fs[0]
-	}
-	return jsonFields(t)
-}
-
-// fieldsByName returns jsonFields(t) sorted by name, not to be changed.
-func fieldsByName(t reflect.Type) []jsonField {
-	if fs, ok := fieldTables()[t]; ok {
-		return fs[1]
-	}
-	fs := jsonFields(t)
-	sort.Slice(fs, func(i, j int) bool { return fs[i].name < fs[j].name })
-	return fs
-}
-
-// jsonField is one struct field as named in JSON.
-type jsonField struct {
-	name     string
-	index    []int
-	optional bool
-	// omitZero: the tag says omitzero, so the field is left out of the
-	// canonical form when it holds its zero value.
-	omitZero bool
-}
-
-// jsonFields lists a struct's exported fields under their JSON names,
-// following the encoding/json tag rules this package relies on.
-func jsonFields(t reflect.Type) []jsonField {
-	var out []jsonField
-	for i := 0; i < t.NumField(); i++ {
-		sf := t.Field(i)
-		if !sf.IsExported() {
-			continue
-		}
-		tag := sf.Tag.Get("json")
-		if tag == "-" {
-			continue
-		}
-		name, opts, _ := strings.Cut(tag, ",")
-		if name == "" {
-			name = sf.Name
-		}
-		omitZero := strings.Contains(","+opts+",", ",omitzero,")
-		out = append(out, jsonField{name: name, index: sf.Index, optional: omitZero || strings.Contains(","+opts+",", ",omitempty,"), omitZero: omitZero})
-	}
-	return out
-}
-
-func findField(fields []jsonField, name string) (jsonField, bool) {
+func findField(fields []jsonfields.Field, name string) (jsonfields.Field, bool) {
 	for _, f := range fields {
-		if f.name == name {
+		if f.Name == name {
 			return f, true
 		}
 	}
-	return jsonField{}, false
+	return jsonfields.Field{}, false
 }
 
-func fieldNames(fields []jsonField) string {
+func fieldNames(fields []jsonfields.Field) string {
 	names := make([]string, len(fields))
 	for i, f := range fields {
-		names[i] = f.name
+		names[i] = f.Name
 	}
 	return strings.Join(names, ", ")
 }
