@@ -180,8 +180,10 @@ func (v *vesselSection) rebuildParts() {
 	v.parts.Objects = blocks
 	v.parts.Refresh()
 	if f.scroll != nil {
-		// The section grew or shrank: lay the whole form out again.
-		f.scroll.Refresh()
+		// The section grew or shrank: lay the whole form out again. The
+		// scroll's own renderer does only that; Refresh would also redraw
+		// every widget of the form, which costs more than the rebuild.
+		f.scroll.Base.Refresh()
 	}
 	f.showProblems(f.s.problem)
 }
