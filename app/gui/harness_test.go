@@ -48,7 +48,8 @@ var shared struct {
 // testApp returns the package's test app, making it current.
 func testApp() fyne.App {
 	if shared.app == nil {
-		shared.app = test.NewApp()
+		a := test.NewApp()
+		shared.app = measuringApp{App: a, d: &measuringDriver{Driver: a.Driver(), sizes: map[textKey]textSize{}}}
 	}
 	fyne.SetCurrentApp(shared.app)
 	return shared.app
@@ -482,6 +483,9 @@ func TestMain(m *testing.M) {
 	code := m.Run()
 	if testing.Verbose() {
 		fmt.Printf("%d test windows built\n", shared.builds)
+		if a, ok := shared.app.(measuringApp); ok {
+			fmt.Printf("text measured %d times, %d of them remembered\n", a.d.calls, a.d.found)
+		}
 	}
 	os.Exit(code)
 }
