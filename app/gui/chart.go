@@ -71,6 +71,11 @@ func (r *chartRenderer) Refresh() {
 const chartDPI = 96
 
 func (r *chartRenderer) draw() {
+	if !r.c.Visible() {
+		// A chart on a tab behind the others is drawn when its tab is
+		// brought forward: showing it refreshes it.
+		return
+	}
 	size := r.size
 	if size.Width < 10 || size.Height < 10 {
 		size = r.c.Size()

@@ -132,18 +132,18 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 // carry no number (a kind with no published limit, a set that publishes
 // none, an NR cell) are said in words below the table.
 func (t *exposureTable) set(a *hazards.Assessment) {
-	t.body.RemoveAll()
 	if a == nil {
-		t.sets.SetText("No results yet.")
-		t.words.SetText("")
+		t.showRows(nil, nil)
+		setText(t.sets, "No results yet.")
+		setText(t.words, "")
 		return
 	}
 	var names []string
 	for _, s := range a.Release.LimitSets {
 		names = append(names, hazards.LimitSetName(s))
 	}
-	t.sets.SetText("Limit sets applied: " + strings.Join(names, ";\n    ") + ".\nEach limit is averaged over its own period; within each kind\nthe largest share of its limit governs (bold).")
-	t.body.Add(exposureRow(exposureColumns, true))
+	setText(t.sets, "Limit sets applied: "+strings.Join(names, ";\n    ")+".\nEach limit is averaged over its own period; within each kind\nthe largest share of its limit governs (bold).")
+	table, bold := [][]string{exposureColumns}, []bool{true}
 	rows, governs := exposureRows(a)
 	var words []string
 	for i, r := range rows {
@@ -151,8 +151,36 @@ func (t *exposureTable) set(a *hazards.Assessment) {
 			words = append(words, r[0]+" — "+r[1])
 			continue
 		}
-		t.body.Add(exposureRow(r, governs[i]))
+		table, bold = append(table, r), append(bold, governs[i])
 	}
-	t.words.SetText(strings.Join(words, "\n"))
-	t.body.Refresh()
+	t.showRows(table, bold)
+	setText(t.words, strings.Join(words, "\n"))
+}
+
+// showRows shows the table's lines, heading included. Lines already on
+// screen are kept and only their changed cells redrawn, so that new
+// results of the same design do not build the table again.
+func (t *exposureTable) showRows(rows [][]string, bold []bool) {
+	same := len(t.body.Objects) == len(rows)
+	for i := 0; same && i < len(rows); i++ {
+		same = len(t.body.Objects[i].(*fyne.Container).Objects) == len(rows[i])
+	}
+	if !same {
+		objs := make([]fyne.CanvasObject, len(rows))
+		for i, r := range rows {
+			objs[i] = exposureRow(r, bold[i])
+		}
+		t.body.Objects = objs
+		t.body.Refresh()
+		return
+	}
+	for i, r := range rows {
+		style := fyne.TextStyle{Bold: bold[i]}
+		for j, c := range t.body.Objects[i].(*fyne.Container).Objects {
+			if l := c.(*widget.Label); l.Text != r[j] || l.TextStyle != style {
+				l.Text, l.TextStyle = r[j], style
+				l.Refresh()
+			}
+		}
+	}
 }

@@ -66,14 +66,15 @@ func newFindingsList() *findingsList {
 			status := cells[0].(*fyne.Container).Objects[0].(*fyne.Container)
 			status.Objects[1].(*widget.Icon).SetResource(statusIcon(f.Status))
 			word := status.Objects[0].(*widget.Label)
-			word.SetText(statusWord(f.Status))
-			word.Importance = statusImportance(f.Status, fl.stale)
-			word.Refresh()
+			if w, imp := statusWord(f.Status), statusImportance(f.Status, fl.stale); word.Text != w || word.Importance != imp {
+				word.Text, word.Importance = w, imp
+				word.Refresh()
+			}
 			v := display.Finding(f, fl.system())
-			cells[1].(*widget.Label).SetText(v.Title)
-			cells[2].(*widget.Label).SetText(v.Value)
-			cells[3].(*widget.Label).SetText(v.Limit)
-			cells[4].(*widget.Label).SetText(v.Margin)
+			setText(cells[1].(*widget.Label), v.Title)
+			setText(cells[2].(*widget.Label), v.Value)
+			setText(cells[3].(*widget.Label), v.Limit)
+			setText(cells[4].(*widget.Label), v.Margin)
 		})
 	fl.list.OnSelected = func(id widget.ListItemID) {
 		fl.selected = id
@@ -95,6 +96,15 @@ func newFindingsList() *findingsList {
 		container.NewBorder(nil, nil, nil, container.NewVBox(fl.working), fl.detail))
 	fl.object = container.NewBorder(container.New(findingColumns, head...), detail, nil, nil, fl.list)
 	return fl
+}
+
+// setText shows text on a label, redrawing it only when the text
+// changed: a label measures its text again on every redraw, and one that
+// truncates or wraps does so many times over.
+func setText(l *widget.Label, text string) {
+	if l.Text != text {
+		l.SetText(text)
+	}
 }
 
 func bold(s string) *widget.Label {

@@ -144,11 +144,11 @@ func (r *roomSection) syncPick() {
 func (r *roomSection) describe() {
 	p, ok := r.byName(r.pick.Selected)
 	if !ok {
-		r.source.SetText("Your own room: state its grounds in the change note.")
+		setText(r.source, "Your own room: state its grounds in the change note.")
 		return
 	}
 	var b strings.Builder
 	b.WriteString(p.Note)
 	b.WriteString(" Volume: " + p.Volume.Source + ". Air changes: " + p.AirChangesPerHour.Source + ". Mixing: " + p.MixingFactor.Source + ".")
-	r.source.SetText(b.String())
+	setText(r.source, b.String())
 }

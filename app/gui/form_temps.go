@@ -88,10 +88,10 @@ func (t *temperatureSection) byName(name string) (hazards.TemperaturePreset, boo
 func (t *temperatureSection) describe(sel *widget.Select, source *widget.Label) {
 	p, ok := t.byName(sel.Selected)
 	if !ok {
-		source.SetText("Your own value: state its grounds in the change note.")
+		setText(source, "Your own value: state its grounds in the change note.")
 		return
 	}
-	source.SetText("Source: " + p.Temperature.Source + ". " + p.Note)
+	setText(source, "Source: "+p.Temperature.Source+". "+p.Note)
 }
 
 // syncPresets selects the preset matching each typed temperature, or

@@ -121,12 +121,12 @@ func (v *vesselSection) describeGlass() {
 	} else {
 		var err error
 		if g, err = hazards.LookupGlass(d.Glass.ID); err != nil {
-			v.glassInfo.SetText("")
+			setText(v.glassInfo, "")
 			return
 		}
 	}
 	strength := stressText(g.CharacteristicStrength.Value, v.f.s.units())
-	v.glassInfo.SetText(fmt.Sprintf("Characteristic strength %s, Weibull modulus %s, stress-corrosion exponent %s. %s",
+	setText(v.glassInfo, fmt.Sprintf("Characteristic strength %s, Weibull modulus %s, stress-corrosion exponent %s. %s",
 		strength, sigFigures(g.WeibullModulus.Value, 3), sigFigures(g.StressCorrosionExponent.Value, 3), g.Note))
 }
 
@@ -136,9 +136,9 @@ func (v *vesselSection) updateVolume() {
 	u := v.f.s.units()
 	pv := d.Vessel.PartsVolume()
 	if d.Vessel.InternalVolumeM3 > 0 {
-		v.volumeInfo.SetText(fmt.Sprintf("The measured volume is used. The parts add up to %s.", u.show(qVesselVolume, pv, 4)))
+		setText(v.volumeInfo, fmt.Sprintf("The measured volume is used. The parts add up to %s.", u.show(qVesselVolume, pv, 4)))
 	} else {
-		v.volumeInfo.SetText(fmt.Sprintf("0 means the volume is computed from the parts: %s.", u.show(qVesselVolume, pv, 4)))
+		setText(v.volumeInfo, fmt.Sprintf("0 means the volume is computed from the parts: %s.", u.show(qVesselVolume, pv, 4)))
 	}
 }
 
@@ -180,8 +180,10 @@ func (v *vesselSection) rebuildParts() {
 	v.parts.Objects = blocks
 	v.parts.Refresh()
 	if f.scroll != nil {
-		// The section grew or shrank: lay the whole form out again.
-		f.scroll.Refresh()
+		// The section grew or shrank: lay the whole form out again. The
+		// scroll's own renderer does only that; Refresh would also redraw
+		// every widget of the form, which costs more than the rebuild.
+		f.scroll.Base.Refresh()
 	}
 	f.showProblems(f.s.problem)
 }

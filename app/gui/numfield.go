@@ -59,7 +59,7 @@ func newNumField(ff formField, onEdit func(*numField)) *numField {
 // show fills the entry from the design in the given units, without
 // counting as an edit.
 func (f *numField) show(d *hazards.Design, u unitSystem) {
-	f.unit.SetText(u.unit(f.q))
+	setText(f.unit, u.unit(f.q))
 	showText(f.entry, display.Entry(u.fromSI(f.q, f.get(d)), u.display()))
 }
 

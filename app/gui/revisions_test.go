@@ -199,7 +199,7 @@ func TestAutosaveOffersRecovery(t *testing.T) {
 	if _, err := os.Stat(filepath.Join(dir, recoveryFile)); err != nil {
 		t.Fatalf("no autosave: %v", err)
 	}
-	// A new window on the same storage, as after a crash.
+	// The next run of the program on the same storage, as after a crash.
 	h2 := newHarnessIn(t, dir)
 	if !h2.s.offerRecovery() {
 		t.Fatal("recovery not offered")
