@@ -97,7 +97,7 @@ func (w *assessmentWriter) inputValue(key string, v float64) string {
 		return w.u.temperature(v)
 	case key == tolerance.KeyGlassStrength:
 		return w.u.stress(v)
-	case strings.HasSuffix(key, "wall_thickness_m"):
+	case hazards.IsPartField(key) && strings.HasSuffix(key, "."+hazards.PartWallThickness):
 		return w.u.length(v)
 	}
 	return display.Number(v, display.ValueFigures+1)

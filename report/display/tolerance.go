@@ -5,6 +5,7 @@ import (
 	"strconv"
 	"strings"
 
+	"ullage/hazards"
 	"ullage/hazards/tolerance"
 )
 
@@ -98,7 +99,7 @@ func DriversMoved(ds []tolerance.Driver) bool {
 // that lower the margin as they grow, the case [WallVolumeNote] explains.
 func WallLowersMargin(ds []tolerance.Driver) bool {
 	for _, d := range ds {
-		if strings.HasSuffix(d.Key, "wall_thickness_m") && d.RankCorrelation <= -driverFloor {
+		if hazards.IsPartField(d.Key) && strings.HasSuffix(d.Key, "."+hazards.PartWallThickness) && d.RankCorrelation <= -driverFloor {
 			return true
 		}
 	}
