@@ -368,7 +368,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if c.tolerance != nil {
-		writeToleranceText(w, c.tolerance)
+		writeToleranceText(w, c.tolerance, sys)
 	}
 	fmt.Fprintf(w, "\n%s\n", hazards.StandardCautions[0])
 }

@@ -7,6 +7,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"ullage/report/display"
 )
 
 // A tolerance study run with stderr piped (or written to a file or a
@@ -46,7 +48,7 @@ func TestStudyProgressNotPiped(t *testing.T) {
 			t.Errorf("stderr to a %s: %q, want no progress (and what a buffer gets, %q)", name, s, buffered)
 		}
 	}
-	if !strings.Contains(out.String(), "tolerance study: 20000 units") {
+	if !strings.Contains(out.String(), "tolerance study: "+display.Units(20000)) {
 		t.Errorf("the study is missing from stdout:\n%s", out.String())
 	}
 }
