@@ -144,7 +144,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	for _, tf := range []struct {
 		field string
 		t     float64
-	}{{"coldest_k", d.ColdestK}, {"sealing_temperature_k", d.SealingTemperatureK}, {"hottest_k", d.HottestK}} {
+	}{{FieldColdest, d.ColdestK}, {FieldSealingTemperature, d.SealingTemperatureK}, {FieldHottest, d.HottestK}} {
 		if tf.t < sub.MinTemperature() {
 			return nil, &InputError{Field: tf.field, Value: fmt.Sprintf("%g", tf.t),
 				Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K (%.1f °C)", sub.Fluid().Name, sub.MinTemperature(), units.KelvinToCelsius(sub.MinTemperature())),
@@ -216,7 +216,7 @@ func prepare(d Design, lib *fluids.Library) (*fluids.Substance, Glass, error) {
 	}
 	sub, err := lib.Lookup(d.Fluid)
 	if err != nil {
-		return nil, Glass{}, &InputError{Field: "fluid", Value: fmt.Sprintf("%q", d.Fluid), Want: err.Error()}
+		return nil, Glass{}, &InputError{Field: FieldFluid, Value: fmt.Sprintf("%q", d.Fluid), Want: err.Error()}
 	}
 	if d.Glass.Custom != nil {
 		return sub, *d.Glass.Custom, nil

@@ -15,7 +15,7 @@ func (a *Assessment) findings() {
 
 	// Ullage and the liquid-full point.
 	u := atLeast(CriterionUllage, "Ullage at the hottest temperature", "%", a.Hot.UllagePercent, cr.MinUllagePercent, 1,
-		DefaultCriteriaGrounds["min_ullage_percent"])
+		DefaultCriteriaGrounds[CriterionMinUllagePercent])
 	u.Margin = (a.Hot.UllagePercent - cr.MinUllagePercent) / 100
 	if u.Status == StatusPass && a.Hot.UllagePercent < cr.MinUllagePercent+ullageCautionPoints {
 		u.Status = StatusCaution
@@ -31,7 +31,7 @@ func (a *Assessment) findings() {
 
 	// Burst.
 	b := atLeast(CriterionBurst, "Burst safety factor at the hottest temperature", "", a.BurstSafetyFactor, cr.MinBurstSafetyFactor,
-		safetyFactorCautionBand, DefaultCriteriaGrounds["min_burst_safety_factor"])
+		safetyFactorCautionBand, DefaultCriteriaGrounds[CriterionMinBurstSafetyFactor])
 	b.ValueBound = a.BurstSafetyFactorBound
 	over := a.Hot.PressurePa - d.AmbientPressurePa
 	b.Facts = ar.keep(fact("hottest temperature", FactTemperature, d.HottestK), fact("pressure inside", FactPressure, a.Hot.PressurePa),
@@ -58,7 +58,7 @@ func (a *Assessment) findings() {
 	fs = append(fs, p)
 
 	im := atLeast(CriterionImplosion, "Implosion safety factor at the coldest temperature", "", a.ImplosionSafetyFactor, cr.MinImplosionSafetyFactor,
-		safetyFactorCautionBand, DefaultCriteriaGrounds["min_implosion_safety_factor"])
+		safetyFactorCautionBand, DefaultCriteriaGrounds[CriterionMinImplosionSafetyFactor])
 	im.Facts = ar.keep(fact("coldest temperature", FactTemperature, d.ColdestK))
 	if a.ExternalLoadPa > 0 {
 		im.Facts = ar.extend(im.Facts, fact("external pressure", FactPressure, a.ExternalLoadPa),
@@ -125,7 +125,7 @@ func worstCaseFinding(a *Assessment, w *WorstCase, ar *factArena) Finding {
 	d := &a.Design
 	cr := d.Criteria
 	f := atLeast(CriterionUllageWorst, "Ullage at the hottest temperature, worst-case unit", "%", w.Hot.UllagePercent, cr.MinUllagePercent, 1,
-		DefaultCriteriaGrounds["min_ullage_percent"]+"; worst case: fill at its upper tolerance, internal volume at its lower (common practice)")
+		DefaultCriteriaGrounds[CriterionMinUllagePercent]+"; worst case: fill at its upper tolerance, internal volume at its lower (common practice)")
 	f.Margin = (w.Hot.UllagePercent - cr.MinUllagePercent) / 100
 	if f.Status == StatusPass && w.Hot.UllagePercent < cr.MinUllagePercent+ullageCautionPoints {
 		f.Status = StatusCaution
@@ -201,7 +201,7 @@ func worstStrengthFinding(a *Assessment, ws *WorstStrength, ar *factArena) Findi
 	d := &a.Design
 	cr := d.Criteria
 	f := atLeast(CriterionBurstWorst, "Burst safety factor at the hottest temperature, weakest permitted unit", "", ws.SafetyFactor, cr.MinBurstSafetyFactor,
-		safetyFactorCautionBand, DefaultCriteriaGrounds["min_burst_safety_factor"]+"; weakest unit: every wall at its thinnest, fill and volume tolerances stacked to raise the pressure (common practice)")
+		safetyFactorCautionBand, DefaultCriteriaGrounds[CriterionMinBurstSafetyFactor]+"; weakest unit: every wall at its thinnest, fill and volume tolerances stacked to raise the pressure (common practice)")
 	f.ValueBound = ws.SafetyFactorBound
 	if ws.OverPa <= 0 {
 		f.Status, f.NotApplicable, f.Value, f.Margin = StatusPass, ReasonNoBurstLoad, 0, 0

@@ -136,12 +136,12 @@ func DefaultCriteria() Criteria {
 
 // DefaultCriteriaGrounds says where each default criterion comes from.
 var DefaultCriteriaGrounds = map[string]string{
-	"min_burst_safety_factor":     "4 on the long-term characteristic burst pressure: common practice for brittle pressure-bearing glass, which has no yield to warn before failure",
-	"min_implosion_safety_factor": "4 on the knocked-down buckling pressure: common practice, matching the burst criterion",
-	"max_failure_probability":     "1 in 10 000 units over the service life: common practice for consumer glass articles; set it to the firm's own target",
-	"min_ullage_percent":          "5 % vapour space at the hottest temperature: mirrors the 0.95 factor on liquid density in the UN packing instruction P200 filling rule for low-pressure liquefied gases (UN Model Regulations, P200 (5)(b))",
-	"max_fraction_of_limit":       "1.0: the exposure must not exceed the governing published limit (each limit averaged over its own period; the largest share of its limit governs)",
-	"max_percent_lfl":             "25 % of the LFL: common practice for an atmosphere kept safely below flammability (NFPA 69 uses 25 % LFL for combustible-concentration control, from memory)",
+	CriterionMinBurstSafetyFactor:     "4 on the long-term characteristic burst pressure: common practice for brittle pressure-bearing glass, which has no yield to warn before failure",
+	CriterionMinImplosionSafetyFactor: "4 on the knocked-down buckling pressure: common practice, matching the burst criterion",
+	"max_failure_probability":         "1 in 10 000 units over the service life: common practice for consumer glass articles; set it to the firm's own target",
+	CriterionMinUllagePercent:         "5 % vapour space at the hottest temperature: mirrors the 0.95 factor on liquid density in the UN packing instruction P200 filling rule for low-pressure liquefied gases (UN Model Regulations, P200 (5)(b))",
+	CriterionMaxFractionOfLimit:       "1.0: the exposure must not exceed the governing published limit (each limit averaged over its own period; the largest share of its limit governs)",
+	CriterionMaxPercentLFL:            "25 % of the LFL: common practice for an atmosphere kept safely below flammability (NFPA 69 uses 25 % LFL for combustible-concentration control, from memory)",
 }
 
 // Physical floors of the inputs: below them the models have no meaning
@@ -172,37 +172,37 @@ const (
 func (d *Design) Validate() error {
 	c := &checker{}
 	if strings.TrimSpace(d.Fluid) == "" {
-		c.fail("fluid", `""`, "name a fluid from the library")
+		c.fail(FieldFluid, `""`, "name a fluid from the library")
 	}
-	c.text("fluid", d.Fluid, MaxFluidNameLength)
-	c.number("fill_mass_kg", d.FillMassKg, MinFillMassKg, 10, "kg")
-	c.number("fill_mass_tolerance_kg", d.FillMassToleranceKg, 0, d.FillMassKg, "kg (not more than the fill)")
+	c.text(FieldFluid, d.Fluid, MaxFluidNameLength)
+	c.number(FieldFillMass, d.FillMassKg, MinFillMassKg, 10, "kg")
+	c.number(FieldFillMassTolerance, d.FillMassToleranceKg, 0, d.FillMassKg, "kg (not more than the fill)")
 	d.Vessel.validate(c)
-	c.number("sealing_temperature_k", d.SealingTemperatureK, 20, 600, "K")
-	c.number("residual_gas_pressure_pa", d.ResidualGasPressurePa, 0, 2e5, "Pa")
-	c.number("hottest_k", d.HottestK, 20, 800, "K")
-	c.number("coldest_k", d.ColdestK, 20, 800, "K")
+	c.number(FieldSealingTemperature, d.SealingTemperatureK, 20, 600, "K")
+	c.number(FieldResidualGasPressure, d.ResidualGasPressurePa, 0, 2e5, "Pa")
+	c.number(FieldHottest, d.HottestK, 20, 800, "K")
+	c.number(FieldColdest, d.ColdestK, 20, 800, "K")
 	if c.err == nil && d.ColdestK > d.HottestK {
 		first := c.err
-		c.fail("coldest_k", d.ColdestK, "must not be above hottest_k (%g K)", d.HottestK)
+		c.fail(FieldColdest, d.ColdestK, "must not be above %s (%g K)", FieldHottest, d.HottestK)
 		c.rule(first, RuleAtMost, 0, d.HottestK, "K", "the hottest temperature")
 	}
-	c.number("ambient_pressure_pa", d.AmbientPressurePa, 5e4, 1.2e5, "Pa")
+	c.number(FieldAmbientPressure, d.AmbientPressurePa, 5e4, 1.2e5, "Pa")
 	if d.Glass.Custom != nil {
-		if err := d.Glass.Custom.Validate("glass.custom"); err != nil && c.err == nil {
+		if err := d.Glass.Custom.Validate(FieldGlassCustom); err != nil && c.err == nil {
 			c.err = err
 		}
 	} else if strings.TrimSpace(d.Glass.ID) == "" {
-		c.fail("glass.id", `""`, "choose a glass from the catalogue or give a custom one")
+		c.fail(FieldGlassID, `""`, "choose a glass from the catalogue or give a custom one")
 	}
-	c.number("service_life_years", d.ServiceLifeYears, 0.01, 100, "years")
-	c.number("hours_at_hottest", d.HoursAtHottest, 0.01, 876600, "hours")
+	c.number(FieldServiceLife, d.ServiceLifeYears, 0.01, 100, "years")
+	c.number(FieldHoursAtHottest, d.HoursAtHottest, 0.01, 876600, "hours")
 	if c.err == nil && d.HoursAtHottest > d.ServiceLifeYears*8766 {
 		first := c.err
-		c.fail("hours_at_hottest", d.HoursAtHottest, "cannot exceed the service life (%g h)", d.ServiceLifeYears*8766)
+		c.fail(FieldHoursAtHottest, d.HoursAtHottest, "cannot exceed the service life (%g h)", d.ServiceLifeYears*8766)
 		c.rule(first, RuleAtMost, 0, d.ServiceLifeYears*8766, "h", "the service life")
 	}
-	if err := d.Room.Validate("room"); err != nil && c.err == nil {
+	if err := d.Room.Validate(FieldRoom); err != nil && c.err == nil {
 		c.err = err
 	}
 	d.Criteria.validate(c)
@@ -212,44 +212,44 @@ func (d *Design) Validate() error {
 }
 
 func (v *Vessel) validate(c *checker) {
-	c.number("vessel.internal_volume_m3", v.InternalVolumeM3, 0, 0.1, "m³ (0 means compute from the parts)")
+	c.number(FieldInternalVolume, v.InternalVolumeM3, 0, 0.1, "m³ (0 means compute from the parts)")
 	if c.err == nil && v.InternalVolumeM3 != 0 && v.InternalVolumeM3 < MinVolumeM3 {
-		c.fail("vessel.internal_volume_m3", v.InternalVolumeM3, "must be 0 (compute from the parts) or from %g to 0.1 m³", MinVolumeM3)
+		c.fail(FieldInternalVolume, v.InternalVolumeM3, "must be 0 (compute from the parts) or from %g to 0.1 m³", MinVolumeM3)
 	}
 	if len(v.Parts) == 0 {
-		c.fail("vessel.parts", "[]", "describe at least one sphere or tube")
+		c.fail(FieldParts, "[]", "describe at least one sphere or tube")
 	}
 	if len(v.Parts) > 50 {
-		c.fail("vessel.parts", len(v.Parts), "at most 50 parts")
+		c.fail(FieldParts, len(v.Parts), "at most 50 parts")
 	}
 	for i, p := range v.Parts {
 		if c.err == nil && p.fine() {
 			continue // every check below passes: no field names to build
 		}
-		f := fmt.Sprintf("vessel.parts[%d]", i)
-		c.text(f+".name", p.Name, MaxPartNameLength)
+		f := PartField(i, "") + "."
+		c.text(f+PartName, p.Name, MaxPartNameLength)
 		if p.Shape != ShapeSphere && p.Shape != ShapeTube {
-			c.fail(f+".shape", fmt.Sprintf("%q", p.Shape), "must be %q or %q", ShapeSphere, ShapeTube)
+			c.fail(f+PartShape, fmt.Sprintf("%q", p.Shape), "must be %q or %q", ShapeSphere, ShapeTube)
 		}
-		c.number(f+".outer_diameter_m", p.OuterDiameterM, 1e-3, 2, "m")
-		c.number(f+".wall_thickness_m", p.WallThicknessM, 1e-5, 0.1, "m")
+		c.number(f+PartOuterDiameter, p.OuterDiameterM, 1e-3, 2, "m")
+		c.number(f+PartWallThickness, p.WallThicknessM, 1e-5, 0.1, "m")
 		if c.err == nil && p.WallThicknessM >= p.OuterDiameterM/2 {
 			first := c.err
-			c.fail(f+".wall_thickness_m", p.WallThicknessM, "must be less than the outer radius (%g m)", p.OuterDiameterM/2)
+			c.fail(f+PartWallThickness, p.WallThicknessM, "must be less than the outer radius (%g m)", p.OuterDiameterM/2)
 			c.rule(first, RuleBelow, 0, p.OuterDiameterM/2, "m", "the outer radius")
 		}
-		c.number(f+".wall_tolerance_m", p.WallToleranceM, 0, p.WallThicknessM*0.5, "m (at most half the wall)")
+		c.number(f+PartWallTolerance, p.WallToleranceM, 0, p.WallThicknessM*0.5, "m (at most half the wall)")
 		if p.Shape == ShapeTube {
-			c.number(f+".length_m", p.LengthM, 1e-4, 5, "m")
+			c.number(f+PartLength, p.LengthM, 1e-4, 5, "m")
 		} else {
-			c.number(f+".length_m", p.LengthM, 0, 0, "m (a sphere has no length)")
+			c.number(f+PartLength, p.LengthM, 0, 0, "m (a sphere has no length)")
 		}
 	}
 	if c.err == nil && v.InternalVolumeM3 == 0 && v.PartsVolume() <= 0 {
-		c.fail("vessel.parts", "", "give the parts an internal volume")
+		c.fail(FieldParts, "", "give the parts an internal volume")
 	}
 	if c.err == nil {
-		c.number("vessel.volume_tolerance_m3", v.VolumeToleranceM3, 0, 0.5*math.Max(v.InternalVolumeM3, v.PartsVolume()), "m³ (at most half the internal volume)")
+		c.number(FieldVolumeTolerance, v.VolumeToleranceM3, 0, 0.5*math.Max(v.InternalVolumeM3, v.PartsVolume()), "m³ (at most half the internal volume)")
 	}
 }
 
@@ -274,7 +274,7 @@ func (r *Room) Validate(field string) error {
 	if r.PresetID != "" {
 		if _, err := LookupRoomPreset(r.PresetID); err != nil {
 			c := &checker{}
-			c.fail(field+".preset_id", fmt.Sprintf("%q", r.PresetID), "must name a room preset (%s) or be \"\" for a room of your own", roomPresetIDs())
+			c.fail(field+"."+RoomKeyPreset, fmt.Sprintf("%q", r.PresetID), "must name a room preset (%s) or be \"\" for a room of your own", roomPresetIDs())
 			return c.err
 		}
 	}
@@ -287,44 +287,44 @@ func (r *Room) validateRanges(field string) error {
 	c := &checker{}
 	// Each name is built only for a value that fails its check.
 	if !inRange(r.VolumeM3, 0.01, 1e6) {
-		c.number(field+".volume_m3", r.VolumeM3, 0.01, 1e6, "m³")
+		c.number(field+"."+RoomKeyVolume, r.VolumeM3, 0.01, 1e6, "m³")
 	}
 	if !inRange(r.AirChangesPerHour, 0, 100) {
-		c.number(field+".air_changes_per_hour", r.AirChangesPerHour, 0, 100, "per hour")
+		c.number(field+"."+RoomKeyAirChanges, r.AirChangesPerHour, 0, 100, "per hour")
 	}
 	if !inRange(r.MixingFactor, 1, 20) {
-		c.number(field+".mixing_factor", r.MixingFactor, 1, 20, "(1 = perfectly mixed)")
+		c.number(field+"."+RoomKeyMixingFactor, r.MixingFactor, 1, 20, "(1 = perfectly mixed)")
 	}
 	if !inRange(r.NearFieldRadiusM, 0.01, 5) {
-		c.number(field+".near_field_radius_m", r.NearFieldRadiusM, 0.01, 5, "m")
+		c.number(field+"."+RoomKeyNearFieldRadius, r.NearFieldRadiusM, 0.01, 5, "m")
 	}
 	if !inRange(r.NearFieldAirSpeed, 0.005, 5) {
-		c.number(field+".near_field_air_speed_m_s", r.NearFieldAirSpeed, 0.005, 5, "m/s")
+		c.number(field+"."+RoomKeyNearFieldAirSpeed, r.NearFieldAirSpeed, 0.005, 5, "m/s")
 	}
 	if !inRange(r.ExposureMinutes, 1, 1440) {
-		c.number(field+".exposure_minutes", r.ExposureMinutes, 1, 1440, "minutes")
+		c.number(field+"."+RoomKeyExposureMinutes, r.ExposureMinutes, 1, 1440, "minutes")
 	}
 	if c.err == nil && NearFieldVolume(r.NearFieldRadiusM) >= r.VolumeM3/2 {
-		c.fail(field+".near_field_radius_m", r.NearFieldRadiusM, "the near-field hemisphere must be less than half the room")
+		c.fail(field+"."+RoomKeyNearFieldRadius, r.NearFieldRadiusM, "the near-field hemisphere must be less than half the room")
 	}
 	return c.err
 }
 
 func (cr *Criteria) validate(c *checker) {
-	c.number("criteria.min_burst_safety_factor", cr.MinBurstSafetyFactor, 1, 100, "")
-	c.number("criteria.min_implosion_safety_factor", cr.MinImplosionSafetyFactor, 1, 100, "")
-	c.number("criteria.max_failure_probability", cr.MaxFailureProbability, 1e-12, 0.5, "")
-	c.number("criteria.min_ullage_percent", cr.MinUllagePercent, 0, 50, "%")
-	c.number("criteria.max_fraction_of_limit", cr.MaxFractionOfLimit, 0.01, 1, "(fraction of the governing limit)")
-	c.number("criteria.max_percent_lfl", cr.MaxPercentLFL, 1, 100, "% of LFL")
+	c.number(FieldMinBurstSafetyFactor, cr.MinBurstSafetyFactor, 1, 100, "")
+	c.number(FieldMinImplosionSafetyFactor, cr.MinImplosionSafetyFactor, 1, 100, "")
+	c.number(FieldMaxFailureProbability, cr.MaxFailureProbability, 1e-12, 0.5, "")
+	c.number(FieldMinUllagePercent, cr.MinUllagePercent, 0, 50, "%")
+	c.number(FieldMaxFractionOfLimit, cr.MaxFractionOfLimit, 0.01, 1, "(fraction of the governing limit)")
+	c.number(FieldMaxPercentLFL, cr.MaxPercentLFL, 1, 100, "% of LFL")
 	for i, b := range cr.LimitBodies {
 		if !knownBodies[b] {
-			c.fail(fmt.Sprintf("criteria.limit_bodies[%d]", i), fmt.Sprintf("%q", b), "must be one of NIOSH, OSHA, EPA, AIHA, ACGIH")
+			c.fail(ItemField(FieldLimitBodies, i), fmt.Sprintf("%q", b), "must be one of NIOSH, OSHA, EPA, AIHA, ACGIH")
 		}
 	}
 	seen := map[string]bool{}
 	for i, id := range cr.LimitSets {
-		field := fmt.Sprintf("criteria.limit_sets[%d]", i)
+		field := ItemField(FieldLimitSets, i)
 		if !knownLimitSet(id) {
 			c.fail(field, fmt.Sprintf("%q", id), "must be one of %s", strings.Join(LimitSetIDs(), ", "))
 		}

@@ -24,17 +24,18 @@ const (
 	FieldAmbientPressure     = "ambient_pressure_pa"
 	FieldGlass               = "glass"
 	FieldGlassID             = FieldGlass + ".id"
+	FieldGlassCustom         = FieldGlass + ".custom"
 	FieldServiceLife         = "service_life_years"
 	FieldHoursAtHottest      = "hours_at_hottest"
 
 	FieldRoom              = "room"
-	FieldRoomPreset        = FieldRoom + ".preset_id"
-	FieldRoomVolume        = FieldRoom + ".volume_m3"
-	FieldAirChanges        = FieldRoom + ".air_changes_per_hour"
-	FieldMixingFactor      = FieldRoom + ".mixing_factor"
-	FieldNearFieldRadius   = FieldRoom + ".near_field_radius_m"
-	FieldNearFieldAirSpeed = FieldRoom + ".near_field_air_speed_m_s"
-	FieldExposureMinutes   = FieldRoom + ".exposure_minutes"
+	FieldRoomPreset        = FieldRoom + "." + RoomKeyPreset
+	FieldRoomVolume        = FieldRoom + "." + RoomKeyVolume
+	FieldAirChanges        = FieldRoom + "." + RoomKeyAirChanges
+	FieldMixingFactor      = FieldRoom + "." + RoomKeyMixingFactor
+	FieldNearFieldRadius   = FieldRoom + "." + RoomKeyNearFieldRadius
+	FieldNearFieldAirSpeed = FieldRoom + "." + RoomKeyNearFieldAirSpeed
+	FieldExposureMinutes   = FieldRoom + "." + RoomKeyExposureMinutes
 
 	FieldCriteria                 = "criteria"
 	FieldMinBurstSafetyFactor     = FieldCriteria + "." + CriterionMinBurstSafetyFactor
@@ -78,6 +79,18 @@ const (
 	CriterionMaxPercentLFL            = "max_percent_lfl"
 )
 
+// Keys of a room's fields, below FieldRoom (or the prefix Room.Validate
+// is given).
+const (
+	RoomKeyPreset            = "preset_id"
+	RoomKeyVolume            = "volume_m3"
+	RoomKeyAirChanges        = "air_changes_per_hour"
+	RoomKeyMixingFactor      = "mixing_factor"
+	RoomKeyNearFieldRadius   = "near_field_radius_m"
+	RoomKeyNearFieldAirSpeed = "near_field_air_speed_m_s"
+	RoomKeyExposureMinutes   = "exposure_minutes"
+)
+
 // Keys of a part's fields, below PartField.
 const (
 	PartName          = "name"
@@ -92,7 +105,7 @@ const (
 // PartField(0, PartWallThickness) is "vessel.parts[0].wall_thickness_m".
 // With key "" it is the path of the part itself, "vessel.parts[0]".
 func PartField(i int, key string) string {
-	p := partsIndexOpening + strconv.Itoa(i) + "]"
+	p := ItemField(FieldParts, i)
 	if key != "" {
 		p += "." + key
 	}
@@ -104,4 +117,10 @@ func PartField(i int, key string) string {
 // list itself, FieldParts, is not a part field.
 func IsPartField(path string) bool {
 	return len(path) > len(partsIndexOpening) && strings.HasPrefix(path, partsIndexOpening)
+}
+
+// ItemField returns the path of item i of the list at path:
+// ItemField(FieldLimitSets, 1) is "criteria.limit_sets[1]".
+func ItemField(path string, i int) string {
+	return path + "[" + strconv.Itoa(i) + "]"
 }

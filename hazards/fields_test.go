@@ -9,7 +9,8 @@ import (
 
 // designPaths lists every JSON path of a Design from its struct tags (the
 // design file's own spelling), with the parts as part 0 and the fields of
-// a custom glass left out: a glass is chosen whole.
+// a custom glass left out (the pointer is not walked into): a glass is
+// chosen whole.
 func designPaths() []string {
 	var out []string
 	var walk func(t reflect.Type, prefix string)
@@ -23,7 +24,6 @@ func designPaths() []string {
 			switch {
 			case path == FieldGlass:
 				walk(reflect.TypeFor[GlassChoice](), path+".")
-				out = slices.DeleteFunc(out, func(p string) bool { return p == FieldGlass+".custom" })
 			case ft.Kind() == reflect.Slice && ft.Elem().Kind() == reflect.Struct:
 				walk(ft.Elem(), path+"[0].")
 			case ft.Kind() == reflect.Struct:
@@ -42,13 +42,19 @@ func TestFieldPathsAreTheDesignsOwn(t *testing.T) {
 	constants := []string{
 		FieldFluid, FieldFillMass, FieldFillMassTolerance, FieldVessel, FieldInternalVolume, FieldVolumeTolerance,
 		FieldParts, FieldSealingTemperature, FieldResidualGasPressure, FieldHottest, FieldColdest,
-		FieldAmbientPressure, FieldGlass, FieldGlassID, FieldServiceLife, FieldHoursAtHottest,
+		FieldAmbientPressure, FieldGlass, FieldGlassID, FieldGlassCustom, FieldServiceLife, FieldHoursAtHottest,
 		FieldRoom, FieldRoomPreset, FieldRoomVolume, FieldAirChanges, FieldMixingFactor, FieldNearFieldRadius,
 		FieldNearFieldAirSpeed, FieldExposureMinutes,
 		FieldCriteria, FieldMinBurstSafetyFactor, FieldMinImplosionSafetyFactor, FieldMaxFailureProbability,
 		FieldMinUllagePercent, FieldMaxFractionOfLimit, FieldMaxPercentLFL, FieldLimitBodies, FieldLimitSets,
 		FieldThermalShock, FieldHotToCold, FieldHotToColdPreset, FieldColdToHot, FieldColdToHotPreset,
 		FieldSealStress, FieldSealPart, FieldResidualStress, FieldRetardation, FieldSealPathLength,
+	}
+	for _, k := range []string{RoomKeyPreset, RoomKeyVolume, RoomKeyAirChanges, RoomKeyMixingFactor, RoomKeyNearFieldRadius,
+		RoomKeyNearFieldAirSpeed, RoomKeyExposureMinutes} {
+		if !slices.Contains(constants, FieldRoom+"."+k) {
+			t.Errorf("room key %q has no Field constant", k)
+		}
 	}
 	for _, k := range []string{PartName, PartShape, PartOuterDiameter, PartWallThickness, PartWallTolerance, PartLength} {
 		constants = append(constants, PartField(0, k))
@@ -87,6 +93,9 @@ func TestPartFieldPaths(t *testing.T) {
 		{0, PartWallThickness, "vessel.parts[0].wall_thickness_m", true},
 		{12, PartLength, "vessel.parts[12].length_m", true},
 		{3, "", "vessel.parts[3]", true},
+	}
+	if got := ItemField(FieldLimitSets, 1); got != "criteria.limit_sets[1]" {
+		t.Errorf("ItemField(FieldLimitSets, 1) = %q, want criteria.limit_sets[1]", got)
 	}
 	for _, tt := range tests {
 		got := PartField(tt.i, tt.key)

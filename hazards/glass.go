@@ -86,7 +86,7 @@ func LookupGlass(id string) (Glass, error) {
 	for i, g := range all {
 		ids[i] = g.ID
 	}
-	return Glass{}, &InputError{Field: "glass.id", Value: fmt.Sprintf("%q", id), Want: fmt.Sprintf("one of %v, or a custom glass", ids)}
+	return Glass{}, &InputError{Field: FieldGlassID, Value: fmt.Sprintf("%q", id), Want: fmt.Sprintf("one of %v, or a custom glass", ids)}
 }
 
 // Validate checks every property of the glass against a physical range and

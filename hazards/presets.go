@@ -102,8 +102,8 @@ var roomPresets = sync.OnceValues(func() ([]RoomPreset, error) {
 		for _, v := range []struct {
 			name string
 			v    Sourced
-		}{{"volume_m3", p.Volume}, {"air_changes_per_hour", p.AirChangesPerHour}, {"mixing_factor", p.MixingFactor},
-			{"near_field_radius_m", p.NearFieldRadius}, {"near_field_air_speed_m_s", p.NearFieldAirSpeed}} {
+		}{{RoomKeyVolume, p.Volume}, {RoomKeyAirChanges, p.AirChangesPerHour}, {RoomKeyMixingFactor, p.MixingFactor},
+			{RoomKeyNearFieldRadius, p.NearFieldRadius}, {RoomKeyNearFieldAirSpeed, p.NearFieldAirSpeed}} {
 			c.sourced(field+"."+v.name, v.v, math.Inf(-1), math.Inf(1), "")
 		}
 		if c.err != nil {

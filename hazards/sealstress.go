@@ -47,22 +47,22 @@ func (s *SealStress) validate(c *checker, parts []Part) {
 	}
 	switch {
 	case strings.TrimSpace(s.Part) == "":
-		c.fail("seal_stress.part", `""`, "name the part that carries the seal")
+		c.fail(FieldSealPart, `""`, "name the part that carries the seal")
 	case matches == 0:
-		c.fail("seal_stress.part", fmt.Sprintf("%q", s.Part), "must name one of the vessel's parts")
+		c.fail(FieldSealPart, fmt.Sprintf("%q", s.Part), "must name one of the vessel's parts")
 	case matches > 1:
-		c.fail("seal_stress.part", fmt.Sprintf("%q", s.Part), "names more than one part; give the parts different names")
+		c.fail(FieldSealPart, fmt.Sprintf("%q", s.Part), "names more than one part; give the parts different names")
 	}
-	c.number("seal_stress.residual_stress_pa", s.ResidualStressPa, 0, MaxResidualStressPa, "Pa")
-	c.number("seal_stress.retardation_m", s.RetardationM, 0, MaxRetardationM, "m")
-	c.number("seal_stress.path_length_m", s.PathLengthM, 0, MaxPathLengthM, "m")
+	c.number(FieldResidualStress, s.ResidualStressPa, 0, MaxResidualStressPa, "Pa")
+	c.number(FieldRetardation, s.RetardationM, 0, MaxRetardationM, "m")
+	c.number(FieldSealPathLength, s.PathLengthM, 0, MaxPathLengthM, "m")
 	switch {
 	case s.ResidualStressPa > 0 && (s.RetardationM > 0 || s.PathLengthM > 0):
-		c.fail("seal_stress.retardation_m", s.RetardationM, "give either residual_stress_pa or retardation_m with path_length_m, not both")
+		c.fail(FieldRetardation, s.RetardationM, "give either residual_stress_pa or retardation_m with path_length_m, not both")
 	case s.RetardationM > 0 && s.PathLengthM == 0:
-		c.fail("seal_stress.path_length_m", s.PathLengthM, "must be greater than zero when a retardation is given (the glass thickness the light crosses)")
+		c.fail(FieldSealPathLength, s.PathLengthM, "must be greater than zero when a retardation is given (the glass thickness the light crosses)")
 	case s.RetardationM == 0 && s.ResidualStressPa == 0:
-		c.fail("seal_stress.residual_stress_pa", s.ResidualStressPa, "give residual_stress_pa, or retardation_m with path_length_m")
+		c.fail(FieldResidualStress, s.ResidualStressPa, "give residual_stress_pa, or retardation_m with path_length_m")
 	}
 }
 
@@ -125,13 +125,13 @@ func (a *Assessment) applySealStress() error {
 	}
 	if s.RetardationM > 0 {
 		if g.StressOpticCoefficient.Value <= 0 {
-			return &InputError{Field: "seal_stress.retardation_m", Value: fmt.Sprintf("%g", s.RetardationM),
+			return &InputError{Field: FieldRetardation, Value: fmt.Sprintf("%g", s.RetardationM),
 				Want: fmt.Sprintf("needs the stress-optic coefficient of the glass, which %s does not state; give residual_stress_pa instead, or a custom glass with stress_optic_coefficient_per_pa", g.Name)}
 		}
 		r.FromRetardation, r.RetardationM, r.PathLengthM = true, s.RetardationM, s.PathLengthM
 		r.StressPa = s.RetardationM / (g.StressOpticCoefficient.Value * s.PathLengthM)
 		if r.StressPa > MaxResidualStressPa {
-			return &InputError{Field: "seal_stress.retardation_m", Value: fmt.Sprintf("%g", s.RetardationM),
+			return &InputError{Field: FieldRetardation, Value: fmt.Sprintf("%g", s.RetardationM),
 				Want: fmt.Sprintf("gives %.3g MPa over %g m of path, more than the %g MPa accepted; check the reading and the path length", r.StressPa/1e6, s.PathLengthM, MaxResidualStressPa/1e6)}
 		}
 	}

@@ -167,17 +167,17 @@ func (v *sealedVessel) seal(s *fluids.Substance, mass, volume, sealK, residualPa
 	*v = sealedVessel{fluid: s, mass: mass, volume: volume, density: mass / volume, ambientPa: ambientPa, sats: sats}
 	s.PrepareIsochore(v.density, &v.iso)
 	if sealK > s.CriticalTemperature() {
-		return &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK),
+		return &InputError{Field: FieldSealingTemperature, Value: fmt.Sprintf("%g", sealK),
 			Want: fmt.Sprintf("must be below the critical temperature of %s (%.2f K) so that the fill can be sealed as a liquid", s.Fluid().Name, s.CriticalTemperature()),
 			Rule: RuleBelow, Max: s.CriticalTemperature(), Unit: "K", Subject: "the critical temperature of " + s.Fluid().Name}
 	}
 	sat, err := sats.saturation(s, sealK)
 	if err != nil {
-		return &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
+		return &InputError{Field: FieldSealingTemperature, Value: fmt.Sprintf("%g", sealK), Want: err.Error()}
 	}
 	if v.density >= sat.LiquidDensity {
 		maxFill := sat.LiquidDensity * volume
-		return fmt.Errorf("%w: %w", &InputError{Field: "fill_mass_kg", Value: fmt.Sprintf("%g", mass),
+		return fmt.Errorf("%w: %w", &InputError{Field: FieldFillMass, Value: fmt.Sprintf("%g", mass),
 			Want: fmt.Sprintf("must be less than %.4g kg: that much %s, as liquid, already fills the whole %.4g m³ at the sealing temperature", maxFill, s.Fluid().Name, volume),
 			Rule: RuleBelow, Max: maxFill, Unit: "kg", Subject: "the mass of " + s.Fluid().Name + " that, as liquid, fills the whole vessel at the sealing temperature"}, ErrOverfilled)
 	}

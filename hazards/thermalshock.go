@@ -26,8 +26,8 @@ func (s ThermalShock) Given() bool { return s.HotToColdK > 0 || s.ColdToHotK > 0
 const MaxShockK = 500
 
 func (s *ThermalShock) validate(c *checker) {
-	c.number("thermal_shock.hot_to_cold_k", s.HotToColdK, 0, MaxShockK, "K (0 when not assessed)")
-	c.number("thermal_shock.cold_to_hot_k", s.ColdToHotK, 0, MaxShockK, "K (0 when not assessed)")
+	c.number(FieldHotToCold, s.HotToColdK, 0, MaxShockK, "K (0 when not assessed)")
+	c.number(FieldColdToHot, s.ColdToHotK, 0, MaxShockK, "K (0 when not assessed)")
 }
 
 // ShockLoadSeconds is the load duration used for the strength under a
@@ -211,7 +211,7 @@ func (a *Assessment) thermalShockFindings(ar *factArena) []Finding {
 	d := &a.Design
 	g := &a.Glass
 	src := "Kingery, Bowen and Uhlmann, Introduction to Ceramics, 2nd ed. (1976), ch. 16: σ = E·α·ΔT/(1 − ν) for a suddenly cooled surface (from memory); limit as the burst check: " +
-		DefaultCriteriaGrounds["min_burst_safety_factor"]
+		DefaultCriteriaGrounds[CriterionMinBurstSafetyFactor]
 	var out []Finding
 	for _, ps := range a.Shock.Parts {
 		c := ps.Cases[ps.Governing]

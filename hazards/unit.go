@@ -88,7 +88,7 @@ func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
 		return nil, err
 	}
 	if d.SealingTemperatureK < sub.MinTemperature() {
-		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", d.SealingTemperatureK),
+		return nil, &InputError{Field: FieldSealingTemperature, Value: fmt.Sprintf("%g", d.SealingTemperatureK),
 			Want: fmt.Sprintf("must be at or above the freezing point of %s, %.2f K", sub.Fluid().Name, sub.MinTemperature()),
 			Rule: RuleAtLeast, Min: sub.MinTemperature(), Unit: "K", Subject: "the freezing point of " + sub.Fluid().Name}
 	}
@@ -100,7 +100,7 @@ func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
 	}
 	sat, err := sats.saturation(sub, d.SealingTemperatureK)
 	if err != nil {
-		return nil, &InputError{Field: "sealing_temperature_k", Value: fmt.Sprintf("%g", d.SealingTemperatureK), Want: err.Error()}
+		return nil, &InputError{Field: FieldSealingTemperature, Value: fmt.Sprintf("%g", d.SealingTemperatureK), Want: err.Error()}
 	}
 	d.Vessel.Parts = append([]Part(nil), d.Vessel.Parts...)
 	m := &UnitModel{design: d, sub: sub, glass: glass, sealLiquidDensity: sat.LiquidDensity, sealSat: sat, sats: sats}

@@ -23,7 +23,7 @@ func (w *assessmentWriter) findings() {
 		}
 		text := v.Text()
 		if steps := stepNumbers(v.Finding.Steps()); steps != "" {
-			text = strings.TrimSpace(text + " " + capitalFirst(steps) + ".")
+			text = strings.TrimSpace(text + " " + display.Capitalised(steps) + ".")
 		}
 		d.findingBlock(v.Finding.Status, v.Title, numbers, text)
 	}

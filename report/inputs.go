@@ -128,12 +128,12 @@ func criteriaTable(cr hazards.Criteria) table {
 		return []cell{{text: name}, {text: text}, {text: grounds, dim: true}}
 	}
 	rows := [][]cell{
-		row("Minimum burst safety factor", "min_burst_safety_factor", cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, display.Stated(cr.MinBurstSafetyFactor)),
-		row("Minimum implosion safety factor", "min_implosion_safety_factor", cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, display.Stated(cr.MinImplosionSafetyFactor)),
-		row("Maximum failure probability", "max_failure_probability", cr.MaxFailureProbability, def.MaxFailureProbability, display.Stated(cr.MaxFailureProbability)),
-		row("Minimum ullage at the hottest", "min_ullage_percent", cr.MinUllagePercent, def.MinUllagePercent, display.Stated(cr.MinUllagePercent)+" %"),
-		row("Maximum fraction of a limit", "max_fraction_of_limit", cr.MaxFractionOfLimit, def.MaxFractionOfLimit, display.Stated(cr.MaxFractionOfLimit)),
-		row("Maximum % of the LFL", "max_percent_lfl", cr.MaxPercentLFL, def.MaxPercentLFL, display.Stated(cr.MaxPercentLFL)+" %"),
+		row("Minimum burst safety factor", hazards.CriterionMinBurstSafetyFactor, cr.MinBurstSafetyFactor, def.MinBurstSafetyFactor, display.Stated(cr.MinBurstSafetyFactor)),
+		row("Minimum implosion safety factor", hazards.CriterionMinImplosionSafetyFactor, cr.MinImplosionSafetyFactor, def.MinImplosionSafetyFactor, display.Stated(cr.MinImplosionSafetyFactor)),
+		row("Maximum failure probability", hazards.CriterionMaxFailureProbability, cr.MaxFailureProbability, def.MaxFailureProbability, display.Stated(cr.MaxFailureProbability)),
+		row("Minimum ullage at the hottest", hazards.CriterionMinUllagePercent, cr.MinUllagePercent, def.MinUllagePercent, display.Stated(cr.MinUllagePercent)+" %"),
+		row("Maximum fraction of a limit", hazards.CriterionMaxFractionOfLimit, cr.MaxFractionOfLimit, def.MaxFractionOfLimit, display.Stated(cr.MaxFractionOfLimit)),
+		row("Maximum % of the LFL", hazards.CriterionMaxPercentLFL, cr.MaxPercentLFL, def.MaxPercentLFL, display.Stated(cr.MaxPercentLFL)+" %"),
 		{{text: "Exposure limits from"}, {text: bodies}, {text: "Chosen for this review. Every limit of these bodies is averaged over its own period as its body defines it (NIOSH REL TWA up to a 10-hour day, OSHA PEL and ACGIH TLV TWA 8 hours, STEL 15 minutes or the stated period, ceiling at its stated period or the peak, IDLH 30 minutes); for each kind the limit with the largest share of its limit governs, and a kind with no published limit is listed as not assessed.", dim: true}},
 		limitSetsRow(cr),
 		{{text: "Strength checked at"}, {text: "nominal and thinnest walls"}, {text: "The burst safety factor is found for the nominal unit and for the weakest permitted unit: every wall at its thinnest, the fill and volume tolerances stacked to raise the pressure (common practice: strength at the minimum permitted thickness).", dim: true}},

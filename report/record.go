@@ -131,41 +131,25 @@ func (w *assessmentWriter) traceStep(s hazards.Step) {
 	d.space(1.5)
 }
 
-// usesText is "uses steps 13 and 14 (Vessel at the hottest temperature …;
+// usesText is "steps 13 and 14 (Vessel at the hottest temperature …;
 // Liquid-full temperature)": the steps whose results a step takes.
 func usesText(a *hazards.Assessment, steps []int) string {
-	parts := make([]string, len(steps))
 	var titles []string
-	for i, n := range steps {
-		parts[i] = strconv.Itoa(n)
+	for _, n := range steps {
 		if n >= 1 && n <= len(a.Trace()) {
 			titles = append(titles, a.Trace()[n-1].Title)
 		}
 	}
-	text := "steps " + strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
-	if len(parts) == 1 {
-		text = "step " + parts[0]
-	}
+	text := display.StepsPhrase(steps)
 	if len(titles) > 0 {
 		text += " (" + strings.Join(titles, "; ") + ")"
 	}
 	return text
 }
 
-// findingResultText is a finding's outcome in words: "FAIL: value 2.1,
-// limit at least 5 %, margin −58 % of the limit", in SI as computed.
-func findingResultText(f *hazards.FindingResult) string {
-	word := statusWord(f.Status)
-	if f.NotApplicable != "" {
-		return word + ": " + display.ReasonWords(f.NotApplicable)
-	}
-	unit := ""
-	if f.Unit != "" {
-		unit = " " + f.Unit
-	}
-	dir := map[hazards.Direction]string{hazards.AtLeast: "at least ", hazards.AtMost: "at most "}[f.Direction]
-	return fmt.Sprintf("%s: value %s%s, limit %s%s%s, margin %s %% of the limit", word, g6(f.Value), unit, dir, g6(f.Limit), unit, g6(100*f.Margin))
-}
+// findingResultText is a finding's outcome in words, in SI as computed
+// (display.StepFindingText).
+func findingResultText(f *hazards.FindingResult) string { return display.StepFindingText(f) }
 
 // traceValue prints a value with its unit and source, a long source by
 // its number in the reference list.
@@ -184,9 +168,8 @@ func (w *assessmentWriter) traceValue(v hazards.Value) string {
 	return s
 }
 
-// g6 formats a number to six significant figures, enough to repeat a
-// step by hand, by the display package's one rule.
-func g6(x float64) string { return display.Number(x, 6) }
+// g6 formats a number of the calculation record (display.RecordNumber).
+func g6(x float64) string { return display.RecordNumber(x) }
 
 // minusSigns writes a hyphen-minus that stands before a digit at the start
 // of a word ("(-29.0 °C)") as the minus sign the rest of the record uses.

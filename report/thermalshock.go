@@ -2,8 +2,6 @@ package report
 
 import (
 	"fmt"
-	"unicode"
-	"unicode/utf8"
 
 	"ullage/hazards"
 	"ullage/report/display"
@@ -16,7 +14,7 @@ func (w *assessmentWriter) thermalShock() {
 	ds := &a.Design
 	d.heading("Thermal shock and seal stress")
 	if !a.Shock.Assessed {
-		d.lead("Thermal shock: not assessed. " + capitalFirst(hazards.ShockNotAssessed) + ".")
+		d.lead("Thermal shock: not assessed. " + display.Capitalised(hazards.ShockNotAssessed) + ".")
 	} else {
 		d.lead(fmt.Sprintf("A sudden change of surface temperature ΔT puts the surface of the glass into a stress E·α·ΔT/(1 − ν) (Kingery, Bowen and Uhlmann, Introduction to Ceramics, ch. 16): tension on a surface cooled suddenly, the dangerous case; when the outside is warmed suddenly the tension appears on the inner surface and around the warmed patch, and is taken at the same bound, which it cannot exceed. The value is the upper bound for instant surface cooling; the pressure stress at the start and any residual stress at the seal are added. Each part is held against its own short-term strength for its outer area and a load of %s s, with the burst check's required safety factor (%s).",
 			display.Stated(a.Shock.LoadSeconds), display.Number(a.Shock.RequiredSafetyFactor, 3)))
@@ -55,13 +53,4 @@ func (w *assessmentWriter) thermalShock() {
 	} else if ds.Vessel.Parts != nil {
 		d.keyValues([][2]string{{"Residual stress at the seal", "none given: the burst check assumes well-annealed seals"}}, 1)
 	}
-}
-
-// capitalFirst upper-cases the first letter of s.
-func capitalFirst(s string) string {
-	if s == "" {
-		return s
-	}
-	r, n := utf8.DecodeRuneInString(s)
-	return string(unicode.ToUpper(r)) + s[n:]
 }

@@ -24,8 +24,8 @@ func TestToleranceSection(t *testing.T) {
 	}
 	pdf := render(t, loadMeta(t, "meta_a.json"), a, Options{Deterministic: true, Tolerance: r})
 	flat := strings.Join(strings.Fields(pdfText(t, writeTemp(t, "tol.pdf", pdf))), " ")
-	for _, want := range []string{"Tolerance study", "3000 units were drawn (seed 5)", "Wilson, J. Am. Stat. Assoc. 22, 209 (1927)",
-		"Liquid-full below the hottest temperature", "What drives the safety margin", "Spearman",
+	for _, want := range []string{"Tolerance study", "3000 units, seed 5", "Wilson, J. Am. Stat. Assoc. 22, 209 (1927)",
+		"Liquid-full below their hottest temperature", "What drives the safety margin", "Spearman",
 		squashed(display.PlusMinusNote), "Strongest driver of the safety factor"} {
 		if !strings.Contains(flat, want) {
 			t.Errorf("record lacks %q", want)

@@ -8,7 +8,6 @@ import (
 	"io"
 	"os"
 	"path/filepath"
-	"slices"
 	"sort"
 	"strings"
 	"time"
@@ -285,7 +284,7 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 		return
 	}
 	sys := display.ParseSystem(unitSystem)
-	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %13s %13s  %s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF", "failing criteria")
+	fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %9s %14s  %s\n", "design", "rev", "verdict", "phase", "pressure", "ullage", "burst SF", "failing criteria")
 	failed := 0
 	for _, c := range results {
 		if c.err != nil {
@@ -294,8 +293,8 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 			continue
 		}
 		a := c.assessment
-		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %13s %13s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
-			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, sys.Format(display.Pressure, a.Hot.PressurePa), sys.Format(display.Percent, a.Hot.UllagePercent), sfText(a), failingCriteria(a))
+		fmt.Fprintf(w, "%-34s %-4s %-9s %-12s %10s %9s %14s  %s\n", trim(filepath.Base(c.path), 34), c.revision.Label,
+			strings.ToUpper(string(a.Verdict)), a.Hot.Phase, sys.Format(display.Pressure, a.Hot.PressurePa), sys.Format(display.Percent, a.Hot.UllagePercent), sfText(a), failingCriteria(a, sys))
 	}
 	if failed > 0 {
 		fmt.Fprintf(w, "\nverdict: ERROR (%d of %d designs could not be assessed)\n", failed, len(results))
@@ -310,19 +309,15 @@ func writeCheckText(w io.Writer, results []checked, unitSystem string, table boo
 	fmt.Fprintf(w, "\nverdict: %s (overall, %d of %d designs fail)\n", strings.ToUpper(overallVerdict(results)), fails, len(results))
 }
 
-// failingCriteria names the criteria a design fails, "none" when it
-// fails none.
-func failingCriteria(a *hazards.Assessment) string {
-	var names []string
-	for _, f := range a.Findings {
-		if f.Status == hazards.StatusFail && !slices.Contains(names, f.Criterion) {
-			names = append(names, f.Criterion)
-		}
-	}
+// failingCriteria names the criteria a design fails by the titles the
+// window and the record give them (display.FailingTitles), "none" when
+// it fails none.
+func failingCriteria(a *hazards.Assessment, sys display.System) string {
+	names := display.FailingTitles(display.Findings(a, sys))
 	if len(names) == 0 {
 		return "none"
 	}
-	return strings.Join(names, ", ")
+	return strings.Join(names, "; ")
 }
 
 // absOrAsTyped is path made absolute, or as typed when that fails.
@@ -368,7 +363,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	}
 	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
 	if c.tolerance != nil {
-		writeToleranceText(w, c.tolerance)
+		writeToleranceText(w, c.tolerance, sys)
 	}
 	fmt.Fprintf(w, "\n%s\n", hazards.StandardCautions[0])
 }

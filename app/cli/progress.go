@@ -5,6 +5,9 @@ import (
 	"io"
 	"os"
 	"strings"
+	"unicode/utf8"
+
+	"ullage/report/display"
 )
 
 // isTerminal reports whether w is a terminal: an *os.File that is a
@@ -31,10 +34,11 @@ type progressLine struct {
 
 // report rewrites the line with done of total units.
 func (p *progressLine) report(done, total int) {
-	line := fmt.Sprintf("%s: %d of %d units (%d %%)", p.label, done, total, done*100/max(total, 1))
-	pad := max(p.shown-len(line), 0)
+	line := p.label + ": " + display.Count(done) + " of " + display.Units(total) + " (" + display.Count(done*100/max(total, 1)) + " %)"
+	n := utf8.RuneCountInString(line)
+	pad := max(p.shown-n, 0)
 	fmt.Fprintf(p.w, "\r%s%s", line, strings.Repeat(" ", pad))
-	p.shown = len(line)
+	p.shown = n
 }
 
 // clear blanks the line and returns the cursor to its start.

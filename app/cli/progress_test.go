@@ -7,6 +7,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"ullage/report/display"
 )
 
 // A tolerance study run with stderr piped (or written to a file or a
@@ -46,7 +48,7 @@ func TestStudyProgressNotPiped(t *testing.T) {
 			t.Errorf("stderr to a %s: %q, want no progress (and what a buffer gets, %q)", name, s, buffered)
 		}
 	}
-	if !strings.Contains(out.String(), "tolerance study: 20000 units") {
+	if !strings.Contains(out.String(), "tolerance study: "+display.Units(20000)) {
 		t.Errorf("the study is missing from stdout:\n%s", out.String())
 	}
 }
@@ -89,9 +91,11 @@ func TestProgressLine(t *testing.T) {
 	p.report(100000, 1000000)
 	p.report(1000000, 1000000)
 	p.clear()
-	want := "\rstudy: 100000 of 1000000 units (10 %)" +
-		"\rstudy: 1000000 of 1000000 units (100 %)" +
-		"\r" + strings.Repeat(" ", len("study: 1000000 of 1000000 units (100 %)")) + "\r"
+	// Counts are grouped by the display layer (a no-break space between
+	// groups); the padding counts characters, not bytes.
+	want := "\rstudy: 100\u00a0000 of 1\u00a0000\u00a0000 units (10 %)" +
+		"\rstudy: 1\u00a0000\u00a0000 of 1\u00a0000\u00a0000 units (100 %)" +
+		"\r" + strings.Repeat(" ", len("study: 1 000 000 of 1 000 000 units (100 %)")) + "\r"
 	if b.String() != want {
 		t.Errorf("wrote %q\nwant  %q", b.String(), want)
 	}
@@ -99,7 +103,7 @@ func TestProgressLine(t *testing.T) {
 	p.report(5, 10)
 	p.report(10, 100) // longer than the line before: no padding; then one shorter
 	p.report(1, 1)
-	if !strings.HasSuffix(b.String(), "\rstudy: 1 of 1 units (100 %)  ") {
+	if !strings.HasSuffix(b.String(), "\rstudy: 1 of 1 unit (100 %)   ") {
 		t.Errorf("a shorter line is not padded over the longer one: %q", b.String())
 	}
 }

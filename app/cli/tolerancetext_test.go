@@ -20,7 +20,7 @@ func TestToleranceStudyText(t *testing.T) {
 		want []string
 	}{
 		{"A", []string{display.PlusMinusNote, display.WallVolumeNote, "wall of lower bulb (rank correlation −"}},
-		{"B", []string{display.PlusMinusNote, "strongest driver of the margin none: no varied input moves the safety factor"}},
+		{"B", []string{display.PlusMinusNote, display.StrongestDriverLabel, "none: no varied input moves the safety factor"}},
 	} {
 		_, out, errs := run("check", "--samples", "1000", "--rev", c.rev, example)
 		if errs != "" {

@@ -32,6 +32,13 @@ const (
 	// causeResults: the results of the working copy changed: a new
 	// assessment, or an input refused.
 	causeResults
+	// causeStudied: a tolerance study of the working copy finished; the
+	// document holds it (document.studyFor).
+	causeStudied
+	// causeStop: the window stops its background work (it closes, or a
+	// test brings it to rest); a panel running work of its own cancels
+	// it. The document is unchanged.
+	causeStop
 )
 
 // edit reports whether the cause is an edit of the working copy or the

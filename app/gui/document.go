@@ -10,8 +10,10 @@ import (
 
 	"ullage/app/recovery"
 	"ullage/assets"
+	"ullage/fluids"
 	"ullage/hazards"
 	"ullage/hazards/designfile"
+	"ullage/hazards/tolerance"
 )
 
 // document is the plain state of what the reviewer is working on: the
@@ -49,6 +51,47 @@ type document struct {
 	// feed tells the window's panels of every change; nil until the
 	// document is opened in a window.
 	feed *feed
+	// studied is the last tolerance study of the working copy that
+	// finished, with what it ran on; its result is nil before the first.
+	studied studied
+}
+
+// studied is a finished tolerance study and what it was run on.
+type studied struct {
+	result *tolerance.Result
+	// design is the fingerprint of the design the result is of and lib
+	// the fluid library it used: when either differs from the working
+	// copy's, the result is out of date.
+	design string
+	lib    *fluids.Library
+	// of says which revision the result is of, for the study screen;
+	// took how long the run took.
+	of   string
+	took time.Duration
+}
+
+// keepStudy holds a finished study of the working copy and tells the
+// panels.
+func (d *document) keepStudy(st studied) {
+	d.studied = st
+	d.publish(change{cause: causeStudied})
+}
+
+// studyCurrent reports whether the last study is of the working copy as
+// it is now, with the fluid library lib.
+func (d *document) studyCurrent(lib *fluids.Library) bool {
+	st := &d.studied
+	return st.result != nil && st.lib == lib && st.design == designFingerprint(d.Work)
+}
+
+// studyFor returns the study the assessment record takes: the last one
+// when it is of the working copy as it is now, with the fluid library
+// lib; nil otherwise.
+func (d *document) studyFor(lib *fluids.Library) *tolerance.Result {
+	if !d.studyCurrent(lib) {
+		return nil
+	}
+	return d.studied.result
 }
 
 // unreadable is an entry of the form with no number in it.

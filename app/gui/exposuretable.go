@@ -1,7 +1,6 @@
 package gui
 
 import (
-	"fmt"
 	"strings"
 	"ullage/report/display"
 
@@ -113,7 +112,7 @@ func exposureRows(a *hazards.Assessment) (rows [][]string, governs []bool) {
 			if l.Governs {
 				g = "governs"
 			}
-			add(l.Governs, display.LimitSetShort(l.Set), name, sigFigures(l.PPM, 4), period, avg, fmt.Sprintf("%s %%", sigFigures(100*l.Share, 3)), g)
+			add(l.Governs, display.LimitSetShort(l.Set), name, sigFigures(l.PPM, 4), period, avg, display.Share(l.Share), g)
 		}
 		for _, n := range a.Release.LimitNotes {
 			if n.Set == set {

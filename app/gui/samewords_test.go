@@ -3,6 +3,7 @@ package gui
 import (
 	"bytes"
 	"encoding/json"
+	"fmt"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -100,7 +101,7 @@ func TestEveryOutputWordsFindingsAlike(t *testing.T) {
 		}{{report.UnitsSI, display.SI}, {report.UnitsUS, display.US}} {
 			name := label + "/" + c.units
 			window, details := windowRows(t, a, c.sys == display.US)
-			pdf := pdfWords(t, pdftotext, a, c.units)
+			pdf := pdfWords(t, pdftotext, a, report.Options{Units: c.units})
 			text := cliWords(t, path, label, c.units)
 			if len(window) != len(a.Findings) {
 				t.Fatalf("%s: the window shows %d findings of %d", name, len(window), len(a.Findings))
@@ -163,11 +164,13 @@ func windowRows(t *testing.T, a *hazards.Assessment, us bool) ([][3]string, []st
 }
 
 // pdfWords writes the assessment record and returns its text with white
-// space squashed, so that wrapped lines read as one.
-func pdfWords(t *testing.T, pdftotext string, a *hazards.Assessment, units string) string {
+// space squashed, so that wrapped lines read as one, and without the
+// running header and footer of each page, so that a paragraph broken
+// across pages reads as one.
+func pdfWords(t *testing.T, pdftotext string, a *hazards.Assessment, opts report.Options) string {
 	t.Helper()
 	var b bytes.Buffer
-	if err := report.WriteAssessment(&b, report.Meta{}, a, report.Options{Units: units}); err != nil {
+	if err := report.WriteAssessment(&b, report.Meta{Product: sameWordsProduct}, a, opts); err != nil {
 		t.Fatal(err)
 	}
 	p := filepath.Join(t.TempDir(), "r.pdf")
@@ -178,7 +181,28 @@ func pdfWords(t *testing.T, pdftotext string, a *hazards.Assessment, units strin
 	if err != nil {
 		t.Fatal(err)
 	}
-	return squash(string(out))
+	var body []string
+	for _, ln := range strings.Split(string(out), "\n") {
+		if !pageFurniture(ln) {
+			body = append(body, ln)
+		}
+	}
+	return squash(strings.Join(body, "\n"))
+}
+
+// sameWordsProduct names the product in the records pdfWords writes, so
+// that their running headers can be told from the text.
+const sameWordsProduct = "Same-words product"
+
+// pageFurniture reports whether a line of a record's text is part of its
+// running header or footer: "Page 9 of 11", or a line naming the
+// product.
+func pageFurniture(ln string) bool {
+	var p, n int
+	if k, _ := fmt.Sscanf(ln, "Page %d of %d", &p, &n); k == 2 {
+		return true
+	}
+	return strings.Contains(ln, sameWordsProduct)
 }
 
 // cliWords runs the command line's check on one revision and returns its
@@ -194,3 +218,93 @@ func cliWords(t *testing.T, path, label, units string) string {
 }
 
 func squash(s string) string { return strings.Join(strings.Fields(s), " ") }
+
+// TestEveryOutputWordsTheStudyAlike runs a tolerance study of each design
+// in the window, in SI and US units, and checks that the study screen,
+// the PDF record of that study and the command line's text of the same
+// study (same units drawn, seed and spread) word it alike: what was drawn,
+// each varied input with its distribution and what its ± stands for, the
+// fractions, the spread of pressure and safety factor and the strongest
+// driver.
+func TestEveryOutputWordsTheStudyAlike(t *testing.T) {
+	pdftotext, err := exec.LookPath("pdftotext")
+	if err != nil {
+		t.Skip("pdftotext not installed (poppler-utils)")
+	}
+	path, labels := sameWordsDesigns(t)
+	h := newHarness(t)
+	doc, err := loadDocument(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	h.s.open(doc)
+	h.idle()
+	tp := h.s.tol
+	defer h.s.setUnits(unitsSI)
+	checked := 0
+	for _, c := range []struct {
+		units, spread, spreadK string
+		u                      unitSystem
+	}{{report.UnitsSI, "5", "5", unitsSI}, {report.UnitsUS, "0", "0", unitsUS}} {
+		h.s.setUnits(c.u)
+		h.idle()
+		sys := c.u.display()
+		for _, label := range labels {
+			name := label + "/" + c.units
+			rev, err := h.s.doc.File.Find(label)
+			if err != nil {
+				t.Fatal(err)
+			}
+			h.s.doc.openRevision(rev)
+			h.idle()
+			h.runStudyWith("2000", "7", c.spread)
+			r := h.s.currentStudy()
+			if r == nil || h.s.last.assessment == nil {
+				t.Fatalf("%s: no study of the working copy (status %q)", name, tp.status.Text)
+			}
+			window := squash(shownText(tp.object))
+			pdf := pdfWords(t, pdftotext, h.s.last.assessment, report.Options{Units: c.units, Tolerance: r})
+			var out, errs bytes.Buffer
+			cli.Run([]string{"check", "--units", c.units, "--rev", label, "--samples", "2000", "--seed", "7", "--hot-spread-k", c.spreadK, path}, &out, &errs)
+			text := squash(out.String())
+
+			everywhere := []string{display.StudyAbout(r, sys), display.PlusMinusNote, display.StrongestDriverLabel, display.StrongestDriver(r.Sensitivity)}
+			for _, in := range display.StudyInputs(r, sys) {
+				everywhere = append(everywhere, in.Label, in.Distribution, in.Nominal, in.Spread)
+			}
+			for _, f := range display.StudyFractions(r) {
+				everywhere = append(everywhere, f.Label, f.Value)
+			}
+			for _, sp := range display.StudySpread(r, sys) {
+				everywhere = append(everywhere, sp.Label)
+				// The window shows every percentile, the record and the
+				// command line the 1st, 50th and 99th.
+				for _, x := range sp.P {
+					if !strings.Contains(window, squash(x)) {
+						t.Errorf("%s: the window lacks %s percentile %q", name, sp.Label, x)
+					}
+				}
+				three := squash(display.Spread(sp.P[0], sp.P[2], sp.P[4]))
+				if !strings.Contains(pdf, three) || !strings.Contains(text, three) {
+					t.Errorf("%s: %s %q is not the same in the PDF and the command line", name, sp.Label, three)
+				}
+			}
+			if display.WallLowersMargin(r.Sensitivity) {
+				everywhere = append(everywhere, display.WallVolumeNote)
+			}
+			for _, want := range everywhere {
+				w := squash(want)
+				for where, got := range map[string]string{"window": window, "PDF": pdf, "command line": text} {
+					if !strings.Contains(got, w) {
+						t.Errorf("%s: the %s lacks %q", name, where, w)
+					}
+				}
+				checked++
+			}
+			if note := squash(display.DriversNote(r.Sensitivity, r.SensitivityUnits)); !strings.Contains(window, note) || !strings.Contains(pdf, note) {
+				t.Errorf("%s: the drivers' note %q is not the same in the window and the PDF", name, note)
+			}
+		}
+	}
+	t.Logf("%d study strings of %d designs in two unit systems, each read from the window, the PDF and the command line", checked, len(labels))
+}

@@ -9,7 +9,7 @@ func TestStudyBarShowsUnitsDone(t *testing.T) {
 	tp := h.s.tol
 	tp.busy.SetValue(0.5) // as a run before might have left it
 	h.runStudyWith("3000", "7", "0")
-	if tp.st.result == nil {
+	if tp.last().result == nil {
 		t.Fatalf("no result; status %q, error %v", tp.status.Text, tp.st.err)
 	}
 	if tp.busy.Value != 1 || tp.busy.Max != 1 {

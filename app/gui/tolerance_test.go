@@ -7,6 +7,8 @@ import (
 	"reflect"
 	"strings"
 	"testing"
+
+	"ullage/report/display"
 )
 
 // runStudyWith types the study's settings, taps Run and waits for it.
@@ -27,7 +29,7 @@ func TestSmallStudyFillsThePanel(t *testing.T) {
 		t.Fatal("results shown before any study")
 	}
 	h.runStudyWith("2000", "7", "5")
-	r := tp.st.result
+	r := tp.last().result
 	if r == nil {
 		t.Fatalf("no result; status %q, error %v", tp.status.Text, tp.st.err)
 	}
@@ -39,7 +41,7 @@ func TestSmallStudyFillsThePanel(t *testing.T) {
 	}
 	text := shownText(tp.results)
 	for _, want := range []string{
-		proportionText(r.LiquidFullFraction), proportionText(r.BurstFraction),
+		display.Proportion(r.LiquidFullFraction), display.Proportion(r.BurstFraction),
 		"Release above a governing exposure limit", "P50", "Unit safety factor", "Hottest temperature",
 	} {
 		if !strings.Contains(text, want) {
@@ -66,11 +68,11 @@ func TestSmallStudyFillsThePanel(t *testing.T) {
 	// The same seed gives the same numbers; another seed other numbers.
 	first := *r
 	h.runStudyWith("2000", "7", "5")
-	if !reflect.DeepEqual(first, *tp.st.result) || shownText(tp.results) != text {
+	if !reflect.DeepEqual(first, *tp.last().result) || shownText(tp.results) != text {
 		t.Error("the same seed gave different numbers")
 	}
 	h.runStudyWith("2000", "8", "5")
-	if reflect.DeepEqual(first.PressurePa, tp.st.result.PressurePa) {
+	if reflect.DeepEqual(first.PressurePa, tp.last().result.PressurePa) {
 		t.Error("another seed gave the same pressures")
 	}
 }
@@ -95,7 +97,7 @@ func TestStudyRefusesBadSettings(t *testing.T) {
 		tp.problem.SetText("")
 		tp.problem.Hide()
 		h.runStudyWith(tc.units, tc.seed, tc.spread)
-		if tp.st.result != nil || !tp.problem.Visible() || !strings.Contains(tp.problem.Text, tc.want) {
+		if tp.last().result != nil || !tp.problem.Visible() || !strings.Contains(tp.problem.Text, tc.want) {
 			t.Errorf("%q, %q, %q: message %q (shown %v), want it to mention %q", tc.units, tc.seed, tc.spread, tp.problem.Text, tp.problem.Visible(), tc.want)
 		}
 	}
@@ -111,7 +113,7 @@ func TestStudyCanBeCancelled(t *testing.T) {
 	}
 	tp.cancelBtn.OnTapped()
 	h.idle()
-	if !errors.Is(tp.st.err, context.Canceled) || tp.st.result != nil || !strings.HasPrefix(tp.status.Text, "Cancelled") {
+	if !errors.Is(tp.st.err, context.Canceled) || tp.last().result != nil || !strings.HasPrefix(tp.status.Text, "Cancelled") {
 		t.Errorf("after cancelling: error %v, status %q", tp.st.err, tp.status.Text)
 	}
 	if tp.busy.Visible() || tp.runBtn.Disabled() {
@@ -148,7 +150,7 @@ func TestExportCarriesTheStudy(t *testing.T) {
 		t.Error("a record with no study run has a tolerance section")
 	}
 	h.runStudyWith("2000", "1", "0")
-	if text := export(); !strings.Contains(text, "Tolerance study") || !strings.Contains(text, "2000 units were drawn") {
+	if text := export(); !strings.Contains(text, "Tolerance study") || !strings.Contains(text, "2000 units, seed 1") {
 		t.Error("the record lacks the tolerance study")
 	}
 	h.typeInto("fill_mass_kg", "15")
@@ -173,16 +175,35 @@ func TestStudySpreadFollowsTheUnits(t *testing.T) {
 	}
 }
 
-func TestGroupDigits(t *testing.T) {
-	tests := []struct {
-		in   int
-		want string
-	}{
-		{0, "0"}, {999, "999"}, {1000, "1\u202f000"}, {100000, "100\u202f000"}, {10000000, "10\u202f000\u202f000"}, {-1234, "−1\u202f234"},
+// TestStudyBelongsToTheDocument: a finished study is the document's, so
+// the record takes it only from the document it was run on, and what
+// the window asks when it closes (publishing causeStop) reaches the
+// study screen and cancels its run.
+func TestStudyBelongsToTheDocument(t *testing.T) {
+	h := newHarness(t)
+	tp := h.s.tol
+	h.runStudyWith("2000", "1", "0")
+	if r := h.s.currentStudy(); r == nil || r != h.s.doc.studied.result {
+		t.Fatal("the finished study is not the document's")
 	}
-	for _, tc := range tests {
-		if got := groupDigits(tc.in); got != tc.want {
-			t.Errorf("groupDigits(%d) = %q, want %q", tc.in, got, tc.want)
-		}
+	doc, err := exampleDocument()
+	if err != nil {
+		t.Fatal(err)
+	}
+	h.s.open(doc)
+	h.idle()
+	if h.s.currentStudy() != nil || !tp.empty.Visible() || tp.results.Visible() {
+		t.Error("a study of the document before shows with the one opened after it")
+	}
+
+	tp.units.SetText("3000000")
+	tp.run()
+	if !tp.st.running {
+		t.Fatal("the study did not start")
+	}
+	h.s.stopStudy()
+	h.idle()
+	if !errors.Is(tp.st.err, context.Canceled) || tp.st.running || h.s.currentStudy() != nil {
+		t.Errorf("after the stop was published: running %v, error %v", tp.st.running, tp.st.err)
 	}
 }

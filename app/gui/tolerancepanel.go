@@ -5,7 +5,6 @@ import (
 	"errors"
 	"fmt"
 	"strings"
-	"time"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
@@ -93,7 +92,7 @@ func newTolerancePanel(s *session) *tolerancePanel {
 	tp.dimDist.SetSelected(names[0])
 
 	form := widget.NewForm(
-		&widget.FormItem{Text: "Units to draw", Widget: tp.units, HintText: fmt.Sprintf("1 to %s", groupDigits(tolerance.MaxSamples))},
+		&widget.FormItem{Text: "Units to draw", Widget: tp.units, HintText: "1 to " + display.Count(tolerance.MaxSamples)},
 		&widget.FormItem{Text: "Seed", Widget: tp.seed, HintText: "the same seed gives the same numbers"},
 		&widget.FormItem{Text: "Hottest temperature ±", Widget: container.NewBorder(nil, nil, nil, tp.spreadUnit, tp.spread), HintText: "0: every unit at the design's hottest"},
 		&widget.FormItem{Text: "Hottest spread as", Widget: tp.hotDist},
@@ -103,6 +102,7 @@ func newTolerancePanel(s *session) *tolerancePanel {
 	intro.Wrapping = fyne.TextWrapWord
 	tp.varies = widget.NewLabel("")
 	tp.varies.Wrapping = fyne.TextWrapWord
+	plusMinus := caption(display.PlusMinusNote)
 	tp.problem = widget.NewLabel("")
 	tp.problem.Wrapping = fyne.TextWrapWord
 	tp.problem.Importance = widget.DangerImportance
@@ -118,7 +118,7 @@ func newTolerancePanel(s *session) *tolerancePanel {
 	left := container.NewVBox(
 		heading("Unit-to-unit variation"), intro, form, tp.problem,
 		container.NewGridWithColumns(2, tp.runBtn, tp.cancelBtn), tp.busy, tp.status,
-		widget.NewSeparator(), bold("What varies from unit to unit"), tp.varies,
+		widget.NewSeparator(), bold("What varies from unit to unit"), tp.varies, plusMinus,
 	)
 
 	tp.empty = widget.NewLabel("No study yet. Choose the settings on the left and run it; it takes a second or so.")
@@ -176,7 +176,7 @@ func caption(s string) *widget.Label {
 func readStudyUnits(t string) (int, error) {
 	n, ok := parse.Count(t)
 	if !ok || n < 1 || n > tolerance.MaxSamples {
-		return 0, fmt.Errorf("units to draw %q: give a whole number from 1 to %s", strings.TrimSpace(t), groupDigits(tolerance.MaxSamples))
+		return 0, fmt.Errorf("units to draw %q: give a whole number from 1 to %s", strings.TrimSpace(t), display.Count(tolerance.MaxSamples))
 	}
 	return int(n), nil
 }
@@ -196,7 +196,7 @@ func readStudySpread(t string, u unitSystem) (float64, error) {
 	x, ok := parse.Number(t)
 	k := u.toSI(qTempDiff, x)
 	if !ok || k < 0 || k > maxStudySpreadK {
-		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s", strings.TrimSpace(t), spreadText(maxStudySpreadK, u))
+		return 0, fmt.Errorf("hottest temperature spread %q: give 0 to %s %s", strings.TrimSpace(t), display.Stated(u.fromSI(qTempDiff, maxStudySpreadK)), spreadUnit(u))
 	}
 	return k, nil
 }
@@ -243,7 +243,7 @@ func (tp *tolerancePanel) run() {
 			f()
 		}
 	})
-	tp.status.SetText(fmt.Sprintf("Drawing %s units…", groupDigits(set.Samples)))
+	tp.status.SetText("Drawing " + display.Units(set.Samples) + "…")
 	tp.refresh()
 }
 
@@ -264,14 +264,17 @@ func (tp *tolerancePanel) showVaries() {
 // document was opened: a study is out of date once the design differs
 // from the one it ran on.
 func (tp *tolerancePanel) update(c change) {
-	if c.cause.reload() || c.cause == causeResults {
+	switch {
+	case c.cause == causeStop:
+		tp.stop()
+	case c.cause.reload() || c.cause == causeResults || c.cause == causeStudied:
 		tp.refresh()
 	}
 }
 
 // refresh redraws the panel from the study's state.
 func (tp *tolerancePanel) refresh() {
-	s, st := tp.s, &tp.st
+	s, st, last := tp.s, &tp.st, tp.last()
 	u := s.units()
 	if u != tp.shownUnits {
 		tp.shownUnits = u
@@ -292,11 +295,11 @@ func (tp *tolerancePanel) refresh() {
 			tp.status.SetText("Cancelled. The results shown, if any, are from the run before.")
 		case st.err != nil:
 			tp.status.SetText("The study could not run: " + st.err.Error())
-		case st.result != nil:
-			tp.status.SetText(fmt.Sprintf("Finished in %s.", durationText(st.took)))
+		case last.result != nil:
+			tp.status.SetText("Finished in " + display.Duration(last.took) + ".")
 		}
 	}
-	r := st.result
+	r := last.result
 	if r == nil {
 		tp.empty.Show()
 		tp.results.Hide()
@@ -314,68 +317,53 @@ func (tp *tolerancePanel) refresh() {
 	if !current {
 		in = "It is out of date and stays out of the exported record."
 	}
-	tp.about.SetText(fmt.Sprintf("%s units of %s, seed %d, hottest temperature ± %s (%s), fill, volume and walls %s. %s",
-		groupDigits(r.Samples), st.of, r.Seed, spreadText(r.HottestSpreadK, u), r.HottestDistribution, r.DimensionDistribution, in))
+	tp.about.SetText("Of " + last.of + ": " + display.StudyAbout(r, u.display()) + " " + in)
 	tp.showFractions(r)
 	tp.showSpread(r, u)
 	hist := chartmodel.Histogram("", r.Histogram)
 	tp.hist.set(hist, !current)
 	tp.histNote.SetText(histogramNotes(hist, r))
 	tp.drivers.set(chartmodel.Drivers("", r.Sensitivity), !current)
-	tp.driveNote.SetText(fmt.Sprintf("Spearman rank correlation of each input with the unit safety factor over the first %s units, strongest first. A filled bar to the left means a larger value lowers the margin; tighten those tolerances first. An outlined bar to the right means it raises the margin.", groupDigits(r.SensitivityUnits)))
+	tp.driveNote.SetText(display.DriversNote(r.Sensitivity, r.SensitivityUnits))
 	tp.showInputs(r, u)
 	tp.results.Show()
 }
 
-// showFractions lists the fractions of units that fail, each with its
-// interval.
+// showFractions lists what the study counted, each fraction with its
+// interval, and its strongest driver, in the display layer's words.
 func (tp *tolerancePanel) showFractions(r *tolerance.Result) {
-	rows := [][2]string{
-		{"Liquid-full below their hottest temperature", proportionText(r.LiquidFullFraction)},
-		{"Burst over the service life", proportionText(r.BurstFraction)},
+	var rows [][2]string
+	for _, f := range display.StudyFractions(r) {
+		rows = append(rows, [2]string{f.Label, f.Value})
 	}
-	if r.ExposureLimited {
-		rows = append(rows, [2]string{"Release above a governing exposure limit", proportionText(r.ExposureExceedFraction)})
-	} else {
-		rows = append(rows, [2]string{"Release above a governing exposure limit", "not assessed: no published numeric limit applies to this fluid"})
-	}
-	rows = append(rows, [2]string{"Expected burst fraction", sigFigures(r.MeanFailureProbability, 2)})
-	if r.ExtrapolatedUnits > 0 {
-		rows = append(rows, [2]string{"Outside a correlation's range ‡", plural(r.ExtrapolatedUnits, "unit") + ": the fractions are estimates to confirm by test"})
-	}
+	rows = append(rows, [2]string{display.StrongestDriverLabel, display.StrongestDriver(r.Sensitivity)})
 	tp.fractions.Objects = pairRows(rows)
 	tp.fractions.Refresh()
 }
 
 // showSpread tabulates the percentiles of pressure and safety factor.
 func (tp *tolerancePanel) showSpread(r *tolerance.Result, u unitSystem) {
-	cells := []fyne.CanvasObject{bold("")}
-	for _, h := range []string{"P1", "P5", "P50", "P95", "P99"} {
-		cells = append(cells, widget.NewLabelWithStyle(h, fyne.TextAlignTrailing, fyne.TextStyle{Bold: true}))
+	widths := columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}
+	head := []fyne.CanvasObject{bold("")}
+	for _, h := range display.Percentiles {
+		head = append(head, widget.NewLabelWithStyle(h, fyne.TextAlignTrailing, fyne.TextStyle{Bold: true}))
 	}
-	row := func(name string, p tolerance.Percentiles, f func(float64) string) {
-		cells = append(cells, widget.NewLabel(name))
-		for _, x := range []float64{p.P1, p.P5, p.P50, p.P95, p.P99} {
-			cells = append(cells, widget.NewLabelWithStyle(f(x), fyne.TextAlignTrailing, fyne.TextStyle{}))
+	tp.spreadTab.Objects = []fyne.CanvasObject{container.New(widths, head...)}
+	for _, sp := range display.StudySpread(r, u.display()) {
+		cells := []fyne.CanvasObject{widget.NewLabel(sp.Label)}
+		for _, x := range sp.P {
+			cells = append(cells, widget.NewLabelWithStyle(x, fyne.TextAlignTrailing, fyne.TextStyle{}))
 		}
+		tp.spreadTab.Objects = append(tp.spreadTab.Objects, container.New(widths, cells...))
 	}
-	row("Pressure, "+u.unit(qPressure)+" abs.", r.PressurePa, func(x float64) string { return sigFigures(u.fromSI(qPressure, x), 4) })
-	row("Unit safety factor", r.SafetyFactor, display.SafetyFactor)
-	tp.spreadTab.Objects = []fyne.CanvasObject{container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[:6]...),
-		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[6:12]...),
-		container.New(columns{fractions: []float32{0.3, 0.14, 0.14, 0.14, 0.14, 0.14}}, cells[12:]...)}
 	tp.spreadTab.Refresh()
 }
 
 // showInputs lists the inputs that varied and their distributions.
 func (tp *tolerancePanel) showInputs(r *tolerance.Result, u unitSystem) {
-	rows := make([][2]string, 0, len(r.Inputs))
-	for _, in := range r.Inputs {
-		v := studyInputValue(in.Key, in.Nominal, u) + ", " + studyInputSpread(in, u)
-		if in.Distribution != tolerance.Weibull {
-			v += " (" + in.Distribution + ")"
-		}
-		rows = append(rows, [2]string{capitalise(in.Label), v})
+	var rows [][2]string
+	for _, in := range display.StudyInputs(r, u.display()) {
+		rows = append(rows, [2]string{in.Label, in.Nominal + ", " + in.Spread + " (" + in.Distribution + ")"})
 	}
 	tp.inputs.Objects = pairRows(rows)
 	tp.inputs.Refresh()
@@ -397,17 +385,12 @@ func pairRows(rows [][2]string) []fyne.CanvasObject {
 	return out
 }
 
-// durationText is a short duration: 0.42 s, 3.1 s.
-func durationText(d time.Duration) string {
-	return sigFigures(d.Seconds(), 2) + " s"
-}
-
 // histogramNotes says what the histogram leaves out (the chart model's
 // notes) and which units count at a factor of 0.
 func histogramNotes(h chartmodel.Chart, r *tolerance.Result) string {
 	notes := append([]string(nil), h.Notes...)
 	if r != nil && r.UnsealableUnits > 0 {
-		notes = append(notes, fmt.Sprintf("%s could not be sealed (their fill would not fit as liquid) and count at a factor of 0.", plural(r.UnsealableUnits, "unit")))
+		notes = append(notes, display.Units(r.UnsealableUnits)+" could not be sealed (their fill would not fit as liquid) and count at a factor of 0.")
 	}
 	return strings.Join(notes, " ")
 }

@@ -12,20 +12,10 @@ import (
 	"ullage/hazards/tolerance"
 )
 
-// study is the plain state of the tolerance study: the last finished
-// result, what it was run on, and the run in progress if any.
+// study is the plain state of the study screen's runs: the run in
+// progress if any and how the last one ended. The finished study is the
+// document's (document.keepStudy).
 type study struct {
-	// result is the last finished study, nil before the first.
-	result *tolerance.Result
-	// design is the fingerprint of the design the result is of and lib
-	// the fluid library it used: when either differs from the working
-	// copy's, the result is out of date.
-	design string
-	lib    *fluids.Library
-	// of says which revision the result is of, for the panel.
-	of   string
-	took time.Duration
-
 	// running is true while a study runs; cancel stops it and gen tells
 	// its result from that of a run started later.
 	running bool
@@ -82,11 +72,12 @@ func (tp *tolerancePanel) startStudy(set tolerance.Settings, done func()) {
 	st.gen++
 	gen := st.gen
 	st.running, st.cancel, st.err = true, cancel, nil
+	doc := s.doc
 	// The panel's bar shows the units done, at most a few times a second.
 	set.Progress = func(done, total int) {
 		s.opts.post(func() {
 			if gen == st.gen && st.running {
-				s.tol.busy.SetValue(float64(done) / float64(total))
+				tp.busy.SetValue(float64(done) / float64(total))
 			}
 		})
 	}
@@ -100,10 +91,10 @@ func (tp *tolerancePanel) startStudy(set tolerance.Settings, done func()) {
 				return
 			}
 			st.running, st.cancel = false, nil
-			if o.err != nil {
-				st.err = o.err
-			} else {
-				st.result, st.design, st.lib, st.of, st.took = o.result, fp, lib, of, o.took
+			st.err = o.err
+			// A study of a document no longer open is dropped.
+			if o.err == nil && doc == s.doc {
+				doc.keepStudy(studied{result: o.result, design: fp, lib: lib, of: of, took: o.took})
 			}
 			done()
 		})
@@ -117,24 +108,30 @@ func (tp *tolerancePanel) stop() {
 	}
 }
 
-// current reports whether the last study is of the working copy as it
-// is now, with the same fluid library.
+// current reports whether the document's last study is of the working
+// copy as it is now, with the same fluid library.
 func (tp *tolerancePanel) current() bool {
-	st, s := &tp.st, tp.s
-	return st.result != nil && s.doc != nil && st.lib == s.lib && st.design == designFingerprint(s.doc.Work)
+	s := tp.s
+	return s.doc != nil && s.doc.studyCurrent(s.lib)
 }
 
-// stopStudy cancels the tolerance study in progress, if any.
-func (s *session) stopStudy() { s.tol.stop() }
+// last returns the document's last finished study and what it ran on.
+func (tp *tolerancePanel) last() studied {
+	if tp.s.doc == nil {
+		return studied{}
+	}
+	return tp.s.doc.studied
+}
 
-// forRecord returns the study to put in the assessment record: the last
-// one, when it is of the working copy as it is now; nil otherwise.
-func (tp *tolerancePanel) forRecord() *tolerance.Result {
-	if !tp.current() {
+// stopStudy stops the window's background study, if one runs: it
+// publishes causeStop, and the study screen cancels its run.
+func (s *session) stopStudy() { s.changes.publish(change{cause: causeStop}) }
+
+// currentStudy returns the study the assessment record takes, if any:
+// the document's, when it is of the working copy as it is now.
+func (s *session) currentStudy() *tolerance.Result {
+	if s.doc == nil {
 		return nil
 	}
-	return tp.st.result
+	return s.doc.studyFor(s.lib)
 }
-
-// currentStudy returns the study the assessment record takes, if any.
-func (s *session) currentStudy() *tolerance.Result { return s.tol.forRecord() }

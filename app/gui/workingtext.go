@@ -2,7 +2,6 @@ package gui
 
 import (
 	"fmt"
-	"strconv"
 	"strings"
 	"ullage/report/display"
 
@@ -120,21 +119,12 @@ func valueText(v hazards.Value) string {
 }
 
 // stepResultText is a step's result; a finding's result is its status,
-// its value and its limit: "FAIL: value 2.1 %, limit at least 5 %".
+// its value, its limit and its margin (display.StepFindingText).
 func stepResultText(s hazards.Step) string {
-	f := s.Finding
-	if f == nil {
+	if s.Finding == nil {
 		return valueText(s.Result)
 	}
-	if f.NotApplicable != "" {
-		return statusWord(f.Status) + ": " + display.ReasonWords(f.NotApplicable)
-	}
-	unit := ""
-	if f.Unit != "" {
-		unit = " " + f.Unit
-	}
-	dir := map[hazards.Direction]string{hazards.AtLeast: "at least ", hazards.AtMost: "at most "}[f.Direction]
-	return fmt.Sprintf("%s: value %s%s, limit %s%s%s", statusWord(f.Status), six(f.Value), unit, dir, six(f.Limit), unit)
+	return display.StepFindingText(s.Finding)
 }
 
 // rootText says how a root was found.
@@ -160,24 +150,12 @@ func rootText(r *hazards.RootRecord) string {
 	return text
 }
 
-// six writes a number to six significant figures, as the calculation
-// record in the PDF does: enough to repeat a step by hand.
-func six(x float64) string { return sigFigures(x, 6) }
+// six writes a number of the calculation record as the PDF does
+// (display.RecordNumber).
+func six(x float64) string { return display.RecordNumber(x) }
 
-// stepsPhrase is "steps 45, 33 and 31".
-func stepsPhrase(steps []int) string {
-	parts := make([]string, len(steps))
-	for i, n := range steps {
-		parts[i] = strconv.Itoa(n)
-	}
-	switch len(parts) {
-	case 0:
-		return "no steps"
-	case 1:
-		return "step " + parts[0]
-	}
-	return "steps " + strings.Join(parts[:len(parts)-1], ", ") + " and " + parts[len(parts)-1]
-}
+// stepsPhrase is "steps 45, 33 and 31" (display.StepsPhrase).
+func stepsPhrase(steps []int) string { return display.StepsPhrase(steps) }
 
 // pickSteps returns the steps of a's record with the given numbers, in
 // the order given, skipping numbers the record does not hold; with no

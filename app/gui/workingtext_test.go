@@ -46,7 +46,7 @@ func TestWorkingTextLaysOutEachStep(t *testing.T) {
 				"Steps 3 and 1 of the calculation record (3 steps)",
 				"Step 3. Burst safety factor\n",
 				"  Uses:          step 1, Hoop stress, bulb\n",
-				"  Result:        PASS: value 2.5, limit at least 2\n",
+				"  Result:        PASS: value 2.5, limit at least 2, margin 25 % of the limit\n", // as the record words it
 				"  Note:          Passes with room to spare.\n",
 				"Step 1. Hoop stress, bulb\n",
 				"  Equation:      σ = ΔP · r_m /(2t)\n",

@@ -196,7 +196,7 @@ var inputUnits = []struct {
 	{"_seconds", UnitSeconds},
 	{"_percent_lfl", UnitPercentLFL},
 	{"_percent", UnitPercent},
-	{"hours_at_hottest", UnitHours},
+	{hazards.FieldHoursAtHottest, UnitHours},
 }
 
 // unitOf returns the unit the JSON name carries; a length or a volume of
@@ -206,7 +206,7 @@ func unitOf(path, name string) Unit {
 		if !strings.HasSuffix(name, u.suffix) {
 			continue
 		}
-		if strings.HasPrefix(path, "room.") {
+		if strings.HasPrefix(path, hazards.FieldRoom+".") {
 			switch u.unit {
 			case UnitLength:
 				return UnitRoomLength

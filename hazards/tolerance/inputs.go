@@ -13,10 +13,10 @@ const Weibull = "weibull"
 // Input keys of the quantities that can vary. Walls are keyed
 // "vessel.parts[i].wall_thickness_m" after the design's own field.
 const (
-	KeyFillMass      = "fill_mass_kg"
-	KeyVolume        = "vessel.internal_volume_m3"
+	KeyFillMass      = hazards.FieldFillMass
+	KeyVolume        = hazards.FieldInternalVolume
 	KeyGlassStrength = "glass_strength_pa"
-	KeyHottest       = "hottest_k"
+	KeyHottest       = hazards.FieldHottest
 )
 
 // Input describes one input that varies from unit to unit and the
@@ -92,7 +92,7 @@ func newPlan(d hazards.Design, m *hazards.UnitModel, nominalStrengthPa float64, 
 			if name == "" {
 				name = fmt.Sprintf("part %d", i+1)
 			}
-			add(fmt.Sprintf("vessel.parts[%d].wall_thickness_m", i), "wall of "+name, dim, part.WallThicknessM, part.WallToleranceM)
+			add(hazards.PartField(i, hazards.PartWallThickness), "wall of "+name, dim, part.WallThicknessM, part.WallToleranceM)
 		}
 	}
 	if s.HottestSpreadK > 0 {

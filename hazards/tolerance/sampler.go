@@ -70,7 +70,7 @@ func (p *plan) newSampler() *sampler {
 	sm.walls = make([]variable, len(d.Vessel.Parts))
 	for i, part := range d.Vessel.Parts {
 		if p.wallVaries[i] {
-			sm.walls[i] = dim(fmt.Sprintf("vessel.parts[%d].wall_thickness_m", i), part.WallThicknessM, part.WallToleranceM, 0, part.OuterDiameterM/2)
+			sm.walls[i] = dim(hazards.PartField(i, hazards.PartWallThickness), part.WallThicknessM, part.WallToleranceM, 0, part.OuterDiameterM/2)
 		}
 	}
 	if p.hotVaries {

@@ -1,10 +1,10 @@
 package chartmodel
 
 import (
-	"fmt"
 	"math"
 
 	"ullage/hazards/tolerance"
+	"ullage/report/display"
 )
 
 // Histogram describes the bar chart of the sampled units' burst safety
@@ -26,7 +26,7 @@ func Histogram(title string, h tolerance.Histogram) Chart {
 		ch.Empty = "No histogram: the study has not run."
 		return ch
 	case h.NoLoad == total:
-		ch.Empty = fmt.Sprintf("All %d units carry no burst load at their hottest temperature: there is nothing to draw.", total)
+		ch.Empty = "All " + display.Units(total) + " carry no burst load at their hottest temperature: there is nothing to draw."
 		return ch
 	}
 	ch.Bars = &Bars{Edges: h.Edges, Counts: h.Counts}
@@ -42,9 +42,9 @@ func Histogram(title string, h tolerance.Histogram) Chart {
 		ch.Lines = append(ch.Lines, Line{Label: "Bursts below a factor of 1", Value: 1, Vertical: true, Style: Style{Dashed, 1, Red}})
 	}
 	shown := total - h.Below - h.Above - h.NoLoad
-	ch.Notes = append(ch.Notes, fmt.Sprintf("%d of %d units are drawn; %d lie below and %d above the range shown.", shown, total, h.Below, h.Above))
+	ch.Notes = append(ch.Notes, display.Count(shown)+" of "+display.Units(total)+" are drawn; "+display.Count(h.Below)+" lie below and "+display.Count(h.Above)+" above the range shown.")
 	if h.NoLoad > 0 {
-		ch.Notes = append(ch.Notes, fmt.Sprintf("%d units are not over-pressurised at their hottest temperature and carry no burst load; they are not drawn.", h.NoLoad))
+		ch.Notes = append(ch.Notes, display.Units(h.NoLoad)+" are not over-pressurised at their hottest temperature and carry no burst load; they are not drawn.")
 	}
 	return ch
 }

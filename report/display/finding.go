@@ -1,6 +1,7 @@
 package display
 
 import (
+	"slices"
 	"strings"
 
 	"ullage/hazards"
@@ -352,4 +353,17 @@ func LimitSetShort(id string) string {
 		return "DE AGW"
 	}
 	return id
+}
+
+// FailingTitles names the findings that fail by the titles the window's
+// and the record's findings tables print, each title once, in the
+// findings' order; nil when none fails.
+func FailingTitles(vs []FindingView) []string {
+	var out []string
+	for _, v := range vs {
+		if v.Finding.Status == hazards.StatusFail && !slices.Contains(out, v.Title) {
+			out = append(out, v.Title)
+		}
+	}
+	return out
 }

@@ -1,6 +1,7 @@
 package display
 
 import (
+	"slices"
 	"testing"
 
 	"ullage/hazards"
@@ -65,5 +66,22 @@ func TestDetail(t *testing.T) {
 	}
 	if got, want := Detail(f, US), "hottest temperature: 168.8 °F; pressure inside: 45.3 psi; liquid-full temperature: not reached; glass: borosilicate."; got != want {
 		t.Errorf("US %q, want %q", got, want)
+	}
+}
+
+// TestFailingTitles: the failing findings by title, each once, in order.
+func TestFailingTitles(t *testing.T) {
+	vs := []FindingView{
+		{Finding: hazards.Finding{Status: hazards.StatusPass}, Title: "Implosion"},
+		{Finding: hazards.Finding{Status: hazards.StatusFail}, Title: "Burst"},
+		{Finding: hazards.Finding{Status: hazards.StatusCaution}, Title: "Cold"},
+		{Finding: hazards.Finding{Status: hazards.StatusFail}, Title: "Ullage"},
+		{Finding: hazards.Finding{Status: hazards.StatusFail}, Title: "Burst"},
+	}
+	if got := FailingTitles(vs); !slices.Equal(got, []string{"Burst", "Ullage"}) {
+		t.Errorf("FailingTitles = %q, want Burst, Ullage", got)
+	}
+	if got := FailingTitles(vs[:1]); got != nil {
+		t.Errorf("FailingTitles with no fail = %q, want nil", got)
 	}
 }

@@ -157,16 +157,16 @@ func inputSpecs(s System, nParts int) []inputSpec {
 	}
 	in := func(q Quantity) func(float64) string { return func(x float64) string { return s.Input(q, x) } }
 	specs := []inputSpec{
-		{"Fluid", []string{"fluid"}, func(d *hazards.Design, a *hazards.Assessment) string {
+		{"Fluid", []string{hazards.FieldFluid}, func(d *hazards.Design, a *hazards.Assessment) string {
 			if a != nil && a.Fluid != nil {
 				return a.Fluid.Name
 			}
 			return d.Fluid
 		}},
-		{"Fill mass", []string{"fill_mass_kg", "fill_mass_tolerance_kg"}, of(func(d *hazards.Design) string {
+		{"Fill mass", []string{hazards.FieldFillMass, hazards.FieldFillMassTolerance}, of(func(d *hazards.Design) string {
 			return WithTolerance(s.Input(Mass, d.FillMassKg), d.FillMassToleranceKg, in(Mass))
 		})},
-		{"Internal volume", []string{"vessel.internal_volume_m3", "vessel.volume_tolerance_m3"}, of(func(d *hazards.Design) string {
+		{"Internal volume", []string{hazards.FieldInternalVolume, hazards.FieldVolumeTolerance}, of(func(d *hazards.Design) string {
 			if d.Vessel.InternalVolumeM3 == 0 {
 				return WithTolerance("from the parts, "+s.Format(VesselVolume, d.Vessel.PartsVolume()), d.Vessel.VolumeToleranceM3, in(VesselVolume))
 			}
@@ -174,7 +174,7 @@ func inputSpecs(s System, nParts int) []inputSpec {
 		})},
 	}
 	for i := 0; i < nParts; i++ {
-		specs = append(specs, inputSpec{fmt.Sprintf("Part %d", i+1), []string{fmt.Sprintf("vessel.parts[%d]", i)}, of(func(d *hazards.Design) string {
+		specs = append(specs, inputSpec{fmt.Sprintf("Part %d", i+1), []string{hazards.PartField(i, "")}, of(func(d *hazards.Design) string {
 			if i >= len(d.Vessel.Parts) {
 				return "absent"
 			}
@@ -182,17 +182,17 @@ func inputSpecs(s System, nParts int) []inputSpec {
 		})})
 	}
 	specs = append(specs,
-		inputSpec{"Sealing temperature", []string{"sealing_temperature_k"}, of(func(d *hazards.Design) string { return s.Input(Temperature, d.SealingTemperatureK) })},
-		inputSpec{LabelResidualGas, []string{"residual_gas_pressure_pa"}, of(func(d *hazards.Design) string {
+		inputSpec{"Sealing temperature", []string{hazards.FieldSealingTemperature}, of(func(d *hazards.Design) string { return s.Input(Temperature, d.SealingTemperatureK) })},
+		inputSpec{LabelResidualGas, []string{hazards.FieldResidualGasPressure}, of(func(d *hazards.Design) string {
 			if d.ResidualGasPressurePa == 0 {
 				return "none"
 			}
 			return s.Input(Pressure, d.ResidualGasPressurePa)
 		})},
-		inputSpec{"Hottest temperature", []string{"hottest_k"}, of(func(d *hazards.Design) string { return s.Input(Temperature, d.HottestK) })},
-		inputSpec{"Coldest temperature", []string{"coldest_k"}, of(func(d *hazards.Design) string { return s.Input(Temperature, d.ColdestK) })},
-		inputSpec{LabelAmbientPressure, []string{"ambient_pressure_pa"}, of(func(d *hazards.Design) string { return s.Input(Pressure, d.AmbientPressurePa) })},
-		inputSpec{"Glass", []string{"glass"}, func(d *hazards.Design, a *hazards.Assessment) string {
+		inputSpec{"Hottest temperature", []string{hazards.FieldHottest}, of(func(d *hazards.Design) string { return s.Input(Temperature, d.HottestK) })},
+		inputSpec{"Coldest temperature", []string{hazards.FieldColdest}, of(func(d *hazards.Design) string { return s.Input(Temperature, d.ColdestK) })},
+		inputSpec{LabelAmbientPressure, []string{hazards.FieldAmbientPressure}, of(func(d *hazards.Design) string { return s.Input(Pressure, d.AmbientPressurePa) })},
+		inputSpec{"Glass", []string{hazards.FieldGlass}, func(d *hazards.Design, a *hazards.Assessment) string {
 			if d.Glass.Custom != nil {
 				return "custom: " + d.Glass.Custom.Name
 			}
@@ -201,30 +201,30 @@ func inputSpecs(s System, nParts int) []inputSpec {
 			}
 			return d.Glass.ID
 		}},
-		inputSpec{"Service life", []string{"service_life_years"}, of(func(d *hazards.Design) string { return Stated(d.ServiceLifeYears) + " years" })},
-		inputSpec{"Time at the hottest", []string{"hours_at_hottest"}, of(func(d *hazards.Design) string { return Stated(d.HoursAtHottest) + " h" })},
-		inputSpec{"Sudden temperature change", []string{"thermal_shock"}, of(func(d *hazards.Design) string { return ShockText(d.ThermalShock, s) })},
-		inputSpec{"Residual stress at the seal", []string{"seal_stress"}, of(func(d *hazards.Design) string { return SealText(d.SealStress, s) })},
-		inputSpec{"Room", []string{"room.preset_id"}, of(func(d *hazards.Design) string { return RoomPresetName(d.Room.PresetID) })},
-		inputSpec{"Room volume", []string{"room.volume_m3"}, of(func(d *hazards.Design) string { return s.Input(RoomVolume, d.Room.VolumeM3) })},
-		inputSpec{"Air changes per hour", []string{"room.air_changes_per_hour"}, of(func(d *hazards.Design) string { return Stated(d.Room.AirChangesPerHour) })},
-		inputSpec{"Mixing factor", []string{"room.mixing_factor"}, of(func(d *hazards.Design) string { return Stated(d.Room.MixingFactor) })},
-		inputSpec{"Near-field radius", []string{"room.near_field_radius_m"}, of(func(d *hazards.Design) string { return s.Input(RoomLength, d.Room.NearFieldRadiusM) })},
-		inputSpec{"Near-field air speed", []string{"room.near_field_air_speed_m_s"}, of(func(d *hazards.Design) string { return s.Input(Speed, d.Room.NearFieldAirSpeed) })},
-		inputSpec{LabelExposureTime, []string{"room.exposure_minutes"}, of(func(d *hazards.Design) string { return Stated(d.Room.ExposureMinutes) + " min" })},
-		inputSpec{"Criteria: burst, implosion safety factors", []string{"criteria.min_burst_safety_factor", "criteria.min_implosion_safety_factor"}, of(func(d *hazards.Design) string {
+		inputSpec{"Service life", []string{hazards.FieldServiceLife}, of(func(d *hazards.Design) string { return Stated(d.ServiceLifeYears) + " years" })},
+		inputSpec{"Time at the hottest", []string{hazards.FieldHoursAtHottest}, of(func(d *hazards.Design) string { return Stated(d.HoursAtHottest) + " h" })},
+		inputSpec{"Sudden temperature change", []string{hazards.FieldThermalShock}, of(func(d *hazards.Design) string { return ShockText(d.ThermalShock, s) })},
+		inputSpec{"Residual stress at the seal", []string{hazards.FieldSealStress}, of(func(d *hazards.Design) string { return SealText(d.SealStress, s) })},
+		inputSpec{"Room", []string{hazards.FieldRoomPreset}, of(func(d *hazards.Design) string { return RoomPresetName(d.Room.PresetID) })},
+		inputSpec{"Room volume", []string{hazards.FieldRoomVolume}, of(func(d *hazards.Design) string { return s.Input(RoomVolume, d.Room.VolumeM3) })},
+		inputSpec{"Air changes per hour", []string{hazards.FieldAirChanges}, of(func(d *hazards.Design) string { return Stated(d.Room.AirChangesPerHour) })},
+		inputSpec{"Mixing factor", []string{hazards.FieldMixingFactor}, of(func(d *hazards.Design) string { return Stated(d.Room.MixingFactor) })},
+		inputSpec{"Near-field radius", []string{hazards.FieldNearFieldRadius}, of(func(d *hazards.Design) string { return s.Input(RoomLength, d.Room.NearFieldRadiusM) })},
+		inputSpec{"Near-field air speed", []string{hazards.FieldNearFieldAirSpeed}, of(func(d *hazards.Design) string { return s.Input(Speed, d.Room.NearFieldAirSpeed) })},
+		inputSpec{LabelExposureTime, []string{hazards.FieldExposureMinutes}, of(func(d *hazards.Design) string { return Stated(d.Room.ExposureMinutes) + " min" })},
+		inputSpec{"Criteria: burst, implosion safety factors", []string{hazards.FieldMinBurstSafetyFactor, hazards.FieldMinImplosionSafetyFactor}, of(func(d *hazards.Design) string {
 			return "at least " + Stated(d.Criteria.MinBurstSafetyFactor) + ", at least " + Stated(d.Criteria.MinImplosionSafetyFactor)
 		})},
-		inputSpec{"Criteria: failure probability", []string{"criteria.max_failure_probability"}, of(func(d *hazards.Design) string { return "at most " + Stated(d.Criteria.MaxFailureProbability) })},
-		inputSpec{"Criteria: ullage at the hottest", []string{"criteria.min_ullage_percent"}, of(func(d *hazards.Design) string { return "at least " + Stated(d.Criteria.MinUllagePercent) + " %" })},
-		inputSpec{"Criteria: exposure, flammability", []string{"criteria.max_fraction_of_limit", "criteria.max_percent_lfl", "criteria.limit_bodies"}, of(func(d *hazards.Design) string {
+		inputSpec{"Criteria: failure probability", []string{hazards.FieldMaxFailureProbability}, of(func(d *hazards.Design) string { return "at most " + Stated(d.Criteria.MaxFailureProbability) })},
+		inputSpec{"Criteria: ullage at the hottest", []string{hazards.FieldMinUllagePercent}, of(func(d *hazards.Design) string { return "at least " + Stated(d.Criteria.MinUllagePercent) + " %" })},
+		inputSpec{"Criteria: exposure, flammability", []string{hazards.FieldMaxFractionOfLimit, hazards.FieldMaxPercentLFL, hazards.FieldLimitBodies}, of(func(d *hazards.Design) string {
 			bodies := "all bodies"
 			if len(d.Criteria.LimitBodies) > 0 {
 				bodies = strings.Join(d.Criteria.LimitBodies, ", ")
 			}
 			return "at most " + Stated(d.Criteria.MaxFractionOfLimit) + " of the limit (" + bodies + "); at most " + Stated(d.Criteria.MaxPercentLFL) + " % LFL"
 		})},
-		inputSpec{"Criteria: limit sets", []string{"criteria.limit_sets"}, of(func(d *hazards.Design) string {
+		inputSpec{"Criteria: limit sets", []string{hazards.FieldLimitSets}, of(func(d *hazards.Design) string {
 			var names []string
 			for _, id := range d.Criteria.AppliedLimitSets() {
 				names = append(names, LimitSetShort(id))

@@ -4,7 +4,9 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"time"
 
+	"ullage/hazards"
 	"ullage/hazards/tolerance"
 )
 
@@ -25,39 +27,91 @@ const noDriverWords = "none: no varied input moves the safety factor (every rank
 const driverFloor = 0.005
 
 // DistributionWords names a study's distribution and what its ± stands
-// for: "normal, ± is 3σ", "uniform, ± is the half-width", "triangular,
-// peak at the design, ± is the half-width", "Weibull".
+// for, the words of the window's choices, the record's table and the
+// command line: "Normal, ± is 3σ", "Uniform, ± is the half-width",
+// "Triangular, peak at the design, ± is the half-width", "Weibull".
 func DistributionWords(dist string) string {
 	switch dist {
 	case tolerance.Normal:
-		return "normal, ± is 3σ"
+		return "Normal, ± is 3σ"
 	case tolerance.Uniform:
-		return "uniform, ± is the half-width"
+		return "Uniform, ± is the half-width"
 	case tolerance.Triangle:
-		return "triangular, peak at the design, ± is the half-width"
+		return "Triangular, peak at the design, ± is the half-width"
 	case tolerance.Weibull:
 		return "Weibull"
 	}
 	return dist
 }
 
-// Share formats a fraction of units (0.507) as a percentage ("50.7 %") by
-// [Number]'s rule.
+// Share formats a fraction (0.507) as a percentage ("50.7 %") by
+// [Number]'s rule for results; 0 is "0 %".
 func Share(fraction float64) string {
 	return Number(100*fraction, ValueFigures) + " %"
 }
 
+// groupSeparator stands between groups of three digits: a no-break
+// space, which the window's and the record's fonts both have (the Go
+// fonts of the record have no narrow one, U+202F).
+const groupSeparator = '\u00a0'
+
+// Count writes a count with its digits in groups of three ("100 000",
+// "1 250 000"), a negative one with a true minus; up to 9999 it is
+// written whole, "2000", as counts usually are.
+func Count(n int) string {
+	s := strconv.Itoa(n)
+	neg := strings.HasPrefix(s, "-")
+	s = strings.TrimPrefix(s, "-")
+	if len(s) > 4 {
+		var b strings.Builder
+		for i, c := range s {
+			if i > 0 && (len(s)-i)%3 == 0 {
+				b.WriteRune(groupSeparator)
+			}
+			b.WriteRune(c)
+		}
+		s = b.String()
+	}
+	if neg {
+		return "−" + s
+	}
+	return s
+}
+
+// Units words a number of units: "1 unit", "100 000 units".
+func Units(n int) string {
+	if n == 1 {
+		return "1 unit"
+	}
+	return Count(n) + " units"
+}
+
+// Duration words the time a piece of work took: two significant figures
+// of seconds below a minute ("0.42 s", "3.1 s"), whole minutes and
+// seconds above ("2 min 5 s").
+func Duration(d time.Duration) string {
+	sec := d.Seconds()
+	if sec < 59.5 {
+		return Number(sec, MarginFigures) + " s"
+	}
+	whole := int(math.Round(sec))
+	return strconv.Itoa(whole/60) + " min " + strconv.Itoa(whole%60) + " s"
+}
+
 // Proportion words a counted fraction of the sampled units with its 95 %
-// interval: "441 of 2000 (22.1 %, 95 % interval 20.3 – 23.9 %)".
+// interval: "441 of 2000 units (22.1 %, 95 % interval 20.3 – 23.9 %)".
 func Proportion(p tolerance.Proportion) string {
-	return strconv.Itoa(p.Count) + " of " + strconv.Itoa(p.Total) + " (" + Share(p.Estimate) +
+	return Count(p.Count) + " of " + Units(p.Total) + " (" + Share(p.Estimate) +
 		", 95 % interval " + Number(100*p.Low, ValueFigures) + " – " + Share(p.High) + ")"
 }
 
-// Spread formats three percentiles with the given formatter: "a / b / c".
-func Spread(p1, p50, p99 float64, format func(float64) string) string {
-	return format(p1) + " / " + format(p50) + " / " + format(p99)
+// Spread joins percentiles already in words, or their names: "a / b / c".
+func Spread(p ...string) string {
+	return strings.Join(p, " / ")
 }
+
+// StrongestDriverLabel labels [StrongestDriver]'s words.
+const StrongestDriverLabel = "Strongest driver of the safety factor"
 
 // Correlation formats a rank correlation with its sign and two decimals
 // ("−0.71", "+0.15"), and one that rounds to zero as "0.00".
@@ -98,7 +152,7 @@ func DriversMoved(ds []tolerance.Driver) bool {
 // that lower the margin as they grow, the case [WallVolumeNote] explains.
 func WallLowersMargin(ds []tolerance.Driver) bool {
 	for _, d := range ds {
-		if strings.HasSuffix(d.Key, "wall_thickness_m") && d.RankCorrelation <= -driverFloor {
+		if hazards.IsPartField(d.Key) && strings.HasSuffix(d.Key, "."+hazards.PartWallThickness) && d.RankCorrelation <= -driverFloor {
 			return true
 		}
 	}
