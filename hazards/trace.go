@@ -552,7 +552,7 @@ func noLoadNote(loaded bool, r Reason) string {
 	if loaded {
 		return ""
 	}
-	return recordWords(r) + ": the number above is a placeholder of the calculation, not a result."
+	return recordWords(r) + ": the number above only carries the calculation on; it is not a result."
 }
 
 func stepNumbers(tr *tracer, keys []string) []int {
