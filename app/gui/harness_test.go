@@ -161,9 +161,9 @@ func (h *harness) settle() bool {
 // reset brings the shared window back to the state of a window just
 // built on the example: no dialog, default preferences and units, no
 // fluid of the reviewer's own, a new storage folder, the design review
-// screen with the form, no study, and the example opened afresh. It
-// reports false, and says why, when the window still differs from a new
-// one in what it shows.
+// screen with the form, an empty fluid find, no study, and the example
+// opened afresh. It reports false, and says why, when the window still
+// differs from a new one in what it shows.
 func (h *harness) reset(t testing.TB) bool {
 	t.Helper()
 	h.t = t
@@ -203,6 +203,7 @@ func (h *harness) reset(t testing.TB) bool {
 	s.results.list.selected = -1
 	s.cmp.onlyChanged.SetChecked(false)
 	s.cmp.pickA.Selected, s.cmp.pickB.Selected = "", ""
+	s.form.fluid.find.SetText("")
 
 	tp := s.tol
 	tp.st = study{gen: tp.st.gen}

@@ -108,8 +108,10 @@ func (l labelColumn) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 // scroll away.
 type findingsFirst struct {
 	want func(width float32) float32
-	// width is the width last laid out, for MinSize.
-	width *float32
+	// width is the width last laid out, for MinSize; resized, when set,
+	// runs when it changed, for the scroll to measure the findings again.
+	width   *float32
+	resized func()
 }
 
 // minChartHeight is the least height the charts keep below the findings.
@@ -138,7 +140,12 @@ func (f findingsFirst) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 	if len(objs) < 2 {
 		return
 	}
-	*f.width = size.Width
+	if *f.width != size.Width {
+		*f.width = size.Width
+		if f.resized != nil {
+			defer f.resized()
+		}
+	}
 	top := max(f.want(size.Width), objs[0].MinSize().Height)
 	top = min(top, size.Height)
 	objs[0].Move(fyne.NewPos(0, 0))

@@ -85,9 +85,11 @@ func newResultsPanel(s *session) *resultsPanel {
 	// Every finding is shown without scrolling; the charts take what
 	// height is left.
 	findings := container.NewThemeOverride(r.list.object, look.Dense{})
-	split := container.New(findingsFirst{want: r.list.wantedHeight, width: new(float32)}, findings, container.New(narrowable{360}, r.tabs))
+	ff := findingsFirst{want: r.list.wantedHeight, width: new(float32)}
+	split := container.New(ff, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
 	r.areaScroll = container.NewVScroll(split)
+	split.Layout = findingsFirst{want: ff.want, width: ff.width, resized: r.areaScroll.Refresh}
 	r.object = container.NewBorder(r.verdict.object, nil, nil, nil, r.areaScroll)
 	return r
 }
@@ -135,7 +137,7 @@ func (r *resultsPanel) draw() {
 	if a == nil {
 		r.verdict.clear()
 		r.list.set(nil, true)
-		r.area.Refresh()
+		r.areaScroll.Refresh()
 		r.keys.set(nil, u)
 		r.expo.set(nil)
 		r.pt.set(chartmodel.Chart{Empty: "No results yet."}, false)
@@ -149,7 +151,7 @@ func (r *resultsPanel) draw() {
 	n := len(r.list.rows)
 	r.list.set(orderFindings(a.Findings), stale)
 	if len(r.list.rows) != n {
-		r.area.Refresh()
+		r.areaScroll.Refresh()
 	}
 	r.keys.set(a, u)
 	r.expo.set(a)
