@@ -71,8 +71,8 @@ func newResultsPanel(s *session) *resultsPanel {
 	r.expo = newExposureTable()
 	r.pt, r.conc, r.fill = newChart(), newChart(), newChart()
 	r.tabs = container.NewAppTabs(
-		container.NewTabItem("Pressure against temperature", r.pt),
-		container.NewTabItem("Vapour in the room", r.conc),
+		container.NewTabItem("Pressure", r.pt),
+		container.NewTabItem("Vapour", r.conc),
 		r.newFillTab(),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 		container.NewTabItem("Exposure limits", r.expo.object),
@@ -168,7 +168,7 @@ func (r *resultsPanel) draw() {
 
 // newFillTab makes the tab of the fill–temperature map.
 func (r *resultsPanel) newFillTab() *container.TabItem {
-	r.fillTab = container.NewTabItem("Fill and temperature", r.fill)
+	r.fillTab = container.NewTabItem("Fill map", r.fill)
 	return r.fillTab
 }
 
@@ -287,7 +287,8 @@ func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
 	alpha := uint8(55)
 	counts := fmt.Sprintf("%d of %d criteria fail, %s, %d pass", fail, len(a.Findings), plural(caution, "caution"), pass)
 	if n := len(a.Findings) - pass - caution - fail; n > 0 {
-		counts += fmt.Sprintf(", %d not assessed — no published limit", n)
+		// Each such row says why (no published limit) when selected.
+		counts += fmt.Sprintf(", %d not assessed", n)
 	}
 	if stale {
 		alpha = 18

@@ -73,6 +73,7 @@ func screenCases() []screenCase {
 			}
 			h.runStudyWith(screenStudyUnits(), fmt.Sprint(defaultStudySeed), spread)
 			if charts {
+				h.layOut()
 				h.scrollToShow(tp.scroll, tp.hist)
 			}
 		}
