@@ -26,9 +26,9 @@ type exposureTable struct {
 var exposureColumns = []string{"Set", "Limit", "ppm", "Period", "Average", "Share", ""}
 
 // exposureWidths are the columns' widths (points): the panel is about
-// 640 points wide; "Period" is the averaging period and "Average" the
-// average over it, in ppm.
-var exposureWidths = []float32{88, 160, 68, 110, 76, 76, 86}
+// 620 points wide at 1280×800 and the sum stays below that; "Period" is
+// the averaging period and "Average" the average over it, in ppm.
+var exposureWidths = []float32{88, 150, 68, 84, 72, 70, 76}
 
 // columnsLayout places objects side by side in columns of fixed widths.
 type columnsLayout []float32

@@ -32,14 +32,20 @@ func orderFindings(fs []hazards.Finding) []hazards.Finding {
 	return out
 }
 
-// wantedHeight is the height the findings table needs to show every row
-// without scrolling in the compact theme it is drawn in: its heading and
-// detail, and each row with the list's separator space.
-func (fl *findingsList) wantedHeight() float32 {
-	row := fl.rowHeight()
-	n := float32(max(len(fl.rows), 1))
+// wantedHeight is the height the findings table needs at a width to
+// show every row without scrolling in the compact theme it is drawn in:
+// its heading and detail, and each row with the list's separator space.
+func (fl *findingsList) wantedHeight(width float32) float32 {
+	fl.fit(width)
 	pad := look.Compact{}.Size(theme.SizeNamePadding)
-	return fl.object.MinSize().Height - fl.list.MinSize().Height + n*(row+pad)
+	rows := fl.rowHeight() + pad
+	if len(fl.heights) > 0 {
+		rows = 0
+		for _, h := range fl.heights {
+			rows += h + pad
+		}
+	}
+	return fl.object.MinSize().Height - fl.list.MinSize().Height + rows
 }
 
 // rowHeight is the height of one findings row in the compact theme.

@@ -1,11 +1,14 @@
 package gui
 
 import (
+	"strings"
+
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
+	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report/display"
 )
@@ -16,6 +19,10 @@ type findingsList struct {
 	rows     []hazards.Finding
 	stale    bool
 	selected int
+	// fresh is true from the opening of a design or revision until its
+	// first results: the selection then goes to the first fail or
+	// caution, not to the criterion selected before.
+	fresh bool
 	// onSelect, when set, runs instead of onPick when the reviewer
 	// selects a row, so that the design form can stay in place.
 	onSelect func(hazards.Finding)
@@ -29,17 +36,44 @@ type findingsList struct {
 	// words of each finding.
 	us func() bool
 
+	// titleWidth is the width the longest criterion needs on one line,
+	// numbersWidth the widths the value, limit and margin columns need;
+	// heights are the rows' heights at the width last fitted, fitted that
+	// width (see fit).
+	titleWidth   float32
+	numbersWidth [3]float32
+	heights      []float32
+	fitted       float32
+	critHead     *widget.Label
+
 	list    *widget.List
+	head    *widget.Label
 	detail  *widget.RichText
 	working *widget.Button
 	object  fyne.CanvasObject
 }
 
-// Column widths of the findings table: status, criterion, value, limit,
-// margin (fractions of the width left after the status column).
-var findingColumns = columns{fractions: []float32{0, 0.44, 0.18, 0.20, 0.18}}
-
+// statusColumnWidth is the width of the findings table's status column.
 const statusColumnWidth = 132
+
+// findingGap is the space between the findings table's columns.
+const findingGap = 6
+
+// criterionWrapFrom is the narrowest the criterion column gets beside
+// the value, limit and margin columns, its longer texts wrapping; in a
+// narrower table those columns give way to it.
+const criterionWrapFrom = 400
+
+// numbersColumnMax are the widest the value, limit and margin columns
+// grow; a longer text wraps ("not assessed — no published limit").
+var numbersColumnMax = [3]float32{130, 135, 170}
+
+// Headings of the criterion column, with and without the value, limit
+// and margin columns beside it.
+const (
+	criterionHead      = "Criterion"
+	criterionHeadAlone = "Criterion (value, limit and margin of the selected row below)"
+)
 
 func newFindingsList() *findingsList {
 	fl := &findingsList{selected: -1}
@@ -55,7 +89,11 @@ func newFindingsList() *findingsList {
 				l.Truncation = fyne.TextTruncateEllipsis
 				cells = append(cells, l)
 			}
-			return container.New(findingColumns, cells...)
+			for _, c := range cells[1:] {
+				c.(*widget.Label).Truncation = fyne.TextTruncateOff
+				c.(*widget.Label).Wrapping = fyne.TextWrapWord
+			}
+			return container.New(findingRow{fl}, cells...)
 		},
 		func(id widget.ListItemID, o fyne.CanvasObject) {
 			if id < 0 || id >= len(fl.rows) {
@@ -83,8 +121,9 @@ func newFindingsList() *findingsList {
 			fl.chosen()
 		}
 	}
-	head := []fyne.CanvasObject{container.New(fixedWidth{statusColumnWidth}, bold("Status"))}
-	for _, h := range []string{"Criterion", "Value", "Limit", "Margin"} {
+	fl.critHead = bold(criterionHead)
+	head := []fyne.CanvasObject{container.New(fixedWidth{statusColumnWidth}, bold("Status")), fl.critHead}
+	for _, h := range []string{"Value", "Limit", "Margin"} {
 		head = append(head, bold(h))
 	}
 	fl.detail = widget.NewRichText()
@@ -92,9 +131,12 @@ func newFindingsList() *findingsList {
 	fl.working = widget.NewButtonWithIcon("Show the working", theme.NavigateNextIcon(), fl.pick)
 	fl.working.IconPlacement = widget.ButtonIconTrailingText
 	fl.working.Disable()
+	fl.head = widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	fl.head.Wrapping = fyne.TextWrapWord
 	detail := container.NewVBox(widget.NewSeparator(),
-		container.NewBorder(nil, nil, nil, container.NewVBox(fl.working), fl.detail))
-	fl.object = container.NewBorder(container.New(findingColumns, head...), detail, nil, nil, fl.list)
+		container.NewBorder(nil, nil, nil, container.NewVBox(fl.working), fl.head), fl.detail)
+	table := container.NewBorder(container.New(findingRow{fl}, head...), detail, nil, nil, fl.list)
+	fl.object = container.New(findingsTable{fl}, table)
 	return fl
 }
 
@@ -104,6 +146,156 @@ func newFindingsList() *findingsList {
 func setText(l *widget.Label, text string) {
 	if l.Text != text {
 		l.SetText(text)
+	}
+}
+
+// findingsTable lays the findings table out at its full size, once the
+// rows are fitted to its width.
+type findingsTable struct{ fl *findingsList }
+
+// MinSize is the table's own.
+func (t findingsTable) MinSize(objs []fyne.CanvasObject) fyne.Size { return objs[0].MinSize() }
+
+// Layout fits the rows to the width and lays the table out.
+func (t findingsTable) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	t.fl.fit(size.Width)
+	objs[0].Move(fyne.NewPos(0, 0))
+	objs[0].Resize(size)
+}
+
+// findingRow lays out a row of the findings table: the status at a fixed
+// width, then the criterion, then the value, limit and margin at the
+// widths their texts need, when the row is wide enough for the whole
+// criterion beside them. A narrower row shows the status and the
+// criterion only, which wraps when it must; the detail under the table
+// gives the selected row's value, limit and margin.
+type findingRow struct{ fl *findingsList }
+
+// MinSize is the status column and a narrow criterion.
+func (r findingRow) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	s := fyne.NewSize(statusColumnWidth+findingGap+120, 0)
+	for i, o := range objs {
+		if i == 0 || o.Visible() {
+			s.Height = max(s.Height, o.MinSize().Height)
+		}
+	}
+	return s
+}
+
+// Layout places the cells left to right.
+func (r findingRow) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	crit, all := r.fl.criterionWidth(size.Width)
+	x := float32(0)
+	for i, o := range objs {
+		var w float32 = statusColumnWidth
+		switch {
+		case i == 1:
+			w = crit
+		case i > 1 && !all:
+			o.Hide()
+			continue
+		case i > 1:
+			w = r.fl.numbersWidth[i-2]
+			o.Show()
+		}
+		o.Move(fyne.NewPos(x, 0))
+		o.Resize(fyne.NewSize(w, size.Height))
+		x += w + findingGap
+	}
+}
+
+// criterionWidth is the criterion column's width in a row of a width,
+// and whether the value, limit and margin columns fit beside it.
+func (fl *findingsList) criterionWidth(width float32) (float32, bool) {
+	rest := width - statusColumnWidth - findingGap
+	beside := rest
+	for _, w := range fl.numbersWidth {
+		beside -= w + findingGap
+	}
+	if beside >= min(fl.titleWidth, criterionWrapFrom) {
+		return beside, true
+	}
+	return max(rest, 0), false
+}
+
+// denseSize is the size a label of the findings table needs on one line.
+func denseSize(text string, style fyne.TextStyle) fyne.Size {
+	l := widget.NewLabelWithStyle(text, fyne.TextAlignLeading, style)
+	container.NewThemeOverride(l, look.Dense{})
+	return l.MinSize()
+}
+
+// denseHeight is the height a label of the findings table needs with its
+// text wrapped at word breaks to a width, as the label wraps it.
+func denseHeight(text string, width float32) float32 {
+	one := denseSize(text, fyne.TextStyle{}).Height
+	line := denseSize("A\nA", fyne.TextStyle{}).Height - one
+	d := look.Dense{}
+	room := width - 2*d.Size(theme.SizeNameInnerPadding)
+	size := d.Size(theme.SizeNameText)
+	lines, cur := 1, ""
+	for _, w := range strings.Fields(text) {
+		next := w
+		if cur != "" {
+			next = cur + " " + w
+		}
+		if cur != "" && fyne.MeasureText(next, size, fyne.TextStyle{}).Width > room {
+			lines++
+			next = w
+		}
+		cur = next
+	}
+	return one + float32(lines-1)*line
+}
+
+// measure finds the widths the rows' texts need on one line.
+func (fl *findingsList) measure() {
+	fl.titleWidth = 0
+	fl.numbersWidth = [3]float32{}
+	for i, h := range []string{"Value", "Limit", "Margin"} {
+		fl.numbersWidth[i] = denseSize(h, fyne.TextStyle{Bold: true}).Width
+	}
+	for _, f := range fl.rows {
+		v := display.Finding(f, fl.system())
+		fl.titleWidth = max(fl.titleWidth, denseSize(v.Title, fyne.TextStyle{}).Width)
+		for i, t := range []string{v.Value, v.Limit, v.Margin} {
+			fl.numbersWidth[i] = max(fl.numbersWidth[i], denseSize(t, fyne.TextStyle{}).Width)
+		}
+	}
+	for i := range fl.numbersWidth {
+		fl.numbersWidth[i] = min(fl.numbersWidth[i], numbersColumnMax[i])
+	}
+	fl.fitted = -1
+}
+
+// fit sets each row's height for a table of a width: one line, or more
+// where the criterion wraps.
+func (fl *findingsList) fit(width float32) {
+	if width == fl.fitted && len(fl.heights) == len(fl.rows) {
+		return
+	}
+	fl.fitted = width
+	// The list insets its rows by its padding on either side.
+	crit, all := fl.criterionWidth(width - 2*look.Dense{}.Size(theme.SizeNamePadding))
+	head := criterionHeadAlone
+	if all {
+		head = criterionHead
+	}
+	if fl.critHead.Text != head {
+		fl.critHead.SetText(head)
+	}
+	base := fl.rowHeight()
+	fl.heights = fl.heights[:0]
+	for id, f := range fl.rows {
+		v := display.Finding(f, fl.system())
+		h := max(base, denseHeight(v.Title, crit))
+		if all {
+			for i, t := range []string{v.Value, v.Limit, v.Margin} {
+				h = max(h, denseHeight(t, fl.numbersWidth[i]))
+			}
+		}
+		fl.heights = append(fl.heights, h)
+		fl.list.SetItemHeight(id, h)
 	}
 }
 
@@ -139,10 +331,11 @@ func statusImportance(s hazards.Status, stale bool) widget.Importance {
 // selecting the first that is not a pass.
 func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 	keep := ""
-	if fl.selected >= 0 && fl.selected < len(fl.rows) {
+	if fl.selected >= 0 && fl.selected < len(fl.rows) && !fl.fresh {
 		keep = fl.rows[fl.selected].Criterion
 	}
 	fl.rows, fl.stale = fs, stale
+	fl.measure()
 	fl.selected = -1
 	for i, f := range fs {
 		if f.Criterion == keep {
@@ -205,26 +398,30 @@ func (fl *findingsList) pick() {
 // describe shows the selected finding's message and limit source.
 func (fl *findingsList) describe() {
 	if fl.selected < 0 || fl.selected >= len(fl.rows) {
+		fl.head.SetText("")
 		fl.detail.Segments = nil
 		fl.detail.Refresh()
 		fl.working.Disable()
 		return
 	}
 	f := fl.rows[fl.selected]
+	v := display.Finding(f, fl.system())
 	fl.working.Enable()
+	caption := widget.RichTextStyle{Inline: true, SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}
+	fl.head.SetText(statusWord(f.Status) + " — " + f.Title + ".")
 	fl.detail.Segments = []widget.RichTextSegment{
-		&widget.TextSegment{Text: statusWord(f.Status) + " — " + f.Title + ". ", Style: widget.RichTextStyle{Inline: true, TextStyle: fyne.TextStyle{Bold: true}}},
-		&widget.TextSegment{Text: display.Finding(f, fl.system()).Text(), Style: widget.RichTextStyleParagraph},
-		&widget.TextSegment{Text: "Limit source: " + f.Source, Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}},
+		&widget.TextSegment{Text: v.Numbers() + ".", Style: widget.RichTextStyleParagraph},
+		&widget.TextSegment{Text: v.Text(), Style: widget.RichTextStyleParagraph},
+		&widget.TextSegment{Text: "Limit source: " + f.Source + ". ", Style: caption},
 	}
 	if len(f.Steps()) > 0 {
 		fl.detail.Segments = append(fl.detail.Segments, &widget.TextSegment{
 			Text:  "Working: " + stepsPhrase(f.Steps()) + " of the calculation record.",
-			Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground},
+			Style: caption,
 		})
 	}
 	fl.detail.Refresh()
 }
 
 // detailText returns the selected finding's description as shown.
-func (fl *findingsList) detailText() string { return fl.detail.String() }
+func (fl *findingsList) detailText() string { return fl.head.Text + " " + fl.detail.String() }

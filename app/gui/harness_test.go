@@ -164,9 +164,9 @@ func (h *harness) settle() bool {
 // reset brings the shared window back to the state of a window just
 // built on the example: no dialog, default preferences and units, no
 // fluid of the reviewer's own, a new storage folder, the design review
-// screen with the form, no study, and the example opened afresh. It
-// reports false, and says why, when the window still differs from a new
-// one in what it shows.
+// screen with the form, an empty fluid find, no study, and the example
+// opened afresh. It reports false, and says why, when the window still
+// differs from a new one in what it shows.
 func (h *harness) reset(t testing.TB) bool {
 	t.Helper()
 	return h.resetIn(t, t.TempDir())
@@ -212,6 +212,7 @@ func (h *harness) resetIn(t testing.TB, dataDir string) bool {
 	s.results.list.selected = -1
 	s.cmp.onlyChanged.SetChecked(false)
 	s.cmp.pickA.Selected, s.cmp.pickB.Selected = "", ""
+	s.form.fluid.find.SetText("")
 
 	// The fluid finder keeps its text across documents; a new window's
 	// is empty (emptying it finds nothing, so chooses nothing).

@@ -101,27 +101,35 @@ func (l labelColumn) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 }
 
 // findingsFirst lays out two objects one above the other: the first as
-// tall as want says it needs (all the findings rows), the second, the
-// charts, in the height left over. When the space is too small for both,
-// the second gives way down to minChartHeight, then the first.
-type findingsFirst struct{ want func() float32 }
+// tall as want says it needs at the width (all the findings rows), the
+// second, the charts, in the height left over but at least
+// minChartHeight. It sits in a scroll: when the window is too short for
+// both, the findings stay in view and the charts move below them, a
+// scroll away.
+type findingsFirst struct {
+	want func(width float32) float32
+	// width is the width last laid out, for MinSize; resized, when set,
+	// runs when it changed, for the scroll to measure the findings again.
+	width   *float32
+	resized func()
+}
 
-// minChartHeight is the least height the charts keep while the findings
-// need more; below minUsefulChartHeight the charts are hidden.
-const (
-	minChartHeight       = 0
-	minUsefulChartHeight = 160
-)
+// minChartHeight is the least height the charts keep below the findings.
+const minChartHeight = 340
 
-// MinSize is the wider object's width and both minimum heights.
+// MinSize is the wider object's width and the findings' wanted height
+// with the charts' least height below.
 func (f findingsFirst) MinSize(objs []fyne.CanvasObject) fyne.Size {
 	var s fyne.Size
 	for _, o := range objs {
-		m := o.MinSize()
-		s.Width = max(s.Width, m.Width)
+		s.Width = max(s.Width, o.MinSize().Width)
 	}
-	if len(objs) > 0 {
-		s.Height = objs[0].MinSize().Height + minChartHeight
+	if len(objs) > 1 {
+		top := objs[0].MinSize().Height
+		if *f.width > 0 {
+			top = max(f.want(*f.width), top)
+		}
+		s.Height = top + theme.Padding() + max(objs[1].MinSize().Height, minChartHeight)
 	}
 	return s
 }
@@ -132,21 +140,19 @@ func (f findingsFirst) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 	if len(objs) < 2 {
 		return
 	}
-	top := min(f.want(), size.Height-minChartHeight)
-	top = max(top, objs[0].MinSize().Height)
+	if *f.width != size.Width {
+		*f.width = size.Width
+		if f.resized != nil {
+			defer f.resized()
+		}
+	}
+	top := max(f.want(size.Width), objs[0].MinSize().Height)
 	top = min(top, size.Height)
 	objs[0].Move(fyne.NewPos(0, 0))
 	objs[0].Resize(fyne.NewSize(size.Width, top))
 	gap := theme.Padding()
-	rest := size.Height - top - gap
-	if rest < minUsefulChartHeight {
-		// Too little room to read a chart: it gives way entirely.
-		objs[1].Hide()
-		return
-	}
-	objs[1].Show()
 	objs[1].Move(fyne.NewPos(0, top+gap))
-	objs[1].Resize(fyne.NewSize(size.Width, rest))
+	objs[1].Resize(fyne.NewSize(size.Width, max(size.Height-top-gap, 0)))
 }
 
 // narrowable lays out one object over the whole space but reports a

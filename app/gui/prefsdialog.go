@@ -69,7 +69,8 @@ func newPreferencesPanel(s *session) *preferencesPanel {
 		labelled("Units", p.units),
 		labelled("Paper for records", p.paper),
 		labelled("Look of the window", p.look),
-		labelled("Reviewer", p.reviewer),
+		// As wide as the number fields below, clear of the scroll bar.
+		labelled("Reviewer", container.NewBorder(nil, nil, nil, container.New(fixedWidth{unitWidth}), p.reviewer)),
 		sectionHeading("Default review criteria for new designs"),
 	}
 	c := s.settings.Criteria

@@ -21,7 +21,7 @@ type resultsPanel struct {
 	s *session
 
 	verdict   *verdictBanner
-	stale     *fyne.Container
+	stale     *container.ThemeOverride
 	staleText *widget.Label
 
 	list     *findingsList
@@ -36,8 +36,10 @@ type resultsPanel struct {
 	fillTab     *container.TabItem
 	tabs        *container.AppTabs
 	// area holds the findings and, below them, the charts; laid out
-	// again when the number of findings changes.
-	area *fyne.Container
+	// again when the number of findings changes. areaScroll scrolls it
+	// when the window is too short for both.
+	area       *fyne.Container
+	areaScroll *container.Scroll
 
 	// showField, set by the window, brings the design form back and puts
 	// the cursor in the field the problem names.
@@ -51,27 +53,26 @@ func newResultsPanel(s *session) *resultsPanel {
 	r := &resultsPanel{s: s}
 	s.results = r
 	s.changes.subscribe(r.update)
-	r.verdict = newVerdictBanner()
 	r.staleText = widget.NewLabel("")
 	r.staleText.Wrapping = fyne.TextWrapWord
-	r.staleText.TextStyle = fyne.TextStyle{Bold: true}
 	staleBg := canvas.NewRectangle(tint(statusColour(hazards.StatusCaution), 70))
 	show := widget.NewButton("Show the field", func() {
 		if r.showField != nil {
 			r.showField()
 		}
 	})
-	r.stale = container.NewStack(staleBg, container.NewBorder(nil, nil,
-		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText))
+	r.stale = container.NewThemeOverride(container.NewStack(staleBg, container.NewBorder(nil, nil,
+		widget.NewIcon(theme.NewWarningThemedResource(theme.WarningIcon())), container.NewCenter(show), r.staleText)), look.Compact{})
 	r.stale.Hide()
+	r.verdict = newVerdictBanner(r.stale)
 	r.list = newFindingsList()
 	r.list.us = func() bool { return s.units() == unitsUS }
 	r.keys = newKeyNumbers()
 	r.expo = newExposureTable()
 	r.pt, r.conc, r.fill = newChart(), newChart(), newChart()
 	r.tabs = container.NewAppTabs(
-		container.NewTabItem("Pressure against temperature", r.pt),
-		container.NewTabItem("Vapour in the room", r.conc),
+		container.NewTabItem("Pressure", r.pt),
+		container.NewTabItem("Vapour", r.conc),
 		r.newFillTab(),
 		container.NewTabItem("Key numbers", container.NewVScroll(r.keys.object)),
 		container.NewTabItem("Exposure limits", r.expo.object),
@@ -84,17 +85,30 @@ func newResultsPanel(s *session) *resultsPanel {
 	// Every finding is shown without scrolling; the charts take what
 	// height is left.
 	findings := container.NewThemeOverride(r.list.object, look.Dense{})
-	split := container.New(findingsFirst{want: r.list.wantedHeight}, findings, container.New(narrowable{360}, r.tabs))
+	ff := findingsFirst{want: r.list.wantedHeight, width: new(float32)}
+	split := container.New(ff, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
-	r.object = container.NewBorder(container.NewVBox(r.verdict.object, r.stale), nil, nil, nil, split)
+	r.areaScroll = container.NewVScroll(split)
+	split.Layout = findingsFirst{want: ff.want, width: ff.width, resized: r.areaScroll.Refresh}
+	r.object = container.NewBorder(r.verdict.object, nil, nil, nil, r.areaScroll)
 	return r
 }
 
 // update redraws the panel when the results or the units changed, or a
 // document was opened.
 func (r *resultsPanel) update(c change) {
+	if c.cause == causeOpened || c.cause == causeRevision {
+		// Another design or revision: its first fail or caution is
+		// selected, not the criterion selected before, and the findings
+		// are in view.
+		r.list.fresh = true
+		r.areaScroll.ScrollToTop()
+	}
 	if c.cause.reload() || c.cause == causeResults {
 		r.draw()
+	}
+	if c.cause == causeResults {
+		r.list.fresh = false
 	}
 }
 
@@ -111,17 +125,19 @@ func (r *resultsPanel) draw() {
 		if o.assessment == nil {
 			r.staleText.SetText("No results yet. Fix the marked input — " + where + s.problem.Text)
 		} else {
-			r.staleText.SetText("OUT OF DATE: the results below are for the last acceptable inputs. Fix the marked input — " + where + s.problem.Text)
+			r.staleText.SetText("OUT OF DATE: the findings below are for the last acceptable inputs. " + where + s.problem.Text)
 		}
 		r.stale.Show()
+		r.verdict.words.Hide()
 	} else {
 		r.stale.Hide()
+		r.verdict.words.Show()
 	}
 	a := o.assessment
 	if a == nil {
 		r.verdict.clear()
 		r.list.set(nil, true)
-		r.area.Refresh()
+		r.areaScroll.Refresh()
 		r.keys.set(nil, u)
 		r.expo.set(nil)
 		r.pt.set(chartmodel.Chart{Empty: "No results yet."}, false)
@@ -135,7 +151,7 @@ func (r *resultsPanel) draw() {
 	n := len(r.list.rows)
 	r.list.set(orderFindings(a.Findings), stale)
 	if len(r.list.rows) != n {
-		r.area.Refresh()
+		r.areaScroll.Refresh()
 	}
 	r.keys.set(a, u)
 	r.expo.set(a)
@@ -152,7 +168,7 @@ func (r *resultsPanel) draw() {
 
 // newFillTab makes the tab of the fill–temperature map.
 func (r *resultsPanel) newFillTab() *container.TabItem {
-	r.fillTab = container.NewTabItem("Fill and temperature", r.fill)
+	r.fillTab = container.NewTabItem("Fill map", r.fill)
 	return r.fillTab
 }
 
@@ -190,10 +206,15 @@ type verdictBanner struct {
 	word    *canvas.Text
 	counts  *widget.Label
 	note    *widget.Label
-	object  fyne.CanvasObject
+	// words holds the counts and the note; while the inputs are not
+	// acceptable the problem takes their place.
+	words  fyne.CanvasObject
+	object fyne.CanvasObject
 }
 
-func newVerdictBanner() *verdictBanner {
+// newVerdictBanner builds the banner; problem, the box saying which
+// input is not acceptable, takes the place of the counts when shown.
+func newVerdictBanner(problem fyne.CanvasObject) *verdictBanner {
 	v := &verdictBanner{}
 	v.bg = canvas.NewRectangle(tint(statusColour(""), 0))
 	v.bg.CornerRadius = 4
@@ -212,7 +233,10 @@ func newVerdictBanner() *verdictBanner {
 	iconBox := container.New(fixedWidth{44}, v.icon)
 	words := container.New(fixedWidth{150}, container.NewVBox(v.caption, v.word))
 	left := container.NewHBox(iconBox, words)
-	right := container.NewVBox(v.counts, v.note)
+	// The words beside the verdict take the compact theme, so that the
+	// banner leaves the findings as much height as it can.
+	v.words = container.NewThemeOverride(container.NewVBox(v.counts, v.note), look.Compact{})
+	right := container.NewStack(v.words, problem)
 	v.object = container.NewStack(v.bg, container.NewPadded(container.NewBorder(nil, nil, left, nil, right)))
 	return v
 }
@@ -263,7 +287,8 @@ func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
 	alpha := uint8(55)
 	counts := fmt.Sprintf("%d of %d criteria fail, %s, %d pass", fail, len(a.Findings), plural(caution, "caution"), pass)
 	if n := len(a.Findings) - pass - caution - fail; n > 0 {
-		counts += fmt.Sprintf(", %d not assessed — no published limit", n)
+		// Each such row says why (no published limit) when selected.
+		counts += fmt.Sprintf(", %d not assessed", n)
 	}
 	if stale {
 		alpha = 18

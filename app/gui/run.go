@@ -11,10 +11,8 @@ import (
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/app"
-	"fyne.io/fyne/v2/dialog"
 
 	"ullage/assets"
-	"ullage/hazards"
 	"ullage/hazards/designfile"
 )
 
@@ -68,14 +66,11 @@ func Run(args []string) int {
 	default:
 		if openErr != nil {
 			s.showFileProblem("The design file cannot be opened", openErr)
-		} else if ra.show == "" {
+		} else {
 			s.offerRecent()
 			s.offerRecovery()
 		}
 		s.startAutosave(autosavePeriod)
-		if ra.show != "" {
-			go s.whenIdle(func() { s.showScreen(ra.show) })
-		}
 	}
 	w.ShowAndRun()
 	return int(status.Load())
@@ -85,24 +80,19 @@ func Run(args []string) int {
 type runArgs struct {
 	file  string
 	smoke string
-	show  string
 }
 
-// parseRunArgs reads [FILE] [--smoke OUT.pdf] [--show SCREEN].
+// parseRunArgs reads [FILE] [--smoke OUT.pdf].
 func parseRunArgs(args []string) (runArgs, error) {
 	var ra runArgs
 	for i := 0; i < len(args); i++ {
 		switch a := args[i]; a {
-		case "--smoke", "--show":
+		case "--smoke":
 			if i+1 >= len(args) {
 				return ra, fmt.Errorf("%s needs a value", a)
 			}
 			i++
-			if a == "--smoke" {
-				ra.smoke = args[i]
-			} else {
-				ra.show = args[i]
-			}
+			ra.smoke = args[i]
 		default:
 			if len(a) > 1 && a[0] == '-' {
 				return ra, fmt.Errorf("unknown option %q (try: ullage help)", a)
@@ -203,75 +193,4 @@ func (s *session) exportTo(path string) error {
 		_, err := w.Write(buf.Bytes())
 		return err
 	})
-}
-
-// showScreen opens one screen or state, for screenshots of the program.
-func (s *session) showScreen(name string) {
-	sh := s.shell
-	switch name {
-	case "review", "findings":
-	case "pressure":
-		s.results.tabs.SelectIndex(0)
-	case "release":
-		s.results.tabs.SelectIndex(1)
-	case "keys":
-		s.results.tabs.SelectIndex(2)
-	case "fluid", "vessel", "temperatures", "shock", "room", "criteria":
-		s.form.scrollTo(map[string]int{"fluid": 1, "vessel": 2, "temperatures": 3, "shock": 4, "room": 5, "criteria": 6}[name])
-	case "revisions":
-		sh.showRevisions()
-	case "compare":
-		sh.showCompare()
-	case "working":
-		s.working.show(workSubject{criterion: hazards.CriterionBurst})
-	case "keyworking":
-		s.results.tabs.SelectIndex(2)
-		s.working.show(workSubject{keyLabel: "Maximum safe temperature"})
-	case "record":
-		s.working.show(workSubject{criterion: hazards.CriterionBurst})
-		s.working.mode.SetSelected(workingWhole)
-	case "study":
-		sh.showStudy()
-		s.tol.run()
-	case "study-spread":
-		s.revs.openRevision("A")
-		sh.showStudy()
-		s.tol.spread.SetText("5")
-		s.tol.hotDist.SetSelected(distributionNames["triangle"])
-		s.tol.run()
-	case "study-charts":
-		s.revs.openRevision("A")
-		sh.showStudy()
-		s.tol.spread.SetText("5")
-		s.tol.afterRun = func() {
-			go func() {
-				time.Sleep(500 * time.Millisecond)
-				s.opts.post(func() { s.tol.scroll.ScrollToOffset(fyne.NewPos(0, 520)) })
-			}()
-		}
-		s.tol.run()
-	case "preferences":
-		s.showPreferences()
-	case "about":
-		s.showAbout()
-	case "newrev":
-		s.form.byPath["fill_mass_kg"].entry.SetText("20")
-		s.revs.askNewRevision(nil)
-	case "error":
-		s.form.byPath["fill_mass_kg"].entry.SetText("-5")
-	case "typo":
-		s.form.byPath["hottest_k"].entry.SetText("7O")
-	case "failing":
-		s.revs.openRevision("A")
-	case "us":
-		s.setUnits(unitsUS)
-		s.form.scrollTo(2)
-	case "open":
-		s.openDialog()
-	case "unsaved":
-		s.form.byPath["fill_mass_kg"].entry.SetText("20")
-		s.requestClose()
-	default:
-		dialog.ShowInformation("Unknown screen", "No screen called "+name, s.win)
-	}
 }

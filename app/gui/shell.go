@@ -24,6 +24,8 @@ type shell struct {
 	compare *container.TabItem
 	study   *container.TabItem
 	form    fyne.CanvasObject
+	// left holds the design form and, below it while open, the working.
+	left    *container.Split
 	working *workingPanel
 	units   *widget.RadioGroup
 	object  fyne.CanvasObject
@@ -83,7 +85,9 @@ func buildWindow(s *session) *shell {
 	results.keys.onPick = func(r keyRow) { working.show(workSubject{keyLabel: r.label}) }
 
 	sh.form = form.object
-	split := container.NewHSplit(container.NewStack(form.object, working.object), results.object)
+	sh.left = container.NewVSplit(form.object, working.object)
+	sh.left.SetOffset(0.42)
+	split := container.NewHSplit(sh.left, results.object)
 	split.SetOffset(0.44)
 	sh.review = container.NewTabItemWithIcon("Design review", theme.DocumentCreateIcon(), split)
 	sh.revs = container.NewTabItemWithIcon("Revisions", theme.ListIcon(), revs.object)
@@ -229,16 +233,19 @@ func (sh *shell) showRevisions() { sh.tabs.Select(sh.revs) }
 func (sh *shell) showCompare()   { sh.tabs.Select(sh.compare) }
 func (sh *shell) showStudy()     { sh.tabs.Select(sh.study) }
 
-// showWorking puts the working panel in the design form's place.
+// showWorking opens the working panel under the design form, which
+// stays in place.
 func (sh *shell) showWorking() {
 	wp := sh.working
 	wp.open = true
-	sh.form.Hide()
-	wp.object.Show()
+	if !wp.object.Visible() {
+		wp.object.Show()
+		sh.left.Refresh()
+	}
 	sh.showReview()
 }
 
-// hideWorking brings the design form back.
+// hideWorking closes the working panel; the form has the side again.
 func (sh *shell) hideWorking() {
 	wp := sh.working
 	if !wp.open {
@@ -246,7 +253,7 @@ func (sh *shell) hideWorking() {
 	}
 	wp.open = false
 	wp.object.Hide()
-	sh.form.Show()
+	sh.left.Refresh()
 	wp.refresh()
 }
 

@@ -26,6 +26,9 @@ const workingLabelWidth = 104
 // copiedFor is how long the copy button says "Copied".
 const copiedFor = 2 * time.Second
 
+// closeWorking is the button that closes the working panel.
+const closeWorking = "Close the working"
+
 // Choices of what the working panel lists.
 const (
 	workingBehind = "Steps behind this result"
@@ -35,7 +38,7 @@ const (
 // workingPanel shows the working behind a finding or a key number: the
 // numbered steps of the calculation record it rests on, each with its
 // method, equation, substituted values, result and sources. While open
-// it takes the design form's place beside the results.
+// it sits under the design form, beside the results.
 type workingPanel struct {
 	s       *session
 	subject workSubject
@@ -61,8 +64,8 @@ type workingPanel struct {
 	numbers      []int
 	heading      string
 
-	// The window sets these: present puts the panel in the design form's
-	// place and back brings the form again; selectFinding selects a
+	// The window sets these: present opens the panel under the design
+	// form and back closes it; selectFinding selects a
 	// finding in the results, markKey marks a row of the key numbers (""
 	// for none).
 	present, back func()
@@ -75,7 +78,7 @@ func newWorkingPanel(s *session) *workingPanel {
 	wp := &workingPanel{s: s}
 	s.working = wp
 	s.changes.subscribe(wp.update)
-	back := widget.NewButtonWithIcon("Back to the design form", theme.NavigateBackIcon(), func() {
+	back := widget.NewButtonWithIcon(closeWorking, theme.WindowCloseIcon(), func() {
 		if wp.back != nil {
 			wp.back()
 		}

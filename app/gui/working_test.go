@@ -70,8 +70,8 @@ func TestSelectingAFindingKeepsTheFormAndShowsItsWorkingOnRequest(t *testing.T) 
 			}
 			button(t, h.s.results.object, "Show the working").OnTapped()
 			h.idle()
-			if !wp.open || !wp.object.Visible() || h.s.shell.form.Visible() {
-				t.Fatal("the working is not shown in the form's place")
+			if !wp.open || !wp.object.Visible() || !h.s.shell.form.Visible() {
+				t.Fatal("the working is not shown beside the design form")
 			}
 			a := h.s.last.assessment
 			f := fl.rows[i]
@@ -101,9 +101,9 @@ func TestSelectingAFindingKeepsTheFormAndShowsItsWorkingOnRequest(t *testing.T) 
 				}
 			}
 
-			button(t, wp.object, "Back to the design form").OnTapped()
-			if wp.open || !h.s.shell.form.Visible() {
-				t.Error("the design form did not come back")
+			button(t, wp.object, closeWorking).OnTapped()
+			if wp.open || wp.object.Visible() || !h.s.shell.form.Visible() {
+				t.Error("the working did not close, or took the design form with it")
 			}
 		})
 	}

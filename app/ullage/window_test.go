@@ -13,7 +13,7 @@ func TestWindowWithoutDisplay(t *testing.T) {
 	if noDisplay("linux", noEnv) == "" {
 		t.Fatal("no display reported on Linux with DISPLAY unset")
 	}
-	for _, args := range [][]string{nil, {example}, {"--show", "study"}} {
+	for _, args := range [][]string{nil, {example}, {"--smoke", "out.pdf"}} {
 		code, out, errb := runMain(args...)
 		if code != exitNoWindow || out != "" {
 			t.Errorf("ullage %q: status %d, stdout %q; want %d and nothing on stdout", args, code, out, exitNoWindow)
