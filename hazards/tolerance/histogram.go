@@ -77,26 +77,22 @@ func loadedHistogram(factors []float64) Histogram {
 }
 
 // newLogHistogram counts x in HistogramBins bins of equal width in ln x
-// from lo to hi (0 < lo < hi).
+// from lo to hi (0 < lo < hi): the equal bins of the logarithms, their
+// edges turned back into values.
 func newLogHistogram(x []float64, lo, hi float64) Histogram {
-	h := Histogram{Edges: make([]float64, HistogramBins+1), Counts: make([]int, HistogramBins), Log: true}
-	lnLo := math.Log(lo)
-	w := (math.Log(hi) - lnLo) / HistogramBins
-	for i := range h.Edges {
-		h.Edges[i] = math.Exp(lnLo + float64(i)*w)
-	}
-	h.Edges[0], h.Edges[HistogramBins] = lo, hi
-	for _, v := range x {
-		switch {
-		case v < lo:
-			h.Below++
-		case v > hi:
-			h.Above++
-		default:
-			b := min(max(int((math.Log(v)-lnLo)/w), 0), HistogramBins-1)
-			h.Counts[b]++
+	ln := make([]float64, len(x))
+	for i, v := range x {
+		ln[i] = math.Log(v) // v ≤ 0 gives −Inf or NaN: counted below, as v < lo
+		if !(ln[i] >= math.Inf(-1)) {
+			ln[i] = math.Inf(-1)
 		}
 	}
+	h := newHistogram(ln, math.Log(lo), math.Log(hi))
+	for i, e := range h.Edges {
+		h.Edges[i] = math.Exp(e)
+	}
+	h.Edges[0], h.Edges[HistogramBins] = lo, hi
+	h.Log = true
 	return h
 }
 
