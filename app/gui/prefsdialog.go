@@ -122,8 +122,7 @@ func (p *preferencesPanel) read() (settings, error) {
 		}
 		*cp.Get(&c) = x
 	}
-	probe := hazards.Design{Criteria: c}
-	if err := criteriaError(&probe); err != nil {
+	if err := prefs.CriteriaError(c); err != nil {
 		pr := problemOf(err, unitsSI, func(string) (quantity, bool) { return qNumber, false })
 		return st, fmt.Errorf("%s: %s", labelOf(pr.Path), pr.Text)
 	}

@@ -36,7 +36,3 @@ func (s settings) save(p fyne.Preferences) {
 func (s settings) reportOptions() report.Options {
 	return report.Options{Units: string(s.Units), Paper: s.Paper}
 }
-
-// criteriaError validates only the criteria of d, returning the engine's
-// error when one of them is out of range.
-func criteriaError(d *hazards.Design) error { return prefs.CriteriaError(d.Criteria) }
