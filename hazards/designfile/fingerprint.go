@@ -32,10 +32,15 @@ import (
 // changes every fingerprint already printed in a record.
 func (r *Revision) Fingerprint() string {
 	var b bytes.Buffer
+	b.Grow(canonicalSizeHint)
 	writeCanonical(&b, reflect.ValueOf(r.Design))
 	sum := sha256.Sum256(b.Bytes())
 	return hex.EncodeToString(sum[:])
 }
+
+// canonicalSizeHint is a little over the canonical form of a design
+// with a few parts (about 1.5 kB), so that one allocation usually holds it.
+const canonicalSizeHint = 2048
 
 // canonicalJSON returns the canonical form of v, for tests.
 func canonicalJSON(v any) string {
@@ -84,9 +89,9 @@ func writeCanonical(b *bytes.Buffer, v reflect.Value) {
 	case reflect.Float32, reflect.Float64:
 		writeNumber(b, v.Float())
 	case reflect.Int, reflect.Int8, reflect.Int16, reflect.Int32, reflect.Int64:
-		b.WriteString(strconv.FormatInt(v.Int(), 10))
+		b.Write(strconv.AppendInt(b.AvailableBuffer(), v.Int(), 10))
 	case reflect.Uint, reflect.Uint8, reflect.Uint16, reflect.Uint32, reflect.Uint64:
-		b.WriteString(strconv.FormatUint(v.Uint(), 10))
+		b.Write(strconv.AppendUint(b.AvailableBuffer(), v.Uint(), 10))
 	case reflect.Bool:
 		b.WriteString(strconv.FormatBool(v.Bool()))
 	default:
@@ -124,27 +129,41 @@ func writeNumber(b *bytes.Buffer, x float64) {
 	case x == 0:
 		b.WriteByte('0') // also −0
 	default:
-		b.WriteString(strconv.FormatFloat(x, 'g', -1, 64))
+		b.Write(strconv.AppendFloat(b.AvailableBuffer(), x, 'g', -1, 64))
 	}
 }
 
 func writeString(b *bytes.Buffer, s string) {
 	const hexDigits = "0123456789abcdef"
 	b.WriteByte('"')
+	start := 0 // s[start:i] is waiting to be written as it stands
 	for i := 0; i < len(s); {
-		r, size := utf8.DecodeRuneInString(s[i:])
-		i += size
-		switch {
-		case r == '"' || r == '\\':
-			b.WriteByte('\\')
-			b.WriteRune(r)
-		case r < 0x20:
-			b.WriteString(`\u00`)
-			b.WriteByte(hexDigits[r>>4])
-			b.WriteByte(hexDigits[r&0xf])
-		default:
-			b.WriteRune(r) // utf8.RuneError for invalid bytes: U+FFFD
+		c := s[i]
+		if c >= 0x20 && c != '"' && c != '\\' && c < utf8.RuneSelf {
+			i++
+			continue
 		}
+		if c >= utf8.RuneSelf {
+			if r, size := utf8.DecodeRuneInString(s[i:]); r != utf8.RuneError || size > 1 {
+				i += size // valid UTF-8, U+FFFD itself included
+				continue
+			}
+		}
+		b.WriteString(s[start:i])
+		switch {
+		case c == '"' || c == '\\':
+			b.WriteByte('\\')
+			b.WriteByte(c)
+		case c < 0x20:
+			b.WriteString(`\u00`)
+			b.WriteByte(hexDigits[c>>4])
+			b.WriteByte(hexDigits[c&0xf])
+		default:
+			b.WriteRune(utf8.RuneError) // an invalid byte: U+FFFD
+		}
+		i++
+		start = i
 	}
+	b.WriteString(s[start:])
 	b.WriteByte('"')
 }

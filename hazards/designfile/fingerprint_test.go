@@ -1,6 +1,7 @@
 package designfile
 
 import (
+	"bytes"
 	"math"
 	"reflect"
 	"regexp"
@@ -133,5 +134,31 @@ func TestFingerprintsOfFixtureDiffer(t *testing.T) {
 	}
 	if f.Revisions[0].Fingerprint() == f.Revisions[1].Fingerprint() {
 		t.Error("revisions A and B have different designs but the same fingerprint")
+	}
+}
+
+// TestCanonicalStrings checks the text rule of the fingerprint's doc
+// comment case by case: only ", \ and control characters escaped, each
+// invalid byte replaced by U+FFFD, everything else as it stands.
+func TestCanonicalStrings(t *testing.T) {
+	for _, c := range []struct{ in, want string }{
+		{"", `""`},
+		{"plain text", `"plain text"`},
+		{`a"b\c`, `"a\"b\\c"`},
+		{"\x00\x1f\x7f", `"\u0000\u001f` + "\x7f" + `"`},
+		{"tab\tnewline\n", `"tab\u0009newline\u000a"`},
+		{"é ≤ 🙂", `"é ≤ 🙂"`},
+		{"\uFFFD as it stands", `"` + "\uFFFD" + ` as it stands"`},
+		{"\xff", `"` + "\uFFFD" + `"`},
+		{"a\xc3", `"a` + "\uFFFD" + `"`},                   // a cut two-byte sequence
+		{"\xe2\x82x", `"` + "\uFFFD\uFFFD" + `x"`},         // each bad byte on its own
+		{"\xed\xa0\x80", `"` + "\uFFFD\uFFFD\uFFFD" + `"`}, // a surrogate's encoding
+		{"<&>", `"<&>"`},
+	} {
+		var b bytes.Buffer
+		writeString(&b, c.in)
+		if b.String() != c.want {
+			t.Errorf("%q: got %s, want %s", c.in, b.String(), c.want)
+		}
 	}
 }
