@@ -83,6 +83,11 @@ type satMemo struct {
 	liq    []fluids.LiquidIsotherm // len(t) when gas, else nil
 	eos    []fluids.Isotherm
 	hasEOS [3]bool
+	// isotherms, when set (UnitModel.TabulateHottest), prepares the
+	// compressed liquid at the other temperatures of a tolerance study
+	// from a table, within its stated error bound; nil for Assess, which
+	// always prepares it directly.
+	isotherms *fluids.IsothermTable
 }
 
 // newSatMemo works out the saturated states of s at the given
@@ -338,7 +343,7 @@ func (v *sealedVessel) withGasBubble(st VesselState, sat fluids.Saturation) (Ves
 		return v.withGasBubbleBrentOn(st, sat, nrt, &v.sats.liq[i])
 	}
 	var iso fluids.Isotherm
-	if s.PrepareIsotherm(t, &iso) {
+	if v.sats != nil && v.sats.isotherms.Prepare(t, &iso) || s.PrepareIsotherm(t, &iso) {
 		return v.withGasBubbleEOS(st, sat, nrt, &iso)
 	}
 	return v.withGasBubbleBrent(st, sat, nrt)

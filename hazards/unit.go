@@ -109,6 +109,24 @@ func NewUnitModel(d Design, lib *fluids.Library) (*UnitModel, error) {
 	return m, nil
 }
 
+// TabulateHottest lets the model prepare the compressed liquid of a unit
+// with residual gas from a table of the fluid's equation of state
+// (fluids.IsothermTable) when the unit's hottest temperature lies within
+// lo–hi K, instead of from the equation directly: the study's per-unit
+// cost drops by about a fifth, and the unit's pressure moves by at most
+// the table's error bound (about 1e-9 of ρRT in the liquid's pressure,
+// far less in the vessel's, which the bubble's gas sets). It does nothing
+// for a design without residual gas or without a reference equation, or
+// for a range that cannot be tabulated. It is not safe to call while
+// units are being evaluated.
+func (m *UnitModel) TabulateHottest(lo, hi float64) {
+	if !m.sats.gas {
+		return
+	}
+	lo, hi = math.Max(lo, m.sub.MinTemperature()), math.Min(hi, m.sub.CriticalTemperature())
+	m.sats.isotherms = m.sub.NewIsothermTable(lo, hi)
+}
+
 // Substance returns the model's fluid.
 func (m *UnitModel) Substance() *fluids.Substance { return m.sub }
 

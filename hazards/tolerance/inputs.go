@@ -98,6 +98,13 @@ func newPlan(d hazards.Design, m *hazards.UnitModel, nominalStrengthPa float64, 
 	if s.HottestSpreadK > 0 {
 		p.hotVaries = true
 		add(KeyHottest, "hottest temperature", s.HottestDistribution, d.HottestK, s.HottestSpreadK)
+		// A normal spread's ± is 3σ: the table covers 6σ, and the rare
+		// unit beyond it is prepared directly.
+		reach := s.HottestSpreadK
+		if s.HottestDistribution != Uniform && s.HottestDistribution != Triangle {
+			reach *= 2
+		}
+		m.TabulateHottest(d.HottestK-reach, d.HottestK+reach)
 	}
 	k := p.weibullK
 	g1, g2 := math.Gamma(1+1/k), math.Gamma(1+2/k)
