@@ -451,10 +451,8 @@ func (a *Assessment) releaseModel(sub *fluids.Substance) {
 	r.Peak = rel.exposure(PeakAveragingS, exposureS, mm)
 	r.STEL = rel.exposure(15*60, exposureS, mm)
 	r.TWA8h = rel.exposure(8*3600, exposureS, mm)
-	var buf [32]LimitSpec // the limits before evaluation, on the stack
-	specs, notes := appendAppliedLimitSpecs(buf[:0], a.Fluid, d.Criteria)
-	r.Limits = evaluateLimits(specs, rel, exposureS, mm)
-	r.LimitSets, r.LimitNotes = d.Criteria.AppliedLimitSets(), notes
+	r.Limits, r.LimitNotes = appliedLimits(a.Fluid, d.Criteria, rel, exposureS, mm)
+	r.LimitSets = d.Criteria.AppliedLimitSets()
 	if a.Fluid.Flammability.LFLPercent != nil {
 		r.PercentLFL = r.Peak.PPM / (a.Fluid.Flammability.LFLPercent.Value * 1e4) * 100
 	}

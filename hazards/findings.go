@@ -253,8 +253,8 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 		}
 		id, title := exposureCriterion(kind), exposureTitle(kind)
 		gov := -1
-		for i, l := range r.Limits {
-			if l.Kind == kind && l.Governs {
+		for i := range r.Limits {
+			if l := &r.Limits[i]; l.Kind == kind && l.Governs {
 				gov = i
 			}
 		}
@@ -265,10 +265,9 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 			continue
 		}
 		assessed++
-		lim := r.Limits[gov]
-		e := lim.Exposure
-		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
-			limitSource(lim.Name, lim.PPM, "", lim.Source))
+		lim := &r.Limits[gov]
+		e := &lim.Exposure
+		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction, lim.findingSource())
 		if e.Bounded {
 			fd.ValueBound = AtMost
 		}
@@ -281,8 +280,8 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 			avg = named("averaging period", "the peak (highest one-minute average)")
 		}
 		fd.Facts = ar.keep(avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share))
-		for _, l := range r.Limits {
-			if l.Kind == kind && l.Name != lim.Name {
+		for i := range r.Limits {
+			if l := &r.Limits[i]; l.Kind == kind && l.Name != lim.Name {
 				fd.Facts = ar.extend(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
 			}
 		}
