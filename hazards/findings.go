@@ -3,7 +3,6 @@ package hazards
 import (
 	"encoding/json"
 	"math"
-	"slices"
 
 	"ullage/fluids"
 )
@@ -311,42 +310,64 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 	return out
 }
 
+// sortFindings puts the findings in their order (findingRank), keeping
+// the order of those of one rank.
 func sortFindings(fs []Finding) {
-	rank := func(c string) int {
-		switch c {
-		case CriterionUllage:
-			return 0
-		case CriterionUllageWorst:
-			return 1
-		case CriterionBurst:
-			return 2
-		case CriterionBurstWorst:
-			return 3
-		case CriterionFailure:
-			return 4
-		case CriterionImplosion:
-			return 5
-		case CriterionIDLH:
-			return 6
-		case CriterionCeiling:
-			return 7
-		case CriterionSTEL:
-			return 8
-		case CriterionTWA:
-			return 9
-		case CriterionNoLimit:
-			return 11
-		case CriterionFlammability:
-			return 12
-		case CriterionCorrelationUse:
-			return 13
-		}
-		if IsThermalShockCriterion(c) {
-			return 5 // the implosion finding's: kept after it by the stable sort
-		}
-		return 10 // a further exposure kind, after the TWA
+	var rb [32]int
+	ranks := rb[:0]
+	for i := range fs {
+		ranks = append(ranks, findingRank(fs[i].Criterion))
 	}
-	slices.SortStableFunc(fs, func(a, b Finding) int { return rank(a.Criterion) - rank(b.Criterion) })
+	// Insertion sort by rank: stable, and the findings are few and
+	// nearly in order already.
+	for i := 1; i < len(fs); i++ {
+		if ranks[i] >= ranks[i-1] {
+			continue
+		}
+		f, r := fs[i], ranks[i]
+		j := i
+		for ; j > 0 && ranks[j-1] > r; j-- {
+			fs[j], ranks[j] = fs[j-1], ranks[j-1]
+		}
+		fs[j], ranks[j] = f, r
+	}
+}
+
+// findingRank is the place of a criterion's findings in the order of the
+// findings.
+func findingRank(c string) int {
+	switch c {
+	case CriterionUllage:
+		return 0
+	case CriterionUllageWorst:
+		return 1
+	case CriterionBurst:
+		return 2
+	case CriterionBurstWorst:
+		return 3
+	case CriterionFailure:
+		return 4
+	case CriterionImplosion:
+		return 5
+	case CriterionIDLH:
+		return 6
+	case CriterionCeiling:
+		return 7
+	case CriterionSTEL:
+		return 8
+	case CriterionTWA:
+		return 9
+	case CriterionNoLimit:
+		return 11
+	case CriterionFlammability:
+		return 12
+	case CriterionCorrelationUse:
+		return 13
+	}
+	if IsThermalShockCriterion(c) {
+		return 5 // the implosion finding's: kept after it by the stable sort
+	}
+	return 10 // a further exposure kind, after the TWA
 }
 
 // finiteOr replaces a non-finite number by a fallback so that no NaN or

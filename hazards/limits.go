@@ -204,11 +204,14 @@ func findingSource(l *LimitSpec) string {
 }
 
 // limitGroup is a run of limits to evaluate: their specs (the fluid
-// record's when occupational is set) and, when known beforehand (a
-// built-in table's), their findings' sources and step keys.
+// record's when occupational is set), those of the bodies chosen (all
+// when bodies is empty), and, when known beforehand (a built-in table's
+// or a built-in fluid's), their findings' sources and step keys (a key
+// left empty is worked out).
 type limitGroup struct {
 	specs         []LimitSpec
 	sources, keys []string
+	bodies        []string
 	occupational  bool
 }
 
@@ -227,6 +230,15 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 	var sb [8]string
 	for _, set := range cr.appendAppliedLimitSets(sb[:0]) {
 		if set == LimitSetUSOccupational {
+			if p := preparedRecords()[f]; p != nil {
+				groups = append(groups, limitGroup{specs: p.specs, sources: p.sources, keys: p.keys, bodies: cr.LimitBodies})
+				for i := range p.specs {
+					if bodyChosen(p.specs[i].Body, cr.LimitBodies) {
+						n++
+					}
+				}
+				continue
+			}
 			occ = appendLimitSpecs(buf[:0], f, cr.LimitBodies)
 			groups = append(groups, limitGroup{occupational: true})
 			n += len(occ)
@@ -263,6 +275,9 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 		}
 		for k := range specs {
 			s := &specs[k]
+			if !bodyChosen(s.Body, g.bodies) {
+				continue
+			}
 			present := s.present(presentS)
 			avg := s.AveragingS(present)
 			var e Exposure
@@ -281,7 +296,8 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 			r.LimitSpec, r.Exposure, r.Share = *s, e, e.PPM/s.PPM
 			if g.keys != nil {
 				r.StepKey, r.source = g.keys[k], g.sources[k]
-			} else {
+			}
+			if r.StepKey == "" {
 				// Limits of one period share their step and so its key.
 				for j := range i {
 					if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == e.AveragingS {

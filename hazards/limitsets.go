@@ -223,6 +223,34 @@ var preparedTables = sync.OnceValue(func() map[tableKey]*preparedLimits {
 	return m
 })
 
+// preparedRecords holds, for every fluid of the built-in library, the
+// limits of its record from every body (appendLimitSpecs), with their
+// findings' sources and, where the averaging period does not depend on
+// the stay, their step keys (empty where it does); built on first use and
+// only read after, nil when the library does not load.
+var preparedRecords = sync.OnceValue(func() map[*fluids.Fluid]*preparedLimits {
+	lib, err := fluids.Builtin()
+	if err != nil {
+		return nil
+	}
+	m := make(map[*fluids.Fluid]*preparedLimits)
+	for _, sub := range lib.All() {
+		f := sub.Fluid()
+		p := &preparedLimits{specs: appendLimitSpecs(nil, f, nil)}
+		for i := range p.specs {
+			s := &p.specs[i]
+			key := ""
+			if s.ShortestPeriodS == 0 {
+				key = s.stepKey(s.AveragingS(0))
+			}
+			p.sources = append(p.sources, findingSource(s))
+			p.keys = append(p.keys, key)
+		}
+		m[f] = p
+	}
+	return m
+})
+
 // preparedTable returns the prepared limits of fluid f in a built-in
 // table, or nil when the table does not list it or cannot be read.
 func preparedTable(f *fluids.Fluid, set string) *preparedLimits {
