@@ -26,7 +26,12 @@ import (
 // returns tMin, false when rho is denser than the liquid at the freezing
 // point.
 func (s *Substance) bubbleTemperature(rho float64) (float64, bool) {
-	return s.liquid.temperature(rho, s.tMin)
+	c := &s.liquid
+	if c.corr == nil || rho < c.near.rhoRef {
+		return c.temperature(rho, s.tMin)
+	}
+	ends := s.searchEnds()
+	return c.searchTemperature(rho, s.tMin, ends.liquidMin, ends.liquidTop)
 }
 
 // saturatedVapourDensity is Saturation(t).VapourDensity (NaN where
@@ -59,11 +64,18 @@ func (s *Substance) dewTemperature(rho float64) (float64, bool) {
 	if rho >= s.rhoC {
 		return s.tc, true
 	}
-	if s.saturatedVapourDensity(s.tMin) >= rho {
+	ends := s.searchEnds()
+	if ends.vapourMin >= rho {
 		return s.tMin, false
 	}
 	lnRho := math.Log(rho)
 	r, err := solve.Brent(func(t float64) float64 {
+		switch t { // the ends, the same for every density
+		case s.tMin:
+			return math.Log(ends.vapourMin) - lnRho
+		case s.tc:
+			return math.Log(ends.vapourTc) - lnRho
+		}
 		return math.Log(s.saturatedVapourDensity(t)) - lnRho
 	}, s.tMin, s.tc, 1e-9, 200)
 	if err != nil {
