@@ -224,7 +224,6 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 	var notes []LimitNote
 	var gb [8]limitGroup
 	groups := gb[:0]
-	var buf [32]LimitSpec // the fluid record's limits, on the stack
 	var occ []LimitSpec
 	n := 0
 	var sb [8]string
@@ -239,7 +238,7 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 				}
 				continue
 			}
-			occ = appendLimitSpecs(buf[:0], f, cr.LimitBodies)
+			occ = appendLimitSpecs(nil, f, cr.LimitBodies) // a fluid of the reviewer's own
 			groups = append(groups, limitGroup{occupational: true})
 			n += len(occ)
 			continue
@@ -259,11 +258,12 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 		return []LimitResult{}, notes
 	}
 	out := make([]LimitResult, n)
-	// The exposures already worked out, by averaging period and stay:
-	// limits of one period share them.
+	// The exposures already worked out, by averaging period and stay
+	// (and the limit they were worked out for): limits of one period
+	// share them.
 	type seen struct {
 		avg, present float64
-		e            Exposure
+		at           int
 	}
 	var eb [16]seen
 	done := eb[:0]
@@ -280,33 +280,33 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 			}
 			present := s.present(presentS)
 			avg := s.AveragingS(present)
-			var e Exposure
+			r := &out[i]
 			found := false
 			for _, d := range done {
 				if d.avg == avg && d.present == present {
-					e, found = d.e, true
+					r.Exposure, found = out[d.at].Exposure, true
 					break
 				}
 			}
 			if !found {
-				e = rel.exposure(avg, present, molarMass)
-				done = append(done, seen{avg, present, e})
+				r.Exposure = rel.exposure(avg, present, molarMass)
+				done = append(done, seen{avg, present, i})
 			}
-			r := &out[i]
-			r.LimitSpec, r.Exposure, r.Share = *s, e, e.PPM/s.PPM
+			r.LimitSpec = *s
+			r.Share = r.Exposure.PPM / s.PPM
 			if g.keys != nil {
 				r.StepKey, r.source = g.keys[k], g.sources[k]
 			}
 			if r.StepKey == "" {
 				// Limits of one period share their step and so its key.
 				for j := range i {
-					if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == e.AveragingS {
+					if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == r.Exposure.AveragingS {
 						r.StepKey = out[j].StepKey
 						break
 					}
 				}
 				if r.StepKey == "" {
-					r.StepKey = s.stepKey(e.AveragingS)
+					r.StepKey = s.stepKey(r.Exposure.AveragingS)
 				}
 			}
 			i++
