@@ -177,9 +177,34 @@ func (s *Substance) taitPressure(t, rho float64) (float64, Flags) {
 
 // taitSlope is the Tait isochore's slope (∂P/∂T)_ρ by a central difference.
 func (s *Substance) taitSlope(t, rho float64) float64 {
+	lo, hi := s.taitSlopeEnds(t)
+	return s.taitSlopeFrom(lo, hi, rho)
+}
+
+// taitAt is what taitPressure at one temperature takes besides the
+// density: Tait's B, the saturated liquid density and the vapour
+// pressure.
+type taitAt struct{ b, rhoSat, ps float64 }
+
+// taitAtT returns taitAt for temperature t.
+func (s *Substance) taitAtT(t float64) taitAt {
+	ps, _, _ := s.SaturationPressure(t)
+	return taitAt{s.compressed.bParam(t), s.liquidDensity(t), ps}
+}
+
+// taitSlopeEnds returns taitAt at the two temperatures of taitSlope's
+// difference about t.
+func (s *Substance) taitSlopeEnds(t float64) (lo, hi taitAt) {
 	const h = 0.01
-	a, _ := s.taitPressure(math.Max(t-h, s.tMin), rho)
-	b, _ := s.taitPressure(t+h, rho)
+	return s.taitAtT(math.Max(t-h, s.tMin)), s.taitAtT(t + h)
+}
+
+// taitSlopeFrom is taitSlope at density rho from the ends of its
+// difference (taitSlopeEnds): the Tait pressure at the upper end less
+// that at the lower, as taitPressure gives them.
+func (s *Substance) taitSlopeFrom(lo, hi taitAt, rho float64) float64 {
+	b := s.compressed.pressureB(hi.b, rho, hi.rhoSat, hi.ps)
+	a := s.compressed.pressureB(lo.b, rho, lo.rhoSat, lo.ps)
 	return b - a
 }
 
@@ -273,6 +298,19 @@ type LiquidIsotherm struct {
 	// quick says Density may check a strongly compressed state without
 	// SinglePhasePressure's bubble-temperature search (see quickCheck).
 	quick bool
+	// slope holds the ends of taitSlope's difference at t, the same for
+	// every density, worked out on the first quick check.
+	slope struct {
+		once   sync.Once
+		lo, hi taitAt
+	}
+}
+
+// taitSlope is taitSlope(t, rho) at the isotherm's temperature.
+func (li *LiquidIsotherm) taitSlope(rho float64) float64 {
+	s := li.s
+	li.slope.once.Do(func() { li.slope.lo, li.slope.hi = s.taitSlopeEnds(li.t) })
+	return s.taitSlopeFrom(li.slope.lo, li.slope.hi, rho)
 }
 
 // PrepareLiquidIsotherm prepares li for temperature t (K).
@@ -339,7 +377,7 @@ func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error)
 	if b := li.b; p-ps < 0.01*(b+ps) {
 		return rho, fl, nil
 	}
-	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && s.taitSlope(t, rho) > 0 {
+	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && li.taitSlope(rho) > 0 {
 		// SinglePhasePressure(t, ρ) is the Tait pressure at t (taitPressure
 		// with this isotherm's values) and its flags are fl.
 		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
