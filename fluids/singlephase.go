@@ -298,19 +298,15 @@ type LiquidIsotherm struct {
 	// quick says Density may check a strongly compressed state without
 	// SinglePhasePressure's bubble-temperature search (see quickCheck).
 	quick bool
-	// slope holds the ends of taitSlope's difference at t, the same for
-	// every density, worked out on the first quick check.
-	slope struct {
-		once   sync.Once
-		lo, hi taitAt
-	}
+	// slopeLo and slopeHi are the ends of taitSlope's difference at t,
+	// the same for every density, worked out with quick.
+	slopeLo, slopeHi taitAt
 }
 
-// taitSlope is taitSlope(t, rho) at the isotherm's temperature.
+// taitSlope is taitSlope(t, rho) at the isotherm's temperature, for a
+// quick isotherm.
 func (li *LiquidIsotherm) taitSlope(rho float64) float64 {
-	s := li.s
-	li.slope.once.Do(func() { li.slope.lo, li.slope.hi = s.taitSlopeEnds(li.t) })
-	return s.taitSlopeFrom(li.slope.lo, li.slope.hi, rho)
+	return li.s.taitSlopeFrom(li.slopeLo, li.slopeHi, rho)
 }
 
 // PrepareLiquidIsotherm prepares li for temperature t (K).
@@ -326,6 +322,9 @@ func (s *Substance) PrepareLiquidIsotherm(t float64, li *LiquidIsotherm) {
 	li.rhoSat = s.liquidDensity(t)
 	li.b = s.compressed.bParam(t)
 	li.quick = s.liquid.decreasing() && t <= s.liquid.tJoin && t < taitMaxTr*s.tc-1e-6
+	if li.quick {
+		li.slopeLo, li.slopeHi = s.taitSlopeEnds(t)
+	}
 }
 
 // Density returns the density (kg/m³) of the liquid at the isotherm's
