@@ -40,6 +40,22 @@ type Substance struct {
 	// ends holds what the dew and bubble temperature searches find at
 	// the ends of their ranges, the same for every density (searchEnds).
 	ends searchEnds
+	// boiling is the saturated state at the normal boiling point
+	// (NormalBoilingSaturation).
+	boiling struct {
+		once sync.Once
+		sat  Saturation
+		err  error
+	}
+}
+
+// NormalBoilingSaturation returns Saturation at the record's normal
+// boiling point, worked out on the first call: what Saturation gives
+// there.
+func (s *Substance) NormalBoilingSaturation() (Saturation, error) {
+	b := &s.boiling
+	b.once.Do(func() { b.sat, b.err = s.Saturation(s.fluid.NormalBoilingPoint.Value) })
+	return b.sat, b.err
 }
 
 // searchEnds are the saturated vapour density at the freezing point and

@@ -432,7 +432,7 @@ func (a *Assessment) rupture(sub *fluids.Substance) {
 		}
 	}
 	hvapTb := f.HeatOfVaporisation.Value / f.MolarMass.Value
-	if sat, err := sub.Saturation(f.NormalBoilingPoint.Value); err == nil {
+	if sat, err := sub.NormalBoilingSaturation(); err == nil {
 		hvapTb = sat.HeatOfVaporisation
 	}
 	a.Rupture = ruptureEnergy(st, a.VolumeM3, a.Design.AmbientPressurePa, f.NormalBoilingPoint.Value,
