@@ -11,7 +11,9 @@ import (
 	"math/rand/v2"
 	"os"
 	"path/filepath"
+	"runtime"
 	"strings"
+	"sync"
 	"testing"
 
 	"ullage/fluids"
@@ -73,10 +75,10 @@ func assessmentDigest(t *testing.T, d Design, lib *fluids.Library) string {
 	}
 	e := json.NewEncoder(h)
 	if err := e.Encode(a); err != nil {
-		t.Fatalf("%s: the result as JSON: %v", d.Fluid, err)
+		t.Errorf("%s: the result as JSON: %v", d.Fluid, err)
 	}
 	if err := e.Encode(a.Trace()); err != nil {
-		t.Fatalf("%s: the record as JSON: %v", d.Fluid, err)
+		t.Errorf("%s: the record as JSON: %v", d.Fluid, err)
 	}
 	tc := a.vessel.fluid.CriticalTemperature()
 	for _, temp := range []float64{d.ColdestK, (d.ColdestK + d.HottestK) / 2, d.HottestK, tc - 0.5, tc, tc + 0.5, d.HottestK + 40} {
@@ -84,7 +86,7 @@ func assessmentDigest(t *testing.T, d Design, lib *fluids.Library) string {
 		fmt.Fprintf(h, "%v %v\n", err, math.Float64bits(temp))
 		if err == nil {
 			if err := e.Encode(st); err != nil {
-				t.Fatalf("%s: a state as JSON: %v", d.Fluid, err)
+				t.Errorf("%s: a state as JSON: %v", d.Fluid, err)
 			}
 		}
 	}
@@ -105,10 +107,24 @@ func TestAssessDigests(t *testing.T) {
 	lib := testLibrary(t)
 	subs := lib.All()
 	r := rand.New(rand.NewPCG(20261202, 16))
-	got := make([]string, digestDesigns)
-	for i := range got {
-		got[i] = assessmentDigest(t, digestDesign(r, subs[r.IntN(len(subs))]), lib)
+	designs := make([]Design, digestDesigns)
+	for i := range designs {
+		designs[i] = digestDesign(r, subs[r.IntN(len(subs))])
 	}
+	// The designs are drawn in order and assessed on every core.
+	got := make([]string, digestDesigns)
+	var wg sync.WaitGroup
+	workers := runtime.GOMAXPROCS(0)
+	for w := range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := w; i < len(designs); i += workers {
+				got[i] = assessmentDigest(t, designs[i], lib)
+			}
+		}()
+	}
+	wg.Wait()
 	if *updateDigests {
 		if err := os.WriteFile(digestFile, []byte(strings.Join(got, "\n")+"\n"), 0o644); err != nil {
 			t.Fatal(err)
