@@ -245,7 +245,7 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	assessed := 0
 	occupational := cr.appliesOccupational()
-	var kb [8]string
+	var kb [16]string
 	for _, kind := range appendKindsOfLimits(kb[:0], r.Limits) {
 		if IsPublicKind(kind) || !occupational {
 			continue

@@ -312,7 +312,7 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 			i++
 		}
 	}
-	var kb [8]string
+	var kb [16]string
 	for _, k := range appendKindsOfLimits(kb[:0], out) {
 		best := -1
 		for i := range out {
