@@ -246,10 +246,11 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 	assessed := 0
 	occupational := cr.appliesOccupational()
 	var kb [16]string
-	for _, kind := range appendKindsOfLimits(kb[:0], r.Limits) {
-		if IsPublicKind(kind) || !occupational {
-			continue
-		}
+	kinds := kb[:0]
+	if occupational {
+		kinds = appendOccupationalKinds(kinds, r.Limits)
+	}
+	for _, kind := range kinds {
 		id, title := exposureCriterion(kind), exposureTitle(kind)
 		gov := -1
 		for i := range r.Limits {

@@ -312,39 +312,49 @@ func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, mo
 			i++
 		}
 	}
-	var kb [16]string
-	for _, k := range appendKindsOfLimits(kb[:0], out) {
-		best := -1
-		for i := range out {
-			if out[i].Kind == k && (best < 0 || out[i].Share > out[best].Share) {
-				best = i
-			}
-		}
-		if best >= 0 {
-			out[best].Governs = true
-		}
-	}
+	markGoverning(out)
 	return out, notes
 }
 
-// kindsOf returns AveragingKinds followed by any other kind the limits
-// use, in order of first appearance.
-func kindsOf(specs []LimitSpec) []string { return appendKinds(nil, specs) }
-
-// appendKinds appends kindsOf(specs) to kinds.
-func appendKinds(kinds []string, specs []LimitSpec) []string {
-	kinds = append(kinds, AveragingKinds...)
-	for i := range specs {
-		kinds = addKind(kinds, specs[i].Kind)
+// markGoverning marks, within each kind, the limit with the largest
+// share, the first listed on a tie.
+func markGoverning(out []LimitResult) {
+	type best struct {
+		kind string
+		at   int
 	}
-	return kinds
+	var bb [16]best
+	bests := bb[:0]
+	for i := range out {
+		l := &out[i]
+		found := false
+		for j := range bests {
+			if b := &bests[j]; b.kind == l.Kind {
+				if l.Share > out[b.at].Share {
+					b.at = i
+				}
+				found = true
+				break
+			}
+		}
+		if !found {
+			bests = append(bests, best{l.Kind, i})
+		}
+	}
+	for _, b := range bests {
+		out[b.at].Governs = true
+	}
 }
 
-// appendKindsOfLimits is appendKinds for evaluated limits.
-func appendKindsOfLimits(kinds []string, limits []LimitResult) []string {
+// appendOccupationalKinds appends to kinds AveragingKinds followed by
+// every other occupational kind the limits use (the public acute kinds
+// left out), in order of first appearance.
+func appendOccupationalKinds(kinds []string, limits []LimitResult) []string {
 	kinds = append(kinds, AveragingKinds...)
 	for i := range limits {
-		kinds = addKind(kinds, limits[i].Kind)
+		if k := limits[i].Kind; !IsPublicKind(k) {
+			kinds = addKind(kinds, k)
+		}
 	}
 	return kinds
 }
