@@ -80,8 +80,8 @@ type satMemo struct {
 	n      int
 	t      [3]float64
 	sat    [3]fluids.Saturation
-	liq    []fluids.LiquidIsotherm // len(t) when gas, else nil
-	eos    []fluids.Isotherm
+	liq    []fluids.LiquidIsotherm // len(t) when gas on the correlation route, else nil
+	eos    []fluids.Isotherm       // len(t) when gas on the equation of state's route, else nil
 	hasEOS [3]bool
 }
 
@@ -91,8 +91,8 @@ type satMemo struct {
 // liquid there.
 func newSatMemo(s *fluids.Substance, gas bool, temps ...float64) *satMemo {
 	m := &satMemo{gas: gas}
-	if gas {
-		m.liq, m.eos = make([]fluids.LiquidIsotherm, len(m.t)), make([]fluids.Isotherm, len(m.t))
+	if gas && s.HasReferenceEOS() {
+		m.eos = make([]fluids.Isotherm, len(m.t))
 	}
 	for _, t := range temps {
 		if m.n == len(m.t) {
@@ -108,8 +108,11 @@ func newSatMemo(s *fluids.Substance, gas bool, temps ...float64) *satMemo {
 		i := m.n
 		m.t[i], m.sat[i] = t, sat
 		if gas {
-			m.hasEOS[i] = s.PrepareIsotherm(t, &m.eos[i])
+			m.hasEOS[i] = m.eos != nil && s.PrepareIsotherm(t, &m.eos[i])
 			if !m.hasEOS[i] {
+				if m.liq == nil {
+					m.liq = make([]fluids.LiquidIsotherm, len(m.t))
+				}
 				s.PrepareLiquidIsotherm(t, &m.liq[i])
 			}
 		}
