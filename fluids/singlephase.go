@@ -368,7 +368,7 @@ func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error)
 		rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
 		return rho, fl | f2, err
 	}
-	rho := s.compressed.densityB(li.b, math.Max(p, ps), rhoSat, ps)
+	rho := s.compressed.densityB(li.b, max(p, ps), rhoSat, ps)
 	// The closed form holds wherever SinglePhasePressure uses Tait; where
 	// that has handed over to the equation of state, invert it instead.
 	// Within 1 % of (B + Ps) above saturation the liquid is compressed by
@@ -379,10 +379,10 @@ func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error)
 	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && li.taitSlope(rho) > 0 {
 		// SinglePhasePressure(t, ρ) is the Tait pressure at t (taitPressure
 		// with this isotherm's values) and its flags are fl.
-		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*max(p, 1) {
 			return rho, fl, nil
 		}
-	} else if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+	} else if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*max(p, 1) {
 		return rho, fl | f2, nil
 	}
 	if inv, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity()); err == nil {
