@@ -366,6 +366,10 @@ type Isotherm struct {
 	c tauCache
 }
 
+// HasReferenceEOS reports whether the substance's properties come from a
+// reference equation of state (PrepareIsotherm then prepares isotherms).
+func (s *Substance) HasReferenceEOS() bool { return s != nil && s.ref != nil }
+
 // PrepareIsotherm prepares it for temperature t (K) and reports whether
 // the fluid has a reference equation of state; on the correlation route
 // it returns false and leaves it unusable.

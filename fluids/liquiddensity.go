@@ -49,11 +49,28 @@ func (c *liquidDensityCurve) temperature(rho, tMin float64) (float64, bool) {
 	if c.corr == nil || rho < c.near.rhoRef {
 		return c.near.inverse(rho, tMin)
 	}
-	if d, _ := c.density(tMin); rho > d {
+	dMin, _ := c.density(tMin)
+	dTop, _ := c.density(c.tJoin)
+	return c.searchTemperature(rho, tMin, dMin, dTop)
+}
+
+// searchTemperature is temperature's search on the published correlation,
+// given its densities dMin at tMin and dTop at tJoin (the ends, which
+// every search shares).
+func (c *liquidDensityCurve) searchTemperature(rho, tMin, dMin, dTop float64) (float64, bool) {
+	if rho > dMin {
 		return tMin, false
 	}
 	r, err := solve.Brent(func(t float64) float64 {
-		d, _ := c.density(t)
+		var d float64
+		switch t {
+		case tMin:
+			d = dMin
+		case c.tJoin:
+			d = dTop
+		default:
+			d, _ = c.density(t)
+		}
 		return d - rho
 	}, tMin, c.tJoin, 1e-9, 200)
 	if err != nil {

@@ -26,7 +26,12 @@ import (
 // returns tMin, false when rho is denser than the liquid at the freezing
 // point.
 func (s *Substance) bubbleTemperature(rho float64) (float64, bool) {
-	return s.liquid.temperature(rho, s.tMin)
+	c := &s.liquid
+	if c.corr == nil || rho < c.near.rhoRef {
+		return c.temperature(rho, s.tMin)
+	}
+	ends := s.searchEnds()
+	return c.searchTemperature(rho, s.tMin, ends.liquidMin, ends.liquidTop)
 }
 
 // saturatedVapourDensity is Saturation(t).VapourDensity (NaN where
@@ -59,11 +64,18 @@ func (s *Substance) dewTemperature(rho float64) (float64, bool) {
 	if rho >= s.rhoC {
 		return s.tc, true
 	}
-	if s.saturatedVapourDensity(s.tMin) >= rho {
+	ends := s.searchEnds()
+	if ends.vapourMin >= rho {
 		return s.tMin, false
 	}
 	lnRho := math.Log(rho)
 	r, err := solve.Brent(func(t float64) float64 {
+		switch t { // the ends, the same for every density
+		case s.tMin:
+			return math.Log(ends.vapourMin) - lnRho
+		case s.tc:
+			return math.Log(ends.vapourTc) - lnRho
+		}
 		return math.Log(s.saturatedVapourDensity(t)) - lnRho
 	}, s.tMin, s.tc, 1e-9, 200)
 	if err != nil {
@@ -165,9 +177,34 @@ func (s *Substance) taitPressure(t, rho float64) (float64, Flags) {
 
 // taitSlope is the Tait isochore's slope (∂P/∂T)_ρ by a central difference.
 func (s *Substance) taitSlope(t, rho float64) float64 {
+	lo, hi := s.taitSlopeEnds(t)
+	return s.taitSlopeFrom(lo, hi, rho)
+}
+
+// taitAt is what taitPressure at one temperature takes besides the
+// density: Tait's B, the saturated liquid density and the vapour
+// pressure.
+type taitAt struct{ b, rhoSat, ps float64 }
+
+// taitAtT returns taitAt for temperature t.
+func (s *Substance) taitAtT(t float64) taitAt {
+	ps, _, _ := s.SaturationPressure(t)
+	return taitAt{s.compressed.bParam(t), s.liquidDensity(t), ps}
+}
+
+// taitSlopeEnds returns taitAt at the two temperatures of taitSlope's
+// difference about t.
+func (s *Substance) taitSlopeEnds(t float64) (lo, hi taitAt) {
 	const h = 0.01
-	a, _ := s.taitPressure(math.Max(t-h, s.tMin), rho)
-	b, _ := s.taitPressure(t+h, rho)
+	return s.taitAtT(math.Max(t-h, s.tMin)), s.taitAtT(t + h)
+}
+
+// taitSlopeFrom is taitSlope at density rho from the ends of its
+// difference (taitSlopeEnds): the Tait pressure at the upper end less
+// that at the lower, as taitPressure gives them.
+func (s *Substance) taitSlopeFrom(lo, hi taitAt, rho float64) float64 {
+	b := s.compressed.pressureB(hi.b, rho, hi.rhoSat, hi.ps)
+	a := s.compressed.pressureB(lo.b, rho, lo.rhoSat, lo.ps)
 	return b - a
 }
 
@@ -261,6 +298,15 @@ type LiquidIsotherm struct {
 	// quick says Density may check a strongly compressed state without
 	// SinglePhasePressure's bubble-temperature search (see quickCheck).
 	quick bool
+	// slopeLo and slopeHi are the ends of taitSlope's difference at t,
+	// the same for every density, worked out with quick.
+	slopeLo, slopeHi taitAt
+}
+
+// taitSlope is taitSlope(t, rho) at the isotherm's temperature, for a
+// quick isotherm.
+func (li *LiquidIsotherm) taitSlope(rho float64) float64 {
+	return li.s.taitSlopeFrom(li.slopeLo, li.slopeHi, rho)
 }
 
 // PrepareLiquidIsotherm prepares li for temperature t (K).
@@ -276,6 +322,9 @@ func (s *Substance) PrepareLiquidIsotherm(t float64, li *LiquidIsotherm) {
 	li.rhoSat = s.liquidDensity(t)
 	li.b = s.compressed.bParam(t)
 	li.quick = s.liquid.decreasing() && t <= s.liquid.tJoin && t < taitMaxTr*s.tc-1e-6
+	if li.quick {
+		li.slopeLo, li.slopeHi = s.taitSlopeEnds(t)
+	}
 }
 
 // Density returns the density (kg/m³) of the liquid at the isotherm's
@@ -319,7 +368,7 @@ func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error)
 		rho, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity())
 		return rho, fl | f2, err
 	}
-	rho := s.compressed.densityB(li.b, math.Max(p, ps), rhoSat, ps)
+	rho := s.compressed.densityB(li.b, max(p, ps), rhoSat, ps)
 	// The closed form holds wherever SinglePhasePressure uses Tait; where
 	// that has handed over to the equation of state, invert it instead.
 	// Within 1 % of (B + Ps) above saturation the liquid is compressed by
@@ -327,13 +376,13 @@ func (li *LiquidIsotherm) density(p float64, quick bool) (float64, Flags, error)
 	if b := li.b; p-ps < 0.01*(b+ps) {
 		return rho, fl, nil
 	}
-	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && s.taitSlope(t, rho) > 0 {
+	if quick && rho > s.rhoC && rho >= s.liquid.near.rhoRef && !math.IsInf(rho, 0) && li.taitSlope(rho) > 0 {
 		// SinglePhasePressure(t, ρ) is the Tait pressure at t (taitPressure
 		// with this isotherm's values) and its flags are fl.
-		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+		if back := s.compressed.pressureB(li.b, rho, rhoSat, ps); math.Abs(back-p) <= 1e-9*max(p, 1) {
 			return rho, fl, nil
 		}
-	} else if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*math.Max(p, 1) {
+	} else if back, f2, err := s.SinglePhasePressure(t, rho); err == nil && math.Abs(back-p) <= 1e-9*max(p, 1) {
 		return rho, fl | f2, nil
 	}
 	if inv, f2, err := s.invertPressure(t, p, rhoSat, s.maxDensity()); err == nil {

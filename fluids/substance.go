@@ -3,6 +3,7 @@ package fluids
 import (
 	"fmt"
 	"math"
+	"sync"
 
 	"ullage/fluids/solve"
 	"ullage/fluids/units"
@@ -35,6 +36,49 @@ type Substance struct {
 	// from memory): above blendT the mean of liquid and vapour densities
 	// runs on a straight line to the critical density.
 	blendT, diameterAtBlend float64
+
+	// ends holds what the dew and bubble temperature searches find at
+	// the ends of their ranges, the same for every density (searchEnds).
+	ends searchEnds
+	// boiling is the saturated state at the normal boiling point
+	// (NormalBoilingSaturation).
+	boiling struct {
+		once sync.Once
+		sat  Saturation
+		err  error
+	}
+}
+
+// NormalBoilingSaturation returns Saturation at the record's normal
+// boiling point, worked out on the first call: what Saturation gives
+// there.
+func (s *Substance) NormalBoilingSaturation() (Saturation, error) {
+	b := &s.boiling
+	b.once.Do(func() { b.sat, b.err = s.Saturation(s.fluid.NormalBoilingPoint.Value) })
+	return b.sat, b.err
+}
+
+// searchEnds are the saturated vapour density at the freezing point and
+// at Tc, and the saturated liquid density (the published correlation's)
+// at the freezing point and at the correlation's upper end, worked out on
+// first need: each is what the direct call gives.
+type searchEnds struct {
+	once                 sync.Once
+	vapourMin, vapourTc  float64
+	liquidMin, liquidTop float64
+}
+
+// searchEnds returns s's searchEnds, working them out on the first call.
+func (s *Substance) searchEnds() *searchEnds {
+	e := &s.ends
+	e.once.Do(func() {
+		e.vapourMin, e.vapourTc = s.saturatedVapourDensity(s.tMin), s.saturatedVapourDensity(s.tc)
+		if s.liquid.corr != nil {
+			e.liquidMin, _ = s.liquid.density(s.tMin)
+			e.liquidTop, _ = s.liquid.density(s.liquid.tJoin)
+		}
+	})
+	return e
 }
 
 // nearCriticalBlendTr is the reduced temperature above which the vapour

@@ -432,7 +432,7 @@ func (a *Assessment) rupture(sub *fluids.Substance) {
 		}
 	}
 	hvapTb := f.HeatOfVaporisation.Value / f.MolarMass.Value
-	if sat, err := sub.Saturation(f.NormalBoilingPoint.Value); err == nil {
+	if sat, err := sub.NormalBoilingSaturation(); err == nil {
 		hvapTb = sat.HeatOfVaporisation
 	}
 	a.Rupture = ruptureEnergy(st, a.VolumeM3, a.Design.AmbientPressurePa, f.NormalBoilingPoint.Value,
@@ -451,10 +451,8 @@ func (a *Assessment) releaseModel(sub *fluids.Substance) {
 	r.Peak = rel.exposure(PeakAveragingS, exposureS, mm)
 	r.STEL = rel.exposure(15*60, exposureS, mm)
 	r.TWA8h = rel.exposure(8*3600, exposureS, mm)
-	var buf [32]LimitSpec // the limits before evaluation, on the stack
-	specs, notes := appendAppliedLimitSpecs(buf[:0], a.Fluid, d.Criteria)
-	r.Limits = evaluateLimits(specs, rel, exposureS, mm)
-	r.LimitSets, r.LimitNotes = d.Criteria.AppliedLimitSets(), notes
+	r.Limits, r.LimitNotes = appliedLimits(a.Fluid, d.Criteria, rel, exposureS, mm)
+	r.LimitSets = d.Criteria.AppliedLimitSets()
 	if a.Fluid.Flammability.LFLPercent != nil {
 		r.PercentLFL = r.Peak.PPM / (a.Fluid.Flammability.LFLPercent.Value * 1e4) * 100
 	}

@@ -119,13 +119,20 @@ func (a *Assessment) findings() {
 	}
 }
 
+// The sources of the worst-case unit's and the weakest unit's findings:
+// the grounds of their criteria and how the unit is made up.
+var (
+	worstUllageSource = DefaultCriteriaGrounds[CriterionMinUllagePercent] + "; worst case: fill at its upper tolerance, internal volume at its lower (common practice)"
+	weakestUnitSource = DefaultCriteriaGrounds[CriterionMinBurstSafetyFactor] + "; weakest unit: every wall at its thinnest, fill and volume tolerances stacked to raise the pressure (common practice)"
+)
+
 // worstCaseFinding judges the worst-case unit's ullage by the same rule as
 // the nominal unit's.
 func worstCaseFinding(a *Assessment, w *WorstCase, ar *factArena) Finding {
 	d := &a.Design
 	cr := d.Criteria
 	f := atLeast(CriterionUllageWorst, "Ullage at the hottest temperature, worst-case unit", "%", w.Hot.UllagePercent, cr.MinUllagePercent, 1,
-		DefaultCriteriaGrounds[CriterionMinUllagePercent]+"; worst case: fill at its upper tolerance, internal volume at its lower (common practice)")
+		worstUllageSource)
 	f.Margin = (w.Hot.UllagePercent - cr.MinUllagePercent) / 100
 	if f.Status == StatusPass && w.Hot.UllagePercent < cr.MinUllagePercent+ullageCautionPoints {
 		f.Status = StatusCaution
@@ -201,7 +208,7 @@ func worstStrengthFinding(a *Assessment, ws *WorstStrength, ar *factArena) Findi
 	d := &a.Design
 	cr := d.Criteria
 	f := atLeast(CriterionBurstWorst, "Burst safety factor at the hottest temperature, weakest permitted unit", "", ws.SafetyFactor, cr.MinBurstSafetyFactor,
-		safetyFactorCautionBand, DefaultCriteriaGrounds[CriterionMinBurstSafetyFactor]+"; weakest unit: every wall at its thinnest, fill and volume tolerances stacked to raise the pressure (common practice)")
+		safetyFactorCautionBand, weakestUnitSource)
 	f.ValueBound = ws.SafetyFactorBound
 	if ws.OverPa <= 0 {
 		f.Status, f.NotApplicable, f.Value, f.Margin = StatusPass, ReasonNoBurstLoad, 0, 0

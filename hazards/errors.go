@@ -75,6 +75,9 @@ func inRange(x, lo, hi float64) bool { return isFinite(x) && x >= lo && x <= hi 
 
 // number requires lo ≤ x ≤ hi and x finite.
 func (c *checker) number(field string, x, lo, hi float64, unit string) {
+	if x >= lo && x <= hi && isFinite(x) {
+		return // within bounds: nothing to record
+	}
 	first := c.err
 	defer c.rule(first, RuleRange, lo, hi, unit, "")
 	if !isFinite(x) {

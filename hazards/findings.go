@@ -3,7 +3,6 @@ package hazards
 import (
 	"encoding/json"
 	"math"
-	"slices"
 
 	"ullage/fluids"
 )
@@ -246,15 +245,16 @@ func exposureFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	assessed := 0
 	occupational := cr.appliesOccupational()
-	var kb [8]string
-	for _, kind := range appendKindsOfLimits(kb[:0], r.Limits) {
-		if IsPublicKind(kind) || !occupational {
-			continue
-		}
+	var kb [16]string
+	kinds := kb[:0]
+	if occupational {
+		kinds = appendOccupationalKinds(kinds, r.Limits)
+	}
+	for _, kind := range kinds {
 		id, title := exposureCriterion(kind), exposureTitle(kind)
 		gov := -1
-		for i, l := range r.Limits {
-			if l.Kind == kind && l.Governs {
+		for i := range r.Limits {
+			if l := &r.Limits[i]; l.Kind == kind && l.Governs {
 				gov = i
 			}
 		}
@@ -265,10 +265,9 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 			continue
 		}
 		assessed++
-		lim := r.Limits[gov]
-		e := lim.Exposure
-		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction,
-			limitSource(lim.Name, lim.PPM, "", lim.Source))
+		lim := &r.Limits[gov]
+		e := &lim.Exposure
+		fd := atMost(id, title, "ppm", e.PPM, lim.PPM*cr.MaxFractionOfLimit, exposureCautionFraction, lim.findingSource())
 		if e.Bounded {
 			fd.ValueBound = AtMost
 		}
@@ -281,8 +280,8 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 			avg = named("averaging period", "the peak (highest one-minute average)")
 		}
 		fd.Facts = ar.keep(avg, named("where", where), named("governing limit", lim.Name), fact("share of the governing limit", FactPercent, 100*lim.Share))
-		for _, l := range r.Limits {
-			if l.Kind == kind && l.Name != lim.Name {
+		for i := range r.Limits {
+			if l := &r.Limits[i]; l.Kind == kind && l.Name != lim.Name {
 				fd.Facts = ar.extend(fd.Facts, fact("share of "+l.Name, FactPercent, 100*l.Share))
 			}
 		}
@@ -312,42 +311,64 @@ func appendExposureFindings(out []Finding, f *fluids.Fluid, r *Release, cr Crite
 	return out
 }
 
+// sortFindings puts the findings in their order (findingRank), keeping
+// the order of those of one rank.
 func sortFindings(fs []Finding) {
-	rank := func(c string) int {
-		switch c {
-		case CriterionUllage:
-			return 0
-		case CriterionUllageWorst:
-			return 1
-		case CriterionBurst:
-			return 2
-		case CriterionBurstWorst:
-			return 3
-		case CriterionFailure:
-			return 4
-		case CriterionImplosion:
-			return 5
-		case CriterionIDLH:
-			return 6
-		case CriterionCeiling:
-			return 7
-		case CriterionSTEL:
-			return 8
-		case CriterionTWA:
-			return 9
-		case CriterionNoLimit:
-			return 11
-		case CriterionFlammability:
-			return 12
-		case CriterionCorrelationUse:
-			return 13
-		}
-		if IsThermalShockCriterion(c) {
-			return 5 // the implosion finding's: kept after it by the stable sort
-		}
-		return 10 // a further exposure kind, after the TWA
+	var rb [32]int
+	ranks := rb[:0]
+	for i := range fs {
+		ranks = append(ranks, findingRank(fs[i].Criterion))
 	}
-	slices.SortStableFunc(fs, func(a, b Finding) int { return rank(a.Criterion) - rank(b.Criterion) })
+	// Insertion sort by rank: stable, and the findings are few and
+	// nearly in order already.
+	for i := 1; i < len(fs); i++ {
+		if ranks[i] >= ranks[i-1] {
+			continue
+		}
+		f, r := fs[i], ranks[i]
+		j := i
+		for ; j > 0 && ranks[j-1] > r; j-- {
+			fs[j], ranks[j] = fs[j-1], ranks[j-1]
+		}
+		fs[j], ranks[j] = f, r
+	}
+}
+
+// findingRank is the place of a criterion's findings in the order of the
+// findings.
+func findingRank(c string) int {
+	switch c {
+	case CriterionUllage:
+		return 0
+	case CriterionUllageWorst:
+		return 1
+	case CriterionBurst:
+		return 2
+	case CriterionBurstWorst:
+		return 3
+	case CriterionFailure:
+		return 4
+	case CriterionImplosion:
+		return 5
+	case CriterionIDLH:
+		return 6
+	case CriterionCeiling:
+		return 7
+	case CriterionSTEL:
+		return 8
+	case CriterionTWA:
+		return 9
+	case CriterionNoLimit:
+		return 11
+	case CriterionFlammability:
+		return 12
+	case CriterionCorrelationUse:
+		return 13
+	}
+	if IsThermalShockCriterion(c) {
+		return 5 // the implosion finding's: kept after it by the stable sort
+	}
+	return 10 // a further exposure kind, after the TWA
 }
 
 // finiteOr replaces a non-finite number by a fallback so that no NaN or

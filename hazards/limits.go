@@ -70,12 +70,15 @@ func (l LimitSpec) AveragingS(presentS float64) float64 {
 	return l.PeriodS
 }
 
-// averagingDefinitions says how each body defines each averaging period.
-// Keys are body + " " + averaging kind; the kind alone is the fallback.
-var averagingDefinitions = map[string]struct {
+// averagingDef is how a body defines an averaging period.
+type averagingDef struct {
 	shortestS  float64 // for limits defined for "up to" their period
 	definition string
-}{
+}
+
+// averagingDefinitions says how each body defines each averaging period.
+// Keys are body + " " + averaging kind; the kind alone is the fallback.
+var averagingDefinitions = map[string]averagingDef{
 	"NIOSH TWA": {8 * 3600, "NIOSH: TWA concentration for up to a 10-hour workday during a 40-hour workweek (NIOSH Pocket Guide to Chemical Hazards, DHHS (NIOSH) Publication 2005-149, Introduction); averaged over the stay, kept between a conventional 8-hour day and 10 hours (our reading of \"up to\")"},
 	"OSHA TWA":  {0, "OSHA: 8-hour time-weighted average, not to be exceeded in any 8-hour work shift of a 40-hour week (29 CFR 1910.1000, from memory)"},
 	"ACGIH TWA": {0, "ACGIH: TWA concentration for a conventional 8-hour workday and a 40-hour workweek (ACGIH TLVs and BEIs, definitions, from memory)"},
@@ -83,6 +86,17 @@ var averagingDefinitions = map[string]struct {
 	"STEL":      {0, "15-minute TWA (or the period the body states) not to be exceeded at any time during a workday (NIOSH Pocket Guide, Introduction; 29 CFR 1910.1000)"},
 	"ceiling":   {0, "not to be exceeded at any time; where the body states a sampling period, the highest average over that period (NIOSH Pocket Guide, Introduction; 29 CFR 1910.1000(a))"},
 	"IDLH":      {0, "NIOSH IDLH: the concentration from which a person could escape within 30 minutes without escape-impairing or irreversible effects, judged on a 30-minute exposure (NIOSH Pocket Guide, Introduction; NIOSH Current Intelligence Bulletin 66, 2013) (from memory)"},
+}
+
+// averagingDefinition returns the body's definition of an averaging kind
+// from averagingDefinitions, or the kind's own when the body has none.
+func averagingDefinition(body, kind string) averagingDef {
+	var kb [32]byte // the key, built on the stack
+	key := append(append(append(kb[:0], body...), ' '), kind...)
+	if def, ok := averagingDefinitions[string(key)]; ok {
+		return def
+	}
+	return averagingDefinitions[kind]
 }
 
 // LimitSpecs returns every published numeric limit of the fluid from the
@@ -98,10 +112,7 @@ func appendLimitSpecs(out []LimitSpec, f *fluids.Fluid, bodies []string) []Limit
 		if !bodyChosen(l.Body, bodies) {
 			continue
 		}
-		def, ok := averagingDefinitions[l.Body+" "+l.Averaging]
-		if !ok {
-			def = averagingDefinitions[l.Averaging]
-		}
+		def := averagingDefinition(l.Body, l.Averaging)
 		s := LimitSpec{Set: LimitSetUSOccupational, Body: l.Body, Name: l.Label(), Kind: l.Averaging, PPM: l.PPM, Source: l.Source,
 			PeriodS: l.Minutes * 60, Definition: def.definition}
 		if def.shortestS > 0 && def.shortestS < s.PeriodS {
@@ -148,65 +159,202 @@ type LimitResult struct {
 	Governs bool
 	// StepKey names the calculation step of the limit's averaging period.
 	StepKey string
+	// source is the source a finding on the limit prints (findingSource),
+	// when worked out beforehand; empty otherwise.
+	source string
 }
 
-// evaluateLimits evaluates every limit over its own averaging period and
-// marks, within each kind, the one with the largest share (the first
-// listed on a tie).
-func evaluateLimits(specs []LimitSpec, rel *releaseModel, presentS, molarMass float64) []LimitResult {
-	out := make([]LimitResult, len(specs))
-	for i := range specs {
-		s := &specs[i]
-		present, key := presentS, exposureStepKey
-		if s.WholePeriod {
-			present, key = math.Max(s.PeriodS, PeakAveragingS), publicStepKey
+// findingSource returns the source a finding on l prints.
+func (l *LimitResult) findingSource() string {
+	if l.source != "" {
+		return l.source
+	}
+	return findingSource(&l.LimitSpec)
+}
+
+// present returns how long (s) the person judged against l stays, for
+// a room's stay of presentS: a public acute benchmark's whole period
+// (never less than the peak's), any other limit's presentS.
+func (l *LimitSpec) present(presentS float64) float64 {
+	if l.WholePeriod {
+		return math.Max(l.PeriodS, PeakAveragingS)
+	}
+	return presentS
+}
+
+// stepKey returns the key of the calculation step of l's averaging
+// period averagingS: a public acute benchmark's own step, any other
+// limit's exposure step.
+func (l *LimitSpec) stepKey(averagingS float64) string {
+	if l.WholePeriod {
+		return publicStepKey(averagingS)
+	}
+	return exposureStepKey(averagingS)
+}
+
+// findingSource words the source of a finding on limit l (limitSource),
+// with the value's standing for an interim or proposed public acute
+// value.
+func findingSource(l *LimitSpec) string {
+	standing := ""
+	if l.Set == LimitSetUSPublicAcute && (l.Standing == string(fluids.StatusInterim) || l.Standing == string(fluids.StatusProposed)) {
+		standing = l.Standing + " value"
+	}
+	return limitSource(l.Name, l.PPM, standing, l.Source)
+}
+
+// limitGroup is a run of limits to evaluate: their specs (the fluid
+// record's when occupational is set), those of the bodies chosen (all
+// when bodies is empty), and, when known beforehand (a built-in table's
+// or a built-in fluid's), their findings' sources and step keys (a key
+// left empty is worked out).
+type limitGroup struct {
+	specs         []LimitSpec
+	sources, keys []string
+	bodies        []string
+	occupational  bool
+}
+
+// appliedLimits evaluates every limit of the sets the criteria apply
+// (AppliedLimitSpecs, in the same order) over its own averaging period for
+// a stay of presentS, marks within each kind the one with the largest
+// share (the first listed on a tie), and returns them with the notes of
+// the sets that give no number.
+func appliedLimits(f *fluids.Fluid, cr Criteria, rel *releaseModel, presentS, molarMass float64) ([]LimitResult, []LimitNote) {
+	var notes []LimitNote
+	var gb [8]limitGroup
+	groups := gb[:0]
+	var occ []LimitSpec
+	n := 0
+	var sb [8]string
+	for _, set := range cr.appendAppliedLimitSets(sb[:0]) {
+		if set == LimitSetUSOccupational {
+			if p := preparedRecords()[f]; p != nil {
+				groups = append(groups, limitGroup{specs: p.specs, sources: p.sources, keys: p.keys, bodies: cr.LimitBodies})
+				for i := range p.specs {
+					if bodyChosen(p.specs[i].Body, cr.LimitBodies) {
+						n++
+					}
+				}
+				continue
+			}
+			occ = appendLimitSpecs(nil, f, cr.LimitBodies) // a fluid of the reviewer's own
+			groups = append(groups, limitGroup{occupational: true})
+			n += len(occ)
+			continue
 		}
-		e := rel.exposure(s.AveragingS(present), present, molarMass)
-		out[i] = LimitResult{LimitSpec: *s, Exposure: e, Share: e.PPM / s.PPM}
-		// Limits of one period share their step and so its key.
-		for j := range i {
-			if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == e.AveragingS {
-				out[i].StepKey = out[j].StepKey
+		if p := preparedTable(f, set); p != nil {
+			groups = append(groups, limitGroup{specs: p.specs, sources: p.sources, keys: p.keys})
+			n += len(p.specs)
+			notes = append(notes, p.notes...)
+			continue
+		}
+		specs, nt := appendTableLimits(nil, f, set)
+		groups = append(groups, limitGroup{specs: specs})
+		n += len(specs)
+		notes = append(notes, nt...)
+	}
+	if n == 0 {
+		return []LimitResult{}, notes
+	}
+	out := make([]LimitResult, n)
+	// The exposures already worked out, by averaging period and stay
+	// (and the limit they were worked out for): limits of one period
+	// share them.
+	type seen struct {
+		avg, present float64
+		at           int
+	}
+	var eb [16]seen
+	done := eb[:0]
+	i := 0
+	for _, g := range groups {
+		specs := g.specs
+		if g.occupational {
+			specs = occ
+		}
+		for k := range specs {
+			s := &specs[k]
+			if !bodyChosen(s.Body, g.bodies) {
+				continue
+			}
+			present := s.present(presentS)
+			avg := s.AveragingS(present)
+			r := &out[i]
+			found := false
+			for _, d := range done {
+				if d.avg == avg && d.present == present {
+					r.Exposure, found = out[d.at].Exposure, true
+					break
+				}
+			}
+			if !found {
+				r.Exposure = rel.exposure(avg, present, molarMass)
+				done = append(done, seen{avg, present, i})
+			}
+			r.LimitSpec = *s
+			r.Share = r.Exposure.PPM / s.PPM
+			if g.keys != nil {
+				r.StepKey, r.source = g.keys[k], g.sources[k]
+			}
+			if r.StepKey == "" {
+				// Limits of one period share their step and so its key.
+				for j := range i {
+					if out[j].WholePeriod == s.WholePeriod && out[j].Exposure.AveragingS == r.Exposure.AveragingS {
+						r.StepKey = out[j].StepKey
+						break
+					}
+				}
+				if r.StepKey == "" {
+					r.StepKey = s.stepKey(r.Exposure.AveragingS)
+				}
+			}
+			i++
+		}
+	}
+	markGoverning(out)
+	return out, notes
+}
+
+// markGoverning marks, within each kind, the limit with the largest
+// share, the first listed on a tie.
+func markGoverning(out []LimitResult) {
+	type best struct {
+		kind string
+		at   int
+	}
+	var bb [16]best
+	bests := bb[:0]
+	for i := range out {
+		l := &out[i]
+		found := false
+		for j := range bests {
+			if b := &bests[j]; b.kind == l.Kind {
+				if l.Share > out[b.at].Share {
+					b.at = i
+				}
+				found = true
 				break
 			}
 		}
-		if out[i].StepKey == "" {
-			out[i].StepKey = key(e.AveragingS)
+		if !found {
+			bests = append(bests, best{l.Kind, i})
 		}
 	}
-	var kb [8]string
-	for _, k := range appendKinds(kb[:0], specs) {
-		best := -1
-		for i := range out {
-			if out[i].Kind == k && (best < 0 || out[i].Share > out[best].Share) {
-				best = i
-			}
-		}
-		if best >= 0 {
-			out[best].Governs = true
-		}
+	for _, b := range bests {
+		out[b.at].Governs = true
 	}
-	return out
 }
 
-// kindsOf returns AveragingKinds followed by any other kind the limits
-// use, in order of first appearance.
-func kindsOf(specs []LimitSpec) []string { return appendKinds(nil, specs) }
-
-// appendKinds appends kindsOf(specs) to kinds.
-func appendKinds(kinds []string, specs []LimitSpec) []string {
-	kinds = append(kinds, AveragingKinds...)
-	for i := range specs {
-		kinds = addKind(kinds, specs[i].Kind)
-	}
-	return kinds
-}
-
-// appendKindsOfLimits is appendKinds for evaluated limits.
-func appendKindsOfLimits(kinds []string, limits []LimitResult) []string {
+// appendOccupationalKinds appends to kinds AveragingKinds followed by
+// every other occupational kind the limits use (the public acute kinds
+// left out), in order of first appearance.
+func appendOccupationalKinds(kinds []string, limits []LimitResult) []string {
 	kinds = append(kinds, AveragingKinds...)
 	for i := range limits {
-		kinds = addKind(kinds, limits[i].Kind)
+		if k := limits[i].Kind; !IsPublicKind(k) {
+			kinds = addKind(kinds, k)
+		}
 	}
 	return kinds
 }

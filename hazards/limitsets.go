@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
 
 	"ullage/fluids"
 )
@@ -22,9 +23,10 @@ const (
 
 // LimitSetIDs returns every limit set a design may name, in the order the
 // record lists them.
-func LimitSetIDs() []string {
-	return []string{LimitSetUSOccupational, LimitSetUSPublicAcute, LimitSetEUOccupational, LimitSetUKWEL, LimitSetDEAGW}
-}
+func LimitSetIDs() []string { return append([]string(nil), limitSetIDs[:]...) }
+
+// limitSetIDs are the sets of LimitSetIDs, in order; never written.
+var limitSetIDs = [...]string{LimitSetUSOccupational, LimitSetUSPublicAcute, LimitSetEUOccupational, LimitSetUKWEL, LimitSetDEAGW}
 
 // LimitSetName returns a set's name for people.
 func LimitSetName(id string) string {
@@ -52,13 +54,15 @@ var DefaultLimitSets = []string{LimitSetUSOccupational, LimitSetUSPublicAcute}
 
 // AppliedLimitSets returns the limit sets the criteria apply, in
 // LimitSetIDs order: those named, or DefaultLimitSets when none is.
-func (cr Criteria) AppliedLimitSets() []string {
+func (cr Criteria) AppliedLimitSets() []string { return cr.appendAppliedLimitSets(nil) }
+
+// appendAppliedLimitSets appends AppliedLimitSets to out.
+func (cr Criteria) appendAppliedLimitSets(out []string) []string {
 	chosen := cr.LimitSets
 	if len(chosen) == 0 {
 		chosen = DefaultLimitSets
 	}
-	var out []string
-	for _, id := range LimitSetIDs() {
+	for _, id := range limitSetIDs {
 		for _, c := range chosen {
 			if c == id {
 				out = append(out, id)
@@ -138,6 +142,12 @@ func appendTableLimits(specs []LimitSpec, f *fluids.Fluid, set string) ([]LimitS
 		}
 		return specs, []LimitNote{{Set: set, Reason: ReasonNotChecked, Statement: err.Error()}}
 	}
+	return appendSubstanceLimits(specs, sub, set)
+}
+
+// appendSubstanceLimits appends the limits of what one table holds for
+// one fluid (sub, of the given set) to specs, and returns the notes.
+func appendSubstanceLimits(specs []LimitSpec, sub fluids.SubstanceLimits, set string) ([]LimitSpec, []LimitNote) {
 	switch sub.Coverage {
 	case fluids.CoverageNonePublished:
 		return specs, []LimitNote{{Set: set, Reason: ReasonNonePublished, Statement: sub.Statement}}
@@ -160,6 +170,91 @@ func appendTableLimits(specs []LimitSpec, f *fluids.Fluid, set string) ([]LimitS
 		return specs, nil
 	}
 	return appendPublicLimits(specs, sub)
+}
+
+// tableKey names one fluid (by ID) in one built-in table.
+type tableKey struct{ set, fluidID string }
+
+// preparedLimits is what one built-in table gives one fluid, as
+// appendTableLimits gives it, with the words each limit's finding and
+// step are named by: the tables are fixed, so all of it is worked out
+// once for every assessment (preparedTables).
+type preparedLimits struct {
+	specs []LimitSpec
+	notes []LimitNote
+	// sources[i] is the source the finding on specs[i] prints
+	// (findingSource); keys[i] the key of the step of its averaging
+	// period, which for a table's limit does not depend on the stay.
+	sources []string
+	keys    []string
+}
+
+// preparedTables holds preparedLimits for every fluid of every built-in
+// table, built on first use and only read after; nil when the tables do
+// not load (then appendTableLimits says why, for each assessment).
+var preparedTables = sync.OnceValue(func() map[tableKey]*preparedLimits {
+	sets, err := fluids.LimitSets()
+	if err != nil {
+		return nil
+	}
+	m := make(map[tableKey]*preparedLimits)
+	for _, ls := range sets {
+		set := string(ls.ID)
+		for _, sub := range ls.Substances {
+			k := tableKey{set, sub.FluidID}
+			if _, ok := m[k]; ok {
+				continue // the first listed is the one LimitsFor gives
+			}
+			p := &preparedLimits{}
+			p.specs, p.notes = appendSubstanceLimits(nil, sub, set)
+			for i := range p.specs {
+				s := &p.specs[i]
+				if s.ShortestPeriodS != 0 {
+					// A stay-dependent period: never in a table; kept
+					// off the prepared path all the same.
+					return nil
+				}
+				p.sources = append(p.sources, findingSource(s))
+				p.keys = append(p.keys, s.stepKey(s.AveragingS(s.present(0))))
+			}
+			m[k] = p
+		}
+	}
+	return m
+})
+
+// preparedRecords holds, for every fluid of the built-in library, the
+// limits of its record from every body (appendLimitSpecs), with their
+// findings' sources and, where the averaging period does not depend on
+// the stay, their step keys (empty where it does); built on first use and
+// only read after, nil when the library does not load.
+var preparedRecords = sync.OnceValue(func() map[*fluids.Fluid]*preparedLimits {
+	lib, err := fluids.Builtin()
+	if err != nil {
+		return nil
+	}
+	m := make(map[*fluids.Fluid]*preparedLimits)
+	for _, sub := range lib.All() {
+		f := sub.Fluid()
+		p := &preparedLimits{specs: appendLimitSpecs(nil, f, nil)}
+		for i := range p.specs {
+			s := &p.specs[i]
+			key := ""
+			if s.ShortestPeriodS == 0 {
+				key = s.stepKey(s.AveragingS(0))
+			}
+			p.sources = append(p.sources, findingSource(s))
+			p.keys = append(p.keys, key)
+		}
+		m[f] = p
+	}
+	return m
+})
+
+// preparedTable returns the prepared limits of fluid f in a built-in
+// table, or nil when the table does not list it or cannot be read.
+func preparedTable(f *fluids.Fluid, set string) *preparedLimits {
+	return preparedTables()[tableKey{set, f.ID}]
 }
 
 // publicLimits turns the public acute entries into limits: tiers 1 and 2

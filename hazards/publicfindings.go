@@ -32,6 +32,9 @@ func IsPublicCriterion(c string) bool {
 	return false
 }
 
+// publicCriteria are the criteria of the tiers, by tier.
+var publicCriteria = [...]string{1: CriterionPublic1, 2: CriterionPublic2, 3: CriterionPublic3}
+
 var publicTitles = map[int]string{
 	1: "Public: average over each AEGL duration against AEGL-1 / PAC-1 (caution line)",
 	2: "Public: average over each AEGL duration against AEGL-2 / PAC-2 (fail line)",
@@ -62,8 +65,8 @@ func publicFindings(f *fluids.Fluid, r *Release, cr Criteria) []Finding {
 // facts from ar.
 func appendPublicFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteria, ar *factArena) []Finding {
 	any := false
-	for _, l := range r.Limits {
-		any = any || l.Set == LimitSetUSPublicAcute
+	for i := range r.Limits {
+		any = any || r.Limits[i].Set == LimitSetUSPublicAcute
 	}
 	if !any {
 		reason, src := ReasonNonePublished, "US public acute benchmarks (AEGL, DOE PAC): none published for "+f.Name
@@ -77,10 +80,10 @@ func appendPublicFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteri
 			Facts: ar.keep(named("fluid", f.Name))})
 	}
 	for _, tier := range publicTiers {
-		id := "exposure-public-" + strconv.Itoa(tier)
+		id := publicCriteria[tier]
 		gov := -1
-		for i, l := range r.Limits {
-			if l.Set == LimitSetUSPublicAcute && publicTier(l.Kind) == tier && l.Governs {
+		for i := range r.Limits {
+			if l := &r.Limits[i]; l.Set == LimitSetUSPublicAcute && l.Governs && publicTier(l.Kind) == tier {
 				gov = i
 			}
 		}
@@ -95,20 +98,13 @@ func appendPublicFindings(out []Finding, f *fluids.Fluid, r *Release, cr Criteri
 				NotApplicable: reason, Source: src, Protects: publicPopulation})
 			continue
 		}
-		lim := r.Limits[gov]
-		e := lim.Exposure
+		lim := &r.Limits[gov]
+		e := &lim.Exposure
 		limit := lim.PPM
 		if tier != 1 {
 			limit *= cr.MaxFractionOfLimit
 		}
-		standing := lim.Standing
-		if standing == string(fluids.StatusInterim) || standing == string(fluids.StatusProposed) {
-			standing += " value"
-		} else {
-			standing = ""
-		}
-		src := limitSource(lim.Name, lim.PPM, standing, lim.Source)
-		fd := atMost(id, publicTitles[tier], "ppm", e.PPM, limit, 1, src)
+		fd := atMost(id, publicTitles[tier], "ppm", e.PPM, limit, 1, lim.findingSource())
 		if tier == 1 && fd.Status == StatusFail {
 			fd.Status = StatusCaution
 		}

@@ -80,8 +80,8 @@ type satMemo struct {
 	n      int
 	t      [3]float64
 	sat    [3]fluids.Saturation
-	liq    []fluids.LiquidIsotherm // len(t) when gas, else nil
-	eos    []fluids.Isotherm
+	liq    []fluids.LiquidIsotherm // len(t) when gas on the correlation route, else nil
+	eos    []fluids.Isotherm       // len(t) when gas on the equation of state's route, else nil
 	hasEOS [3]bool
 	// isotherms, when set (UnitModel.TabulateHottest), prepares the
 	// compressed liquid at the other temperatures of a tolerance study
@@ -96,8 +96,8 @@ type satMemo struct {
 // liquid there.
 func newSatMemo(s *fluids.Substance, gas bool, temps ...float64) *satMemo {
 	m := &satMemo{gas: gas}
-	if gas {
-		m.liq, m.eos = make([]fluids.LiquidIsotherm, len(m.t)), make([]fluids.Isotherm, len(m.t))
+	if gas && s.HasReferenceEOS() {
+		m.eos = make([]fluids.Isotherm, len(m.t))
 	}
 	for _, t := range temps {
 		if m.n == len(m.t) {
@@ -113,8 +113,11 @@ func newSatMemo(s *fluids.Substance, gas bool, temps ...float64) *satMemo {
 		i := m.n
 		m.t[i], m.sat[i] = t, sat
 		if gas {
-			m.hasEOS[i] = s.PrepareIsotherm(t, &m.eos[i])
+			m.hasEOS[i] = m.eos != nil && s.PrepareIsotherm(t, &m.eos[i])
 			if !m.hasEOS[i] {
+				if m.liq == nil {
+					m.liq = make([]fluids.LiquidIsotherm, len(m.t))
+				}
 				s.PrepareLiquidIsotherm(t, &m.liq[i])
 			}
 		}
@@ -581,26 +584,32 @@ func (v *sealedVessel) withoutBubble(st VesselState, sat fluids.Saturation) (Ves
 }
 
 // residualMemo keeps the values of a residual already evaluated, by the
-// exact argument, with the flags that came with them.
+// exact argument, with the flags that came with them: a small table
+// addressed by the argument's bits, where a later value takes the place
+// of an earlier one of the same slot. The residual is a pure function, so
+// a value not found is worked out again, to the same result.
 type residualMemo struct {
-	n  int
-	x  [24]float64
-	r  [24]float64
-	fl [24]fluids.Flags
+	filled uint32 // the slots holding a value, one bit each
+	x      [32]float64
+	r      [32]float64
+	fl     [32]fluids.Flags
+}
+
+// residualSlot is the slot of argument x: the top five bits of its bits
+// multiplied by an odd constant (Fibonacci hashing, from memory).
+func residualSlot(x float64) uint {
+	return uint((math.Float64bits(x) * 0x9e3779b97f4a7c15) >> 59)
 }
 
 func (m *residualMemo) find(x float64) (float64, fluids.Flags, bool) {
-	for i := m.n - 1; i >= 0; i-- {
-		if m.x[i] == x {
-			return m.r[i], m.fl[i], true
-		}
+	if i := residualSlot(x); m.filled&(1<<i) != 0 && m.x[i] == x {
+		return m.r[i], m.fl[i], true
 	}
 	return 0, 0, false
 }
 
 func (m *residualMemo) add(x, r float64, fl fluids.Flags) {
-	if m.n < len(m.x) {
-		m.x[m.n], m.r[m.n], m.fl[m.n] = x, r, fl
-		m.n++
-	}
+	i := residualSlot(x)
+	m.x[i], m.r[i], m.fl[i] = x, r, fl
+	m.filled |= 1 << i
 }

@@ -84,7 +84,7 @@ func Brent(f func(float64) float64, lo, hi, tol float64, maxEval int) (Root, err
 				q = -q
 			}
 			p = math.Abs(p)
-			if 2*p < math.Min(3*xm*q-math.Abs(tol1*q), math.Abs(e*q)) {
+			if 2*p < min(3*xm*q-math.Abs(tol1*q), math.Abs(e*q)) {
 				e = d
 				d = p / q
 			} else {
