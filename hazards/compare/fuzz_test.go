@@ -25,8 +25,10 @@ func FuzzCompare(f *testing.F) {
 	if err != nil {
 		f.Fatal(err)
 	}
+	base := overfilledBulb() // read once: each input changes a copy
 	f.Fuzz(func(t *testing.T, fill, od, wall, hot float64, labelA, labelB string, drop, swap bool) {
-		d := overfilledBulb()
+		d := base
+		d.Vessel.Parts = append([]hazards.Part(nil), base.Vessel.Parts...)
 		d.FillMassKg = fill
 		d.Vessel.Parts[0].OuterDiameterM, d.Vessel.Parts[0].WallThicknessM = od, wall
 		d.HottestK = hot
