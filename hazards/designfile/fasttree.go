@@ -13,12 +13,36 @@ import "unicode/utf8"
 type fastTree struct {
 	data []byte
 	i    int
+	// text is data as one string: every key, string and number literal
+	// of the tree is a piece of it, so that none needs an allocation.
+	text string
+	// members and elems are stacks of the objects and lists being read:
+	// each one's entries are copied out once, at its exact length, when
+	// it closes.
+	members []member
+	elems   []*node
+	// slab hands out nodes a block at a time.
+	slab []node
+}
+
+// slabNodes is how many nodes are allocated together.
+const slabNodes = 32
+
+// newNode returns a node from the slab.
+func (p *fastTree) newNode(k kind, offset int) *node {
+	if len(p.slab) == cap(p.slab) {
+		p.slab = make([]node, 0, slabNodes)
+	}
+	p.slab = p.slab[:len(p.slab)+1]
+	n := &p.slab[len(p.slab)-1]
+	n.kind, n.offset = k, int64(offset)
+	return n
 }
 
 // parseFast returns the tree of data, or ok false when jsonTree must
 // parse it.
 func parseFast(data []byte) (root *node, ok bool) {
-	p := &fastTree{data: data}
+	p := &fastTree{data: data, text: string(data)}
 	root, ok = p.value(0)
 	if !ok {
 		return nil, false
@@ -50,30 +74,36 @@ func (p *fastTree) value(depth int) (*node, bool) {
 			return nil, false
 		}
 		p.i++
-		n := &node{kind: kindObject, offset: int64(p.i)}
+		n := p.newNode(kindObject, p.i)
 		return n, p.object(n, depth)
 	case c == '[':
 		if depth >= maxDepth {
 			return nil, false
 		}
 		p.i++
-		n := &node{kind: kindArray, offset: int64(p.i)}
+		n := p.newNode(kindArray, p.i)
 		return n, p.array(n, depth)
 	case c == '"':
 		s, ok := p.str()
-		return &node{kind: kindString, offset: int64(p.i), text: s}, ok
+		n := p.newNode(kindString, p.i)
+		n.text = s
+		return n, ok
 	case c == '-' || (c >= '0' && c <= '9'):
 		start := p.i
 		if !p.number() {
 			return nil, false
 		}
-		return &node{kind: kindNumber, offset: int64(p.i), text: string(p.data[start:p.i])}, true
+		n := p.newNode(kindNumber, p.i)
+		n.text = p.text[start:p.i]
+		return n, true
 	case p.word("true"):
-		return &node{kind: kindBool, offset: int64(p.i), boolean: true}, true
+		n := p.newNode(kindBool, p.i)
+		n.boolean = true
+		return n, true
 	case p.word("false"):
-		return &node{kind: kindBool, offset: int64(p.i)}, true
+		return p.newNode(kindBool, p.i), true
 	case p.word("null"):
-		return &node{kind: kindNull, offset: int64(p.i)}, true
+		return p.newNode(kindNull, p.i), true
 	}
 	return nil, false
 }
@@ -93,6 +123,8 @@ func (p *fastTree) object(n *node, depth int) bool {
 		p.i++
 		return true
 	}
+	mark := len(p.members)
+	defer func() { p.members = p.members[:mark] }()
 	for {
 		p.blank()
 		if p.i >= len(p.data) || p.data[p.i] != '"' {
@@ -103,7 +135,7 @@ func (p *fastTree) object(n *node, depth int) bool {
 			return false
 		}
 		off := int64(p.i)
-		for _, m := range n.members {
+		for _, m := range p.members[mark:] {
 			if m.key == key {
 				return false // jsonTree names both lines
 			}
@@ -117,7 +149,7 @@ func (p *fastTree) object(n *node, depth int) bool {
 		if !ok {
 			return false
 		}
-		n.members = append(n.members, member{key: key, offset: off, value: v})
+		p.members = append(p.members, member{key: key, offset: off, value: v})
 		p.blank()
 		if p.i >= len(p.data) {
 			return false
@@ -127,6 +159,7 @@ func (p *fastTree) object(n *node, depth int) bool {
 			p.i++
 		case '}':
 			p.i++
+			n.members = append([]member(nil), p.members[mark:]...)
 			return true
 		default:
 			return false
@@ -140,12 +173,14 @@ func (p *fastTree) array(n *node, depth int) bool {
 		p.i++
 		return true
 	}
+	mark := len(p.elems)
+	defer func() { p.elems = p.elems[:mark] }()
 	for {
 		v, ok := p.value(depth + 1)
 		if !ok {
 			return false
 		}
-		n.elems = append(n.elems, v)
+		p.elems = append(p.elems, v)
 		p.blank()
 		if p.i >= len(p.data) {
 			return false
@@ -155,6 +190,7 @@ func (p *fastTree) array(n *node, depth int) bool {
 			p.i++
 		case ']':
 			p.i++
+			n.elems = append([]*node(nil), p.elems[mark:]...)
 			return true
 		default:
 			return false
@@ -171,7 +207,7 @@ func (p *fastTree) str() (string, bool) {
 		case c == '"':
 			b := p.data[start:j]
 			p.i = j + 1
-			return string(b), utf8.Valid(b)
+			return p.text[start:j], utf8.Valid(b)
 		case c == '\\' || c < 0x20:
 			return "", false
 		}
