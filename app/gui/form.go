@@ -298,7 +298,6 @@ func indented(o fyne.CanvasObject) fyne.CanvasObject {
 
 // labelled places a widget in the entry column with a label on the left.
 func labelled(label string, o fyne.CanvasObject) fyne.CanvasObject {
-	l := widget.NewLabel(label)
-	l.Truncation = fyne.TextTruncateEllipsis
+	l := newFitLabel(label, fyne.TextStyle{})
 	return container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}, l), nil, o)
 }

@@ -204,8 +204,8 @@ type verdictBanner struct {
 	icon    *widget.Icon
 	caption *canvas.Text
 	word    *canvas.Text
-	counts  *widget.Label
-	note    *widget.Label
+	counts  *fitLabel
+	note    *fitLabel
 	// words holds the counts and the note; while the inputs are not
 	// acceptable the problem takes their place.
 	words  fyne.CanvasObject
@@ -225,11 +225,8 @@ func newVerdictBanner(problem fyne.CanvasObject) *verdictBanner {
 	v.word = canvas.NewText("—", statusColour(""))
 	v.word.TextSize = 28
 	v.word.TextStyle = fyne.TextStyle{Bold: true}
-	v.counts = widget.NewLabel("")
-	v.counts.TextStyle = fyne.TextStyle{Bold: true}
-	v.counts.Truncation = fyne.TextTruncateEllipsis
-	v.note = widget.NewLabel("")
-	v.note.Truncation = fyne.TextTruncateEllipsis
+	v.counts = newFitLabel("", fyne.TextStyle{Bold: true})
+	v.note = newFitLabel("", fyne.TextStyle{})
 	iconBox := container.New(fixedWidth{44}, v.icon)
 	words := container.New(fixedWidth{150}, container.NewVBox(v.caption, v.word))
 	left := container.NewHBox(iconBox, words)

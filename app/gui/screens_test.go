@@ -311,6 +311,8 @@ func describe(o fyne.CanvasObject) string {
 	switch x := o.(type) {
 	case *widget.Label:
 		return fmt.Sprintf("label %q", x.Text)
+	case *fitLabel:
+		return fmt.Sprintf("label %q", x.Text)
 	case *widget.Button:
 		if x.Text == "" && x.Icon != nil {
 			return fmt.Sprintf("button %s", x.Icon.Name())
