@@ -4,6 +4,7 @@ import (
 	"image"
 	"image/color"
 	"math"
+	"reflect"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
@@ -14,12 +15,16 @@ import (
 )
 
 // chart shows a chart description, drawn by the chart model into an
-// image the size of the widget whenever it is laid out or changed.
+// image the size of the widget whenever it is changed or laid out at
+// another size.
 type chart struct {
 	widget.BaseWidget
 	spec chartmodel.Chart
 	// faded draws the chart washed out, for results that are out of date.
 	faded bool
+	// gen counts the descriptions set, so that the renderer can tell a
+	// chart it has drawn already.
+	gen uint64
 }
 
 // newChart returns an empty chart.
@@ -29,9 +34,14 @@ func newChart() *chart {
 	return c
 }
 
-// set replaces what the chart draws.
+// set replaces what the chart draws; the same description again (new
+// results that chart alike) leaves the chart as it is.
 func (c *chart) set(spec chartmodel.Chart, faded bool) {
+	if c.gen > 0 && faded == c.faded && reflect.DeepEqual(spec, c.spec) {
+		return
+	}
 	c.spec, c.faded = spec, faded
+	c.gen++
 	c.Refresh()
 }
 
@@ -47,6 +57,18 @@ type chartRenderer struct {
 	c    *chart
 	img  *canvas.Image
 	size fyne.Size
+	// drawn is what the image shows; a refresh or layout that would draw
+	// the same again keeps it.
+	drawn chartDrawn
+}
+
+// chartDrawn is what a chart's image was drawn from: the description,
+// the size in pixels, the resolution and the colours.
+type chartDrawn struct {
+	gen    uint64
+	w, h   int
+	dpi    float64
+	fg, bg color.Color
 }
 
 func (r *chartRenderer) Destroy() {}
@@ -62,19 +84,22 @@ func (r *chartRenderer) Layout(size fyne.Size) {
 }
 
 func (r *chartRenderer) Refresh() {
-	r.draw()
-	canvas.Refresh(r.img)
+	if r.draw() {
+		canvas.Refresh(r.img)
+	}
 }
 
 // chartDPI is the resolution charts are drawn at for one Fyne unit per
 // pixel: 11-unit text in the window is drawn as 8-point text.
 const chartDPI = 96
 
-func (r *chartRenderer) draw() {
+// draw draws the chart into the image, unless it is hidden or the image
+// shows it already, and reports whether it drew.
+func (r *chartRenderer) draw() bool {
 	if !r.c.Visible() {
 		// A chart on a tab behind the others is drawn when its tab is
 		// brought forward: showing it refreshes it.
-		return
+		return false
 	}
 	size := r.size
 	if size.Width < 10 || size.Height < 10 {
@@ -86,7 +111,7 @@ func (r *chartRenderer) draw() {
 	}
 	w, h := int(math.Round(float64(size.Width*scale))), int(math.Round(float64(size.Height*scale)))
 	if w < 2 || h < 2 {
-		return
+		return false
 	}
 	th := r.c.Theme()
 	v := fyne.CurrentApp().Settings().ThemeVariant()
@@ -98,7 +123,13 @@ func (r *chartRenderer) draw() {
 	if r.c.faded {
 		o.Foreground = fade(o.Foreground, o.Background)
 	}
-	r.img.Image = chartmodel.Image(r.c.spec, w, h, chartDPI*float64(scale), o)
+	d := chartDrawn{gen: r.c.gen, w: w, h: h, dpi: chartDPI * float64(scale), fg: o.Foreground, bg: o.Background}
+	if d == r.drawn {
+		return false
+	}
+	r.drawn = d
+	r.img.Image = chartmodel.Image(r.c.spec, w, h, d.dpi, o)
+	return true
 }
 
 // fade mixes a colour halfway to the ground, for out-of-date results.

@@ -9,6 +9,8 @@ import (
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/test"
+
+	"ullage/report/chartmodel"
 )
 
 var chartPNGs = flag.String("chart-png", "", "write the window's charts as PNGs into this folder, to look at")
@@ -55,6 +57,39 @@ func TestChartCaptures(t *testing.T) {
 				t.Fatal(err)
 			}
 			f.Close()
+		}
+	}
+}
+
+// A chart draws its image again when its description, its fading or its
+// size changes, and keeps the image when it is set to the same
+// description again or refreshed.
+func TestChartDrawsAgainOnlyWhenSomethingChanged(t *testing.T) {
+	line := func(y float64) chartmodel.Chart {
+		return chartmodel.Chart{Series: []chartmodel.Series{{Name: "p", X: []float64{0, 1}, Y: []float64{0, y}}}}
+	}
+	c := newChart()
+	w := test.NewTempWindow(t, c)
+	w.Resize(fyne.NewSize(400, 240))
+	c.set(line(1), false)
+	r := test.WidgetRenderer(c).(*chartRenderer)
+	steps := []struct {
+		what   string
+		do     func()
+		redraw bool
+	}{
+		{"the same description again", func() { c.set(line(1), false) }, false},
+		{"a refresh", func() { c.Refresh() }, false},
+		{"another description", func() { c.set(line(2), false) }, true},
+		{"the same description faded", func() { c.set(line(2), true) }, true},
+		{"another size", func() { w.Resize(fyne.NewSize(420, 240)) }, true},
+		{"the same size again", func() { w.Resize(fyne.NewSize(420, 240)) }, false},
+	}
+	for _, s := range steps {
+		before := r.img.Image
+		s.do()
+		if got := r.img.Image != before; got != s.redraw {
+			t.Errorf("after %s: drawn again %v, want %v", s.what, got, s.redraw)
 		}
 	}
 }
