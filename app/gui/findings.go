@@ -353,7 +353,9 @@ func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 	if fl.selected < 0 && len(fs) > 0 {
 		fl.selected = 0
 	}
-	fl.list.Refresh()
+	// The table is laid out again for the new rows' widths: the heading
+	// and the rows may change between one and two lines of columns.
+	fl.object.Refresh()
 	fl.quiet = true
 	if fl.selected >= 0 {
 		fl.list.Select(fl.selected)

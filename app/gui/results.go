@@ -88,7 +88,7 @@ func newResultsPanel(s *session) *resultsPanel {
 	ff := findingsFirst{want: r.list.wantedHeight, width: new(float32)}
 	split := container.New(ff, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
-	r.areaScroll = container.NewVScroll(split)
+	r.areaScroll = container.NewVScroll(newRelaidBox(split))
 	split.Layout = findingsFirst{want: ff.want, width: ff.width, resized: r.areaScroll.Refresh}
 	r.object = container.NewBorder(r.verdict.object, nil, nil, nil, r.areaScroll)
 	return r
