@@ -22,9 +22,20 @@ type chart struct {
 	spec chartmodel.Chart
 	// faded draws the chart washed out, for results that are out of date.
 	faded bool
-	// gen counts the descriptions set, so that the renderer can tell a
-	// chart it has drawn already.
-	gen uint64
+	// gen numbers the descriptions set, so that the renderer can tell a
+	// chart it has drawn already; gens counts them.
+	gen, gens uint64
+	// before is the description shown last before this one. Going back
+	// to it (the same results again after "No results yet" while a
+	// design opens or an input is mistyped) shows its image again.
+	before chartShown
+}
+
+// chartShown is a description a chart showed.
+type chartShown struct {
+	spec  chartmodel.Chart
+	faded bool
+	gen   uint64
 }
 
 // newChart returns an empty chart.
@@ -40,8 +51,14 @@ func (c *chart) set(spec chartmodel.Chart, faded bool) {
 	if c.gen > 0 && faded == c.faded && reflect.DeepEqual(spec, c.spec) {
 		return
 	}
-	c.spec, c.faded = spec, faded
-	c.gen++
+	now := chartShown{c.spec, c.faded, c.gen}
+	if b := c.before; b.gen > 0 && faded == b.faded && reflect.DeepEqual(spec, b.spec) {
+		c.spec, c.faded, c.gen = b.spec, b.faded, b.gen
+	} else {
+		c.gens++
+		c.spec, c.faded, c.gen = spec, faded, c.gens
+	}
+	c.before = now
 	c.Refresh()
 }
 
@@ -58,8 +75,10 @@ type chartRenderer struct {
 	img  *canvas.Image
 	size fyne.Size
 	// drawn is what the image shows; a refresh or layout that would draw
-	// the same again keeps it.
-	drawn chartDrawn
+	// the same again keeps it. kept is the image drawn before, and what
+	// it shows.
+	drawn, kept chartDrawn
+	keptImg     image.Image
 }
 
 // chartDrawn is what a chart's image was drawn from: the description,
@@ -124,9 +143,15 @@ func (r *chartRenderer) draw() bool {
 		o.Foreground = fade(o.Foreground, o.Background)
 	}
 	d := chartDrawn{gen: r.c.gen, w: w, h: h, dpi: chartDPI * float64(scale), fg: o.Foreground, bg: o.Background}
-	if d == r.drawn {
+	switch d {
+	case r.drawn:
 		return false
+	case r.kept:
+		r.drawn, r.kept = r.kept, r.drawn
+		r.img.Image, r.keptImg = r.keptImg, r.img.Image
+		return true
 	}
+	r.kept, r.keptImg = r.drawn, r.img.Image
 	r.drawn = d
 	r.img.Image = chartmodel.Image(r.c.spec, w, h, d.dpi, o)
 	return true

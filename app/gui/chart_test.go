@@ -5,6 +5,7 @@ import (
 	"image/png"
 	"os"
 	"path/filepath"
+	"reflect"
 	"testing"
 
 	"fyne.io/fyne/v2"
@@ -91,5 +92,29 @@ func TestChartDrawsAgainOnlyWhenSomethingChanged(t *testing.T) {
 		if got := r.img.Image != before; got != s.redraw {
 			t.Errorf("after %s: drawn again %v, want %v", s.what, got, s.redraw)
 		}
+	}
+
+	// Back to the description shown before: its image comes back, and
+	// shows what a chart drawn afresh shows.
+	c.set(line(3), false)
+	three := r.img.Image
+	c.set(chartmodel.Chart{Empty: "No results yet."}, false)
+	if r.img.Image == three {
+		t.Fatal("an empty chart kept the image of the one before")
+	}
+	c.set(line(3), false)
+	if r.img.Image != three {
+		t.Error("the description shown before was drawn again")
+	}
+	fresh := newChart()
+	fw := test.NewTempWindow(t, fresh)
+	fw.Resize(fyne.NewSize(420, 240))
+	fresh.set(line(3), false)
+	if !reflect.DeepEqual(test.WidgetRenderer(fresh).(*chartRenderer).img.Image, three) {
+		t.Error("the image shown again differs from the chart drawn afresh")
+	}
+	c.set(line(4), false)
+	if r.img.Image == three {
+		t.Error("a new description kept the image of the one before")
 	}
 }
