@@ -25,10 +25,16 @@ type chart struct {
 	// gen numbers the descriptions set, so that the renderer can tell a
 	// chart it has drawn already; gens counts them.
 	gen, gens uint64
-	// before is the description shown last before this one. Going back
-	// to it (the same results again after "No results yet" while a
-	// design opens or an input is mistyped) shows its image again.
-	before chartShown
+	// recent are the descriptions shown last, the one on screen first.
+	// Going back to one of them (the same results again after "No
+	// results yet" while a design opens or an input is mistyped) shows
+	// its image again if the renderer still has it.
+	recent []chartShown
+	// held keeps the chart from drawing until the next set: the results
+	// panel lays out again for new findings before it sets the charts
+	// of the new results, and the chart of the old results at the new
+	// size would be drawn for nothing.
+	held bool
 }
 
 // chartShown is a description a chart showed.
@@ -48,17 +54,26 @@ func newChart() *chart {
 // set replaces what the chart draws; the same description again (new
 // results that chart alike) leaves the chart as it is.
 func (c *chart) set(spec chartmodel.Chart, faded bool) {
-	if c.gen > 0 && faded == c.faded && reflect.DeepEqual(spec, c.spec) {
-		return
+	held := c.held
+	c.held = false
+	for i, k := range c.recent {
+		if k.faded == faded && reflect.DeepEqual(k.spec, spec) {
+			if i == 0 {
+				if held {
+					c.Refresh()
+				}
+				return
+			}
+			copy(c.recent[1:i+1], c.recent[:i])
+			c.recent[0] = k
+			c.spec, c.faded, c.gen = k.spec, k.faded, k.gen
+			c.Refresh()
+			return
+		}
 	}
-	now := chartShown{c.spec, c.faded, c.gen}
-	if b := c.before; b.gen > 0 && faded == b.faded && reflect.DeepEqual(spec, b.spec) {
-		c.spec, c.faded, c.gen = b.spec, b.faded, b.gen
-	} else {
-		c.gens++
-		c.spec, c.faded, c.gen = spec, faded, c.gens
-	}
-	c.before = now
+	c.gens++
+	c.spec, c.faded, c.gen = spec, faded, c.gens
+	c.recent = append([]chartShown{{spec, faded, c.gen}}, c.recent[:min(len(c.recent), chartImagesKept-1)]...)
 	c.Refresh()
 }
 
@@ -74,12 +89,19 @@ type chartRenderer struct {
 	c    *chart
 	img  *canvas.Image
 	size fyne.Size
-	// drawn is what the image shows; a refresh or layout that would draw
-	// the same again keeps it. kept is the image drawn before, and what
-	// it shows.
-	drawn, kept chartDrawn
-	keptImg     image.Image
+	// shown are the images drawn last and what each shows, the one on
+	// screen first: a refresh or layout that would draw one of them
+	// again (the same chart after "No results yet", or at the window's
+	// size before) shows it instead.
+	shown []chartImage
 }
+
+// chartImagesKept is how many images a chart keeps, the one on screen
+// included, and how many descriptions it remembers: a few megabytes
+// each at most. Opening a design draws the chart of the results before
+// and "No results yet", each at the height the charts have while the
+// findings are empty and at their height with the findings.
+const chartImagesKept = 4
 
 // chartDrawn is what a chart's image was drawn from: the description,
 // the size in pixels, the resolution and the colours.
@@ -88,6 +110,12 @@ type chartDrawn struct {
 	w, h   int
 	dpi    float64
 	fg, bg color.Color
+}
+
+// chartImage is an image drawn of a chart and what it shows.
+type chartImage struct {
+	d   chartDrawn
+	img image.Image
 }
 
 func (r *chartRenderer) Destroy() {}
@@ -115,6 +143,9 @@ const chartDPI = 96
 // draw draws the chart into the image, unless it is hidden or the image
 // shows it already, and reports whether it drew.
 func (r *chartRenderer) draw() bool {
+	if r.c.held {
+		return false
+	}
 	if !r.c.Visible() {
 		// A chart on a tab behind the others is drawn when its tab is
 		// brought forward: showing it refreshes it.
@@ -143,17 +174,19 @@ func (r *chartRenderer) draw() bool {
 		o.Foreground = fade(o.Foreground, o.Background)
 	}
 	d := chartDrawn{gen: r.c.gen, w: w, h: h, dpi: chartDPI * float64(scale), fg: o.Foreground, bg: o.Background}
-	switch d {
-	case r.drawn:
-		return false
-	case r.kept:
-		r.drawn, r.kept = r.kept, r.drawn
-		r.img.Image, r.keptImg = r.keptImg, r.img.Image
-		return true
+	for i, k := range r.shown {
+		if k.d == d {
+			if i == 0 {
+				return false
+			}
+			copy(r.shown[1:i+1], r.shown[:i])
+			r.shown[0] = k
+			r.img.Image = k.img
+			return true
+		}
 	}
-	r.kept, r.keptImg = r.drawn, r.img.Image
-	r.drawn = d
 	r.img.Image = chartmodel.Image(r.c.spec, w, h, d.dpi, o)
+	r.shown = append([]chartImage{{d, r.img.Image}}, r.shown[:min(len(r.shown), chartImagesKept-1)]...)
 	return true
 }
 

@@ -117,4 +117,17 @@ func TestChartDrawsAgainOnlyWhenSomethingChanged(t *testing.T) {
 	if r.img.Image == three {
 		t.Error("a new description kept the image of the one before")
 	}
+
+	// A held chart laid out at another size waits for its next
+	// description, and draws it even when it is the same as before.
+	four := r.img.Image
+	c.held = true
+	w.Resize(fyne.NewSize(440, 240))
+	if r.img.Image != four {
+		t.Error("a held chart drew when laid out")
+	}
+	c.set(line(4), false)
+	if r.img.Image == four || c.held {
+		t.Errorf("setting a held chart: drawn again %v, still held %v", r.img.Image != four, c.held)
+	}
 }

@@ -134,6 +134,9 @@ func (r *resultsPanel) draw() {
 		r.verdict.words.Show()
 	}
 	a := o.assessment
+	// Both branches set these charts after the findings, which may lay
+	// the panel out again.
+	r.pt.held, r.conc.held = true, true
 	if a == nil {
 		r.verdict.clear()
 		r.list.set(nil, true)
