@@ -227,7 +227,10 @@ func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 		return
 	}
 	vw := max(size.Width-keyLabelWidth-keyHintWidth, 0)
-	objs[1].Resize(fyne.NewSize(vw, objs[1].MinSize().Height))
+	if objs[1].Size().Width != vw {
+		// The wrapped value measures its lines at its width first.
+		objs[1].Resize(fyne.NewSize(vw, objs[1].MinSize().Height))
+	}
 	objs[0].Move(fyne.NewPos(0, 0))
 	objs[0].Resize(fyne.NewSize(keyLabelWidth, size.Height))
 	objs[1].Move(fyne.NewPos(keyLabelWidth, 0))

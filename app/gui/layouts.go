@@ -94,8 +94,15 @@ func (l labelColumn) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 		return
 	}
 	tw := max(size.Width-l.w, 0)
-	objs[0].Resize(fyne.NewSize(l.w, objs[0].MinSize().Height))
-	objs[1].Resize(fyne.NewSize(tw, objs[1].MinSize().Height))
+	// A wrapped text is given its width before its height, so that it
+	// measures its lines at that width; laid out again at the same
+	// width it knows them already.
+	if objs[0].Size().Width != l.w {
+		objs[0].Resize(fyne.NewSize(l.w, objs[0].MinSize().Height))
+	}
+	if objs[1].Size().Width != tw {
+		objs[1].Resize(fyne.NewSize(tw, objs[1].MinSize().Height))
+	}
 	objs[0].Move(fyne.NewPos(0, 0))
 	objs[0].Resize(fyne.NewSize(l.w, size.Height))
 	objs[1].Move(fyne.NewPos(l.w, 0))
