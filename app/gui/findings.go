@@ -371,6 +371,7 @@ func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 	if fl.selected >= 0 && fl.selected < len(fl.rows) && !fl.fresh {
 		keep = fl.rows[fl.selected].Criterion
 	}
+	counted := len(fl.rows)
 	fl.rows, fl.stale = fs, stale
 	fl.measure()
 	fl.selected = -1
@@ -390,9 +391,13 @@ func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 	if fl.selected < 0 && len(fs) > 0 {
 		fl.selected = 0
 	}
-	// The table is laid out again for the new rows' widths: the heading
-	// and the rows may change between one and two lines of columns.
-	fl.object.Refresh()
+	if len(fs) != counted {
+		// The table is laid out again for the new rows: the heading and
+		// the rows may change between one and two lines of columns.
+		fl.object.Refresh()
+	} else {
+		fl.list.Refresh()
+	}
 	fl.quiet = true
 	if fl.selected >= 0 {
 		fl.list.Select(fl.selected)
