@@ -4,6 +4,7 @@ import (
 	"image"
 	"image/color"
 	"math"
+	"reflect"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
@@ -14,12 +15,33 @@ import (
 )
 
 // chart shows a chart description, drawn by the chart model into an
-// image the size of the widget whenever it is laid out or changed.
+// image the size of the widget whenever it is changed or laid out at
+// another size.
 type chart struct {
 	widget.BaseWidget
 	spec chartmodel.Chart
 	// faded draws the chart washed out, for results that are out of date.
 	faded bool
+	// gen numbers the descriptions set, so that the renderer can tell a
+	// chart it has drawn already; gens counts them.
+	gen, gens uint64
+	// recent are the descriptions shown last, the one on screen first.
+	// Going back to one of them (the same results again after "No
+	// results yet" while a design opens or an input is mistyped) shows
+	// its image again if the renderer still has it.
+	recent []chartShown
+	// held keeps the chart from drawing until the next set: the results
+	// panel lays out again for new findings before it sets the charts
+	// of the new results, and the chart of the old results at the new
+	// size would be drawn for nothing.
+	held bool
+}
+
+// chartShown is a description a chart showed.
+type chartShown struct {
+	spec  chartmodel.Chart
+	faded bool
+	gen   uint64
 }
 
 // newChart returns an empty chart.
@@ -29,9 +51,29 @@ func newChart() *chart {
 	return c
 }
 
-// set replaces what the chart draws.
+// set replaces what the chart draws; the same description again (new
+// results that chart alike) leaves the chart as it is.
 func (c *chart) set(spec chartmodel.Chart, faded bool) {
-	c.spec, c.faded = spec, faded
+	held := c.held
+	c.held = false
+	for i, k := range c.recent {
+		if k.faded == faded && reflect.DeepEqual(k.spec, spec) {
+			if i == 0 {
+				if held {
+					c.Refresh()
+				}
+				return
+			}
+			copy(c.recent[1:i+1], c.recent[:i])
+			c.recent[0] = k
+			c.spec, c.faded, c.gen = k.spec, k.faded, k.gen
+			c.Refresh()
+			return
+		}
+	}
+	c.gens++
+	c.spec, c.faded, c.gen = spec, faded, c.gens
+	c.recent = append([]chartShown{{spec, faded, c.gen}}, c.recent[:min(len(c.recent), chartImagesKept-1)]...)
 	c.Refresh()
 }
 
@@ -47,6 +89,33 @@ type chartRenderer struct {
 	c    *chart
 	img  *canvas.Image
 	size fyne.Size
+	// shown are the images drawn last and what each shows, the one on
+	// screen first: a refresh or layout that would draw one of them
+	// again (the same chart after "No results yet", or at the window's
+	// size before) shows it instead.
+	shown []chartImage
+}
+
+// chartImagesKept is how many images a chart keeps, the one on screen
+// included, and how many descriptions it remembers: a few megabytes
+// each at most. Opening a design draws the chart of the results before
+// and "No results yet", each at the height the charts have while the
+// findings are empty and at their height with the findings.
+const chartImagesKept = 4
+
+// chartDrawn is what a chart's image was drawn from: the description,
+// the size in pixels, the resolution and the colours.
+type chartDrawn struct {
+	gen    uint64
+	w, h   int
+	dpi    float64
+	fg, bg color.Color
+}
+
+// chartImage is an image drawn of a chart and what it shows.
+type chartImage struct {
+	d   chartDrawn
+	img image.Image
 }
 
 func (r *chartRenderer) Destroy() {}
@@ -62,19 +131,25 @@ func (r *chartRenderer) Layout(size fyne.Size) {
 }
 
 func (r *chartRenderer) Refresh() {
-	r.draw()
-	canvas.Refresh(r.img)
+	if r.draw() {
+		canvas.Refresh(r.img)
+	}
 }
 
 // chartDPI is the resolution charts are drawn at for one Fyne unit per
 // pixel: 11-unit text in the window is drawn as 8-point text.
 const chartDPI = 96
 
-func (r *chartRenderer) draw() {
+// draw draws the chart into the image, unless it is hidden or the image
+// shows it already, and reports whether it drew.
+func (r *chartRenderer) draw() bool {
+	if r.c.held {
+		return false
+	}
 	if !r.c.Visible() {
 		// A chart on a tab behind the others is drawn when its tab is
 		// brought forward: showing it refreshes it.
-		return
+		return false
 	}
 	size := r.size
 	if size.Width < 10 || size.Height < 10 {
@@ -86,7 +161,7 @@ func (r *chartRenderer) draw() {
 	}
 	w, h := int(math.Round(float64(size.Width*scale))), int(math.Round(float64(size.Height*scale)))
 	if w < 2 || h < 2 {
-		return
+		return false
 	}
 	th := r.c.Theme()
 	v := fyne.CurrentApp().Settings().ThemeVariant()
@@ -98,7 +173,21 @@ func (r *chartRenderer) draw() {
 	if r.c.faded {
 		o.Foreground = fade(o.Foreground, o.Background)
 	}
-	r.img.Image = chartmodel.Image(r.c.spec, w, h, chartDPI*float64(scale), o)
+	d := chartDrawn{gen: r.c.gen, w: w, h: h, dpi: chartDPI * float64(scale), fg: o.Foreground, bg: o.Background}
+	for i, k := range r.shown {
+		if k.d == d {
+			if i == 0 {
+				return false
+			}
+			copy(r.shown[1:i+1], r.shown[:i])
+			r.shown[0] = k
+			r.img.Image = k.img
+			return true
+		}
+	}
+	r.img.Image = chartmodel.Image(r.c.spec, w, h, d.dpi, o)
+	r.shown = append([]chartImage{{d, r.img.Image}}, r.shown[:min(len(r.shown), chartImagesKept-1)]...)
+	return true
 }
 
 // fade mixes a colour halfway to the ground, for out-of-date results.

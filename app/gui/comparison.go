@@ -33,7 +33,12 @@ type comparePanel struct {
 	cmp        *compare.Comparison
 	outA, outB outcome
 	gen        int
-	object     fyne.CanvasObject
+	// shown, set by the window, reports whether the screen is in front;
+	// behind, the comparison is drawn when it is brought forward
+	// (pending until then).
+	shown   func() bool
+	pending bool
+	object  fyne.CanvasObject
 }
 
 // Columns of the comparison tables: name, A, B, change.
@@ -192,8 +197,14 @@ func (c *comparePanel) compute() {
 	})
 }
 
-// render draws the last comparison in the current units.
+// render draws the last comparison in the current units, or, while the
+// screen is behind, leaves it to be drawn when it comes forward.
 func (c *comparePanel) render() {
+	if c.shown != nil && !c.shown() {
+		c.pending = true
+		return
+	}
+	c.pending = false
 	cmp := c.cmp
 	if cmp == nil {
 		return
@@ -240,6 +251,14 @@ func (c *comparePanel) render() {
 	spec := chartmodel.Pressure("Pressure against temperature, both sides",
 		[]chartmodel.Side{{Name: cmp.A.Label, A: c.outA.assessment}, {Name: cmp.B.Label, A: c.outB.assessment}}, u.chartUnits())
 	c.chart.set(spec, false)
+}
+
+// bringForward draws the comparison left to draw while the screen was
+// behind.
+func (c *comparePanel) bringForward() {
+	if c.pending {
+		c.render()
+	}
 }
 
 // verdictText is an outcome's verdict in words.

@@ -71,10 +71,7 @@ func newExposureTable() *exposureTable {
 func exposureRow(cells []string, bold bool) fyne.CanvasObject {
 	row := container.New(columnsLayout(exposureWidths))
 	for _, c := range cells {
-		l := widget.NewLabel(c)
-		l.Truncation = fyne.TextTruncateEllipsis
-		l.TextStyle = fyne.TextStyle{Bold: bold}
-		row.Add(l)
+		row.Add(newFitLabel(c, fyne.TextStyle{Bold: bold}))
 	}
 	return row
 }
@@ -176,7 +173,7 @@ func (t *exposureTable) showRows(rows [][]string, bold []bool) {
 	for i, r := range rows {
 		style := fyne.TextStyle{Bold: bold[i]}
 		for j, c := range t.body.Objects[i].(*fyne.Container).Objects {
-			if l := c.(*widget.Label); l.Text != r[j] || l.TextStyle != style {
+			if l := c.(*fitLabel); l.Text != r[j] || l.TextStyle != style {
 				l.Text, l.TextStyle = r[j], style
 				l.Refresh()
 			}

@@ -2,6 +2,7 @@ package gui
 
 import (
 	"strings"
+	"sync"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
@@ -219,11 +220,47 @@ func (fl *findingsList) criterionWidth(width float32) (float32, bool) {
 }
 
 // denseSize is the size a label of the findings table needs on one line.
+// Sizes are kept for the font and text size they were measured in: the
+// table measures every row's texts on each new result.
 func denseSize(text string, style fyne.TextStyle) fyne.Size {
+	d := look.Dense{}
+	k := denseKey{text: text, style: style, size: d.Size(theme.SizeNameText)}
+	if f := d.Font(style); f != nil {
+		k.font = f.Name()
+	}
+	denseSizes.mu.Lock()
+	m, ok := denseSizes.m[k]
+	denseSizes.mu.Unlock()
+	if ok {
+		return m
+	}
 	l := widget.NewLabelWithStyle(text, fyne.TextAlignLeading, style)
 	container.NewThemeOverride(l, look.Dense{})
-	return l.MinSize()
+	m = l.MinSize()
+	denseSizes.mu.Lock()
+	if len(denseSizes.m) >= denseSizesKept {
+		clear(denseSizes.m)
+	}
+	denseSizes.m[k] = m
+	denseSizes.mu.Unlock()
+	return m
 }
+
+// denseKey is a text measured for the findings table, in a font and size.
+type denseKey struct {
+	text  string
+	style fyne.TextStyle
+	font  string
+	size  float32
+}
+
+// denseSizes are the sizes denseSize measured, at most denseSizesKept.
+var denseSizes = struct {
+	mu sync.Mutex
+	m  map[denseKey]fyne.Size
+}{m: map[denseKey]fyne.Size{}}
+
+const denseSizesKept = 4096
 
 // denseHeight is the height a label of the findings table needs with its
 // text wrapped at word breaks to a width, as the label wraps it.
@@ -334,6 +371,7 @@ func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 	if fl.selected >= 0 && fl.selected < len(fl.rows) && !fl.fresh {
 		keep = fl.rows[fl.selected].Criterion
 	}
+	counted := len(fl.rows)
 	fl.rows, fl.stale = fs, stale
 	fl.measure()
 	fl.selected = -1
@@ -353,7 +391,13 @@ func (fl *findingsList) set(fs []hazards.Finding, stale bool) {
 	if fl.selected < 0 && len(fs) > 0 {
 		fl.selected = 0
 	}
-	fl.list.Refresh()
+	if len(fs) != counted {
+		// The table is laid out again for the new rows: the heading and
+		// the rows may change between one and two lines of columns.
+		fl.object.Refresh()
+	} else {
+		fl.list.Refresh()
+	}
 	fl.quiet = true
 	if fl.selected >= 0 {
 		fl.list.Select(fl.selected)

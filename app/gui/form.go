@@ -66,7 +66,9 @@ func newDesignForm(s *session) *designForm {
 	// the sections made them in.
 	slices.SortStableFunc(f.fields, func(a, b *numField) int { return cmp.Compare(fieldRank(a.path), fieldRank(b.path)) })
 	f.scroll = container.NewVScroll(container.NewVBox(f.sections...))
-	f.object = container.NewBorder(f.generalRow, nil, nil, nil, f.scroll)
+	// Opening and closing the working beside the form lays the form out
+	// again at its new height; it redraws what changed itself.
+	f.object = newRelaidBox(container.NewBorder(f.generalRow, nil, nil, nil, f.scroll))
 	return f
 }
 
@@ -298,7 +300,6 @@ func indented(o fyne.CanvasObject) fyne.CanvasObject {
 
 // labelled places a widget in the entry column with a label on the left.
 func labelled(label string, o fyne.CanvasObject) fyne.CanvasObject {
-	l := widget.NewLabel(label)
-	l.Truncation = fyne.TextTruncateEllipsis
+	l := newFitLabel(label, fyne.TextStyle{})
 	return container.NewBorder(nil, nil, container.New(fixedWidth{labelWidth}, l), nil, o)
 }

@@ -2,6 +2,7 @@ package gui
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"fyne.io/fyne/v2"
@@ -24,6 +25,11 @@ type vesselSection struct {
 	glassIDs     map[string]string
 	glassInfo    *widget.Label
 	glassProblem *widget.Label
+
+	// names are the parts' name entries, and shapes the parts' shapes
+	// the blocks were built for.
+	names  []*widget.Entry
+	shapes []string
 }
 
 // Shape names on screen.
@@ -160,14 +166,29 @@ func (v *vesselSection) removePart(i int) {
 	})
 }
 
-// rebuildParts recreates one block per part with its own fields.
+// rebuildParts recreates one block per part with its own fields. When
+// the blocks on screen are for as many parts of the same shapes, they
+// are kept and show the parts' names and values again instead.
 func (v *vesselSection) rebuildParts() {
 	f := v.f
+	d := &f.s.doc.Work
+	if slices.Equal(v.shapes, partShapes(d)) {
+		u := f.s.units()
+		for i, e := range v.names {
+			showText(e, d.Vessel.Parts[i].Name)
+		}
+		for _, nf := range f.partFields {
+			nf.show(d, u)
+		}
+		f.showUnread()
+		f.showProblems(f.s.problem)
+		return
+	}
+	v.shapes, v.names = partShapes(d), nil
 	for _, nf := range f.partFields {
 		delete(f.byPath, nf.path)
 	}
 	f.partFields = nil
-	d := &f.s.doc.Work
 	u := f.s.units()
 	var blocks []fyne.CanvasObject
 	for i := range d.Vessel.Parts {
@@ -188,6 +209,15 @@ func (v *vesselSection) rebuildParts() {
 	f.showProblems(f.s.problem)
 }
 
+// partShapes lists the shapes of a design's parts, nil for none.
+func partShapes(d *hazards.Design) []string {
+	var out []string
+	for _, p := range d.Vessel.Parts {
+		out = append(out, p.Shape)
+	}
+	return out
+}
+
 // partBlock builds the block of part i: name, shape, remove, and its
 // dimensions.
 func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.CanvasObject {
@@ -202,6 +232,7 @@ func (v *vesselSection) partBlock(i int, d *hazards.Design, u unitSystem) fyne.C
 	}
 	name := widget.NewEntry()
 	name.SetText(d.Vessel.Parts[i].Name)
+	v.names = append(v.names, name)
 	name.OnChanged = func(t string) {
 		f.s.doc.typeText(hazards.PartField(i, hazards.PartName), func(d *hazards.Design) { part(d).Name = t })
 	}

@@ -278,6 +278,8 @@ func (h *harness) state() string {
 			switch x := o.(type) {
 			case *widget.Label:
 				fmt.Fprintf(&b, " %q %d", x.Text, x.Importance)
+			case *fitLabel:
+				fmt.Fprintf(&b, " %q %v", x.Text, x.TextStyle)
 			case *widget.Button:
 				fmt.Fprintf(&b, " %q %v", x.Text, x.Disabled())
 			case *widget.RichText:
@@ -382,20 +384,25 @@ func (h *harness) findings() map[string]string {
 func labels(o fyne.CanvasObject) []string {
 	var out []string
 	walk(o, func(o fyne.CanvasObject) {
-		if l, ok := o.(*widget.Label); ok {
+		switch l := o.(type) {
+		case *widget.Label:
+			out = append(out, l.Text)
+		case *fitLabel:
 			out = append(out, l.Text)
 		}
 	})
 	return out
 }
 
-// walk visits o and every object inside it.
+// walk visits o and every object inside it. A label of one line is one
+// object: the part of its text that fits is not visited again.
 func walk(o fyne.CanvasObject, visit func(fyne.CanvasObject)) {
 	if o == nil {
 		return
 	}
 	visit(o)
 	switch x := o.(type) {
+	case *fitLabel:
 	case *fyne.Container:
 		for _, c := range x.Objects {
 			walk(c, visit)

@@ -19,6 +19,7 @@ type keyNumbers struct {
 	box    *fyne.Container
 	rows   []keyRow
 	taps   []*tapRow
+	cells  []keyCells
 	object fyne.CanvasObject
 	// onPick runs when the reviewer taps a row.
 	onPick func(keyRow)
@@ -123,37 +124,75 @@ func zoneName(z hazards.Zone) string {
 	return "whole room"
 }
 
-// set shows an assessment's key numbers.
+// set shows an assessment's key numbers. Rows already on screen are
+// kept and only their changed texts redrawn, so that new results of the
+// same design do not build the list again.
 func (k *keyNumbers) set(a *hazards.Assessment, u unitSystem) {
 	if a == nil {
-		k.rows, k.taps = nil, nil
+		k.rows, k.taps, k.cells = nil, nil, nil
 		k.box.Objects = nil
 		k.box.Refresh()
 		return
 	}
 	k.rows = keyRows(a, u)
+	built := len(k.cells) != len(k.rows)
+	if built {
+		k.build()
+	}
+	grown := false
+	for i, r := range k.rows {
+		c := k.cells[i]
+		hint := ""
+		if steps := r.steps(a); len(steps) > 0 {
+			hint = fmt.Sprintf("step %d ›", steps[0])
+		}
+		setText(c.label, r.label)
+		if c.value.Text != r.value {
+			before := c.value.MinSize().Height
+			c.value.SetText(r.value)
+			grown = grown || c.value.MinSize().Height != before
+		}
+		if c.hint.String() != hint {
+			c.hint.Segments = nil
+			if hint != "" {
+				c.hint.Segments = []widget.RichTextSegment{&widget.TextSegment{Text: hint,
+					Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNamePlaceHolder, Alignment: fyne.TextAlignTrailing}}}
+			}
+			c.hint.Refresh()
+		}
+		k.taps[i].setSelected(r.label == k.marked)
+	}
+	if built || grown {
+		// New rows, or a value now takes more or fewer lines: the rows
+		// are laid out again.
+		k.box.Refresh()
+	}
+}
+
+// keyCells are the widgets of one row of the key numbers.
+type keyCells struct {
+	label, value *widget.Label
+	hint         *widget.RichText
+}
+
+// build makes a row of widgets for each key number, empty until set
+// fills them and lays them out.
+func (k *keyNumbers) build() {
+	k.cells = make([]keyCells, len(k.rows))
 	k.taps = make([]*tapRow, len(k.rows))
 	objs := make([]fyne.CanvasObject, len(k.rows))
-	for i, r := range k.rows {
-		l := widget.NewLabel(r.label)
-		v := widget.NewLabelWithStyle(r.value, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-		v.Wrapping = fyne.TextWrapWord
-		hint := widget.NewRichText()
-		if steps := r.steps(a); len(steps) > 0 {
-			hint.Segments = []widget.RichTextSegment{&widget.TextSegment{Text: fmt.Sprintf("step %d ›", steps[0]),
-				Style: widget.RichTextStyle{SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNamePlaceHolder, Alignment: fyne.TextAlignTrailing}}}
-		}
-		row := r
-		k.taps[i] = newTapRow(container.New(keyLayout{}, l, v, hint), func() {
+	for i := range k.rows {
+		c := keyCells{label: widget.NewLabel(""), value: widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}), hint: widget.NewRichText()}
+		c.value.Wrapping = fyne.TextWrapWord
+		k.cells[i] = c
+		k.taps[i] = newTapRow(container.New(keyLayout{}, c.label, c.value, c.hint), func() {
 			if k.onPick != nil {
-				k.onPick(row)
+				k.onPick(k.rows[i])
 			}
 		})
-		k.taps[i].selected = r.label == k.marked
 		objs[i] = k.taps[i]
 	}
 	k.box.Objects = objs
-	k.box.Refresh()
 }
 
 // mark highlights the row with the given label, none for "".
@@ -188,7 +227,10 @@ func (keyLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 		return
 	}
 	vw := max(size.Width-keyLabelWidth-keyHintWidth, 0)
-	objs[1].Resize(fyne.NewSize(vw, objs[1].MinSize().Height))
+	if objs[1].Size().Width != vw {
+		// The wrapped value measures its lines at its width first.
+		objs[1].Resize(fyne.NewSize(vw, objs[1].MinSize().Height))
+	}
 	objs[0].Move(fyne.NewPos(0, 0))
 	objs[0].Resize(fyne.NewSize(keyLabelWidth, size.Height))
 	objs[1].Move(fyne.NewPos(keyLabelWidth, 0))

@@ -2,7 +2,9 @@ package gui
 
 import (
 	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
 )
 
 // fixedWidth lays out its objects stacked, at least w wide: it keeps the
@@ -92,8 +94,15 @@ func (l labelColumn) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 		return
 	}
 	tw := max(size.Width-l.w, 0)
-	objs[0].Resize(fyne.NewSize(l.w, objs[0].MinSize().Height))
-	objs[1].Resize(fyne.NewSize(tw, objs[1].MinSize().Height))
+	// A wrapped text is given its width before its height, so that it
+	// measures its lines at that width; laid out again at the same
+	// width it knows them already.
+	if objs[0].Size().Width != l.w {
+		objs[0].Resize(fyne.NewSize(l.w, objs[0].MinSize().Height))
+	}
+	if objs[1].Size().Width != tw {
+		objs[1].Resize(fyne.NewSize(tw, objs[1].MinSize().Height))
+	}
 	objs[0].Move(fyne.NewPos(0, 0))
 	objs[0].Resize(fyne.NewSize(l.w, size.Height))
 	objs[1].Move(fyne.NewPos(l.w, 0))
@@ -179,4 +188,46 @@ func (n narrowable) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 		o.Move(fyne.NewPos(0, 0))
 		o.Resize(fyne.NewSize(max(size.Width, o.MinSize().Width), size.Height))
 	}
+}
+
+// relaidBox holds a container and, when refreshed, lays it out again
+// and repaints it without refreshing every object inside it. A scroll
+// refreshes its content to measure it again: the results area is
+// measured again whenever the number of findings changes, and each of
+// its parts redraws itself when its own content changes, so refreshing
+// all of them would draw the same again. A change of look still reaches
+// every object: Fyne applies a theme to each object of the tree.
+type relaidBox struct {
+	widget.BaseWidget
+	c *fyne.Container
+}
+
+// newRelaidBox wraps c.
+func newRelaidBox(c *fyne.Container) *relaidBox {
+	b := &relaidBox{c: c}
+	b.ExtendBaseWidget(b)
+	return b
+}
+
+// CreateRenderer returns the box's renderer.
+func (b *relaidBox) CreateRenderer() fyne.WidgetRenderer { return relaidRenderer{b.c} }
+
+type relaidRenderer struct{ c *fyne.Container }
+
+func (r relaidRenderer) Destroy() {}
+
+func (r relaidRenderer) Objects() []fyne.CanvasObject { return []fyne.CanvasObject{r.c} }
+
+func (r relaidRenderer) MinSize() fyne.Size { return r.c.MinSize() }
+
+func (r relaidRenderer) Layout(size fyne.Size) {
+	r.c.Move(fyne.NewPos(0, 0))
+	r.c.Resize(size)
+}
+
+func (r relaidRenderer) Refresh() {
+	if r.c.Layout != nil {
+		r.c.Layout.Layout(r.c.Objects, r.c.Size())
+	}
+	canvas.Refresh(r.c)
 }

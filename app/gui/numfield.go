@@ -47,8 +47,7 @@ func newNumField(ff formField, onEdit func(*numField)) *numField {
 	f.msgIcon = widget.NewIcon(theme.ErrorIcon())
 	f.msgRow = container.NewBorder(nil, nil, container.NewCenter(f.msgIcon), nil, f.msg)
 	f.msgRow.Hide()
-	lbl := widget.NewLabel(ff.label)
-	lbl.Truncation = fyne.TextTruncateEllipsis
+	lbl := newFitLabel(ff.label, fyne.TextStyle{})
 	row := container.NewBorder(nil, nil,
 		container.New(fixedWidth{labelWidth}, lbl),
 		container.New(fixedWidth{unitWidth}, f.unit), f.entry)

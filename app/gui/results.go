@@ -88,7 +88,7 @@ func newResultsPanel(s *session) *resultsPanel {
 	ff := findingsFirst{want: r.list.wantedHeight, width: new(float32)}
 	split := container.New(ff, findings, container.New(narrowable{360}, r.tabs))
 	r.area = split
-	r.areaScroll = container.NewVScroll(split)
+	r.areaScroll = container.NewVScroll(newRelaidBox(split))
 	split.Layout = findingsFirst{want: ff.want, width: ff.width, resized: r.areaScroll.Refresh}
 	r.object = container.NewBorder(r.verdict.object, nil, nil, nil, r.areaScroll)
 	return r
@@ -134,6 +134,9 @@ func (r *resultsPanel) draw() {
 		r.verdict.words.Show()
 	}
 	a := o.assessment
+	// Both branches set these charts after the findings, which may lay
+	// the panel out again.
+	r.pt.held, r.conc.held = true, true
 	if a == nil {
 		r.verdict.clear()
 		r.list.set(nil, true)
@@ -204,8 +207,8 @@ type verdictBanner struct {
 	icon    *widget.Icon
 	caption *canvas.Text
 	word    *canvas.Text
-	counts  *widget.Label
-	note    *widget.Label
+	counts  *fitLabel
+	note    *fitLabel
 	// words holds the counts and the note; while the inputs are not
 	// acceptable the problem takes their place.
 	words  fyne.CanvasObject
@@ -225,11 +228,8 @@ func newVerdictBanner(problem fyne.CanvasObject) *verdictBanner {
 	v.word = canvas.NewText("—", statusColour(""))
 	v.word.TextSize = 28
 	v.word.TextStyle = fyne.TextStyle{Bold: true}
-	v.counts = widget.NewLabel("")
-	v.counts.TextStyle = fyne.TextStyle{Bold: true}
-	v.counts.Truncation = fyne.TextTruncateEllipsis
-	v.note = widget.NewLabel("")
-	v.note.Truncation = fyne.TextTruncateEllipsis
+	v.counts = newFitLabel("", fyne.TextStyle{Bold: true})
+	v.note = newFitLabel("", fyne.TextStyle{})
 	iconBox := container.New(fixedWidth{44}, v.icon)
 	words := container.New(fixedWidth{150}, container.NewVBox(v.caption, v.word))
 	left := container.NewHBox(iconBox, words)

@@ -6,7 +6,8 @@ import (
 	"image/png"
 	"os"
 	"path/filepath"
-	"strings"
+	"reflect"
+	"slices"
 	"testing"
 
 	"fyne.io/fyne/v2"
@@ -311,6 +312,8 @@ func describe(o fyne.CanvasObject) string {
 	switch x := o.(type) {
 	case *widget.Label:
 		return fmt.Sprintf("label %q", x.Text)
+	case *fitLabel:
+		return fmt.Sprintf("label %q", x.Text)
 	case *widget.Button:
 		if x.Text == "" && x.Icon != nil {
 			return fmt.Sprintf("button %s", x.Icon.Name())
@@ -364,22 +367,29 @@ func (h *harness) layOut() {
 			}
 		}
 	}
-	pass := func() string {
-		var b strings.Builder
-		record := func(o fyne.CanvasObject) { fmt.Fprintf(&b, "%T %v %v\n", o, o.Position(), o.Size()) }
+	// A pass records every object visited: its kind, place and size.
+	type placed struct {
+		kind reflect.Type
+		pos  fyne.Position
+		s    fyne.Size
+	}
+	pass := func(into []placed) []placed {
+		into = into[:0]
+		record := func(o fyne.CanvasObject) { into = append(into, placed{reflect.TypeOf(o), o.Position(), o.Size()}) }
 		visit(c.Content(), record)
 		for _, o := range c.Overlays().List() {
 			visit(o, record)
 		}
-		return b.String()
+		return into
 	}
-	last := pass()
+	last := pass(nil)
+	var now []placed
 	for range 8 {
-		now := pass()
-		if now == last {
+		now = pass(now)
+		if slices.Equal(now, last) {
 			return
 		}
-		last = now
+		last, now = now, last
 	}
 	h.t.Error("the window's layout does not come to rest")
 }

@@ -94,6 +94,12 @@ func buildWindow(s *session) *shell {
 	sh.compare = container.NewTabItemWithIcon("Compare revisions", theme.ContentCopyIcon(), container.New(narrowable{1000}, cmp.object))
 	sh.study = container.NewTabItemWithIcon("Tolerance study", theme.GridIcon(), study.object)
 	sh.tabs = container.NewAppTabs(sh.review, sh.revs, sh.compare, sh.study)
+	cmp.shown = func() bool { return sh.tabs.Selected() == sh.compare }
+	sh.tabs.OnSelected = func(t *container.TabItem) {
+		if t == sh.compare {
+			cmp.bringForward()
+		}
+	}
 
 	sh.units = widget.NewRadioGroup([]string{unitsBarSI, unitsBarUS}, func(opt string) {
 		if opt == unitsBarUS {

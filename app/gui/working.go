@@ -111,7 +111,9 @@ func newWorkingPanel(s *session) *workingPanel {
 	wp.scroll = container.NewVScroll(container.NewPadded(wp.compact))
 	bar := container.NewBorder(nil, nil, back, wp.copyBtn)
 	head := container.NewVBox(bar, wp.title, wp.summary, wp.mode, wp.stale, widget.NewSeparator())
-	wp.object = container.NewBorder(head, nil, nil, nil, wp.scroll)
+	// Opening and closing the panel lays it out again; it redraws what
+	// changed itself.
+	wp.object = newRelaidBox(container.NewBorder(head, nil, nil, nil, wp.scroll))
 	wp.object.Hide()
 	return wp
 }

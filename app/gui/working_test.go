@@ -17,6 +17,8 @@ func shownText(o fyne.CanvasObject) string {
 		switch x := o.(type) {
 		case *widget.Label:
 			b.WriteString(x.Text + "\n")
+		case *fitLabel:
+			b.WriteString(x.Text + "\n")
 		case *widget.RichText:
 			b.WriteString(x.String() + "\n")
 		}
