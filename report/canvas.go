@@ -70,6 +70,10 @@ type canvas struct {
 	stroke    rgb
 	fill      rgb
 	text      rgb
+
+	// symbolWidths keeps each face's character widths (in the library's
+	// thousandths of the font size) once measured, for prefixWidths.
+	symbolWidths map[face]map[rune]int
 }
 
 // paperSizes maps the Options.Paper names to the library's sizes.
@@ -148,14 +152,22 @@ func (c *canvas) setFont(f face, sizePt float64) {
 func (c *canvas) textWidth(s string) float64 { return c.pdf.GetStringWidth(s) }
 
 // prefixWidths returns, for each k from 0 to len(r), the width in mm of
-// r[:k] in the current font, measuring each character once. The library
+// r[:k] in the current font, measuring each character of each face once
+// per record. The library
 // adds the widths of characters without kerning, so these agree with
 // textWidth.
 func (c *canvas) prefixWidths(r []rune) []float64 {
 	_, unit := c.pdf.GetFontSize()
 	out := make([]float64, len(r)+1)
 	sum := 0
-	cache := map[rune]int{}
+	cache := c.symbolWidths[c.face]
+	if cache == nil {
+		if c.symbolWidths == nil {
+			c.symbolWidths = map[face]map[rune]int{}
+		}
+		cache = map[rune]int{}
+		c.symbolWidths[c.face] = cache
+	}
 	for i, ch := range r {
 		u, ok := cache[ch]
 		if !ok {
