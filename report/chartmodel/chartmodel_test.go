@@ -17,6 +17,7 @@ import (
 	"ullage/fluids"
 	"ullage/fluids/units"
 	"ullage/hazards"
+	"ullage/hazards/tolerance"
 )
 
 var pngDir = flag.String("png", "", "write each test chart as a PNG into this folder, to look at")
@@ -235,6 +236,32 @@ func TestWholeTicks(t *testing.T) {
 		for _, tk := range Ticks(Axis{Min: lo, Max: math.Max(math.Ceil(top), 1), Whole: true}) {
 			if tk.Value != math.Trunc(tk.Value) {
 				t.Errorf("count axis up to %g: tick at %g", hi, tk.Value)
+			}
+		}
+	}
+}
+
+// TestHistogramNotesAgree: the histogram's notes agree in number with
+// their counts, one unit or many.
+func TestHistogramNotesAgree(t *testing.T) {
+	for _, c := range []struct {
+		h    tolerance.Histogram
+		want []string
+	}{
+		{tolerance.Histogram{Edges: []float64{1, 2, 3}, Counts: []int{1, 0}, Below: 1, Above: 0, NoLoad: 1},
+			[]string{"1 of 3 units is drawn; 1 lies below and 0 above the range shown.",
+				"1 unit is not over-pressurised at its hottest temperature and carries no burst load; it is not drawn."}},
+		{tolerance.Histogram{Edges: []float64{1, 2, 3}, Counts: []int{2, 1}, Below: 2, Above: 1, NoLoad: 2},
+			[]string{"3 of 8 units are drawn; 2 lie below and 1 above the range shown.",
+				"2 units are not over-pressurised at their hottest temperature and carry no burst load; they are not drawn."}},
+	} {
+		got := Histogram("t", c.h).Notes
+		if len(got) != len(c.want) {
+			t.Fatalf("%+v: notes %q, want %q", c.h, got, c.want)
+		}
+		for i := range got {
+			if got[i] != c.want[i] {
+				t.Errorf("note %d: %q, want %q", i, got[i], c.want[i])
 			}
 		}
 	}

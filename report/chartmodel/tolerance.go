@@ -42,9 +42,11 @@ func Histogram(title string, h tolerance.Histogram) Chart {
 		ch.Lines = append(ch.Lines, Line{Label: "Bursts below a factor of 1", Value: 1, Vertical: true, Style: Style{Dashed, 1, Red}})
 	}
 	shown := total - h.Below - h.Above - h.NoLoad
-	ch.Notes = append(ch.Notes, display.Count(shown)+" of "+display.Units(total)+" are drawn; "+display.Count(h.Below)+" lie below and "+display.Count(h.Above)+" above the range shown.")
-	if h.NoLoad > 0 {
-		ch.Notes = append(ch.Notes, display.Units(h.NoLoad)+" are not over-pressurised at their hottest temperature and carry no burst load; they are not drawn.")
+	ch.Notes = append(ch.Notes, display.Count(shown)+" of "+display.Units(total)+" "+display.Agree(shown, "is", "are")+" drawn; "+
+		display.Count(h.Below)+" "+display.Agree(h.Below, "lies", "lie")+" below and "+display.Count(h.Above)+" above the range shown.")
+	if n := h.NoLoad; n > 0 {
+		ch.Notes = append(ch.Notes, display.Units(n)+" "+display.Agree(n, "is", "are")+" not over-pressurised at "+display.Agree(n, "its", "their")+
+			" hottest temperature and "+display.Agree(n, "carries", "carry")+" no burst load; "+display.Agree(n, "it is", "they are")+" not drawn.")
 	}
 	return ch
 }

@@ -86,6 +86,15 @@ func Units(n int) string {
 	return Count(n) + " units"
 }
 
+// Agree returns the verb of a count: one for 1, many otherwise
+// (Agree(1, "is", "are") is "is").
+func Agree(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
+}
+
 // Duration words the time a piece of work took: two significant figures
 // of seconds below a minute ("0.42 s", "3.1 s"), whole minutes and
 // seconds above ("2 min 5 s").
