@@ -17,7 +17,7 @@ func writeToleranceText(w io.Writer, r *tolerance.Result, sys display.System) {
 	fmt.Fprintf(w, "\ntolerance study: %s\n", display.StudyAbout(r, sys))
 	fmt.Fprintln(w, "  inputs that vary from unit to unit")
 	for _, in := range display.StudyInputs(r, sys) {
-		fmt.Fprintf(w, "    %-28s %s, %s (%s)\n", in.Label, in.Nominal, in.Spread, in.Distribution)
+		fmt.Fprintf(w, "    %-28s %s\n", in.Label, in.Line())
 	}
 	fmt.Fprintf(w, "  %s\n", display.PlusMinusNote)
 	for _, f := range display.StudyFractions(r) {

@@ -363,7 +363,7 @@ func (tp *tolerancePanel) showSpread(r *tolerance.Result, u unitSystem) {
 func (tp *tolerancePanel) showInputs(r *tolerance.Result, u unitSystem) {
 	var rows [][2]string
 	for _, in := range display.StudyInputs(r, u.display()) {
-		rows = append(rows, [2]string{in.Label, in.Nominal + ", " + in.Spread + " (" + in.Distribution + ")"})
+		rows = append(rows, [2]string{in.Label, in.Line()})
 	}
 	tp.inputs.Objects = pairRows(rows)
 	tp.inputs.Refresh()

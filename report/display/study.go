@@ -23,6 +23,17 @@ type StudyInput struct {
 	Label, Distribution, Nominal, Spread string
 }
 
+// Line is the input's nominal value, spread and distribution on one
+// line, as the window and the command line list them: "30 g, ± 0.5 g
+// (Normal, ± is 3σ)". The glass strength's modulus already names its
+// distribution: "35.33 MPa, Weibull modulus 7".
+func (in StudyInput) Line() string {
+	if in.Distribution == DistributionWords(tolerance.Weibull) {
+		return in.Nominal + ", " + in.Spread
+	}
+	return in.Nominal + ", " + in.Spread + " (" + in.Distribution + ")"
+}
+
 // StudyInputs words the inputs a study varied, in the reader's units:
 // nominal values and spreads are stated values (System.Input), the
 // hottest temperature's spread a temperature difference.

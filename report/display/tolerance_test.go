@@ -118,6 +118,12 @@ func TestStudyWords(t *testing.T) {
 			t.Errorf("StudyInputs[%d] = %+v, want %+v", i, got[i], wantIn[i])
 		}
 	}
+	for i, want := range []string{"28.3 g, ± 0.3 g (Uniform, ± is the half-width)", "50.0 °C, ± 5.0 K (Normal, ± is 3σ)",
+		"1.2 mm, ± 0.2 mm (Uniform, ± is the half-width)", "35.33 MPa, Weibull modulus 7"} {
+		if line := got[i].Line(); line != want {
+			t.Errorf("StudyInputs[%d].Line() = %q, want %q", i, line, want)
+		}
+	}
 	// 5 K is 9 °F as a difference; 50 °C is 122 °F.
 	if us := StudyInputs(r, US); us[1].Nominal != "122.0 °F" || us[1].Spread != "± 9.0 °F" {
 		t.Errorf("US hottest temperature: %+v", us[1])
