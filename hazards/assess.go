@@ -136,6 +136,14 @@ type Release struct {
 // design first and returns an *InputError (wrapping ErrInvalidInput) for
 // any bad input; no NaN or infinity reaches a result.
 func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
+	return assess(d, lib, true)
+}
+
+// assess is Assess; warm says whether the searches for the maximum safe
+// temperature and fill start from the brackets the design's own states
+// point to (Assess) or from their whole ranges only, as a reference for
+// the tests.
+func assess(d Design, lib *fluids.Library, warm bool) (*Assessment, error) {
 	sub, glass, err := prepare(d, lib)
 	if err != nil {
 		return nil, err
@@ -195,7 +203,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	}
 	a.assessThermalShock()
 
-	if err := a.findMaxSafe(sub); err != nil {
+	if err := a.findMaxSafe(sub, warm); err != nil {
 		return nil, err
 	}
 	a.rupture(sub)
@@ -257,7 +265,7 @@ func (a *Assessment) searchTopK(sub *fluids.Substance) float64 {
 	return math.Max(a.Design.HottestK+100, sub.CriticalTemperature()+50)
 }
 
-func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
+func (a *Assessment) findMaxSafe(sub *fluids.Substance, warm bool) error {
 	d := &a.Design
 	lo, hi := d.ColdestK, a.searchTopK(sub)
 	allow := a.AllowablePressurePa()
@@ -287,7 +295,13 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		}
 		return minU - st.UllagePercent
 	}
-	tP, bP, rP, err := searchRising(pressureGap, lo, hi, d.HottestK)
+	search := searchRising
+	pressureAt := []float64{d.HottestK}
+	if warm {
+		search = searchRisingWarm
+		pressureAt = append(pressureAt, a.pressureGuesses(sub, lo, hi, allow)...)
+	}
+	tP, bP, rP, err := search(pressureGap, lo, hi, pressureAt...)
 	if err != nil {
 		return fmt.Errorf("maximum safe temperature (pressure): %w", err)
 	}
@@ -335,7 +349,11 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		return math.Max((st.PressurePa-allow)/allow, (minU-st.UllagePercent)/100)
 	}
 	mLo := mMax * 1e-6
-	mf, bf, rf, err := searchRising(fillGap, mLo, mMax, d.FillMassKg)
+	fillAt := []float64{d.FillMassKg}
+	if warm {
+		fillAt = append(fillAt, a.fillGuesses(sub, mLo, mMax, allow)...)
+	}
+	mf, bf, rf, err := search(fillGap, mLo, mMax, fillAt...)
 	if err != nil {
 		return fmt.Errorf("maximum safe fill: %w", err)
 	}
@@ -387,12 +405,118 @@ func searchRising(gap func(float64) float64, lo, hi float64, inside ...float64) 
 		}
 		return known(x)
 	}
-	r, err := solve.Brent(gap, a, b, 1e-6*math.Max(math.Abs(hi), 1e-12), 200)
+	r, err := solve.Brent(gap, a, b, searchTolerance(hi), 200)
 	r.Lo, r.Hi = lo, hi
 	if err != nil && errors.Is(err, solve.ErrNotFinite) {
 		return 0, "", nil, err
 	}
 	return r.X, BoundFound, &r, nil
+}
+
+// searchRisingWarm is searchRising for a gap that rises everywhere on
+// [lo, hi], as every gap searched here does (the pressure rises and the
+// ullage falls with the temperature and with the fill): the points
+// inside, the design's own state and guesses at the root, are evaluated
+// first, and an end of the range is evaluated only when no point inside
+// already settles it (a point with gap > 0 shows that gap(hi) > 0, one
+// with gap ≤ 0 that gap(lo) ≤ 0). Brent then polishes the root in the
+// narrowest bracket found, to the same tolerance as searchRising, so
+// the two agree within that tolerance; guesses a hair either side of the
+// root leave Brent nothing to do.
+func searchRisingWarm(gap func(float64) float64, lo, hi float64, inside ...float64) (float64, Bound, *solve.Root, error) {
+	gap = unsafeWhereUnknown(gap)
+	a, b := lo, hi
+	var gA, gB float64
+	haveA, haveB := false, false
+	for _, x := range inside {
+		if !(x > a && x < b) {
+			continue
+		}
+		if g := gap(x); g <= 0 {
+			a, gA, haveA = x, g, true
+		} else {
+			b, gB, haveB = x, g, true
+		}
+	}
+	if !haveB {
+		if gB = gap(hi); gB <= 0 {
+			return hi, BoundAbove, nil, nil
+		}
+	}
+	if !haveA {
+		if gA = gap(lo); gA > 0 {
+			return lo, BoundBelow, nil, nil
+		}
+	}
+	known := gap
+	gap = func(x float64) float64 {
+		switch x {
+		case a:
+			return gA
+		case b:
+			return gB
+		}
+		return known(x)
+	}
+	r, err := solve.Brent(gap, a, b, searchTolerance(hi), 200)
+	r.Lo, r.Hi = lo, hi
+	if err != nil && errors.Is(err, solve.ErrNotFinite) {
+		return 0, "", nil, err
+	}
+	return r.X, BoundFound, &r, nil
+}
+
+// searchTolerance is the tolerance of the searches on [lo, hi].
+func searchTolerance(hi float64) float64 { return 1e-6 * math.Max(math.Abs(hi), 1e-12) }
+
+// pressureGuesses are points about the maximum safe temperature by
+// pressure for searchRisingWarm: where the vapour pressure reaches the
+// allowable pressure, T*, the root itself for a two-phase vessel without
+// residual gas, taken a quarter of the search's tolerance either side;
+// with residual gas, whose pressure adds to the vapour's, T* is above the
+// root, and only it is given. None when the vessel is liquid-full before
+// T* or T* is outside [lo, hi].
+func (a *Assessment) pressureGuesses(sub *fluids.Substance, lo, hi, allow float64) []float64 {
+	ts, err := sub.SaturationTemperature(allow)
+	if err != nil || !(ts > lo && ts < hi) || (a.LiquidFullReached && a.LiquidFullK <= ts) {
+		return nil
+	}
+	if a.vessel.gasMoles > 0 {
+		return []float64{ts}
+	}
+	h := 0.25 * searchTolerance(hi)
+	return []float64{ts - h, ts + h}
+}
+
+// fillGuesses are points about the maximum safe fill for
+// searchRisingWarm. With the vessel two-phase at the hottest temperature
+// and its vapour pressure within the allowable pressure, the fill at
+// which the ullage falls to the minimum there is, without residual gas,
+//
+//	m_u = V·(ρ_v + (1 − U_min/100)·(ρ_l − ρ_v)),
+//
+// the root itself, taken a quarter of the search's tolerance either
+// side; residual gas, squeezing the liquid a little, moves the root a
+// little above m_u, so m_u and a point 0.1 % above it are given. None
+// where the formula does not hold.
+func (a *Assessment) fillGuesses(sub *fluids.Substance, lo, hi, allow float64) []float64 {
+	d := &a.Design
+	if d.HottestK > sub.CriticalTemperature() {
+		return nil
+	}
+	sat, err := a.vessel.sats.saturation(sub, d.HottestK)
+	if err != nil || !(sat.PressurePa <= allow) {
+		return nil
+	}
+	mu := a.VolumeM3 * (sat.VapourDensity + (1-d.Criteria.MinUllagePercent/100)*(sat.LiquidDensity-sat.VapourDensity))
+	if !(mu > lo && mu < hi) {
+		return nil
+	}
+	if a.vessel.gasMoles > 0 {
+		return []float64{mu, mu * (1 + 1e-3)}
+	}
+	h := 0.25 * searchTolerance(hi)
+	return []float64{mu - h, mu + h}
 }
 
 // unsafeWhereUnknown wraps a gap function so that where the model cannot
