@@ -141,8 +141,9 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 
 // assess is Assess; warm says whether the searches for the maximum safe
 // temperature and fill start from the brackets the design's own states
-// point to (Assess) or from their whole ranges only, as a reference for
-// the tests.
+// point to and the gas-bubble solves from the bubble the liquid leaves
+// at its saturated density (Assess), or run over their whole ranges
+// only, as a reference for the tests.
 func assess(d Design, lib *fluids.Library, warm bool) (*Assessment, error) {
 	sub, glass, err := prepare(d, lib)
 	if err != nil {
@@ -162,6 +163,7 @@ func assess(d Design, lib *fluids.Library, warm bool) (*Assessment, error) {
 	a.VolumeM3 = d.Vessel.Volume()
 	a.FillDensity = d.FillMassKg / a.VolumeM3
 	sats := newSatMemo(sub, d.ResidualGasPressurePa > 0, d.SealingTemperatureK, d.HottestK, d.ColdestK)
+	sats.direct = !warm
 	v, err := newSharedVessel(sub, d.FillMassKg, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats)
 	if err != nil {
 		return nil, err
