@@ -474,20 +474,34 @@ func searchTolerance(hi float64) float64 { return 1e-6 * math.Max(math.Abs(hi), 
 // pressureGuesses are points about the maximum safe temperature by
 // pressure for searchRisingWarm: where the vapour pressure reaches the
 // allowable pressure, T*, the root itself for a two-phase vessel without
-// residual gas, taken a quarter of the search's tolerance either side;
-// with residual gas, whose pressure adds to the vapour's, T* is above the
-// root, and only it is given. None when the vessel is liquid-full before
-// T* or T* is outside [lo, hi].
+// residual gas, taken a quarter of the search's tolerance either side.
+// Residual gas adds its pressure nRT/V_g to the vapour's: with V_g at T*
+// taken as the space the liquid leaves at its saturated density, the
+// vapour pressure reaching the allowable pressure less that gives T₁ a
+// hair from the root (the liquid's compression, neglected, moves the gas
+// pressure by some 1e-4 of itself), given a quarter of the tolerance
+// either side, then T*, above the root. None when the vessel is
+// liquid-full before T* or T* is outside [lo, hi].
 func (a *Assessment) pressureGuesses(sub *fluids.Substance, lo, hi, allow float64) []float64 {
 	ts, err := sub.SaturationTemperature(allow)
 	if err != nil || !(ts > lo && ts < hi) || (a.LiquidFullReached && a.LiquidFullK <= ts) {
 		return nil
 	}
-	if a.vessel.gasMoles > 0 {
+	h := 0.25 * searchTolerance(hi)
+	v := a.vessel
+	if v.gasMoles == 0 {
+		return []float64{ts - h, ts + h}
+	}
+	sat, err := sub.SaturationNoHeatCapacity(ts)
+	if err != nil || !(v.density > sat.VapourDensity && v.density < sat.LiquidDensity) {
 		return []float64{ts}
 	}
-	h := 0.25 * searchTolerance(hi)
-	return []float64{ts - h, ts + h}
+	vg := v.volume - (v.mass-sat.VapourDensity*v.volume)/(sat.LiquidDensity-sat.VapourDensity)
+	t1, err := sub.SaturationTemperature(allow - v.gasMoles*units.GasConstant*ts/vg)
+	if err != nil || !(t1 > lo && t1 < ts) {
+		return []float64{ts}
+	}
+	return []float64{t1 - h, t1 + h, ts}
 }
 
 // fillGuesses are points about the maximum safe fill for
