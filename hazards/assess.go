@@ -353,7 +353,7 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance, warm bool) error {
 	mLo := mMax * 1e-6
 	fillAt := []float64{d.FillMassKg}
 	if warm {
-		fillAt = append(fillAt, a.fillGuesses(sub, mLo, mMax, allow)...)
+		fillAt = append(fillAt, a.fillGuesses(sub, mLo, mMax, allow, fillGap)...)
 	}
 	mf, bf, rf, err := search(fillGap, mLo, mMax, fillAt...)
 	if err != nil {
@@ -512,10 +512,12 @@ func (a *Assessment) pressureGuesses(sub *fluids.Substance, lo, hi, allow float6
 //	m_u = V·(ρ_v + (1 − U_min/100)·(ρ_l − ρ_v)),
 //
 // the root itself, taken a quarter of the search's tolerance either
-// side; residual gas, squeezing the liquid a little, moves the root a
-// little above m_u, so m_u and a point 0.1 % above it are given. None
-// where the formula does not hold.
-func (a *Assessment) fillGuesses(sub *fluids.Substance, lo, hi, allow float64) []float64 {
+// side. Residual gas, squeezing the liquid a little, moves the root a
+// little above m_u: one Newton step on gap from m_u, with the slope of
+// its ullage part, 1/(V·(ρ_l − ρ_v)), gives the point taken either side
+// instead, then m_u and a point 0.1 % above it. None where the formula
+// does not hold.
+func (a *Assessment) fillGuesses(sub *fluids.Substance, lo, hi, allow float64, gap func(float64) float64) []float64 {
 	d := &a.Design
 	if d.HottestK > sub.CriticalTemperature() {
 		return nil
@@ -528,10 +530,15 @@ func (a *Assessment) fillGuesses(sub *fluids.Substance, lo, hi, allow float64) [
 	if !(mu > lo && mu < hi) {
 		return nil
 	}
-	if a.vessel.gasMoles > 0 {
-		return []float64{mu, mu * (1 + 1e-3)}
-	}
 	h := 0.25 * searchTolerance(hi)
+	if a.vessel.gasMoles > 0 {
+		g := gap(mu)
+		m1 := mu - g*a.VolumeM3*(sat.LiquidDensity-sat.VapourDensity)
+		if !isFinite(g) || !(m1-h > lo && m1+h < hi) {
+			return []float64{mu, mu * (1 + 1e-3)}
+		}
+		return []float64{m1 - h, m1 + h, mu, mu * (1 + 1e-3)}
+	}
 	return []float64{mu - h, mu + h}
 }
 
