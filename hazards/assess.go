@@ -297,13 +297,18 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance, warm bool) error {
 		}
 		return minU - st.UllagePercent
 	}
-	search := searchRising
-	pressureAt := []float64{d.HottestK}
+	// The searches are called directly, never through a variable, so
+	// that their gap functions and points stay on the stack.
+	var tP float64
+	var bP Bound
+	var rP *solve.Root
+	var err error
 	if warm {
-		search = searchRisingWarm
-		pressureAt = append(pressureAt, a.pressureGuesses(sub, lo, hi, allow)...)
+		var at [4]float64
+		tP, bP, rP, err = searchRisingWarm(pressureGap, lo, hi, a.appendPressureGuesses(append(at[:0], d.HottestK), sub, lo, hi, allow)...)
+	} else {
+		tP, bP, rP, err = searchRising(pressureGap, lo, hi, d.HottestK)
 	}
-	tP, bP, rP, err := search(pressureGap, lo, hi, pressureAt...)
 	if err != nil {
 		return fmt.Errorf("maximum safe temperature (pressure): %w", err)
 	}
@@ -351,11 +356,15 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance, warm bool) error {
 		return math.Max((st.PressurePa-allow)/allow, (minU-st.UllagePercent)/100)
 	}
 	mLo := mMax * 1e-6
-	fillAt := []float64{d.FillMassKg}
+	var mf float64
+	var bf Bound
+	var rf *solve.Root
 	if warm {
-		fillAt = append(fillAt, a.fillGuesses(sub, mLo, mMax, allow, fillGap)...)
+		var at [5]float64
+		mf, bf, rf, err = searchRisingWarm(fillGap, mLo, mMax, a.appendFillGuesses(append(at[:0], d.FillMassKg), sub, mLo, mMax, allow, fillGap)...)
+	} else {
+		mf, bf, rf, err = searchRising(fillGap, mLo, mMax, d.FillMassKg)
 	}
-	mf, bf, rf, err := search(fillGap, mLo, mMax, fillAt...)
 	if err != nil {
 		return fmt.Errorf("maximum safe fill: %w", err)
 	}
@@ -471,7 +480,7 @@ func searchRisingWarm(gap func(float64) float64, lo, hi float64, inside ...float
 // searchTolerance is the tolerance of the searches on [lo, hi].
 func searchTolerance(hi float64) float64 { return 1e-6 * math.Max(math.Abs(hi), 1e-12) }
 
-// pressureGuesses are points about the maximum safe temperature by
+// appendPressureGuesses appends to dst points about the maximum safe temperature by
 // pressure for searchRisingWarm: where the vapour pressure reaches the
 // allowable pressure, T*, the root itself for a two-phase vessel without
 // residual gas, taken a quarter of the search's tolerance either side.
@@ -482,29 +491,29 @@ func searchTolerance(hi float64) float64 { return 1e-6 * math.Max(math.Abs(hi), 
 // pressure by some 1e-4 of itself), given a quarter of the tolerance
 // either side, then T*, above the root. None when the vessel is
 // liquid-full before T* or T* is outside [lo, hi].
-func (a *Assessment) pressureGuesses(sub *fluids.Substance, lo, hi, allow float64) []float64 {
+func (a *Assessment) appendPressureGuesses(dst []float64, sub *fluids.Substance, lo, hi, allow float64) []float64 {
 	ts, err := sub.SaturationTemperature(allow)
 	if err != nil || !(ts > lo && ts < hi) || (a.LiquidFullReached && a.LiquidFullK <= ts) {
-		return nil
+		return dst
 	}
 	h := 0.25 * searchTolerance(hi)
 	v := a.vessel
 	if v.gasMoles == 0 {
-		return []float64{ts - h, ts + h}
+		return append(dst, ts-h, ts+h)
 	}
 	sat, err := sub.SaturationNoHeatCapacity(ts)
 	if err != nil || !(v.density > sat.VapourDensity && v.density < sat.LiquidDensity) {
-		return []float64{ts}
+		return append(dst, ts)
 	}
 	vg := v.volume - (v.mass-sat.VapourDensity*v.volume)/(sat.LiquidDensity-sat.VapourDensity)
 	t1, err := sub.SaturationTemperature(allow - v.gasMoles*units.GasConstant*ts/vg)
 	if err != nil || !(t1 > lo && t1 < ts) {
-		return []float64{ts}
+		return append(dst, ts)
 	}
-	return []float64{t1 - h, t1 + h, ts}
+	return append(dst, t1-h, t1+h, ts)
 }
 
-// fillGuesses are points about the maximum safe fill for
+// appendFillGuesses appends to dst points about the maximum safe fill for
 // searchRisingWarm. With the vessel two-phase at the hottest temperature
 // and its vapour pressure within the allowable pressure, the fill at
 // which the ullage falls to the minimum there is, without residual gas,
@@ -517,29 +526,29 @@ func (a *Assessment) pressureGuesses(sub *fluids.Substance, lo, hi, allow float6
 // its ullage part, 1/(V·(ρ_l − ρ_v)), gives the point taken either side
 // instead, then m_u and a point 0.1 % above it. None where the formula
 // does not hold.
-func (a *Assessment) fillGuesses(sub *fluids.Substance, lo, hi, allow float64, gap func(float64) float64) []float64 {
+func (a *Assessment) appendFillGuesses(dst []float64, sub *fluids.Substance, lo, hi, allow float64, gap func(float64) float64) []float64 {
 	d := &a.Design
 	if d.HottestK > sub.CriticalTemperature() {
-		return nil
+		return dst
 	}
 	sat, err := a.vessel.sats.saturation(sub, d.HottestK)
 	if err != nil || !(sat.PressurePa <= allow) {
-		return nil
+		return dst
 	}
 	mu := a.VolumeM3 * (sat.VapourDensity + (1-d.Criteria.MinUllagePercent/100)*(sat.LiquidDensity-sat.VapourDensity))
 	if !(mu > lo && mu < hi) {
-		return nil
+		return dst
 	}
 	h := 0.25 * searchTolerance(hi)
 	if a.vessel.gasMoles > 0 {
 		g := gap(mu)
 		m1 := mu - g*a.VolumeM3*(sat.LiquidDensity-sat.VapourDensity)
 		if !isFinite(g) || !(m1-h > lo && m1+h < hi) {
-			return []float64{mu, mu * (1 + 1e-3)}
+			return append(dst, mu, mu*(1+1e-3))
 		}
-		return []float64{m1 - h, m1 + h, mu, mu * (1 + 1e-3)}
+		return append(dst, m1-h, m1+h, mu, mu*(1+1e-3))
 	}
-	return []float64{mu - h, mu + h}
+	return append(dst, mu-h, mu+h)
 }
 
 // unsafeWhereUnknown wraps a gap function so that where the model cannot
