@@ -447,11 +447,12 @@ func (v *sealedVessel) finishGasBubble(st VesselState, sat fluids.Saturation, nr
 }
 
 // secantBracketed finds the root of a smooth rising f from y0, where its
-// slope is about slope0, by secant steps, and returns it only when f
-// changes sign across [y − tol/2, y + tol/2] (y below top), so that the
-// root found is within tol/2 of a true root: Brent's own guarantee for
-// a tolerance tol. ok is false when the steps do not settle or the
-// bracket is not confirmed; the caller then solves from scratch.
+// slope is about slope0, by secant steps, and returns the last step's y
+// only when f changes sign between y and y ± tol/2 (on the side the
+// root lies, by the sign of f(y)), so that y is within tol/2 of a true
+// root: Brent's own guarantee for a tolerance tol. ok is false when the
+// steps do not settle or the bracket is not confirmed; the caller then
+// solves from scratch.
 func secantBracketed(f func(float64) float64, y0, slope0, tol, top float64) (float64, bool) {
 	f0 := f(y0)
 	if !isFinite(f0) || !(slope0 > 0) {
@@ -464,15 +465,18 @@ func secantBracketed(f func(float64) float64, y0, slope0, tol, top float64) (flo
 			return 0, false
 		}
 		f1 := f(y1)
-		if !isFinite(f1) {
+		switch {
+		case !isFinite(f1):
 			return 0, false
+		case f1 == 0:
+			return y1, true
 		}
 		step := 0.0
 		if f1 != f0 {
 			step = -f1 * (y1 - y0) / (f1 - f0)
 		}
-		if f1 == 0 || math.Abs(step) <= 0.25*h {
-			if f(y1-h) <= 0 && f(y1+h) >= 0 {
+		if math.Abs(step) <= 0.25*h {
+			if f1 < 0 && f(y1+h) >= 0 || f1 > 0 && f(y1-h) <= 0 {
 				return y1, true
 			}
 			return 0, false
