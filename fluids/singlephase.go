@@ -285,8 +285,9 @@ func (s *Substance) CompressedLiquidDensity(t, p float64) (float64, Flags, error
 // for densities at many pressures (a solver's steps): on the correlation
 // route the vapour pressure, the saturated liquid density and the Tait
 // parameter B of that temperature are worked out once. Density gives
-// exactly what CompressedLiquidDensity gives. The zero value is unusable;
-// see Substance.PrepareLiquidIsotherm.
+// exactly what CompressedLiquidDensity gives. It is safe for concurrent
+// use once prepared. The zero value is unusable; see
+// Substance.PrepareLiquidIsotherm.
 type LiquidIsotherm struct {
 	s  *Substance
 	t  float64
@@ -299,13 +300,16 @@ type LiquidIsotherm struct {
 	// SinglePhasePressure's bubble-temperature search (see quickCheck).
 	quick bool
 	// slopeLo and slopeHi are the ends of taitSlope's difference at t,
-	// the same for every density, worked out with quick.
+	// the same for every density, worked out for a quick isotherm on the
+	// first strongly compressed state only (most isotherms never see one).
+	slopeOnce        sync.Once
 	slopeLo, slopeHi taitAt
 }
 
 // taitSlope is taitSlope(t, rho) at the isotherm's temperature, for a
 // quick isotherm.
 func (li *LiquidIsotherm) taitSlope(rho float64) float64 {
+	li.slopeOnce.Do(func() { li.slopeLo, li.slopeHi = li.s.taitSlopeEnds(li.t) })
 	return li.s.taitSlopeFrom(li.slopeLo, li.slopeHi, rho)
 }
 
@@ -322,9 +326,6 @@ func (s *Substance) PrepareLiquidIsotherm(t float64, li *LiquidIsotherm) {
 	li.rhoSat = s.liquidDensity(t)
 	li.b = s.compressed.bParam(t)
 	li.quick = s.liquid.decreasing() && t <= s.liquid.tJoin && t < taitMaxTr*s.tc-1e-6
-	if li.quick {
-		li.slopeLo, li.slopeHi = s.taitSlopeEnds(t)
-	}
 }
 
 // Density returns the density (kg/m³) of the liquid at the isotherm's

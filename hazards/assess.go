@@ -136,6 +136,15 @@ type Release struct {
 // design first and returns an *InputError (wrapping ErrInvalidInput) for
 // any bad input; no NaN or infinity reaches a result.
 func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
+	return assess(d, lib, true)
+}
+
+// assess is Assess; warm says whether the searches for the maximum safe
+// temperature and fill start from the brackets the design's own states
+// point to and the gas-bubble solves from the bubble the liquid leaves
+// at its saturated density (Assess), or run over their whole ranges
+// only, as a reference for the tests.
+func assess(d Design, lib *fluids.Library, warm bool) (*Assessment, error) {
 	sub, glass, err := prepare(d, lib)
 	if err != nil {
 		return nil, err
@@ -154,6 +163,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	a.VolumeM3 = d.Vessel.Volume()
 	a.FillDensity = d.FillMassKg / a.VolumeM3
 	sats := newSatMemo(sub, d.ResidualGasPressurePa > 0, d.SealingTemperatureK, d.HottestK, d.ColdestK)
+	sats.direct = !warm
 	v, err := newSharedVessel(sub, d.FillMassKg, a.VolumeM3, d.SealingTemperatureK, d.ResidualGasPressurePa, d.AmbientPressurePa, sats)
 	if err != nil {
 		return nil, err
@@ -195,7 +205,7 @@ func Assess(d Design, lib *fluids.Library) (*Assessment, error) {
 	}
 	a.assessThermalShock()
 
-	if err := a.findMaxSafe(sub); err != nil {
+	if err := a.findMaxSafe(sub, warm); err != nil {
 		return nil, err
 	}
 	a.rupture(sub)
@@ -257,7 +267,7 @@ func (a *Assessment) searchTopK(sub *fluids.Substance) float64 {
 	return math.Max(a.Design.HottestK+100, sub.CriticalTemperature()+50)
 }
 
-func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
+func (a *Assessment) findMaxSafe(sub *fluids.Substance, warm bool) error {
 	d := &a.Design
 	lo, hi := d.ColdestK, a.searchTopK(sub)
 	allow := a.AllowablePressurePa()
@@ -287,7 +297,18 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		}
 		return minU - st.UllagePercent
 	}
-	tP, bP, rP, err := searchRising(pressureGap, lo, hi, d.HottestK)
+	// The searches are called directly, never through a variable, so
+	// that their gap functions and points stay on the stack.
+	var tP float64
+	var bP Bound
+	var rP *solve.Root
+	var err error
+	if warm {
+		var at [4]float64
+		tP, bP, rP, err = searchRisingWarm(pressureGap, lo, hi, a.appendPressureGuesses(append(at[:0], d.HottestK), sub, lo, hi, allow)...)
+	} else {
+		tP, bP, rP, err = searchRising(pressureGap, lo, hi, d.HottestK)
+	}
 	if err != nil {
 		return fmt.Errorf("maximum safe temperature (pressure): %w", err)
 	}
@@ -335,7 +356,15 @@ func (a *Assessment) findMaxSafe(sub *fluids.Substance) error {
 		return math.Max((st.PressurePa-allow)/allow, (minU-st.UllagePercent)/100)
 	}
 	mLo := mMax * 1e-6
-	mf, bf, rf, err := searchRising(fillGap, mLo, mMax, d.FillMassKg)
+	var mf float64
+	var bf Bound
+	var rf *solve.Root
+	if warm {
+		var at [5]float64
+		mf, bf, rf, err = searchRisingWarm(fillGap, mLo, mMax, a.appendFillGuesses(append(at[:0], d.FillMassKg), sub, mLo, mMax, allow, fillGap)...)
+	} else {
+		mf, bf, rf, err = searchRising(fillGap, mLo, mMax, d.FillMassKg)
+	}
 	if err != nil {
 		return fmt.Errorf("maximum safe fill: %w", err)
 	}
@@ -387,12 +416,139 @@ func searchRising(gap func(float64) float64, lo, hi float64, inside ...float64) 
 		}
 		return known(x)
 	}
-	r, err := solve.Brent(gap, a, b, 1e-6*math.Max(math.Abs(hi), 1e-12), 200)
+	r, err := solve.Brent(gap, a, b, searchTolerance(hi), 200)
 	r.Lo, r.Hi = lo, hi
 	if err != nil && errors.Is(err, solve.ErrNotFinite) {
 		return 0, "", nil, err
 	}
 	return r.X, BoundFound, &r, nil
+}
+
+// searchRisingWarm is searchRising for a gap that rises everywhere on
+// [lo, hi], as every gap searched here does (the pressure rises and the
+// ullage falls with the temperature and with the fill): the points
+// inside, the design's own state and guesses at the root, are evaluated
+// first, and an end of the range is evaluated only when no point inside
+// already settles it (a point with gap > 0 shows that gap(hi) > 0, one
+// with gap ≤ 0 that gap(lo) ≤ 0). Brent then polishes the root in the
+// narrowest bracket found, to the same tolerance as searchRising, so
+// the two agree within that tolerance; guesses a hair either side of the
+// root leave Brent nothing to do.
+func searchRisingWarm(gap func(float64) float64, lo, hi float64, inside ...float64) (float64, Bound, *solve.Root, error) {
+	gap = unsafeWhereUnknown(gap)
+	a, b := lo, hi
+	var gA, gB float64
+	haveA, haveB := false, false
+	for _, x := range inside {
+		if !(x > a && x < b) {
+			continue
+		}
+		if g := gap(x); g <= 0 {
+			a, gA, haveA = x, g, true
+		} else {
+			b, gB, haveB = x, g, true
+		}
+	}
+	if !haveB {
+		if gB = gap(hi); gB <= 0 {
+			return hi, BoundAbove, nil, nil
+		}
+	}
+	if !haveA {
+		if gA = gap(lo); gA > 0 {
+			return lo, BoundBelow, nil, nil
+		}
+	}
+	known := gap
+	gap = func(x float64) float64 {
+		switch x {
+		case a:
+			return gA
+		case b:
+			return gB
+		}
+		return known(x)
+	}
+	r, err := solve.Brent(gap, a, b, searchTolerance(hi), 200)
+	r.Lo, r.Hi = lo, hi
+	if err != nil && errors.Is(err, solve.ErrNotFinite) {
+		return 0, "", nil, err
+	}
+	return r.X, BoundFound, &r, nil
+}
+
+// searchTolerance is the tolerance of the searches on [lo, hi].
+func searchTolerance(hi float64) float64 { return 1e-6 * math.Max(math.Abs(hi), 1e-12) }
+
+// appendPressureGuesses appends to dst points about the maximum safe temperature by
+// pressure for searchRisingWarm: where the vapour pressure reaches the
+// allowable pressure, T*, the root itself for a two-phase vessel without
+// residual gas, taken a quarter of the search's tolerance either side.
+// Residual gas adds its pressure nRT/V_g to the vapour's: with V_g at T*
+// taken as the space the liquid leaves at its saturated density, the
+// vapour pressure reaching the allowable pressure less that gives T₁ a
+// hair from the root (the liquid's compression, neglected, moves the gas
+// pressure by some 1e-4 of itself), given a quarter of the tolerance
+// either side, then T*, above the root. None when the vessel is
+// liquid-full before T* or T* is outside [lo, hi].
+func (a *Assessment) appendPressureGuesses(dst []float64, sub *fluids.Substance, lo, hi, allow float64) []float64 {
+	ts, err := sub.SaturationTemperature(allow)
+	if err != nil || !(ts > lo && ts < hi) || (a.LiquidFullReached && a.LiquidFullK <= ts) {
+		return dst
+	}
+	h := 0.25 * searchTolerance(hi)
+	v := a.vessel
+	if v.gasMoles == 0 {
+		return append(dst, ts-h, ts+h)
+	}
+	sat, err := sub.SaturationNoHeatCapacity(ts)
+	if err != nil || !(v.density > sat.VapourDensity && v.density < sat.LiquidDensity) {
+		return append(dst, ts)
+	}
+	vg := v.volume - (v.mass-sat.VapourDensity*v.volume)/(sat.LiquidDensity-sat.VapourDensity)
+	t1, err := sub.SaturationTemperature(allow - v.gasMoles*units.GasConstant*ts/vg)
+	if err != nil || !(t1 > lo && t1 < ts) {
+		return append(dst, ts)
+	}
+	return append(dst, t1-h, t1+h, ts)
+}
+
+// appendFillGuesses appends to dst points about the maximum safe fill for
+// searchRisingWarm. With the vessel two-phase at the hottest temperature
+// and its vapour pressure within the allowable pressure, the fill at
+// which the ullage falls to the minimum there is, without residual gas,
+//
+//	m_u = V·(ρ_v + (1 − U_min/100)·(ρ_l − ρ_v)),
+//
+// the root itself, taken a quarter of the search's tolerance either
+// side. Residual gas, squeezing the liquid a little, moves the root a
+// little above m_u: one Newton step on gap from m_u, with the slope of
+// its ullage part, 1/(V·(ρ_l − ρ_v)), gives the point taken either side
+// instead, then m_u and a point 0.1 % above it. None where the formula
+// does not hold.
+func (a *Assessment) appendFillGuesses(dst []float64, sub *fluids.Substance, lo, hi, allow float64, gap func(float64) float64) []float64 {
+	d := &a.Design
+	if d.HottestK > sub.CriticalTemperature() {
+		return dst
+	}
+	sat, err := a.vessel.sats.saturation(sub, d.HottestK)
+	if err != nil || !(sat.PressurePa <= allow) {
+		return dst
+	}
+	mu := a.VolumeM3 * (sat.VapourDensity + (1-d.Criteria.MinUllagePercent/100)*(sat.LiquidDensity-sat.VapourDensity))
+	if !(mu > lo && mu < hi) {
+		return dst
+	}
+	h := 0.25 * searchTolerance(hi)
+	if a.vessel.gasMoles > 0 {
+		g := gap(mu)
+		m1 := mu - g*a.VolumeM3*(sat.LiquidDensity-sat.VapourDensity)
+		if !isFinite(g) || !(m1-h > lo && m1+h < hi) {
+			return append(dst, mu, mu*(1+1e-3))
+		}
+		return append(dst, m1-h, m1+h, mu, mu*(1+1e-3))
+	}
+	return append(dst, mu-h, mu+h)
 }
 
 // unsafeWhereUnknown wraps a gap function so that where the model cannot

@@ -76,7 +76,12 @@ type sealedVessel struct {
 // Every value is what the direct call gives.
 type satMemo struct {
 	// gas says the compressed liquid is prepared (liq or eos).
-	gas    bool
+	gas bool
+	// direct says the gas-bubble solve on the correlation route runs
+	// Brent over its whole bracket, without the warm start
+	// (withGasBubbleBrentOn): the reference the tests hold the warm
+	// start to.
+	direct bool
 	n      int
 	t      [3]float64
 	sat    [3]fluids.Saturation
@@ -393,6 +398,17 @@ func (v *sealedVessel) withGasBubbleBrentOn(st VesselState, sat fluids.Saturatio
 	if v.mass-sat.VapourDensity*v.volume <= 0 {
 		return st, fmt.Errorf("internal: gas bubble asked for an all-vapour state at %.2f K", t)
 	}
+	if v.sats == nil || !v.sats.direct {
+		// The gas space the liquid leaves at its saturated density, a
+		// little short of the root (the gas squeezes the liquid), starts
+		// a secant search.
+		liquidVolume := (v.mass - sat.VapourDensity*v.volume) / (sat.LiquidDensity - sat.VapourDensity)
+		if vg0 := v.volume - liquidVolume; vg0 > 0 {
+			if y, ok := secantBracketed(residual, math.Log(vg0), vg0*(1-sat.VapourDensity/sat.LiquidDensity), gasBubbleTolerance, hi); ok {
+				return v.finishGasBubble(st, sat, nrt, y, residual, &flags), nil
+			}
+		}
+	}
 	lo := hi + math.Log(1e-3)
 	for i := 0; !(residual(lo) <= 0); i++ {
 		if i > 20 {
@@ -402,12 +418,23 @@ func (v *sealedVessel) withGasBubbleBrentOn(st VesselState, sat fluids.Saturatio
 		}
 		lo += math.Log(1e-2)
 	}
-	r, err := solve.Brent(residual, lo, hi, 1e-10, 200)
+	r, err := solve.Brent(residual, lo, hi, gasBubbleTolerance, 200)
 	if err != nil {
 		return v.withoutBubble(st, sat)
 	}
-	vg := math.Exp(r.X)
-	residual(r.X)
+	return v.finishGasBubble(st, sat, nrt, r.X, residual, &flags), nil
+}
+
+// gasBubbleTolerance is the tolerance in ln V_g of the gas-bubble solve
+// on the correlation route: Brent's, and the bracket the warm start's
+// secant steps are confirmed in (secantBracketed).
+const gasBubbleTolerance = 1e-10
+
+// finishGasBubble is the state with gas space exp(y), the root of
+// residual, whose flags residual leaves in flags.
+func (v *sealedVessel) finishGasBubble(st VesselState, sat fluids.Saturation, nrt, y float64, residual func(float64) float64, flags *fluids.Flags) VesselState {
+	vg := math.Exp(y)
+	residual(y)
 	st.GasPressurePa = nrt / vg
 	st.PressurePa = sat.PressurePa + st.GasPressurePa
 	st.UllagePercent = 100 * vg / v.volume
@@ -415,8 +442,48 @@ func (v *sealedVessel) withGasBubbleBrentOn(st VesselState, sat fluids.Saturatio
 	st.LiquidMassKg = v.mass - st.VapourMassKg
 	st.VapourDensity = sat.VapourDensity
 	st.LiquidDensity = st.LiquidMassKg / (v.volume - vg)
-	st.Flags |= flags
-	return st, nil
+	st.Flags |= *flags
+	return st
+}
+
+// secantBracketed finds the root of a smooth rising f from y0, where its
+// slope is about slope0, by secant steps, and returns the last step's y
+// only when f changes sign between y and y ± tol/2 (on the side the
+// root lies, by the sign of f(y)), so that y is within tol/2 of a true
+// root: Brent's own guarantee for a tolerance tol. ok is false when the
+// steps do not settle or the bracket is not confirmed; the caller then
+// solves from scratch.
+func secantBracketed(f func(float64) float64, y0, slope0, tol, top float64) (float64, bool) {
+	f0 := f(y0)
+	if !isFinite(f0) || !(slope0 > 0) {
+		return 0, false
+	}
+	y1 := y0 - f0/slope0
+	h := 0.5 * tol
+	for i := 0; i < 12; i++ {
+		if !isFinite(y1) || y1+h >= top {
+			return 0, false
+		}
+		f1 := f(y1)
+		switch {
+		case !isFinite(f1):
+			return 0, false
+		case f1 == 0:
+			return y1, true
+		}
+		step := 0.0
+		if f1 != f0 {
+			step = -f1 * (y1 - y0) / (f1 - f0)
+		}
+		if math.Abs(step) <= 0.25*h {
+			if f1 < 0 && f(y1+h) >= 0 || f1 > 0 && f(y1-h) <= 0 {
+				return y1, true
+			}
+			return 0, false
+		}
+		y0, f0, y1 = y1, f1, y1+step
+	}
+	return 0, false
 }
 
 // newtonStopStep is the Newton step in ln V_g below which the gas-bubble
