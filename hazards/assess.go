@@ -404,24 +404,7 @@ func searchRising(gap func(float64) float64, lo, hi float64, inside ...float64) 
 			b, gB = x, g
 		}
 	}
-	// Brent starts from the two ends: their values are kept (each gap is
-	// a pure function, so only the work changes).
-	known := gap
-	gap = func(x float64) float64 {
-		switch x {
-		case a:
-			return gA
-		case b:
-			return gB
-		}
-		return known(x)
-	}
-	r, err := solve.Brent(gap, a, b, searchTolerance(hi), 200)
-	r.Lo, r.Hi = lo, hi
-	if err != nil && errors.Is(err, solve.ErrNotFinite) {
-		return 0, "", nil, err
-	}
-	return r.X, BoundFound, &r, nil
+	return polishRoot(gap, a, b, gA, gB, lo, hi)
 }
 
 // searchRisingWarm is searchRising for a gap that rises everywhere on
@@ -459,6 +442,14 @@ func searchRisingWarm(gap func(float64) float64, lo, hi float64, inside ...float
 			return lo, BoundBelow, nil, nil
 		}
 	}
+	return polishRoot(gap, a, b, gA, gB, lo, hi)
+}
+
+// polishRoot runs Brent's method on the bracket [a, b] of the search
+// over [lo, hi], to the searches' tolerance. The gaps at the bracket's
+// ends, gA and gB, are already known and are not evaluated again (each
+// gap is a pure function, so only the work changes).
+func polishRoot(gap func(float64) float64, a, b, gA, gB, lo, hi float64) (float64, Bound, *solve.Root, error) {
 	known := gap
 	gap = func(x float64) float64 {
 		switch x {
