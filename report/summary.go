@@ -45,10 +45,6 @@ func dateOrBlank(m Meta) string {
 func (w *assessmentWriter) summary() {
 	d, a := w.d, w.a
 	d.space(2)
-	counts := map[hazards.Status]int{}
-	for _, f := range a.Findings {
-		counts[f.Status]++
-	}
 	var expl string
 	switch a.Verdict {
 	case hazards.StatusFail:
@@ -58,8 +54,7 @@ func (w *assessmentWriter) summary() {
 	default:
 		expl = "The design meets every review criterion with margin, within the models and data stated in this record."
 	}
-	tally := fmt.Sprintf("%d pass · %d caution · %d fail, of %d criteria", counts[hazards.StatusPass], counts[hazards.StatusCaution], counts[hazards.StatusFail], len(a.Findings))
-	d.verdictBox("Overall verdict", a.Verdict, tally, expl)
+	d.verdictBox("Overall verdict", a.Verdict, display.Tally(a.Findings), expl)
 	w.dataBehind()
 	d.subheading("Summary of findings")
 	rows := make([][]cell, 0, len(a.Findings))

@@ -361,7 +361,7 @@ func writeOneText(w io.Writer, c checked, unitSystem string) {
 	for _, v := range display.Findings(a, sys) {
 		fmt.Fprintf(w, "  %-12s %s\n               %s\n               %s\n", v.Status, v.Title, v.Numbers(), v.Text())
 	}
-	fmt.Fprintf(w, "\nverdict: %s\n", strings.ToUpper(string(a.Verdict)))
+	fmt.Fprintf(w, "\nverdict: %s (%s)\n", strings.ToUpper(string(a.Verdict)), display.Tally(a.Findings))
 	if c.tolerance != nil {
 		writeToleranceText(w, c.tolerance, sys)
 	}

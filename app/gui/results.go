@@ -1,8 +1,6 @@
 package gui
 
 import (
-	"fmt"
-
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/container"
@@ -12,6 +10,7 @@ import (
 	"ullage/app/look"
 	"ullage/hazards"
 	"ullage/report/chartmodel"
+	"ullage/report/display"
 )
 
 // resultsPanel shows the last good results: the verdict, the findings,
@@ -276,7 +275,6 @@ func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
 		v.noVerdict(note)
 		return
 	}
-	pass, caution, fail := countStatuses(a.Findings)
 	v.icon.SetResource(statusIcon(a.Verdict))
 	v.word.Text = statusWord(a.Verdict)
 	v.word.Color = statusColour(a.Verdict)
@@ -285,11 +283,8 @@ func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
 	}
 	v.caption.Color = statusColour(a.Verdict)
 	alpha := uint8(55)
-	counts := fmt.Sprintf("%d of %d criteria fail, %s, %d pass", fail, len(a.Findings), plural(caution, "caution"), pass)
-	if n := len(a.Findings) - pass - caution - fail; n > 0 {
-		// Each such row says why (no published limit) when selected.
-		counts += fmt.Sprintf(", %d not assessed", n)
-	}
+	// A row not assessed says why (no published limit) when selected.
+	counts := display.Tally(a.Findings)
 	if stale {
 		alpha = 18
 		v.caption.Text = "OUT OF DATE"

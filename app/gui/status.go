@@ -48,18 +48,3 @@ func tint(c color.Color, alpha uint8) color.Color {
 	r, g, b, _ := c.RGBA()
 	return color.NRGBA{R: uint8(r >> 8), G: uint8(g >> 8), B: uint8(b >> 8), A: alpha}
 }
-
-// countStatuses returns how many findings have each status.
-func countStatuses(fs []hazards.Finding) (pass, caution, fail int) {
-	for _, f := range fs {
-		switch f.Status {
-		case hazards.StatusPass:
-			pass++
-		case hazards.StatusCaution:
-			caution++
-		case hazards.StatusFail:
-			fail++
-		}
-	}
-	return
-}

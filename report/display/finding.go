@@ -1,6 +1,7 @@
 package display
 
 import (
+	"fmt"
 	"slices"
 	"strings"
 
@@ -366,4 +367,30 @@ func FailingTitles(vs []FindingView) []string {
 		}
 	}
 	return out
+}
+
+// Tally counts findings by status in one line, fails first, the same
+// in the window's verdict banner, the record's verdict box and the
+// command line: "0 fail · 0 caution · 15 pass · 2 not assessed, of 17
+// criteria" (a status no finding has is still counted, except not
+// assessed).
+func Tally(fs []hazards.Finding) string {
+	var pass, caution, fail, other int
+	for _, f := range fs {
+		switch f.Status {
+		case hazards.StatusPass:
+			pass++
+		case hazards.StatusCaution:
+			caution++
+		case hazards.StatusFail:
+			fail++
+		default:
+			other++
+		}
+	}
+	s := fmt.Sprintf("%d fail · %d caution · %d pass", fail, caution, pass)
+	if other > 0 {
+		s += fmt.Sprintf(" · %d not assessed", other)
+	}
+	return s + fmt.Sprintf(", of %d %s", len(fs), Agree(len(fs), "criterion", "criteria"))
 }

@@ -85,3 +85,28 @@ func TestFailingTitles(t *testing.T) {
 		t.Errorf("FailingTitles with no fail = %q, want nil", got)
 	}
 }
+
+// TestTally counts findings by status, fails first, with "not assessed"
+// only when a finding is.
+func TestTally(t *testing.T) {
+	fs := func(sts ...hazards.Status) []hazards.Finding {
+		out := make([]hazards.Finding, len(sts))
+		for i, st := range sts {
+			out[i].Status = st
+		}
+		return out
+	}
+	for _, c := range []struct {
+		in   []hazards.Finding
+		want string
+	}{
+		{fs(hazards.StatusPass), "0 fail · 0 caution · 1 pass, of 1 criterion"},
+		{fs(hazards.StatusPass, hazards.StatusFail, hazards.StatusCaution, hazards.StatusNotAssessed, hazards.StatusNotAssessed),
+			"1 fail · 1 caution · 1 pass · 2 not assessed, of 5 criteria"},
+		{nil, "0 fail · 0 caution · 0 pass, of 0 criteria"},
+	} {
+		if got := Tally(c.in); got != c.want {
+			t.Errorf("Tally = %q, want %q", got, c.want)
+		}
+	}
+}
