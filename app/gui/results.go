@@ -206,7 +206,7 @@ type verdictBanner struct {
 	icon    *widget.Icon
 	caption *canvas.Text
 	word    *canvas.Text
-	counts  *fitLabel
+	counts  *widget.Label // wraps: the tally and the no-verdict sentence are long
 	note    *fitLabel
 	// words holds the counts and the note; while the inputs are not
 	// acceptable the problem takes their place.
@@ -227,7 +227,8 @@ func newVerdictBanner(problem fyne.CanvasObject) *verdictBanner {
 	v.word = canvas.NewText("—", statusColour(""))
 	v.word.TextSize = 28
 	v.word.TextStyle = fyne.TextStyle{Bold: true}
-	v.counts = newFitLabel("", fyne.TextStyle{Bold: true})
+	v.counts = widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	v.counts.Wrapping = fyne.TextWrapWord
 	v.note = newFitLabel("", fyne.TextStyle{})
 	iconBox := container.New(fixedWidth{44}, v.icon)
 	words := container.New(fixedWidth{150}, container.NewVBox(v.caption, v.word))
@@ -247,7 +248,7 @@ func (v *verdictBanner) clear() {
 	v.word.Refresh()
 	v.bg.FillColor = tint(statusColour(""), 0)
 	v.bg.Refresh()
-	v.counts.SetText("No results yet")
+	setText(v.counts, "No results yet")
 	v.note.SetText("")
 }
 
@@ -263,7 +264,7 @@ func (v *verdictBanner) noVerdict(note string) {
 	v.word.Refresh()
 	v.bg.FillColor = tint(statusColour(""), 0)
 	v.bg.Refresh()
-	v.counts.SetText("No current verdict: an input is not acceptable. Fix the marked field; the findings below are for the last acceptable inputs.")
+	setText(v.counts, "No current verdict: an input is not acceptable. Fix the marked field; the findings below are for the last acceptable inputs.")
 	v.note.SetText(note)
 }
 
@@ -296,6 +297,6 @@ func (v *verdictBanner) set(a *hazards.Assessment, note string, stale bool) {
 	v.word.Refresh()
 	v.bg.FillColor = tint(statusColour(a.Verdict), alpha)
 	v.bg.Refresh()
-	v.counts.SetText(counts)
+	setText(v.counts, counts)
 	v.note.SetText(note)
 }
