@@ -3,8 +3,13 @@
 package assets
 
 import (
+	"bytes"
 	"embed"
+	"fmt"
 	"io/fs"
+
+	"ullage/hazards"
+	"ullage/hazards/designfile"
 )
 
 //go:embed icon.png
@@ -28,6 +33,30 @@ func Example() []byte {
 		panic("assets: example design missing from the build: " + err.Error())
 	}
 	return b
+}
+
+// ExampleFile returns the bundled example read as a design file, as
+// opening it would: a fresh copy on every call.
+func ExampleFile() (*designfile.File, error) {
+	f, err := designfile.Decode(bytes.NewReader(Example()), ExampleName)
+	if err != nil {
+		return nil, fmt.Errorf("the bundled example does not load: %w", err)
+	}
+	return f, nil
+}
+
+// ExampleDesign returns the design of the bundled example's newest
+// revision: a design valid in every field.
+func ExampleDesign() (hazards.Design, error) {
+	f, err := ExampleFile()
+	if err != nil {
+		return hazards.Design{}, err
+	}
+	r, err := f.Latest()
+	if err != nil {
+		return hazards.Design{}, fmt.Errorf("the bundled example: %w", err)
+	}
+	return r.Design, nil
 }
 
 // Examples returns the folder of example designs.

@@ -2,7 +2,6 @@ package gui
 
 import (
 	"bytes"
-	"fmt"
 	"path/filepath"
 	"slices"
 	"strings"
@@ -122,9 +121,9 @@ func newDocument(f *designfile.File, path, name string) (*document, error) {
 // exampleDocument opens the bundled example; it has no path, so saving
 // it asks where.
 func exampleDocument() (*document, error) {
-	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	f, err := assets.ExampleFile()
 	if err != nil {
-		return nil, fmt.Errorf("the bundled example does not load: %w", err)
+		return nil, err
 	}
 	return newDocument(f, "", assets.ExampleName+" (example)")
 }

@@ -1,13 +1,11 @@
 package parse_test
 
 import (
-	"bytes"
 	"math"
 	"testing"
 
 	"ullage/app/parse"
 	"ullage/assets"
-	"ullage/hazards/designfile"
 	"ullage/report/display"
 )
 
@@ -20,15 +18,10 @@ func FuzzParseNumber(f *testing.F) {
 	for _, s := range []string{"0", " 12,5 ", "1e308", "-1e-320", "NaN", "inf", "1,2,3", "0x1p-2", "１２", "", ",", "1_000", "+.5", "5e-324"} {
 		f.Add(s, uint8(0))
 	}
-	file, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	base, err := assets.ExampleDesign()
 	if err != nil {
 		f.Fatal(err)
 	}
-	latest, err := file.Latest()
-	if err != nil {
-		f.Fatal(err)
-	}
-	base := latest.Design
 	f.Fuzz(func(t *testing.T, s string, q uint8) {
 		x, ok := parse.Number(s)
 		if !ok {

@@ -7,12 +7,10 @@
 package prefs
 
 import (
-	"bytes"
 	"sync"
 
 	"ullage/assets"
 	"ullage/hazards"
-	"ullage/hazards/designfile"
 	"ullage/report"
 	"ullage/report/display"
 )
@@ -123,15 +121,11 @@ func (s Settings) Save(p Store) {
 // probeDesign is the bundled example's newest design, a design valid in
 // every field, into which criteria are put to be validated alone.
 var probeDesign = sync.OnceValue(func() hazards.Design {
-	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	d, err := assets.ExampleDesign()
 	if err != nil {
 		return hazards.Design{}
 	}
-	r, err := f.Latest()
-	if err != nil {
-		return hazards.Design{}
-	}
-	return r.Design
+	return d
 })
 
 // CriteriaError validates the criteria alone, returning the engine's

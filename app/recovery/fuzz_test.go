@@ -13,7 +13,7 @@ import (
 // and untouched.
 func exampleSnapshot(tb testing.TB) []byte {
 	tb.Helper()
-	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	f, err := assets.ExampleFile()
 	if err != nil {
 		tb.Fatal(err)
 	}

@@ -1,12 +1,10 @@
 package tolerance
 
 import (
-	"bytes"
 	"testing"
 
 	"ullage/assets"
 	"ullage/hazards"
-	"ullage/hazards/designfile"
 )
 
 // studyKind is one kind of design the speed benchmarks and the fast-path
@@ -31,7 +29,7 @@ type studyKind struct {
 //     sides of the dew point (about a third all vapour).
 func studyKinds(t testing.TB) []studyKind {
 	t.Helper()
-	f, err := designfile.Decode(bytes.NewReader(assets.Example()), assets.ExampleName)
+	f, err := assets.ExampleFile()
 	if err != nil {
 		t.Fatal(err)
 	}
