@@ -20,10 +20,12 @@ type measuringApp struct {
 func (a measuringApp) Driver() fyne.Driver { return a.d }
 
 type textKey struct {
-	text          string
-	size          float32
-	style         fyne.TextStyle
-	source, theme string
+	text  string
+	size  float32
+	style fyne.TextStyle
+	// font is the name of the font the text is drawn in: the source's,
+	// or the theme's for the style.
+	font string
 }
 
 type textSize struct {
@@ -37,18 +39,36 @@ type measuringDriver struct {
 	mu           sync.Mutex
 	sizes        map[textKey]textSize
 	calls, found int
+	// theme is the theme the names in fonts are of; a text asked for in
+	// another theme empties fonts.
+	theme fyne.Theme
+	fonts map[fyne.TextStyle]string
 }
 
 // RenderedTextSize measures text once for the run. The key holds the
-// theme's font for the style, so that a change of look measures again.
+// font's name, so that a change of look measures again.
 func (d *measuringDriver) RenderedTextSize(text string, size float32, style fyne.TextStyle, source fyne.Resource) (fyne.Size, float32) {
 	k := textKey{text: text, size: size, style: style}
+	var th fyne.Theme
 	if source != nil {
-		k.source = source.Name()
-	} else if f := fyne.CurrentApp().Settings().Theme().Font(style); f != nil {
-		k.theme = f.Name()
+		k.font = source.Name()
+	} else {
+		th = fyne.CurrentApp().Settings().Theme()
 	}
 	d.mu.Lock()
+	if th != nil {
+		if d.theme != th {
+			d.theme, d.fonts = th, map[fyne.TextStyle]string{}
+		}
+		name, ok := d.fonts[style]
+		if !ok {
+			if f := th.Font(style); f != nil {
+				name = "theme " + f.Name()
+			}
+			d.fonts[style] = name
+		}
+		k.font = name
+	}
 	d.calls++
 	m, ok := d.sizes[k]
 	if ok {
