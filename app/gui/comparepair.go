@@ -38,7 +38,7 @@ func (c *comparePanel) refusePair(msg string) {
 	l.Importance = widget.DangerImportance
 	c.statusBox.Objects = []fyne.CanvasObject{l}
 	c.statusBox.Refresh()
-	c.verdicts.SetText("")
+	setText(c.verdicts, "")
 	c.inputs.Objects, c.results.Objects = nil, nil
 	c.inputs.Refresh()
 	c.results.Refresh()

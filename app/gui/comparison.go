@@ -212,7 +212,7 @@ func (c *comparePanel) render() {
 	u := c.s.units()
 	c.statusBox.Objects = statusChangeRows(cmp)
 	c.statusBox.Refresh()
-	c.verdicts.SetText("Verdict: " + verdictText(c.outA) + " (" + cmp.A.Label + ")  →  " + verdictText(c.outB) + " (" + cmp.B.Label + ")")
+	setText(c.verdicts, "Verdict: "+verdictText(c.outA)+" ("+cmp.A.Label+")  →  "+verdictText(c.outB)+" ("+cmp.B.Label+")")
 
 	only := c.onlyChanged.Checked
 	rows := []fyne.CanvasObject{compareHeader("Input", cmp.A.Label, cmp.B.Label)}

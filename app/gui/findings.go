@@ -319,7 +319,7 @@ func (fl *findingsList) fit(width float32) {
 		head = criterionHead
 	}
 	if fl.critHead.Text != head {
-		fl.critHead.SetText(head)
+		setText(fl.critHead, head)
 	}
 	base := fl.rowHeight()
 	fl.heights = fl.heights[:0]
@@ -442,7 +442,7 @@ func (fl *findingsList) pick() {
 // describe shows the selected finding's message and limit source.
 func (fl *findingsList) describe() {
 	if fl.selected < 0 || fl.selected >= len(fl.rows) {
-		fl.head.SetText("")
+		setText(fl.head, "")
 		fl.detail.Segments = nil
 		fl.detail.Refresh()
 		fl.working.Disable()
@@ -452,7 +452,7 @@ func (fl *findingsList) describe() {
 	v := display.Finding(f, fl.system())
 	fl.working.Enable()
 	caption := widget.RichTextStyle{Inline: true, SizeName: theme.SizeNameCaptionText, ColorName: theme.ColorNameForeground}
-	fl.head.SetText(statusWord(f.Status) + " — " + f.Title + ".")
+	setText(fl.head, statusWord(f.Status)+" — "+f.Title+".")
 	fl.detail.Segments = []widget.RichTextSegment{
 		&widget.TextSegment{Text: v.Numbers() + ".", Style: widget.RichTextStyleParagraph},
 		&widget.TextSegment{Text: v.Text(), Style: widget.RichTextStyleParagraph},

@@ -272,7 +272,7 @@ func (f *designForm) showProblems(p *problem) {
 	if p.Path != "" {
 		text = labelOf(p.Path) + ": " + text
 	}
-	f.general.SetText(text)
+	setText(f.general, text)
 	f.generalRow.Show()
 }
 

@@ -98,10 +98,10 @@ func (fs *fluidSection) load() {
 func (fs *fluidSection) describe() {
 	sub, err := fs.f.s.lib.Lookup(fs.f.s.doc.Work.Fluid)
 	if err != nil {
-		fs.info.SetText("")
+		setText(fs.info, "")
 		return
 	}
-	fs.info.SetText(fluidSummary(sub, fs.f.s.units()))
+	setText(fs.info, fluidSummary(sub, fs.f.s.units()))
 }
 
 // fluidSummary is a short description of a fluid for the form and the
@@ -132,7 +132,7 @@ func (fs *fluidSection) showProblem(p *problem) bool {
 		fs.problem.Hide()
 		return false
 	}
-	fs.problem.SetText(p.Text)
+	setText(fs.problem, p.Text)
 	fs.problem.Show()
 	return true
 }

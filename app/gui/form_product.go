@@ -73,20 +73,20 @@ func (p *productSection) updateHeader() {
 	doc := p.f.s.doc
 	b := doc.base()
 	if b == nil {
-		p.header.SetText("Working copy, not yet kept as a revision.")
+		setText(p.header, "Working copy, not yet kept as a revision.")
 	} else {
 		note := b.ChangeNote
 		if note == "" {
 			note = "no change note"
 		}
-		p.header.SetText(fmt.Sprintf("Working copy of revision %s (%s, %s): %s", b.Label, b.Date, b.Author, note))
+		setText(p.header, fmt.Sprintf("Working copy of revision %s (%s, %s): %s", b.Label, b.Date, b.Author, note))
 	}
 	switch {
 	case b == nil:
-		p.changed.SetText("Not yet a revision")
+		setText(p.changed, "Not yet a revision")
 	case doc.workChanged():
-		p.changed.SetText("Changed since revision " + b.Label)
+		setText(p.changed, "Changed since revision "+b.Label)
 	default:
-		p.changed.SetText("Same as revision " + b.Label)
+		setText(p.changed, "Same as revision "+b.Label)
 	}
 }

@@ -109,11 +109,11 @@ func (s *shockSection) describe(sel *widget.Select, source *widget.Label) {
 	p, ok := s.byName(sel.Selected)
 	switch {
 	case ok:
-		source.SetText("From: " + p.From.Source + ". To: " + p.To.Source + ". " + p.Note)
+		setText(source, "From: "+p.From.Source+". To: "+p.To.Source+". "+p.Note)
 	case sel.Selected == noShock:
-		source.SetText("Not assessed: the record says so.")
+		setText(source, "Not assessed: the record says so.")
 	default:
-		source.SetText("Your own value: state its grounds in the change note.")
+		setText(source, "Your own value: state its grounds in the change note.")
 	}
 }
 

@@ -281,11 +281,11 @@ func (v *vesselSection) showProblem(p *problem) bool {
 	}
 	switch {
 	case p.Path == hazards.FieldParts || (hazards.IsPartField(p.Path) && v.f.byPath[p.Path] == nil):
-		v.partsProblem.SetText(p.Text)
+		setText(v.partsProblem, p.Text)
 		v.partsProblem.Show()
 		return true
 	case strings.HasPrefix(p.Path, hazards.FieldGlass):
-		v.glassProblem.SetText(p.Text)
+		setText(v.glassProblem, p.Text)
 		v.glassProblem.Show()
 		return true
 	}

@@ -50,7 +50,7 @@ var shared struct {
 func testApp() fyne.App {
 	if shared.app == nil {
 		a := test.NewApp()
-		shared.app = measuringApp{App: a, d: &measuringDriver{Driver: a.Driver(), sizes: map[textKey]textSize{}}}
+		shared.app = measuringApp{App: a, d: &measuringDriver{Driver: a.Driver(), sizes: map[fontKey]map[string]textSize{}}}
 	}
 	fyne.SetCurrentApp(shared.app)
 	return shared.app

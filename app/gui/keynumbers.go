@@ -149,7 +149,7 @@ func (k *keyNumbers) set(a *hazards.Assessment, u unitSystem) {
 		setText(c.label, r.label)
 		if c.value.Text != r.value {
 			before := c.value.MinSize().Height
-			c.value.SetText(r.value)
+			setText(c.value, r.value)
 			grown = grown || c.value.MinSize().Height != before
 		}
 		if c.hint.String() != hint {

@@ -81,12 +81,12 @@ func (f *numField) setProblem(msg string) {
 	if msg == "" {
 		if f.msgRow.Visible() {
 			f.msgRow.Hide()
-			f.msg.SetText("")
+			setText(f.msg, "")
 		}
 		return
 	}
 	if f.msg.Text != msg {
-		f.msg.SetText(msg)
+		setText(f.msg, msg)
 	}
 	f.msgRow.Show()
 }

@@ -122,9 +122,9 @@ func (r *resultsPanel) draw() {
 			where = labelOf(s.problem.Path) + ": "
 		}
 		if o.assessment == nil {
-			r.staleText.SetText("No results yet. Fix the marked input — " + where + s.problem.Text)
+			setText(r.staleText, "No results yet. Fix the marked input — "+where+s.problem.Text)
 		} else {
-			r.staleText.SetText("OUT OF DATE: the findings below are for the last acceptable inputs. " + where + s.problem.Text)
+			setText(r.staleText, "OUT OF DATE: the findings below are for the last acceptable inputs. "+where+s.problem.Text)
 		}
 		r.stale.Show()
 		r.verdict.words.Hide()

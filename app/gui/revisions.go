@@ -69,22 +69,22 @@ func newRevisionsPanel(s *session) *revisionsPanel {
 			}
 			cells := o.(*fyne.Container).Objects
 			label, date, author, note, status := r.describeRow(id)
-			cells[0].(*widget.Label).SetText(label)
-			cells[1].(*widget.Label).SetText(date)
-			cells[2].(*widget.Label).SetText(author)
+			setText(cells[0].(*widget.Label), label)
+			setText(cells[1].(*widget.Label), date)
+			setText(cells[2].(*widget.Label), author)
 			box := cells[3].(*fyne.Container).Objects[0].(*fyne.Container)
 			word := box.Objects[0].(*widget.Label)
 			icon := box.Objects[1].(*widget.Icon)
 			if status == "" {
-				word.SetText("…")
+				setText(word, "…")
 				icon.SetResource(nil)
 			} else {
-				word.SetText(statusWord(status))
+				setText(word, statusWord(status))
 				word.Importance = statusImportance(status, false)
 				word.Refresh()
 				icon.SetResource(statusIcon(status))
 			}
-			cells[4].(*widget.Label).SetText(note)
+			setText(cells[4].(*widget.Label), note)
 		})
 	r.list.OnSelected = func(id widget.ListItemID) {
 		r.selected = id
@@ -241,17 +241,17 @@ func (r *revisionsPanel) compareSelected() {
 func (r *revisionsPanel) describe() {
 	if r.selected < 0 || r.selected >= len(r.rows) {
 		r.open.Disable()
-		r.detail.SetText("Select a revision to see its change note.")
+		setText(r.detail, "Select a revision to see its change note.")
 		return
 	}
 	rev := r.rows[r.selected]
 	if rev == nil {
 		r.open.Disable()
-		r.detail.SetText("The working copy is what the form shows. Keep it as a new revision to record it in the design file.")
+		setText(r.detail, "The working copy is what the form shows. Keep it as a new revision to record it in the design file.")
 		return
 	}
 	r.open.Enable()
-	r.detail.SetText(fmt.Sprintf("Revision %s, %s, by %s. %s\nDesign fingerprint %s", rev.Label, rev.Date, rev.Author, rev.ChangeNote, rev.Fingerprint()))
+	setText(r.detail, fmt.Sprintf("Revision %s, %s, by %s. %s\nDesign fingerprint %s", rev.Label, rev.Date, rev.Author, rev.ChangeNote, rev.Fingerprint()))
 }
 
 // openRevision loads a revision into the form, asking first when the
@@ -305,20 +305,20 @@ func (s *session) askNewRevision(then func()) {
 	var dlg *dialog.CustomDialog
 	keep := widget.NewButtonWithIcon("Keep revision", theme.ConfirmIcon(), func() {
 		if s.stale() {
-			problem.SetText("The form holds an input that is not acceptable: fix the marked field first.")
+			setText(problem, "The form holds an input that is not acceptable: fix the marked field first.")
 			return
 		}
 		if strings.TrimSpace(note.Text) == "" {
-			problem.SetText("Write a change note: the record must say what changed.")
+			setText(problem, "Write a change note: the record must say what changed.")
 			return
 		}
 		if strings.TrimSpace(author.Text) == "" {
-			problem.SetText("Write the author's name: the record must say who made the revision (the reviewer's name in Preferences fills it in).")
+			setText(problem, "Write the author's name: the record must say who made the revision (the reviewer's name in Preferences fills it in).")
 			return
 		}
 		rev := s.doc.newRevision(strings.TrimSpace(label.Text), strings.TrimSpace(author.Text), strings.TrimSpace(note.Text), s.opts.now())
 		if err := s.keepRevision(rev); err != nil {
-			problem.SetText(problemOf(err, s.units(), quantityOf).Text)
+			setText(problem, problemOf(err, s.units(), quantityOf).Text)
 			return
 		}
 		dlg.Hide()

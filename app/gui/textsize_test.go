@@ -19,11 +19,12 @@ type measuringApp struct {
 // Driver returns the remembering driver.
 func (a measuringApp) Driver() fyne.Driver { return a.d }
 
-type textKey struct {
-	text          string
-	size          float32
-	style         fyne.TextStyle
-	source, theme string
+// fontKey is what a text is drawn in: its size, style and the name of
+// its font (the source's, or the theme's for the style).
+type fontKey struct {
+	size  float32
+	style fyne.TextStyle
+	font  string
 }
 
 type textSize struct {
@@ -34,23 +35,56 @@ type textSize struct {
 // measuringDriver is the test driver with a lasting memory of text sizes.
 type measuringDriver struct {
 	fyne.Driver
-	mu           sync.Mutex
-	sizes        map[textKey]textSize
+	mu sync.Mutex
+	// sizes holds the sizes by font, then by text: the texts of a
+	// wrapped label come one after the other in the same font, and
+	// looking up the text alone hashes only its string.
+	sizes        map[fontKey]map[string]textSize
 	calls, found int
+	// last and lastSizes are the font asked for last and its sizes.
+	last      fontKey
+	lastSizes map[string]textSize
+	// theme is the theme the names in fonts are of; a text asked for in
+	// another theme empties fonts.
+	theme fyne.Theme
+	fonts map[fyne.TextStyle]string
 }
 
 // RenderedTextSize measures text once for the run. The key holds the
-// theme's font for the style, so that a change of look measures again.
+// font's name, so that a change of look measures again.
 func (d *measuringDriver) RenderedTextSize(text string, size float32, style fyne.TextStyle, source fyne.Resource) (fyne.Size, float32) {
-	k := textKey{text: text, size: size, style: style}
+	k := fontKey{size: size, style: style}
+	var th fyne.Theme
 	if source != nil {
-		k.source = source.Name()
-	} else if f := fyne.CurrentApp().Settings().Theme().Font(style); f != nil {
-		k.theme = f.Name()
+		k.font = source.Name()
+	} else {
+		th = fyne.CurrentApp().Settings().Theme()
 	}
 	d.mu.Lock()
+	if th != nil {
+		if d.theme != th {
+			d.theme, d.fonts = th, map[fyne.TextStyle]string{}
+		}
+		name, ok := d.fonts[style]
+		if !ok {
+			if f := th.Font(style); f != nil {
+				name = "theme " + f.Name()
+			}
+			d.fonts[style] = name
+		}
+		k.font = name
+	}
+	if d.lastSizes == nil || d.last != k {
+		m := d.sizes[k]
+		if m == nil {
+			m = map[string]textSize{}
+			d.sizes[k] = m
+		}
+		d.last, d.lastSizes = k, m
+	}
+	sizes := d.lastSizes
 	d.calls++
-	m, ok := d.sizes[k]
+	m, ok := sizes[text]
 	if ok {
 		d.found++
 	}
@@ -60,7 +94,7 @@ func (d *measuringDriver) RenderedTextSize(text string, size float32, style fyne
 	}
 	s, b := d.Driver.RenderedTextSize(text, size, style, source)
 	d.mu.Lock()
-	d.sizes[k] = textSize{s, b}
+	sizes[text] = textSize{s, b}
 	d.mu.Unlock()
 	return s, b
 }

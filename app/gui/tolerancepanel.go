@@ -230,7 +230,7 @@ func (tp *tolerancePanel) run() {
 		err = errors.New("a field on the design form is not a number: fix the marked input first")
 	}
 	if err != nil {
-		tp.problem.SetText(err.Error())
+		setText(tp.problem, err.Error())
 		tp.problem.Show()
 		return
 	}
@@ -243,7 +243,7 @@ func (tp *tolerancePanel) run() {
 			f()
 		}
 	})
-	tp.status.SetText("Drawing " + display.Units(set.Samples) + "…")
+	setText(tp.status, "Drawing "+display.Units(set.Samples)+"…")
 	tp.refresh()
 }
 
@@ -257,7 +257,7 @@ func (tp *tolerancePanel) showVaries() {
 		k = tp.spreadK
 	}
 	tp.spreadK = k
-	tp.varies.SetText("• " + strings.Join(variedInputs(&tp.s.doc.Work, k, tp.s.units()), "\n• "))
+	setText(tp.varies, "• "+strings.Join(variedInputs(&tp.s.doc.Work, k, tp.s.units()), "\n• "))
 }
 
 // update redraws the panel when the results or the units changed, or a
@@ -279,7 +279,7 @@ func (tp *tolerancePanel) refresh() {
 	if u != tp.shownUnits {
 		tp.shownUnits = u
 		tp.spread.SetText(entryText(u.fromSI(qTempDiff, tp.spreadK)))
-		tp.spreadUnit.SetText(spreadUnit(u))
+		setText(tp.spreadUnit, spreadUnit(u))
 	}
 	tp.showVaries()
 	if st.running {
@@ -292,11 +292,11 @@ func (tp *tolerancePanel) refresh() {
 		tp.busy.Hide()
 		switch {
 		case errors.Is(st.err, context.Canceled):
-			tp.status.SetText("Cancelled. The results shown, if any, are from the run before.")
+			setText(tp.status, "Cancelled. The results shown, if any, are from the run before.")
 		case st.err != nil:
-			tp.status.SetText("The study could not run: " + st.err.Error())
+			setText(tp.status, "The study could not run: "+st.err.Error())
 		case last.result != nil:
-			tp.status.SetText("Finished in " + display.Duration(last.took) + ".")
+			setText(tp.status, "Finished in "+display.Duration(last.took)+".")
 		}
 	}
 	r := last.result
@@ -317,14 +317,14 @@ func (tp *tolerancePanel) refresh() {
 	if !current {
 		in = "It is out of date and stays out of the exported record."
 	}
-	tp.about.SetText("Of " + last.of + ": " + display.StudyAbout(r, u.display()) + " " + in)
+	setText(tp.about, "Of "+last.of+": "+display.StudyAbout(r, u.display())+" "+in)
 	tp.showFractions(r)
 	tp.showSpread(r, u)
 	hist := chartmodel.Histogram("", r.Histogram)
 	tp.hist.set(hist, !current)
-	tp.histNote.SetText(histogramNotes(hist, r))
+	setText(tp.histNote, histogramNotes(hist, r))
 	tp.drivers.set(chartmodel.Drivers("", r.Sensitivity), !current)
-	tp.driveNote.SetText(display.DriversNote(r.Sensitivity, r.SensitivityUnits))
+	setText(tp.driveNote, display.DriversNote(r.Sensitivity, r.SensitivityUnits))
 	tp.showInputs(r, u)
 	tp.results.Show()
 }

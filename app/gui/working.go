@@ -188,8 +188,8 @@ func (wp *workingPanel) refresh() {
 		wp.stale.Hide()
 	}
 	if a == nil {
-		wp.title.SetText("No results yet")
-		wp.summary.SetText("The working appears once the design on the form has been assessed.")
+		setText(wp.title, "No results yet")
+		setText(wp.summary, "The working appears once the design on the form has been assessed.")
 		wp.heading, wp.numbers = "", nil
 		wp.steps.Objects = nil
 		wp.steps.Refresh()
@@ -204,8 +204,8 @@ func (wp *workingPanel) refresh() {
 			heading += " of " + note
 		}
 	case !ok:
-		wp.title.SetText("Choose a finding or a key number")
-		wp.summary.SetText("Select a finding in the list, or tap a row of the key numbers, to see the steps behind it.")
+		setText(wp.title, "Choose a finding or a key number")
+		setText(wp.summary, "Select a finding in the list, or tap a row of the key numbers, to see the steps behind it.")
 		wp.heading, wp.numbers = "", nil
 		wp.steps.Objects = nil
 		wp.steps.Refresh()
@@ -215,11 +215,11 @@ func (wp *workingPanel) refresh() {
 	wp.heading, wp.numbers = heading, numbers
 	wp.copyBtn.Enable()
 	if wp.whole {
-		wp.title.SetText(heading)
+		setText(wp.title, heading)
 	} else {
-		wp.title.SetText("Working: " + heading)
+		setText(wp.title, "Working: "+heading)
 	}
-	wp.summary.SetText(workingSummary(a, numbers))
+	setText(wp.summary, workingSummary(a, numbers))
 	var objs []fyne.CanvasObject
 	stage := ""
 	for _, st := range pickSteps(a, numbers) {
